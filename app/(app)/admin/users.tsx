@@ -1,0 +1,3 @@
+import { UsersScreen } from '@/components/admin/users-screen';
+
+export default UsersScreen;

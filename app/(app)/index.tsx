@@ -1,0 +1,3 @@
+import { HomeScreen } from '@/components/home/home-screen';
+
+export default HomeScreen;

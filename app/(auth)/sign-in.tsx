@@ -1,0 +1,3 @@
+import { SignInScreen } from '@/components/auth/sign-in-screen';
+
+export default SignInScreen;

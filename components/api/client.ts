@@ -1,0 +1,79 @@
+// The typed API client: every screen's data goes through here (via the query modules in components/data).
+export interface ApiErrorBody {
+  code: string;
+  message: string;
+  details: unknown;
+}
+
+export interface FieldProblem {
+  field: string;
+  messages: string[];
+}
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details: unknown,
+  ) {
+    super(message);
+  }
+
+  /** Field-level problems from a 400 or 409, keyed by field name. */
+  fieldMessages(): Record<string, string> {
+    const out: Record<string, string> = {};
+    if (Array.isArray(this.details)) {
+      for (const d of this.details as FieldProblem[]) {
+        if (d && typeof d.field === 'string') out[d.field] = (d.messages ?? []).join('; ');
+      }
+    }
+    return out;
+  }
+}
+
+let token: string | null = null;
+let onUnauthorized: (() => void) | null = null;
+
+export function setApiToken(next: string | null): void {
+  token = next;
+}
+
+export function setUnauthorizedHandler(handler: (() => void) | null): void {
+  onUnauthorized = handler;
+}
+
+const base = process.env.EXPO_PUBLIC_API_URL ?? '';
+
+export async function api<T>(path: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+  let res: Response;
+  try {
+    res = await fetch(`${base}/api${path}`, {
+      method: init.method ?? 'GET',
+      headers: {
+        Accept: 'application/json',
+        ...(init.body !== undefined ? { 'Content-Type': 'application/json' } : {}),
+        ...(token ? { Authorization: `Bearer ${token}` } : {}),
+      },
+      body: init.body !== undefined ? JSON.stringify(init.body) : undefined,
+    });
+  } catch {
+    throw new ApiError(0, 'network', 'The server could not be reached. Check the connection and try again.', null);
+  }
+  const text = await res.text();
+  const data = text ? safeJson(text) : null;
+  if (!res.ok) {
+    const err = (data as { error?: ApiErrorBody } | null)?.error;
+    if (res.status === 401 && token && onUnauthorized) onUnauthorized();
+    throw new ApiError(res.status, err?.code ?? 'http_error', err?.message ?? `The server answered ${res.status}.`, err?.details ?? null);
+  }
+  return data as T;
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return null;
+  }
+}

@@ -1,0 +1,114 @@
+import { Link, usePathname } from 'expo-router';
+import type { ReactNode } from 'react';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { ROLE_LABELS } from '@/shared/roles';
+import { isActive, navFor } from './navigation';
+import { useSession } from './session';
+import { colors, fonts, minTouch, radius, space, type } from './theme';
+import { Logo } from './ui/logo';
+import { useIsWide } from './use-layout';
+
+/** Signed-in chrome: side navigation on a wide screen, a top bar and bottom tabs on a phone. */
+export function AppShell({ children }: { children: ReactNode }) {
+  const wide = useIsWide();
+  const pathname = usePathname();
+  const { session, end } = useSession();
+  if (!session) return null;
+  const items = navFor(session.user.role);
+  const who = (
+    <View style={styles.who}>
+      <Text style={[type.label, wide && { color: colors.onPrimary }]} testID="current-user">
+        {session.user.name}
+      </Text>
+      <Text style={[type.small, wide && { color: '#D7E7EA' }]} testID="current-role">
+        {ROLE_LABELS[session.user.role]}
+      </Text>
+    </View>
+  );
+  const signOut = (
+    <Pressable accessibilityRole="button" onPress={end} testID="sign-out" style={[styles.signOut, wide && styles.signOutWide]}>
+      <Text style={[styles.signOutText, wide && { color: colors.onPrimary }]}>Sign out</Text>
+    </Pressable>
+  );
+
+  if (wide) {
+    return (
+      <View style={styles.wideRoot}>
+        <View style={styles.side} role="navigation" aria-label="Main">
+          <Logo inverse />
+          <View style={styles.sideItems}>
+            {items.map((item) => {
+              const active = isActive(item.href, pathname);
+              return (
+                <Link key={item.href} href={item.href as never} testID={item.testID} aria-current={active ? 'page' : undefined} style={[styles.sideLink, active && styles.sideLinkActive]}>
+                  <Text style={[styles.sideText, active && styles.sideTextActive]}>{item.label}</Text>
+                </Link>
+              );
+            })}
+          </View>
+          <View style={styles.sideFoot}>
+            {who}
+            {signOut}
+          </View>
+        </View>
+        <View style={styles.main}>{children}</View>
+      </View>
+    );
+  }
+
+  return (
+    <View style={styles.phoneRoot}>
+      <View style={styles.topBar}>
+        <Logo />
+        <View style={styles.topRight}>
+          {who}
+          {signOut}
+        </View>
+      </View>
+      <View style={styles.main}>{children}</View>
+      <View style={styles.tabs} role="navigation" aria-label="Main">
+        {items.map((item) => {
+          const active = isActive(item.href, pathname);
+          return (
+            <Link key={item.href} href={item.href as never} testID={item.testID} aria-current={active ? 'page' : undefined} style={[styles.tab, active && styles.tabActive]}>
+              <Text style={[styles.tabText, active && styles.tabTextActive]}>{item.label}</Text>
+            </Link>
+          );
+        })}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wideRoot: { flex: 1, flexDirection: 'row', backgroundColor: colors.paper },
+  side: { width: 240, backgroundColor: colors.primary, padding: space.lg, gap: space.xl },
+  sideItems: { gap: space.xs, flex: 1 },
+  sideLink: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.md, paddingVertical: space.sm, borderRadius: radius.md, display: 'flex' as never },
+  sideLinkActive: { backgroundColor: colors.surface },
+  sideText: { fontFamily: fonts.semibold, fontSize: 16, color: colors.onPrimary },
+  sideTextActive: { color: colors.primary },
+  sideFoot: { gap: space.sm },
+  main: { flex: 1 },
+  phoneRoot: { flex: 1, backgroundColor: colors.paper },
+  topBar: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    paddingHorizontal: space.lg,
+    paddingVertical: space.sm,
+    backgroundColor: colors.surface,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+  },
+  topRight: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  who: { alignItems: 'flex-end' },
+  signOut: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.sm, borderRadius: radius.md },
+  signOutWide: { borderWidth: 1, borderColor: '#9CC3CA', alignItems: 'center' },
+  signOutText: { fontFamily: fonts.semibold, fontSize: 15, color: colors.primary },
+  tabs: { flexDirection: 'row', borderTopWidth: 1, borderTopColor: colors.line, backgroundColor: colors.surface },
+  tab: { flex: 1, minHeight: 56, alignItems: 'center', justifyContent: 'center', display: 'flex' as never, borderTopWidth: 3, borderTopColor: 'transparent' },
+  tabActive: { borderTopColor: colors.primary },
+  tabText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.inkMuted, textAlign: 'center' },
+  tabTextActive: { color: colors.primary },
+});

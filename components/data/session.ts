@@ -1,0 +1,25 @@
+import { useMutation } from '@tanstack/react-query';
+import type { Role } from '@/shared/roles';
+import { api } from '../api/client';
+
+export interface SessionUser {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  lengthUnit?: 'mm' | 'in';
+}
+
+export interface SignInResult {
+  token: string;
+  user: SessionUser;
+}
+
+export const signInRequest = (email: string, password: string) =>
+  api<SignInResult>('/auth/sign-in', { method: 'POST', body: { email, password } });
+
+export const meRequest = () => api<{ user: SessionUser }>('/me');
+
+export function useSignInMutation() {
+  return useMutation({ mutationFn: (v: { email: string; password: string }) => signInRequest(v.email, v.password) });
+}

@@ -1,0 +1,40 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Role } from '@/shared/roles';
+import { api } from '../api/client';
+
+export interface UserRow {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  active: boolean;
+}
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export const userKeys = { all: ['users'] as const, list: () => [...userKeys.all, 'list'] as const };
+
+export function useUsersQuery() {
+  return useQuery({ queryKey: userKeys.list(), queryFn: () => api<Page<UserRow>>('/users') });
+}
+
+export function useUserCreateMutation() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (v: { email: string; name: string; role: Role; temporaryPassword: string }) => api<UserRow>('/users', { method: 'POST', body: v }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: userKeys.all }),
+  });
+}
+
+export function useUserUpdateMutation() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...body }: { id: string; role?: Role; active?: boolean }) => api<UserRow>(`/users/${id}`, { method: 'PATCH', body }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: userKeys.all }),
+  });
+}

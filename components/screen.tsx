@@ -1,0 +1,44 @@
+import type { ReactNode } from 'react';
+import { ScrollView, StyleSheet, Text, View } from 'react-native';
+import { colors, maxContentWidth, space, type } from './theme';
+import { useIsWide } from './use-layout';
+
+interface ScreenProps {
+  title: string;
+  subtitle?: string;
+  actions?: ReactNode;
+  children: ReactNode;
+  testID?: string;
+}
+
+/** The one page layout: a single column on a phone; a centred, wider column on a wide screen. */
+export function Screen({ title, subtitle, actions, children, testID }: ScreenProps) {
+  const wide = useIsWide();
+  return (
+    <ScrollView style={styles.scroll} contentContainerStyle={[styles.content, wide && styles.contentWide]} testID={testID}>
+      <View style={[styles.inner, { maxWidth: maxContentWidth }]}>
+        <View style={[styles.header, wide && styles.headerWide]}>
+          <View style={styles.titles}>
+            <Text role="heading" aria-level={1} style={type.title}>
+              {title}
+            </Text>
+            {subtitle ? <Text style={[type.body, { color: colors.inkMuted }]}>{subtitle}</Text> : null}
+          </View>
+          {actions ? <View style={styles.actions}>{actions}</View> : null}
+        </View>
+        {children}
+      </View>
+    </ScrollView>
+  );
+}
+
+const styles = StyleSheet.create({
+  scroll: { flex: 1, backgroundColor: colors.paper },
+  content: { padding: space.lg, paddingBottom: space.xxl * 2 },
+  contentWide: { paddingHorizontal: space.xxl, paddingTop: space.xxl },
+  inner: { width: '100%', alignSelf: 'center', gap: space.lg },
+  header: { gap: space.md },
+  headerWide: { flexDirection: 'row', alignItems: 'flex-end', justifyContent: 'space-between' },
+  titles: { gap: space.xs, flexShrink: 1 },
+  actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
+});

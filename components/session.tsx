@@ -1,0 +1,75 @@
+import { useQueryClient } from '@tanstack/react-query';
+import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from 'react';
+import { setApiToken, setUnauthorizedHandler } from './api/client';
+import { meRequest, type SessionUser } from './data/session';
+import { loadStored, saveStored } from './session-storage';
+
+interface Session {
+  token: string;
+  user: SessionUser;
+}
+
+interface SessionContextValue {
+  session: Session | null;
+  ready: boolean;
+  begin: (s: Session) => void;
+  end: () => void;
+  updateUser: (u: SessionUser) => void;
+}
+
+const SessionContext = createContext<SessionContextValue | null>(null);
+
+export function SessionProvider({ children }: { children: ReactNode }) {
+  const queryClient = useQueryClient();
+  const [session, setSession] = useState<Session | null>(null);
+  const [ready, setReady] = useState(false);
+
+  const end = useCallback(() => {
+    setApiToken(null);
+    saveStored(null);
+    setSession(null);
+    queryClient.clear();
+  }, [queryClient]);
+
+  const begin = useCallback((s: Session) => {
+    setApiToken(s.token);
+    saveStored(s);
+    setSession(s);
+  }, []);
+
+  const updateUser = useCallback((user: SessionUser) => {
+    setSession((s) => {
+      if (!s) return s;
+      const next = { ...s, user };
+      saveStored(next);
+      return next;
+    });
+  }, []);
+
+  // Restore a stored session, then confirm it with the server (a deactivated user is signed out).
+  useEffect(() => {
+    const stored = loadStored<Session>();
+    if (stored?.token) {
+      setApiToken(stored.token);
+      setSession(stored);
+      meRequest()
+        .then(({ user }) => updateUser(user))
+        .catch(() => undefined);
+    }
+    setReady(true);
+  }, [updateUser]);
+
+  useEffect(() => {
+    setUnauthorizedHandler(end);
+    return () => setUnauthorizedHandler(null);
+  }, [end]);
+
+  const value = useMemo(() => ({ session, ready, begin, end, updateUser }), [session, ready, begin, end, updateUser]);
+  return <SessionContext.Provider value={value}>{children}</SessionContext.Provider>;
+}
+
+export function useSession(): SessionContextValue {
+  const ctx = useContext(SessionContext);
+  if (!ctx) throw new Error('useSession must be used inside SessionProvider');
+  return ctx;
+}

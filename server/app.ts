@@ -1,0 +1,68 @@
+import 'reflect-metadata';
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import morgan from 'morgan';
+import type { DataSource } from 'typeorm';
+import { authRouter, DEFAULT_SIGN_IN_LIMITS, type SignInLimits } from './auth/auth.router';
+import { makeAuthenticator } from './auth/guards';
+import { notFound } from './common/errors';
+import { errorMiddleware } from './common/error-middleware';
+import { healthRouter } from './health/health.router';
+import { usersRouter } from './users/users.router';
+
+export interface AppOptions {
+  dataSource: DataSource;
+  jwtSecret: string;
+  /** Folder of the exported web app; served at `/` with a fallback to index.html for client routes. */
+  webDir?: string;
+  signInLimits?: Partial<SignInLimits>;
+  /** Request logging (morgan); off in tests to keep their output readable. */
+  logRequests?: boolean;
+}
+
+/** The app factory: everything under /api, the web app at /. One process is stateless apart from the rate-limit counters. */
+export function createApp(options: AppOptions): Express {
+  const { dataSource: ds, jwtSecret } = options;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"], // react-native-web writes its styles at run time
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+        },
+      },
+    }),
+  );
+  if (options.logRequests) app.use(morgan(':method :url :status :res[content-length] - :response-time ms'));
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(healthRouter(ds));
+  api.use(authRouter(ds, jwtSecret, { ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits }));
+  // Everything below needs a valid token.
+  api.use(makeAuthenticator(ds, jwtSecret));
+  api.use(usersRouter(ds));
+  api.use((req) => {
+    throw notFound(`The API route ${req.method} ${req.path}`);
+  });
+  app.use('/api', api);
+
+  if (options.webDir && fs.existsSync(path.join(options.webDir, 'index.html'))) {
+    const webDir = options.webDir;
+    app.use(express.static(webDir, { index: 'index.html', extensions: ['html'] }));
+    // Client-side routes (/receive, /registry/...) load the single-page app.
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(webDir, 'index.html')));
+  }
+
+  app.use(errorMiddleware);
+  return app;
+}

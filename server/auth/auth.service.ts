@@ -1,0 +1,47 @@
+import type { DataSource } from 'typeorm';
+import { unauthorized } from '../common/errors';
+import { User } from '../entities';
+import { verifyPassword } from './passwords';
+import { signToken } from './tokens';
+
+export interface PublicUser {
+  id: string;
+  email: string;
+  name: string;
+  role: User['role'];
+  active: boolean;
+  lengthUnit: 'mm' | 'in';
+}
+
+export const toPublicUser = (u: User): PublicUser => ({
+  id: u.id,
+  email: u.email,
+  name: u.displayName,
+  role: u.role,
+  active: u.active,
+  lengthUnit: u.lengthUnit,
+});
+
+// One message whatever was wrong, so the answer never tells whether an account exists.
+const WRONG = 'That e-mail and password do not match an active account.';
+// Compared against when the account does not exist, so both paths cost one bcrypt comparison.
+const DUMMY_HASH = '$2b$10$CwTycUXWue0Thq9StjUM0uJ8.vYQGqUu3x0bbpj7xvtJrW5.Vt9yy';
+
+export class AuthService {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly secret: string,
+  ) {}
+
+  async signIn(email: string, password: string): Promise<{ token: string; user: PublicUser }> {
+    const user = await this.ds
+      .getRepository(User)
+      .createQueryBuilder('u')
+      .addSelect('u.passwordHash')
+      .where('u.email = :email', { email: email.trim().toLowerCase() })
+      .getOne();
+    const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
+    if (!user || !ok || !user.active) throw unauthorized(WRONG);
+    return { token: signToken({ sub: user.id, role: user.role }, this.secret), user: toPublicUser(user) };
+  }
+}

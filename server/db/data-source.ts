@@ -1,0 +1,23 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { ENTITIES } from '../entities';
+import { MIGRATIONS } from '../../migrations';
+
+/**
+ * The one DataSource factory. Migrations, never synchronize: the schema is what migrations/ says.
+ * Short connect and statement timeouts make a database outage answer 503 quickly instead of hanging.
+ */
+export function makeDataSource(url = process.env.DATABASE_URL, options: { poolSize?: number } = {}): DataSource {
+  if (!url) throw new Error('DATABASE_URL is not set');
+  return new DataSource({
+    type: 'postgres',
+    url,
+    entities: ENTITIES,
+    migrations: MIGRATIONS,
+    migrationsTableName: 'migrations',
+    synchronize: false,
+    logging: ['error'],
+    poolSize: options.poolSize ?? 10,
+    extra: { connectionTimeoutMillis: 3000, statement_timeout: 15000, idleTimeoutMillis: 10000 },
+  });
+}

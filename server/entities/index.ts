@@ -1,0 +1,5 @@
+import { SiteSettings } from './site-settings';
+import { User } from './user';
+
+export { SiteSettings, User };
+export const ENTITIES = [User, SiteSettings];

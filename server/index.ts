@@ -1,0 +1,52 @@
+import 'reflect-metadata';
+import path from 'node:path';
+import { createApp } from './app';
+import { jwtSecret } from './auth/tokens';
+import { makeDataSource } from './db/data-source';
+
+const port = Number(process.env.PORT ?? 8080);
+const ds = makeDataSource();
+
+/** Keeps trying to connect: the server starts answering (health says "down") before the database is up. */
+async function connect(): Promise<void> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await ds.initialize();
+      return;
+    } catch (err) {
+      if (attempt === 1) console.error(`[bungwise] database not reachable yet (${(err as Error).message}); retrying...`);
+      await new Promise((r) => setTimeout(r, Math.min(5000, 500 * attempt)));
+    }
+  }
+}
+
+const app = createApp({
+  dataSource: ds,
+  jwtSecret: jwtSecret(),
+  webDir: process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'web'),
+  logRequests: process.env.BUNGWISE_LOG_REQUESTS !== '0',
+});
+
+const server = app.listen(port, () => {
+  const url = `http://localhost:${port}`;
+  console.log(`\n[bungwise] Bungwise is running at ${url}`);
+  if (process.env.BUNGWISE_DEMO !== '0') {
+    console.log('[bungwise] Demo sign-ins (password bungwise-demo):');
+    for (const role of ['clerk', 'engineer', 'buyer', 'admin']) console.log(`[bungwise]   ${role.padEnd(9)} ${role}@bungwise.example`);
+  }
+  console.log('[bungwise] Press Ctrl-C to stop.\n');
+});
+server.on('error', (err: NodeJS.ErrnoException) => {
+  console.error(err.code === 'EADDRINUSE' ? `[bungwise] Port ${port} is taken: stop the other program or set PORT.` : `[bungwise] ${err.message}`);
+  process.exit(1);
+});
+void connect();
+
+function shutdown(): void {
+  server.close(() => {
+    void ds.destroy().finally(() => process.exit(0));
+  });
+  setTimeout(() => process.exit(0), 5000).unref();
+}
+process.on('SIGTERM', shutdown);
+process.on('SIGINT', shutdown);

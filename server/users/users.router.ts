@@ -1,0 +1,40 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { requireRole } from '../auth/guards';
+import { toPublicUser } from '../auth/auth.service';
+import { fieldError } from '../common/errors';
+import { body } from '../common/validate';
+import { User } from '../entities';
+import { CreateUserDto, UpdateMeDto, UpdateUserDto } from './users.dto';
+import { UsersService } from './users.service';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export function usersRouter(ds: DataSource): Router {
+  const service = new UsersService(ds);
+  const router = Router();
+
+  router.get('/me', async (req, res) => {
+    const user = await ds.getRepository(User).findOneByOrFail({ id: req.user!.id });
+    res.json({ user: toPublicUser(user) });
+  });
+  router.patch('/me', body(UpdateMeDto), async (req, res) => {
+    const dto = req.body as UpdateMeDto;
+    const user = dto.lengthUnit ? await service.setLengthUnit(req.user!.id, dto.lengthUnit) : toPublicUser(await ds.getRepository(User).findOneByOrFail({ id: req.user!.id }));
+    res.json({ user });
+  });
+
+  router.get('/users', requireRole('admin'), async (_req, res) => {
+    const items = await service.list();
+    res.json({ items, total: items.length, page: 1, pageSize: items.length });
+  });
+  router.post('/users', requireRole('admin'), body(CreateUserDto), async (req, res) => {
+    res.status(201).json(await service.create(req.body as CreateUserDto));
+  });
+  router.patch('/users/:id', requireRole('admin'), body(UpdateUserDto), async (req, res) => {
+    const id = String(req.params.id);
+    if (!UUID.test(id)) throw fieldError('id', 'must be a user id');
+    res.json(await service.update(id, req.body as UpdateUserDto, req.user!.id));
+  });
+  return router;
+}

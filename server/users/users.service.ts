@@ -1,0 +1,52 @@
+import type { DataSource } from 'typeorm';
+import { conflict, fieldError, notFound } from '../common/errors';
+import { User } from '../entities';
+import { hashPassword, passwordProblem } from '../auth/passwords';
+import { toPublicUser, type PublicUser } from '../auth/auth.service';
+import type { CreateUserDto, UpdateUserDto } from './users.dto';
+
+export class UsersService {
+  constructor(private readonly ds: DataSource) {}
+
+  async list(): Promise<PublicUser[]> {
+    const users = await this.ds.getRepository(User).find({ order: { role: 'ASC', email: 'ASC' } });
+    return users.map(toPublicUser);
+  }
+
+  async create(dto: CreateUserDto): Promise<PublicUser> {
+    const problem = passwordProblem(dto.temporaryPassword);
+    if (problem) throw fieldError('temporaryPassword', problem);
+    const email = dto.email.trim().toLowerCase();
+    const repo = this.ds.getRepository(User);
+    if (await repo.existsBy({ email })) throw conflict(`A user with the e-mail ${email} already exists.`, [{ field: 'email', messages: ['is already in use'] }]);
+    const user = repo.create({
+      email,
+      displayName: dto.name.trim(),
+      role: dto.role,
+      passwordHash: await hashPassword(dto.temporaryPassword),
+      active: true,
+      mustChangePassword: true,
+    });
+    return toPublicUser(await repo.save(user));
+  }
+
+  async update(id: string, dto: UpdateUserDto, actingUserId: string): Promise<PublicUser> {
+    const repo = this.ds.getRepository(User);
+    const user = await repo.findOneBy({ id });
+    if (!user) throw notFound('User');
+    if (id === actingUserId && (dto.active === false || (dto.role && dto.role !== 'admin'))) {
+      throw fieldError(dto.active === false ? 'active' : 'role', 'you cannot deactivate yourself or remove your own administrator role');
+    }
+    if (dto.role) user.role = dto.role;
+    if (dto.active !== undefined) user.active = dto.active;
+    if (dto.name) user.displayName = dto.name.trim();
+    return toPublicUser(await repo.save(user));
+  }
+
+  async setLengthUnit(id: string, unit: 'mm' | 'in'): Promise<PublicUser> {
+    const repo = this.ds.getRepository(User);
+    const user = await repo.findOneByOrFail({ id });
+    user.lengthUnit = unit;
+    return toPublicUser(await repo.save(user));
+  }
+}

@@ -1,0 +1,4 @@
+export * from './types';
+export * from './rules';
+export * from './evaluate';
+export * from './handling';

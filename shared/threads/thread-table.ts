@@ -1,0 +1,130 @@
+// The thread table as data. Row codes are stable identifiers: the database seed, the API and the fit
+// rules refer to threads by code only, so never rename a code; add a new row instead.
+
+import { MM_PER_IN } from '../units';
+
+export type ThreadFamily = 'NPS' | 'NPT' | 'G' | 'buttress' | 'other';
+export type ThreadForm = 'tapered' | 'parallel';
+
+export interface ThreadSpecRow {
+  /** Stable identifier, e.g. 'NPT-3/4', 'NPS-2', 'G-2', 'BT-56x4'. */
+  code: string;
+  family: ThreadFamily;
+  /** How the trade writes the size, e.g. '3/4 in NPT', 'G 2', '56x4'. */
+  nominalLabel: string;
+  /** Major (crest) diameter. For NPT this is the pipe OD, i.e. the large end of the taper. */
+  majorDiameterMm: number;
+  pitchMm: number;
+  threadsPerInch: number;
+  /** Included angle between flanks. */
+  flankAngleDeg: number;
+  form: ThreadForm;
+  /** Where the dimensions come from. */
+  standard: string;
+}
+
+/** Nominal pipe sizes carried by the table, with the label fragment and the code fragment. */
+interface PipeSize {
+  label: string;
+  codePart: string;
+}
+
+const SIZE_1_2: PipeSize = { label: '1/2', codePart: '1/2' };
+const SIZE_3_4: PipeSize = { label: '3/4', codePart: '3/4' };
+const SIZE_1: PipeSize = { label: '1', codePart: '1' };
+// A space is awkward in an identifier, so 1 1/2 is written the way fittings catalogues do: 1-1/2.
+const SIZE_1_1_2: PipeSize = { label: '1 1/2', codePart: '1-1/2' };
+const SIZE_2: PipeSize = { label: '2', codePart: '2' };
+
+// ASME B1.20.1 [pub]: pipe OD (in) and threads per inch for each nominal size.
+const ASME_PIPE: Array<{ size: PipeSize; odIn: number; tpi: number }> = [
+  { size: SIZE_1_2, odIn: 0.84, tpi: 14 },
+  { size: SIZE_3_4, odIn: 1.05, tpi: 14 },
+  { size: SIZE_1, odIn: 1.315, tpi: 11.5 },
+  { size: SIZE_1_1_2, odIn: 1.9, tpi: 11.5 },
+  { size: SIZE_2, odIn: 2.375, tpi: 11.5 },
+];
+
+// ISO 228-1 [pub]: threads per inch, pitch (mm, as published) and major diameter (mm).
+const ISO_228: Array<{ size: PipeSize; tpi: number; pitchMm: number; majorMm: number }> = [
+  { size: SIZE_1_2, tpi: 14, pitchMm: 1.814, majorMm: 20.955 },
+  { size: SIZE_3_4, tpi: 14, pitchMm: 1.814, majorMm: 26.441 },
+  { size: SIZE_1, tpi: 11, pitchMm: 2.309, majorMm: 33.249 },
+  { size: SIZE_1_1_2, tpi: 11, pitchMm: 2.309, majorMm: 47.803 },
+  { size: SIZE_2, tpi: 11, pitchMm: 2.309, majorMm: 59.614 },
+];
+
+const NPT_ROWS: ThreadSpecRow[] = ASME_PIPE.map(({ size, odIn, tpi }): ThreadSpecRow => ({
+  code: `NPT-${size.codePart}`,
+  family: 'NPT',
+  nominalLabel: `${size.label} in NPT`,
+  majorDiameterMm: odIn * MM_PER_IN,
+  pitchMm: MM_PER_IN / tpi,
+  threadsPerInch: tpi,
+  flankAngleDeg: 60,
+  form: 'tapered',
+  standard: 'ASME B1.20.1',
+}));
+
+// Straight pipe threads share the NPT form, pitch and OD of the same nominal size [mem]: which is
+// exactly why NPS and NPT can only be told apart by checking for taper.
+const NPS_ROWS: ThreadSpecRow[] = ASME_PIPE.map(({ size, odIn, tpi }): ThreadSpecRow => ({
+  code: `NPS-${size.codePart}`,
+  family: 'NPS',
+  nominalLabel: `${size.label} in NPS`,
+  majorDiameterMm: odIn * MM_PER_IN,
+  pitchMm: MM_PER_IN / tpi,
+  threadsPerInch: tpi,
+  flankAngleDeg: 60,
+  form: 'parallel',
+  standard: 'ASME B1.20.1 (straight pipe thread)',
+}));
+
+const G_ROWS: ThreadSpecRow[] = ISO_228.map(({ size, tpi, pitchMm, majorMm }): ThreadSpecRow => ({
+  code: `G-${size.codePart}`,
+  family: 'G',
+  nominalLabel: `G ${size.label}`,
+  majorDiameterMm: majorMm,
+  pitchMm,
+  threadsPerInch: tpi,
+  flankAngleDeg: 55,
+  form: 'parallel',
+  standard: 'ISO 228-1',
+}));
+
+// Plastic-drum buttress bungs are named diameter x pitch in mm; no dimension standard was found, so
+// only the name's two numbers are trusted. Buttress forms pair a near-square load flank with a sloped
+// clearance flank; 45 deg is the clearance flank commonly quoted and is what a flank gauge will not
+// mistake for 55 or 60 [mem].
+const BUTTRESS_ROWS: ThreadSpecRow[] = [
+  { majorMm: 56, pitchMm: 4 },
+  { majorMm: 70, pitchMm: 6 },
+].map(({ majorMm, pitchMm }): ThreadSpecRow => ({
+  code: `BT-${majorMm}x${pitchMm}`,
+  family: 'buttress',
+  nominalLabel: `${majorMm}x${pitchMm} buttress`,
+  majorDiameterMm: majorMm,
+  pitchMm,
+  threadsPerInch: MM_PER_IN / pitchMm,
+  flankAngleDeg: 45,
+  form: 'parallel',
+  standard: 'no dimension standard found',
+}));
+
+// Frozen so no caller can edit the shared table in place.
+export const THREAD_TABLE: readonly Readonly<ThreadSpecRow>[] = Object.freeze(
+  [...NPT_ROWS, ...NPS_ROWS, ...G_ROWS, ...BUTTRESS_ROWS].map((row) => Object.freeze(row)),
+);
+
+export const THREAD_CODES: readonly string[] = THREAD_TABLE.map((row) => row.code);
+
+export function findThreadSpec(
+  code: string,
+  table: readonly ThreadSpecRow[] = THREAD_TABLE,
+): ThreadSpecRow | undefined {
+  return table.find((row) => row.code === code);
+}
+
+export function isThreadCode(code: unknown, table: readonly ThreadSpecRow[] = THREAD_TABLE): code is string {
+  return typeof code === 'string' && table.some((row) => row.code === code);
+}

@@ -1,0 +1,115 @@
+// Unit conversions used by every check. All stored lengths are mm and all flows m^3/s internally;
+// other units exist only at the edges (forms, tables, reports).
+
+/** 1 in = 25.4 mm exactly (NIST SP 811, Appendix B). */
+export const MM_PER_IN = 25.4;
+/** 1 US gal = 231 in^3 = 3.785411784 L exactly (NIST SP 811, Appendix B; 16 CFR 500.19). */
+export const L_PER_US_GAL = 3.785411784;
+
+export const LENGTH_UNITS = ['mm', 'in'] as const;
+export const VOLUME_UNITS = ['L', 'gal'] as const;
+export const FLOW_UNITS = ['L/min', 'gal/min', 'm3/h'] as const;
+
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
+/** 'gal' is the US liquid gallon. */
+export type VolumeUnit = (typeof VOLUME_UNITS)[number];
+/** 'gal/min' is US gallons per minute. */
+export type FlowUnit = (typeof FLOW_UNITS)[number];
+
+/** Thrown when a unit string is not one we know, so a typo never converts silently. */
+export class UnknownUnitError extends Error {
+  readonly unit: string;
+  readonly expected: readonly string[];
+
+  constructor(unit: unknown, expected: readonly string[]) {
+    super(`Unknown unit "${String(unit)}": expected one of ${expected.join(', ')}`);
+    this.name = 'UnknownUnitError';
+    this.unit = String(unit);
+    this.expected = expected;
+    // Keeps `instanceof` working when a bundler compiles classes down to ES5.
+    Object.setPrototypeOf(this, new.target.prototype);
+  }
+}
+
+export function isLengthUnit(x: unknown): x is LengthUnit {
+  return typeof x === 'string' && (LENGTH_UNITS as readonly string[]).includes(x);
+}
+
+export function isVolumeUnit(x: unknown): x is VolumeUnit {
+  return typeof x === 'string' && (VOLUME_UNITS as readonly string[]).includes(x);
+}
+
+export function isFlowUnit(x: unknown): x is FlowUnit {
+  return typeof x === 'string' && (FLOW_UNITS as readonly string[]).includes(x);
+}
+
+// Millimetres per one of each length unit.
+const MM_PER: Record<LengthUnit, number> = { mm: 1, in: MM_PER_IN };
+// Litres per one of each volume unit.
+const L_PER: Record<VolumeUnit, number> = { L: 1, gal: L_PER_US_GAL };
+// Cubic metres per second per one of each flow unit.
+const M3S_PER: Record<FlowUnit, number> = {
+  'L/min': 1 / 1000 / 60,
+  'gal/min': L_PER_US_GAL / 1000 / 60,
+  'm3/h': 1 / 3600,
+};
+
+function lengthFactor(unit: unknown): number {
+  if (!isLengthUnit(unit)) throw new UnknownUnitError(unit, LENGTH_UNITS);
+  return MM_PER[unit];
+}
+
+function volumeFactor(unit: unknown): number {
+  if (!isVolumeUnit(unit)) throw new UnknownUnitError(unit, VOLUME_UNITS);
+  return L_PER[unit];
+}
+
+function flowFactor(unit: unknown): number {
+  if (!isFlowUnit(unit)) throw new UnknownUnitError(unit, FLOW_UNITS);
+  return M3S_PER[unit];
+}
+
+export function toMm(value: number, unit: LengthUnit): number {
+  return value * lengthFactor(unit);
+}
+
+export function fromMm(mm: number, unit: LengthUnit): number {
+  return mm / lengthFactor(unit);
+}
+
+export function mmToIn(mm: number): number {
+  return mm / MM_PER_IN;
+}
+
+export function inToMm(inches: number): number {
+  return inches * MM_PER_IN;
+}
+
+export function toLitres(value: number, unit: VolumeUnit): number {
+  return value * volumeFactor(unit);
+}
+
+export function fromLitres(litres: number, unit: VolumeUnit): number {
+  return litres / volumeFactor(unit);
+}
+
+export function flowToM3s(value: number, unit: FlowUnit): number {
+  return value * flowFactor(unit);
+}
+
+export function fromM3s(m3s: number, unit: FlowUnit): number {
+  return m3s / flowFactor(unit);
+}
+
+export function convertFlow(value: number, from: FlowUnit, to: FlowUnit): number {
+  return fromM3s(flowToM3s(value, from), to);
+}
+
+// Inches need more decimals than mm to carry the same resolution (0.001 in is about 0.025 mm).
+const DEFAULT_DIGITS: Record<LengthUnit, number> = { mm: 1, in: 3 };
+
+/** Formats a length held in mm for display, e.g. formatLength(60.325, 'in') -> "2.375 in". */
+export function formatLength(mm: number, unit: LengthUnit, digits?: number): string {
+  const value = fromMm(mm, unit);
+  return `${value.toFixed(digits ?? DEFAULT_DIGITS[unit])} ${unit}`;
+}
