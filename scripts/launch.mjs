@@ -244,6 +244,10 @@ async function main() {
   ensureDependencies();
   checkDiskSpace();
 
+  if (mode === 'start' && !(await portFree(appPort))) {
+    fail(`Port ${appPort} is taken by another program: stop it or set PORT to a free port.`);
+  }
+
   let bin = null;
   let cluster = { startedHere: false };
   let databaseUrl = env.DATABASE_URL;
@@ -282,7 +286,6 @@ async function main() {
       process.exit(code);
     }
 
-    if (!(await portFree(appPort))) fail(`Port ${appPort} is taken by another program: stop it or set PORT to a free port.`);
     if (serverCli(['prepare'], dbEnv) !== 0) fail('Preparing the database failed: see the output above.');
     exportWeb();
     const jwtSecret = env.JWT_SECRET ?? ensureSecret('jwt-secret');

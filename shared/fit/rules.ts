@@ -270,11 +270,11 @@ export const checkOpenings: RuleFn = ({ drum, tube, station }) => {
   const numbers = { usableOpenings: usable, neededOpenings: needed };
   const thread = describeThread(tube.threadCode);
   if (usable >= needed) {
-    return pass('openings', `The drum has ${usable} ${thread} opening${usable === 1 ? '' : 's'}; ${station.tapping} tapping needs ${needed}.`, numbers);
+    return pass('openings', `The drum has ${usable} opening${usable === 1 ? '' : 's'} that take${usable === 1 ? 's' : ''} the tube's ${thread} thread; ${station.tapping} tapping needs ${needed}.`, numbers);
   }
   return fail(
     'openings',
-    `${station.tapping === 'two-opening' ? 'Two-opening' : 'One-opening'} tapping needs ${needed} ${thread} opening${needed === 1 ? '' : 's'}, but this drum has ${usable}.`,
+    `${station.tapping === 'two-opening' ? 'Two-opening' : 'One-opening'} tapping needs ${needed} opening${needed === 1 ? '' : 's'} that take the tube's ${thread} thread, but this drum has ${usable}.`,
     numbers,
   );
 };

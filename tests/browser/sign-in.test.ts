@@ -1,0 +1,43 @@
+import { BrowserHarness, signInAs, VIEWPORTS } from '../support/browser';
+
+const harness = new BrowserHarness();
+
+beforeAll(() => harness.start(), 60_000);
+afterAll(() => harness.stop());
+afterEach(() => {
+  // Any console error in the page fails the test that caused it.
+  expect(harness.takeConsoleErrors()).toEqual([]);
+});
+
+describe.each(VIEWPORTS)('sign-in at $name width ($width px)', (viewport) => {
+  it('shows field-level messages for empty fields and one message for a wrong password', async () => {
+    const { context, page } = await harness.page(viewport);
+    await page.goto(`${harness.baseUrl}/`);
+    // The guard sends a visitor without a session to the sign-in page.
+    await page.getByTestId('sign-in-submit').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+    await page.getByTestId('sign-in-submit').click();
+    await expect(page.getByTestId('sign-in-email-error').textContent()).resolves.toMatch(/e-mail/);
+    await expect(page.getByTestId('sign-in-password-error').textContent()).resolves.toMatch(/password/);
+    await harness.shot(page, 'sign-in-empty', viewport);
+    harness.allowConsoleError(/status of 401 \(Unauthorized\)/);
+    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example', 'wrong-password-1');
+    await expect(page.getByTestId('sign-in-message').textContent()).resolves.toMatch(/do not match/);
+    await context.close();
+  }, 30_000);
+
+  it.each(['clerk', 'engineer', 'buyer', 'admin'])('%s lands on their home, keeps the session on reload, and signs out', async (role) => {
+    const { context, page } = await harness.page(viewport);
+    await signInAs(page, harness.baseUrl, `${role}@bungwise.example`);
+    await page.getByTestId(`home-${role}`).waitFor();
+    await expect(page.getByTestId('current-role').textContent()).resolves.toMatch(new RegExp(role === 'clerk' ? 'clerk' : role, 'i'));
+    await harness.shot(page, `home-${role}`, viewport);
+    // Only admins see People in the navigation.
+    expect(await page.getByTestId('nav-users').count()).toBe(role === 'admin' ? 1 : 0);
+    await page.reload();
+    await page.getByTestId(`home-${role}`).waitFor();
+    await page.getByTestId('sign-out').click();
+    await page.getByTestId('sign-in-submit').waitFor();
+    await context.close();
+  }, 30_000);
+});

@@ -1,0 +1,83 @@
+import fs from 'node:fs';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import path from 'node:path';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import type { DataSource } from 'typeorm';
+import { makeTestApp } from './app';
+import { openTestDataSource, resetDatabase } from './db';
+
+export const VIEWPORTS = [
+  { name: 'phone', width: 390, height: 844 },
+  { name: 'wide', width: 1280, height: 800 },
+] as const;
+export type Viewport = (typeof VIEWPORTS)[number];
+
+const WEB_DIR = path.resolve(__dirname, '..', '..', 'dist', 'web');
+export const SHOTS_DIR = path.resolve(__dirname, '..', 'artifacts', 'screens');
+
+/** The exported web build served by the real app on a free port, over a freshly reset database. */
+export class BrowserHarness {
+  ds!: DataSource;
+  server!: Server;
+  browser!: Browser;
+  baseUrl = '';
+  consoleErrors: string[] = [];
+  private allowed: RegExp[] = [];
+
+  /** A test that provokes an error answer on purpose (a wrong password) allows the browser's log line for it. */
+  allowConsoleError(pattern: RegExp): void {
+    this.allowed.push(pattern);
+  }
+
+  /** The console errors since the last call, less the allowed ones; resets both. */
+  takeConsoleErrors(): string[] {
+    const errors = this.consoleErrors.splice(0).filter((e) => !this.allowed.some((p) => p.test(e)));
+    this.allowed = [];
+    return errors;
+  }
+
+  async start(): Promise<void> {
+    if (!fs.existsSync(path.join(WEB_DIR, 'index.html'))) throw new Error('dist/web is missing: run the browser tests through `npm test`, which exports the web app.');
+    this.ds = await openTestDataSource();
+    await resetDatabase(this.ds);
+    const app = makeTestApp(this.ds, { webDir: WEB_DIR, signInLimits: { perAccount: 1000, perAddress: 1000 } });
+    this.server = await new Promise<Server>((resolve) => {
+      const s = app.listen(0, '127.0.0.1', () => resolve(s));
+    });
+    this.baseUrl = `http://127.0.0.1:${(this.server.address() as AddressInfo).port}`;
+    this.browser = await chromium.launch({
+      executablePath: process.env.BUNGWISE_CHROMIUM ?? '/usr/bin/chromium',
+      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+    });
+    fs.mkdirSync(SHOTS_DIR, { recursive: true });
+  }
+
+  async stop(): Promise<void> {
+    await this.browser?.close();
+    await new Promise((resolve) => this.server?.close(resolve));
+    await this.ds?.destroy();
+  }
+
+  /** A fresh context per viewport; every console error or page error is collected and fails the test. */
+  async page(viewport: Viewport): Promise<{ context: BrowserContext; page: Page }> {
+    const context = await this.browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+    const page = await context.newPage();
+    page.on('console', (msg) => {
+      if (msg.type() === 'error') this.consoleErrors.push(`${viewport.name}: ${msg.text()}`);
+    });
+    page.on('pageerror', (err) => this.consoleErrors.push(`${viewport.name}: ${err.message}`));
+    return { context, page };
+  }
+
+  async shot(page: Page, name: string, viewport: Viewport): Promise<void> {
+    await page.screenshot({ path: path.join(SHOTS_DIR, `${name}-${viewport.name}.png`), fullPage: true });
+  }
+}
+
+export async function signInAs(page: Page, baseUrl: string, email: string, password = 'bungwise-demo'): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByTestId('sign-in-email').fill(email);
+  await page.getByTestId('sign-in-password').fill(password);
+  await page.getByTestId('sign-in-submit').click();
+}

@@ -1,0 +1,233 @@
+import { identifyThread, threadSpecEquals } from '../../shared/threads/identify';
+import { findThreadSpec, THREAD_TABLE } from '../../shared/threads/thread-table';
+
+const IN = 25.4; // NIST SP 811 Appendix B: 1 in = 25.4 mm exactly [pub]
+
+// Published dimensions, typed in here from the sources (not read from the table under test).
+// ASME B1.20.1, Table 2 [pub]: nominal size, threads per inch, pipe OD in inches; 60 deg form, taper 1:16.
+const ASME_B1_20_1 = [
+  { size: '1/2', tpi: 14, odIn: 0.84 },
+  { size: '3/4', tpi: 14, odIn: 1.05 },
+  { size: '1', tpi: 11.5, odIn: 1.315 },
+  { size: '1-1/2', tpi: 11.5, odIn: 1.9 },
+  { size: '2', tpi: 11.5, odIn: 2.375 },
+];
+// ISO 228-1 [pub]: size, threads per inch, pitch mm, major diameter mm; 55 deg form, parallel.
+const ISO_228_1 = [
+  { size: '1/2', tpi: 14, pitchMm: 1.814, majorMm: 20.955 },
+  { size: '3/4', tpi: 14, pitchMm: 1.814, majorMm: 26.441 },
+  { size: '1', tpi: 11, pitchMm: 2.309, majorMm: 33.249 },
+  { size: '1-1/2', tpi: 11, pitchMm: 2.309, majorMm: 47.803 },
+  { size: '2', tpi: 11, pitchMm: 2.309, majorMm: 59.614 },
+];
+
+describe('thread table holds the published values', () => {
+  it.each(ASME_B1_20_1)('NPT and NPS $size in: $tpi TPI, OD $odIn in', ({ size, tpi, odIn }) => {
+    for (const family of ['NPT', 'NPS']) {
+      const row = findThreadSpec(`${family}-${size}`);
+      expect(row).toBeDefined();
+      expect(row!.majorDiameterMm).toBeCloseTo(odIn * IN, 6); // ASME B1.20.1 Table 2: pipe OD [pub]
+      expect(row!.threadsPerInch).toBe(tpi); // ASME B1.20.1 Table 2: threads per inch [pub]; NPS same pitch [mem]
+      expect(row!.pitchMm).toBeCloseTo(IN / tpi, 9);
+      expect(row!.flankAngleDeg).toBe(60); // ASME B1.20.1: 60 deg thread form [pub]
+      expect(row!.form).toBe(family === 'NPT' ? 'tapered' : 'parallel');
+    }
+  });
+
+  it.each(ISO_228_1)('G $size: $tpi TPI, pitch $pitchMm mm, major $majorMm mm', ({ size, tpi, pitchMm, majorMm }) => {
+    const row = findThreadSpec(`G-${size}`);
+    expect(row).toBeDefined();
+    expect(row!.majorDiameterMm).toBe(majorMm); // ISO 228-1: major diameter [pub]
+    expect(row!.pitchMm).toBe(pitchMm); // ISO 228-1: pitch [pub]
+    expect(row!.threadsPerInch).toBe(tpi); // ISO 228-1: threads per inch [pub]
+    expect(row!.flankAngleDeg).toBe(55); // ISO 228-1: 55 deg form [pub]
+    expect(row!.form).toBe('parallel'); // ISO 228-1: parallel thread [pub]
+  });
+
+  it('has the buttress bungs named diameter x pitch', () => {
+    // Plastic-drum buttress bungs written diameter x pitch in mm [pub, no dimension standard found]
+    expect(findThreadSpec('BT-56x4')).toMatchObject({ majorDiameterMm: 56, pitchMm: 4, family: 'buttress' });
+    expect(findThreadSpec('BT-70x6')).toMatchObject({ majorDiameterMm: 70, pitchMm: 6, family: 'buttress' });
+  });
+
+  it('has unique codes', () => {
+    const codes = THREAD_TABLE.map((r) => r.code);
+    expect(new Set(codes).size).toBe(codes.length);
+    expect(codes).toEqual(expect.arrayContaining(['NPT-3/4', 'NPS-2', 'G-2', 'BT-56x4', 'BT-70x6']));
+  });
+});
+
+describe('every row identifies itself from its published dimensions', () => {
+  it.each(ASME_B1_20_1.flatMap((s) => ['NPT', 'NPS'].map((family) => ({ ...s, family }))))(
+    '$family $size from ASME B1.20.1 values',
+    ({ size, tpi, odIn, family }) => {
+      // ASME B1.20.1 Table 2: OD and threads per inch, 60 deg [pub]; taper tells NPT from NPS
+      const result = identifyThread({
+        majorDiameterMm: odIn * IN,
+        threadsPerInch: tpi,
+        flankAngleDeg: 60,
+        taper: family === 'NPT' ? 'tapered' : 'parallel',
+      });
+      expect(result.matches[0]?.code).toBe(`${family}-${size}`);
+      expect(result.matches).toHaveLength(1);
+      expect(result.ambiguous).toBe(false);
+    },
+  );
+
+  it.each(ISO_228_1)('G $size from ISO 228-1 values', ({ size, tpi, majorMm }) => {
+    // ISO 228-1: major diameter, threads per inch, 55 deg [pub]
+    const result = identifyThread({ majorDiameterMm: majorMm, threadsPerInch: tpi, flankAngleDeg: 55, taper: 'parallel' });
+    expect(result.matches.map((m) => m.code)).toEqual([`G-${size}`]);
+    expect(result.ambiguous).toBe(false);
+    expect(result.matches[0]!.deltaMm).toBeCloseTo(0, 9);
+  });
+
+  it.each([
+    ['BT-56x4', 56, 4],
+    ['BT-70x6', 70, 6],
+  ])('%s from diameter and pitch', (code, majorDiameterMm, pitchMm) => {
+    // Buttress bung names are diameter x pitch in mm [pub, no dimension standard found]
+    const result = identifyThread({ majorDiameterMm, pitchMm });
+    expect(result.matches.map((m) => m.code)).toEqual([code]);
+    expect(result.matches[0]!.pitchDeltaMm).toBeCloseTo(0, 9);
+  });
+
+  it('identifies every table row from its own row values', () => {
+    for (const row of THREAD_TABLE) {
+      const result = identifyThread({
+        majorDiameterMm: row.majorDiameterMm,
+        pitchMm: row.pitchMm,
+        flankAngleDeg: row.flankAngleDeg,
+        taper: row.form,
+      });
+      expect(result.matches[0]?.code).toBe(row.code);
+      expect(result.ambiguous).toBe(false);
+    }
+  });
+});
+
+describe('neighbours are not confused', () => {
+  it('G 3/4 and 3/4 in NPT: same 14 TPI, told apart by the flank angle', () => {
+    // ISO 228-1: G 3/4 major 26.441 mm, 14 TPI, 55 deg; ASME B1.20.1: 3/4 in OD 1.050 in, 14 TPI, 60 deg [pub]
+    const countOnly = identifyThread({ majorDiameterMm: 26.5, threadsPerInch: 14 });
+    expect(countOnly.ambiguous).toBe(true);
+    expect(countOnly.matches.map((m) => m.code).sort()).toEqual(['G-3/4', 'NPS-3/4', 'NPT-3/4']);
+    expect(countOnly.advice).toMatch(/flank angle/);
+    expect(countOnly.advice).not.toMatch(/threads per inch/); // all three are 14 TPI, counting cannot help
+
+    expect(identifyThread({ majorDiameterMm: 26.5, threadsPerInch: 14, flankAngleDeg: 55 }).matches.map((m) => m.code)).toEqual(['G-3/4']);
+    const npt = identifyThread({ majorDiameterMm: 26.6, threadsPerInch: 14, flankAngleDeg: 60, taper: 'tapered' });
+    expect(npt.matches.map((m) => m.code)).toEqual(['NPT-3/4']);
+  });
+
+  it('G 2 and 2 in NPS: close diameters, told apart by 11 vs 11.5 TPI', () => {
+    // ISO 228-1: G 2 major 59.614 mm, 11 TPI (pitch 2.309 mm); ASME B1.20.1: 2 in OD 2.375 in (60.325 mm), 11.5 TPI [pub]
+    const g = identifyThread({ majorDiameterMm: 59.8, threadsPerInch: 11 });
+    expect(g.matches.map((m) => m.code)).toEqual(['G-2']);
+    expect(g.ambiguous).toBe(false);
+
+    const pitchOnly = identifyThread({ majorDiameterMm: 59.8, pitchMm: 2.309 });
+    expect(pitchOnly.matches.map((m) => m.code)).toEqual(['G-2']);
+
+    const nps = identifyThread({ majorDiameterMm: 60.2, threadsPerInch: 11.5, taper: 'parallel' });
+    expect(nps.matches.map((m) => m.code)).toEqual(['NPS-2']);
+
+    const byFlank = identifyThread({ majorDiameterMm: 60.0, flankAngleDeg: 55 });
+    expect(byFlank.matches.map((m) => m.code)).toEqual(['G-2']);
+  });
+
+  it('ranks a diameter-only reading by closeness', () => {
+    // ISO 228-1: G 2 59.614 mm; ASME B1.20.1: 2 in OD 60.325 mm [pub]
+    const nearG = identifyThread({ majorDiameterMm: 59.7 });
+    expect(nearG.matches[0]!.code).toBe('G-2');
+    expect(nearG.matches[0]!.deltaMm).toBeCloseTo(59.7 - 59.614, 9);
+    const nearPipe = identifyThread({ majorDiameterMm: 60.3 });
+    expect(['NPT-2', 'NPS-2']).toContain(nearPipe.matches[0]!.code);
+    expect(nearPipe.matches[2]!.code).toBe('G-2');
+  });
+
+  it('keeps a 56 mm buttress apart from 2 in pipe threads', () => {
+    const result = identifyThread({ majorDiameterMm: 56.1 });
+    expect(result.matches.map((m) => m.code)).toEqual(['BT-56x4']);
+  });
+});
+
+describe('ambiguous readings are reported as ambiguous', () => {
+  it('2 in NPS vs NPT: same OD and TPI, only a taper check separates them', () => {
+    // ASME B1.20.1: 2 in OD 2.375 in, 11.5 TPI, 60 deg for both [pub]; NPS parallel, NPT tapered 1:16
+    const result = identifyThread({ majorDiameterMm: 2.375 * IN, threadsPerInch: 11.5, flankAngleDeg: 60 });
+    expect(result.ambiguous).toBe(true);
+    expect(result.matches.map((m) => m.code).sort()).toEqual(['NPS-2', 'NPT-2']);
+    expect(result.advice).toMatch(/taper/);
+    expect(result.advice).toMatch(/two points/);
+    expect(result.advice).not.toMatch(/flank angle/);
+  });
+
+  it('diameter-only 60 mm fits G 2, NPS 2 and NPT 2', () => {
+    // ISO 228-1: G 2 59.614 mm; ASME B1.20.1: 2 in 60.325 mm [pub]: 0.7 mm apart, within caliper error on a thread
+    const result = identifyThread({ majorDiameterMm: 60 });
+    expect(result.ambiguous).toBe(true);
+    expect(result.matches.map((m) => m.code).sort()).toEqual(['G-2', 'NPS-2', 'NPT-2']);
+    expect(result.advice).toMatch(/threads per inch/);
+    expect(result.advice).toMatch(/flank angle/);
+    expect(result.advice).toMatch(/taper/);
+  });
+});
+
+describe('tolerances and advice', () => {
+  it('uses max(0.6 mm, 2 %) on diameter', () => {
+    // G 2 tolerance is 2 % of 59.614 = 1.192 mm; 2 in pipe tolerance 2 % of 60.325 = 1.2065 mm
+    const codes = identifyThread({ majorDiameterMm: 58.5 }).matches.map((m) => m.code);
+    expect(codes).toEqual(['G-2']);
+    expect(identifyThread({ majorDiameterMm: 58.3 }).matches).toEqual([]);
+    // G 1/2 at 20.955 mm: 2 % is 0.419 mm, so the 0.6 mm floor applies
+    expect(identifyThread({ majorDiameterMm: 20.955 - 0.55, threadsPerInch: 14, flankAngleDeg: 55 }).matches.map((m) => m.code)).toEqual(['G-1/2']);
+    expect(identifyThread({ majorDiameterMm: 20.955 - 0.65, threadsPerInch: 14, flankAngleDeg: 55 }).matches).toEqual([]);
+  });
+
+  it('honours a caller tolerance', () => {
+    expect(identifyThread({ majorDiameterMm: 60 }, THREAD_TABLE, { diameterToleranceMm: 0.1, diameterTolerancePct: 0 }).matches).toEqual([]);
+  });
+
+  it('advises re-measuring when nothing fits', () => {
+    const result = identifyThread({ majorDiameterMm: 40, threadsPerInch: 8 });
+    expect(result.matches).toEqual([]);
+    expect(result.ambiguous).toBe(false);
+    expect(result.advice).toMatch(/caliper/);
+    expect(result.advice).toMatch(/added to the table/);
+  });
+
+  it('suggests confirming a single diameter-only match', () => {
+    const result = identifyThread({ majorDiameterMm: 70.2 });
+    expect(result.matches.map((m) => m.code)).toEqual(['BT-70x6']);
+    expect(result.advice).toMatch(/threads per inch/);
+  });
+
+  it('flags a pitch and a count that disagree', () => {
+    const result = identifyThread({ majorDiameterMm: 59.6, pitchMm: 2.309, threadsPerInch: 14 });
+    expect(result.matches.map((m) => m.code)).toEqual(['G-2']);
+    expect(result.advice).toMatch(/disagree/);
+  });
+
+  it('rejects impossible readings', () => {
+    expect(() => identifyThread({ majorDiameterMm: 0 })).toThrow(RangeError);
+    expect(() => identifyThread({ majorDiameterMm: 60, threadsPerInch: -11 })).toThrow(RangeError);
+    expect(() => identifyThread({ majorDiameterMm: Number.NaN })).toThrow(RangeError);
+  });
+});
+
+describe('threadSpecEquals: match on spec code, never nominal size', () => {
+  it('does not match G 2 with 2 in NPS', () => {
+    // ISO 228-1 G 2 (11 TPI, 55 deg) vs 2 in NPS (11.5 TPI, 60 deg) [pub]: same nominal size, different threads
+    expect(threadSpecEquals('G-2', 'NPS-2')).toBe(false);
+    expect(threadSpecEquals('NPS-2', 'NPT-2')).toBe(false);
+  });
+
+  it('matches the same code in any carrier and never an unknown', () => {
+    expect(threadSpecEquals('G-3/4', 'G-3/4')).toBe(true);
+    expect(threadSpecEquals({ code: 'G-2' }, { threadCode: 'G-2' })).toBe(true);
+    expect(threadSpecEquals(null, null)).toBe(false);
+    expect(threadSpecEquals('', '')).toBe(false);
+    expect(threadSpecEquals({ threadCode: null }, 'G-2')).toBe(false);
+  });
+});
