@@ -1,5 +1,6 @@
 // Every migration, in order. A new migration is added here as well as in its own timestamped file
 // (see DEVELOPERS.md): an explicit list works the same compiled by tsc and under ts-jest.
 import { CreateUsers1764612000000 } from './1764612000000-create-users';
+import { CreateRegistry1764615600000 } from './1764615600000-create-registry';
 
-export const MIGRATIONS = [CreateUsers1764612000000];
+export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000];

@@ -7,9 +7,15 @@ import morgan from 'morgan';
 import type { DataSource } from 'typeorm';
 import { authRouter, DEFAULT_SIGN_IN_LIMITS, type SignInLimits } from './auth/auth.router';
 import { makeAuthenticator } from './auth/guards';
-import { notFound } from './common/errors';
+import { notFound, unavailable } from './common/errors';
 import { errorMiddleware } from './common/error-middleware';
 import { healthRouter } from './health/health.router';
+import { fitCheckRouter } from './fit/fit-check.router';
+import { pairingActionsRouter } from './pairings/pairing-actions.router';
+import { RESOURCES, pairingDef } from './registry/definitions';
+import { resourceRouter, ResourceService } from './registry/resource';
+import { settingsRouter } from './settings/settings.router';
+import { toolsRouter } from './tools/tools.router';
 import { usersRouter } from './users/users.router';
 
 export interface AppOptions {
@@ -47,10 +53,17 @@ export function createApp(options: AppOptions): Express {
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
   api.use(healthRouter(ds));
+  // Until the first connection is made (the database may start after the server), answer 503, not 500.
+  api.use((_req, _res, next) => next(ds.isInitialized ? undefined : unavailable()));
   api.use(authRouter(ds, jwtSecret, { ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits }));
   // Everything below needs a valid token.
   api.use(makeAuthenticator(ds, jwtSecret));
   api.use(usersRouter(ds));
+  api.use(settingsRouter(ds));
+  api.use(pairingActionsRouter(ds, new ResourceService(ds, pairingDef)));
+  for (const def of RESOURCES) api.use(resourceRouter(ds, def).router);
+  api.use(fitCheckRouter(ds));
+  api.use(toolsRouter(ds));
   api.use((req) => {
     throw notFound(`The API route ${req.method} ${req.path}`);
   });

@@ -27,20 +27,24 @@ const app = createApp({
   logRequests: process.env.BUNGWISE_LOG_REQUESTS !== '0',
 });
 
-const server = app.listen(port, () => {
+function announce(): void {
   const url = `http://localhost:${port}`;
   console.log(`\n[bungwise] Bungwise is running at ${url}`);
   if (process.env.BUNGWISE_DEMO !== '0') {
     console.log('[bungwise] Demo sign-ins (password bungwise-demo):');
-    for (const role of ['clerk', 'engineer', 'buyer', 'admin']) console.log(`[bungwise]   ${role.padEnd(9)} ${role}@bungwise.example`);
+    for (const role of ['clerk', 'engineer', 'engineer2', 'buyer', 'admin']) console.log(`[bungwise]   ${role.padEnd(9)} ${role}@bungwise.example`);
   }
   console.log('[bungwise] Press Ctrl-C to stop.\n');
+}
+
+// Listen at once (health answers "down" meanwhile), announce once the database is reachable.
+const server = app.listen(port, () => {
+  void connect().then(announce);
 });
 server.on('error', (err: NodeJS.ErrnoException) => {
   console.error(err.code === 'EADDRINUSE' ? `[bungwise] Port ${port} is taken: stop the other program or set PORT.` : `[bungwise] ${err.message}`);
   process.exit(1);
 });
-void connect();
 
 function shutdown(): void {
   server.close(() => {

@@ -18,6 +18,11 @@ export const errorMiddleware: ErrorRequestHandler = (err, _req, res, _next) => {
     res.status(413).json({ error: { code: 'too_large', message: 'The request body is too large.', details: [{ field: 'body', messages: ['is too large'] }] } });
     return;
   }
+  // The shared computations throw RangeError for values no drum or pipe could have.
+  if (err instanceof RangeError) {
+    res.status(400).json({ error: { code: 'invalid_value', message: err.message, details: [{ field: 'body', messages: [err.message] }] } });
+    return;
+  }
   if (isConnectionError(err)) {
     res.status(503).json({ error: { code: 'unavailable', message: 'The database is unavailable; try again shortly.', details: null } });
     return;

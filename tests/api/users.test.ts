@@ -20,10 +20,10 @@ afterAll(async () => {
 });
 
 describe('people, managed by admins', () => {
-  it('lists the four demo people', async () => {
+  it('lists the demo people: one per role and a second engineer', async () => {
     const res = await request(app).get('/api/users').set(bearer(admin));
     expect(res.status).toBe(200);
-    expect(res.body.items.map((u: { role: string }) => u.role).sort()).toEqual(['admin', 'buyer', 'clerk', 'engineer']);
+    expect(res.body.items.map((u: { role: string }) => u.role).sort()).toEqual(['admin', 'buyer', 'clerk', 'engineer', 'engineer']);
   });
 
   it('creates a user with a temporary password who can then sign in', async () => {

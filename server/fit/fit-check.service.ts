@@ -1,0 +1,222 @@
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import { drumVerdict, evaluateCandidate, handlingCautions } from '../../shared/fit';
+import type { CandidateEvaluation, ConnectorInput, DrumInput, FitSettings, SlurryInput, StationInput, TubeInput, TubeSetInput, Verdict } from '../../shared/fit/types';
+import { describeThread } from '../../shared/fit/rules';
+import { fieldError, ValidationFailed } from '../common/errors';
+import { parseDto } from '../common/validate';
+import { DrumType, Pairing, Slurry, Station, TubeSet } from '../entities';
+import { resolveKey, resolveThread } from '../registry/refs';
+import { fitSettingsOf, loadSettings } from '../settings/settings.service';
+import { FitCheckDto } from './fit-check.dto';
+
+const SEVERITY: Record<Verdict, number> = { fits: 0, caution: 1, 'no-fit': 2 };
+const STATUS_RANK: Record<Pairing['status'], number> = { approved: 0, draft: 1, retired: 2 };
+/** Candidates considered per check: enough for any real drum position, bounded for a large registry. */
+const POOL_LIMIT = 60;
+const ANSWER_LIMIT = 20;
+
+export interface FitCandidate extends CandidateEvaluation {
+  dipTubeId: string;
+  dipTubePartNumber: string;
+  connectorId: string;
+  connectorPartNumber: string;
+  pairingId: string | null;
+  pairingStatus: Pairing['status'] | null;
+  installedAtStation: boolean;
+}
+
+interface ResolvedDrum {
+  id: string | null;
+  name: string | null;
+  partNumber: string | null;
+  input: DrumInput;
+  threadSpecIds: string[];
+}
+
+const tubeInput = (p: Pairing): TubeInput => ({
+  id: p.dipTubeId,
+  partNumber: p.dipTube!.partNumber,
+  threadCode: p.dipTube!.threadSpec!.code,
+  lengthMm: p.dipTube!.lengthMm,
+  keyCode: p.dipTube!.keyCode?.code ?? null,
+  channels: p.dipTube!.channels,
+});
+
+const connectorInput = (p: Pairing): ConnectorInput => ({
+  id: p.connectorId,
+  partNumber: p.connector!.partNumber,
+  keyCode: p.connector!.keyCode?.code ?? null,
+  feedBoreMm: p.connector!.feedBoreMm,
+  feedNominal: p.connector!.feedNominal,
+  returnBoreMm: p.connector!.returnBoreMm,
+  returnNominal: p.connector!.returnNominal,
+  returnPath: p.connector!.returnPath,
+  suitedTo: p.connector!.suitedTo,
+});
+
+/** "Which tube and connector pairs fit this drum, and why": the server's authoritative answer. */
+export class FitCheckService {
+  constructor(private readonly ds: DataSource) {}
+
+  async check(body: unknown) {
+    const dto = await parseDto(FitCheckDto, body);
+    if (!dto.drumTypeId === !dto.drum) {
+      throw new ValidationFailed([{ field: dto.drumTypeId ? 'drum' : 'drumTypeId', messages: ['give either drumTypeId or drum, not both and not neither'] }]);
+    }
+    if (dto.stationId && (dto.tapping || dto.agitation || dto.flowLpm !== undefined)) {
+      throw fieldError('stationId', 'give either stationId or tapping/agitation/flowLpm, not both');
+    }
+    const m = this.ds.manager;
+    const settings = fitSettingsOf(await loadSettings(m));
+    const drum = dto.drumTypeId ? await this.loadDrum(m, dto.drumTypeId) : await this.adHocDrum(m, dto);
+    if (drum.input.insideDepthMm <= settings.tipClearanceMaxMm) {
+      throw fieldError(dto.drum ? 'drum.insideDepthMm' : 'drumTypeId', `inside depth must be more than the site's largest tip clearance (${settings.tipClearanceMaxMm} mm)`);
+    }
+    const slurry = dto.slurryId ? await m.findOneBy(Slurry, { id: dto.slurryId }) : null;
+    if (dto.slurryId && !slurry) throw fieldError('slurryId', 'does not name an existing slurry');
+    const { station, stationRow } = await this.station(m, dto);
+    const tubeSet = await this.nextTubeSet(m, dto, stationRow);
+
+    const pool = await this.candidatePool(m, drum, stationRow?.connectorId ?? null);
+    const slurryInput: SlurryInput | null = slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null;
+    const tubeSetInput: TubeSetInput | null = tubeSet ? { lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null;
+
+    const candidates: FitCandidate[] = pool.map((p) => ({
+      dipTubeId: p.dipTubeId,
+      dipTubePartNumber: p.dipTube!.partNumber,
+      connectorId: p.connectorId,
+      connectorPartNumber: p.connector!.partNumber,
+      pairingId: p.id,
+      pairingStatus: p.status,
+      installedAtStation: !!stationRow && stationRow.connectorId === p.connectorId,
+      ...evaluateCandidate({
+        drum: drum.input,
+        tube: tubeInput(p),
+        connector: connectorInput(p),
+        station,
+        slurry: slurryInput,
+        pairing: { status: p.status },
+        tubeSet: tubeSet && tubeSet.dipTubeId === p.dipTubeId ? tubeSetInput : null,
+        settings,
+      }),
+    }));
+    candidates.sort(
+      (a, b) =>
+        SEVERITY[a.verdict] - SEVERITY[b.verdict] ||
+        Number(b.installedAtStation) - Number(a.installedAtStation) ||
+        STATUS_RANK[a.pairingStatus ?? 'retired'] - STATUS_RANK[b.pairingStatus ?? 'retired'] ||
+        a.dipTubePartNumber.localeCompare(b.dipTubePartNumber),
+    );
+    const verdict = drumVerdict(candidates);
+    const best = candidates[0];
+    return {
+      verdict,
+      summary: this.summary(verdict, drum, best, candidates.length),
+      drum: { id: drum.id, name: drum.name, partNumber: drum.partNumber, ...drum.input },
+      station: stationRow ? { id: stationRow.id, name: stationRow.name, ...station } : station,
+      slurry: slurry ? { id: slurry.id, name: slurry.name, ...slurryInput } : null,
+      tubeSet: tubeSet ? { id: tubeSet.id, label: tubeSet.label, dipTubeId: tubeSet.dipTubeId, lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null,
+      settings,
+      candidates: candidates.slice(0, ANSWER_LIMIT).map(({ handling: _h, ...c }) => c),
+      candidateCount: candidates.length,
+      // Handling and pressure cautions go with every answer that involves hardware at a drum.
+      cautions: handlingCautions({ handlesSlurry: true, pressurised: !!station }),
+    };
+  }
+
+  private summary(verdict: Verdict, drum: ResolvedDrum, best: FitCandidate | undefined, count: number): string {
+    const what = drum.name ? `${drum.name} (${drum.partNumber})` : 'This drum';
+    if (!best) {
+      const threads = drum.input.openings.map((o) => describeThread(o.threadCode)).join(', ');
+      return `${what}: no registered tube and head pairing threads into its openings (${threads}). Order hardware for this drum design before it is tapped.`;
+    }
+    const pair = `tube ${best.dipTubePartNumber} with head ${best.connectorPartNumber}`;
+    if (verdict === 'fits') return `${what} fits: use ${pair} (approved pairing).`;
+    const firstProblem = best.rules.find((r) => r.outcome !== 'pass');
+    if (verdict === 'caution') return `${what}: caution with ${pair}. ${firstProblem?.message ?? ''}`.trim();
+    return `${what} does not fit any of the ${count} pairing(s) checked. Closest: ${pair}. ${firstProblem?.message ?? ''}`.trim();
+  }
+
+  private async loadDrum(m: EntityManager, id: string): Promise<ResolvedDrum> {
+    const d = await m.findOne(DrumType, { where: { id }, relations: { openings: { threadSpec: true, keyCode: true } } });
+    if (!d) throw fieldError('drumTypeId', 'does not name an existing drum type');
+    const openings = [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label));
+    return {
+      id: d.id,
+      name: d.name,
+      partNumber: d.partNumber,
+      input: {
+        insideDepthMm: d.insideDepthMm,
+        openings: openings.map((o) => ({ label: o.label, threadCode: o.threadSpec?.code ?? null, keyCode: o.keyCode?.code ?? null, boreMm: o.boreMm })),
+      },
+      threadSpecIds: openings.map((o) => o.threadSpecId),
+    };
+  }
+
+  private async adHocDrum(m: EntityManager, dto: FitCheckDto): Promise<ResolvedDrum> {
+    const drum = dto.drum!;
+    const openings = [];
+    const ids: string[] = [];
+    for (const [i, o] of drum.openings.entries()) {
+      const spec = await resolveThread(m, o.threadCode, `drum.openings.${i}.threadCode`);
+      await resolveKey(m, o.keyCode, `drum.openings.${i}.keyCode`);
+      ids.push(spec.id);
+      openings.push({ label: o.label ?? `opening ${i + 1}`, threadCode: spec.code, keyCode: o.keyCode ?? null, boreMm: o.boreMm ?? null });
+    }
+    return { id: null, name: null, partNumber: null, input: { insideDepthMm: drum.insideDepthMm, openings }, threadSpecIds: ids };
+  }
+
+  private async station(m: EntityManager, dto: FitCheckDto): Promise<{ station: StationInput | null; stationRow: Station | null }> {
+    if (dto.stationId) {
+      const row = await m.findOneBy(Station, { id: dto.stationId });
+      if (!row) throw fieldError('stationId', 'does not name an existing station');
+      return { station: { tapping: row.tapping, agitation: row.agitation, flowLpm: row.flowLpm }, stationRow: row };
+    }
+    if (dto.tapping || dto.agitation || dto.flowLpm !== undefined) {
+      if (!dto.tapping) throw fieldError('tapping', 'is required with agitation or flowLpm');
+      return { station: { tapping: dto.tapping, agitation: dto.agitation ?? 'pump', ...(dto.flowLpm !== undefined ? { flowLpm: dto.flowLpm } : {}) }, stationRow: null };
+    }
+    return { station: null, stationRow: null };
+  }
+
+  /** The tube set that would go into this drum: the one named, or the station's standby (else clean and ready) set. */
+  private async nextTubeSet(m: EntityManager, dto: FitCheckDto, station: Station | null): Promise<TubeSet | null> {
+    if (dto.tubeSetId) {
+      const set = await m.findOneBy(TubeSet, { id: dto.tubeSetId });
+      if (!set) throw fieldError('tubeSetId', 'does not name an existing tube set');
+      return set;
+    }
+    if (!station) return null;
+    const sets = await m.find(TubeSet, { where: { stationId: station.id, state: In(['standby', 'ready']) }, order: { state: 'DESC', label: 'ASC' } });
+    return sets[0] ?? null;
+  }
+
+  /**
+   * Pairings worth judging: those whose tube threads into one of the drum's openings, plus those using the
+   * station's installed head (so the answer can say why the hardware already there does not fit).
+   */
+  private async candidatePool(m: EntityManager, drum: ResolvedDrum, installedConnectorId: string | null): Promise<Pairing[]> {
+    const qb = () =>
+      m
+        .getRepository(Pairing)
+        .createQueryBuilder('p')
+        .innerJoinAndSelect('p.dipTube', 't')
+        .innerJoinAndSelect('t.threadSpec', 'th')
+        .leftJoinAndSelect('t.keyCode', 'tk')
+        .innerJoinAndSelect('p.connector', 'c')
+        .leftJoinAndSelect('c.keyCode', 'ck')
+        .where('p.status <> :retired', { retired: 'retired' })
+        .orderBy("CASE p.status WHEN 'approved' THEN 0 ELSE 1 END", 'ASC')
+        .addOrderBy('t.part_number', 'ASC')
+        // Every join is many-to-one, so one row per pairing and a plain LIMIT is exact.
+        .limit(POOL_LIMIT);
+    const byThread = drum.threadSpecIds.length ? await qb().andWhere('t.thread_spec_id IN (:...ids)', { ids: [...new Set(drum.threadSpecIds)] }).getMany() : [];
+    if (!installedConnectorId) return byThread;
+    const seen = new Set(byThread.map((p) => p.id));
+    const atStation = await qb()
+      .andWhere('p.connector_id = :cid', { cid: installedConnectorId })
+      .andWhere(seen.size ? 'p.id NOT IN (:...seen)' : 'TRUE', { seen: [...seen] })
+      .getMany();
+    return [...byThread, ...atStation];
+  }
+}

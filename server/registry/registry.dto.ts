@@ -1,0 +1,182 @@
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsBoolean,
+  IsEmail,
+  IsIn,
+  IsInt,
+  IsNumber,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Matches,
+  Max,
+  MaxLength,
+  Min,
+  MinLength,
+  ValidateIf,
+  ValidateNested,
+} from 'class-validator';
+import { REGIONS } from '../entities/registry';
+
+// Shared field rules. Lengths are mm; the upper bounds reject absurd values (a drum is not 10 m deep).
+const num = { allowNaN: false, allowInfinity: false };
+const NUMBER = 'must be a number';
+const Mm = (max: number) => (target: object, key: string) => {
+  IsNumber(num, { message: NUMBER })(target, key);
+  Min(0.1, { message: 'must be more than 0 mm' })(target, key);
+  Max(max, { message: `must be at most ${max} mm` })(target, key);
+};
+const Name = (max = 120) => (target: object, key: string) => {
+  IsString({ message: 'must be text' })(target, key);
+  MinLength(1, { message: 'is required' })(target, key);
+  MaxLength(max, { message: `must be at most ${max} characters` })(target, key);
+};
+const Code = (target: object, key: string) => {
+  IsString({ message: 'must be text' })(target, key);
+  MaxLength(40, { message: 'must be at most 40 characters' })(target, key);
+};
+const Notes = (target: object, key: string) => {
+  IsOptional()(target, key);
+  IsString({ message: 'must be text' })(target, key);
+  MaxLength(2000, { message: 'must be at most 2000 characters' })(target, key);
+};
+const Id = (target: object, key: string) => IsUUID('all', { message: 'must be an id' })(target, key);
+const OneOf = (values: readonly string[]) => IsIn(values, { message: `must be one of ${values.join(', ')}` });
+/** A nullable reference by code: null clears it, a string must be a known code (checked by the service). */
+const NullableCode = (target: object, key: string) => {
+  ValidateIf((_o, v) => v !== null)(target, key);
+  Code(target, key);
+};
+
+export class VersionDto {
+  @IsInt({ message: 'is required: the version you last read' }) @Min(1) version: number;
+}
+
+export class SupplierDto {
+  @Name() name: string;
+  @OneOf(REGIONS) region: string;
+  @IsOptional() @IsEmail({}, { message: 'must be an e-mail address' }) contactEmail?: string | null;
+  @Notes notes?: string | null;
+}
+
+export class ThreadSpecDto {
+  @Code @Matches(/^[A-Za-z0-9][A-Za-z0-9/.\-x ]*$/, { message: 'may hold letters, digits, / . - and x' }) code: string;
+  @OneOf(['NPS', 'NPT', 'G', 'buttress', 'other']) family: string;
+  @Name(40) nominalLabel: string;
+  @Mm(1000) majorDiameterMm: number;
+  @Mm(50) pitchMm: number;
+  @IsNumber(num, { message: NUMBER }) @Min(0.5) @Max(254) threadsPerInch: number;
+  @IsNumber(num, { message: NUMBER }) @Min(1) @Max(179) flankAngleDeg: number;
+  @OneOf(['tapered', 'parallel']) form: string;
+  @Name(200) standard: string;
+}
+
+export class KeyCodeDto {
+  @Code @Matches(/^[A-Za-z0-9][A-Za-z0-9\-_]*$/, { message: 'may hold letters, digits, - and _' }) code: string;
+  @Name() label: string;
+  @IsOptional() @IsString() @MaxLength(200) marking?: string | null;
+}
+
+export class OpeningDto {
+  @Name(40) label: string;
+  @Code threadCode: string;
+  @Mm(500) boreMm: number;
+  @IsOptional() @NullableCode keyCode?: string | null;
+  @OneOf(['large', 'small', 'center', 'other']) position: string;
+}
+
+export class DrumTypeDto {
+  @Id supplierId: string;
+  @OneOf(REGIONS) region: string;
+  @Name() name: string;
+  @Name(60) partNumber: string;
+  @IsNumber(num, { message: NUMBER }) @Min(0.1, { message: 'must be more than 0 L' }) @Max(3000, { message: 'must be at most 3000 L' }) nominalCapacityL: number;
+  @OneOf(['steel', 'plastic', 'fibre', 'aluminium', 'other']) material: string;
+  @OneOf(['tight', 'open']) head: string;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsString() @MaxLength(40) unPackagingCode?: string | null;
+  @Mm(3000) outsideHeightMm: number;
+  @Mm(3000) insideDepthMm: number;
+  @Mm(2000) outsideDiameterMm: number;
+  @ValidateNested({ each: true }) @Type(() => OpeningDto) @ArrayMinSize(1, { message: 'must list at least one opening' }) @ArrayMaxSize(6) openings: OpeningDto[];
+}
+
+export class DipTubeDto {
+  @Name(60) partNumber: string;
+  @Id supplierId: string;
+  @Code threadCode: string;
+  @Mm(3000) lengthMm: number;
+  @Mm(200) boreMm: number;
+  @Mm(250) odMm: number;
+  @Name(40) material: string;
+  @IsOptional() @NullableCode keyCode?: string | null;
+  @OneOf(['feed', 'feed-return']) channels: string;
+}
+
+export class ConnectorDto {
+  @Name(60) partNumber: string;
+  @Id supplierId: string;
+  @IsOptional() @NullableCode keyCode?: string | null;
+  @Mm(200) feedBoreMm: number;
+  @Name(20) feedNominal: string;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @Mm(200) returnBoreMm?: number | null;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @Name(20) returnNominal?: string | null;
+  @OneOf(['none', 'restricted', 'open']) returnPath: string;
+  @OneOf(['two-opening', 'one-opening', 'both']) suitedTo: string;
+  @Name(200) wettedMaterials: string;
+}
+
+export class PairingDto {
+  @Id dipTubeId: string;
+  @Id connectorId: string;
+  @Notes notes?: string | null;
+}
+
+export class PairingUpdateDto {
+  @Notes notes?: string | null;
+}
+
+export class ReviewDto {
+  @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(2000) comment?: string;
+}
+
+export class RequiredCommentDto {
+  @IsString({ message: 'must be text' }) @MinLength(3, { message: 'must say why (at least 3 characters)' }) @MaxLength(2000) comment: string;
+}
+
+export class SlurryDto {
+  @Name() name: string;
+  @Id supplierId: string;
+  @OneOf(REGIONS) region: string;
+  @Id drumTypeId: string;
+  @IsBoolean({ message: 'must be true or false' }) foams: boolean;
+  @IsBoolean({ message: 'must be true or false' }) shearSensitive: boolean;
+  @IsNumber(num, { message: NUMBER }) @Min(0, { message: 'must be 0 or more' }) @Max(100, { message: 'must be at most 100' }) solidsWtPct: number;
+}
+
+export class StationDto {
+  @Name() name: string;
+  @Name(60) bay: string;
+  @OneOf(['two-opening', 'one-opening']) tapping: string;
+  @OneOf(['pump', 'mechanical']) agitation: string;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsUUID('all', { message: 'must be an id' }) connectorId?: string | null;
+  @IsNumber(num, { message: NUMBER }) @Min(0.01, { message: 'must be more than 0 L/min' }) @Max(2000, { message: 'must be at most 2000 L/min' }) flowLpm: number;
+}
+
+export class TubeSetDto {
+  @Id stationId: string;
+  @Name(40) label: string;
+  @Id dipTubeId: string;
+  @OneOf(['online', 'standby', 'cleaning', 'ready']) state: string;
+}
+
+export class SettingsDto {
+  @IsOptional() @Name() siteName?: string;
+  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(500) tipClearanceMinMm?: number;
+  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0.1) @Max(500) tipClearanceMaxMm?: number;
+  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(10) threadMatchToleranceMm?: number;
+  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(100) @Max(10000) laminarLimit?: number;
+  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
+  @IsInt({ message: 'is required: the version you last read' }) version: number;
+}

@@ -1,0 +1,189 @@
+import { Router, type Request } from 'express';
+import type { ClassConstructor } from 'class-transformer';
+import type { DataSource, EntityManager, EntityTarget, ObjectLiteral, SelectQueryBuilder } from 'typeorm';
+import type { Role } from '../../shared/roles';
+import { requireRole } from '../auth/guards';
+import { conflict, fieldError, notFound } from '../common/errors';
+import { translateDbError } from '../common/db-errors';
+import { parseDto } from '../common/validate';
+import { ListQueryDto } from './list-query';
+
+export const UUID_RE = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface WriteContext {
+  manager: EntityManager;
+  user: Express.User;
+  /** The record before the change, on update. */
+  existing?: ObjectLiteral;
+}
+
+/**
+ * One registry resource: how it is listed, searched, shown and written. The generic router below gives
+ * every resource the same list/detail/create/update/delete behaviour, paging in SQL and optimistic locking.
+ */
+export interface ResourceDef<E extends ObjectLiteral> {
+  path: string;
+  label: string;
+  entity: EntityTarget<E>;
+  alias: string;
+  dto: ClassConstructor<object>;
+  /** Adds the joins a list row and a detail need. */
+  joins: (qb: SelectQueryBuilder<E>) => SelectQueryBuilder<E>;
+  /** SQL expressions matched by ?q= (case-insensitive, substring). */
+  search: string[];
+  /** Sort keys to entity property paths (alias.property: TypeORM pages joined queries by these). */
+  sorts: Record<string, string>;
+  defaultSort: string;
+  /** Filters by query parameter name; each adds a WHERE clause with the given value. */
+  filters?: Record<string, (qb: SelectQueryBuilder<E>, value: string) => void>;
+  toJson: (e: E) => object;
+  /** Turns a validated DTO into column values (codes to ids, defaults); may throw field errors. */
+  toColumns: (dto: Record<string, unknown>, ctx: WriteContext) => Promise<Partial<E>>;
+  /** Writes child rows (drum openings) after the record itself. */
+  afterWrite?: (record: E, dto: Record<string, unknown>, ctx: WriteContext) => Promise<void>;
+  writeRoles?: Role[];
+  /** Extra fields on the detail answer (relations to other records). */
+  detailExtras?: (record: E, manager: EntityManager) => Promise<object>;
+}
+
+export function parseId(raw: unknown): string {
+  const id = String(raw);
+  if (!UUID_RE.test(id)) throw fieldError('id', 'must be an id');
+  return id;
+}
+
+export class ResourceService<E extends ObjectLiteral> {
+  constructor(
+    readonly ds: DataSource,
+    readonly def: ResourceDef<E>,
+  ) {}
+
+  private base(manager: EntityManager = this.ds.manager): SelectQueryBuilder<E> {
+    return this.def.joins(manager.getRepository(this.def.entity).createQueryBuilder(this.def.alias));
+  }
+
+  async list(query: ListQueryDto): Promise<Page<object>> {
+    const { def } = this;
+    const page = query.page ?? 1;
+    const pageSize = query.pageSize ?? 25;
+    const sortKey = query.sort ?? def.defaultSort;
+    const sortExpr = def.sorts[sortKey];
+    if (!sortExpr) throw fieldError('sort', `must be one of ${Object.keys(def.sorts).join(', ')}`);
+    const qb = this.base();
+    if (query.q?.trim()) {
+      const q = `%${query.q.trim().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+      qb.andWhere(`(${def.search.map((expr) => `${expr} ILIKE :q`).join(' OR ')})`, { q });
+    }
+    for (const [name, apply] of Object.entries(def.filters ?? {})) {
+      const value = (query as Record<string, unknown>)[name];
+      if (typeof value === 'string' && value !== '') apply(qb, value);
+    }
+    qb.orderBy(sortExpr, query.order === 'desc' ? 'DESC' : 'ASC').addOrderBy(`${def.alias}.id`, 'ASC');
+    qb.skip((page - 1) * pageSize).take(pageSize);
+    const [rows, total] = await qb.getManyAndCount();
+    return { items: rows.map(def.toJson), total, page, pageSize };
+  }
+
+  async findEntity(id: string, manager: EntityManager = this.ds.manager): Promise<E> {
+    const record = await this.base(manager).where(`${this.def.alias}.id = :id`, { id }).getOne();
+    if (!record) throw notFound(this.def.label);
+    return record;
+  }
+
+  async detail(id: string): Promise<object> {
+    const record = await this.findEntity(id);
+    const extras = this.def.detailExtras ? await this.def.detailExtras(record, this.ds.manager) : {};
+    return { ...this.def.toJson(record), ...extras };
+  }
+
+  async create(body: unknown, user: Express.User): Promise<object> {
+    const dto = (await parseDto(this.def.dto, body)) as Record<string, unknown>;
+    const id = await this.ds
+      .transaction(async (manager) => {
+        const ctx = { manager, user };
+        const columns = await this.def.toColumns(dto, ctx);
+        const saved = await manager.getRepository(this.def.entity).save(manager.getRepository(this.def.entity).create(columns as E));
+        if (this.def.afterWrite) await this.def.afterWrite(saved, dto, ctx);
+        return (saved as ObjectLiteral).id as string;
+      })
+      .catch(translateDbError);
+    return this.detail(id);
+  }
+
+  /** Optimistic locking: the body carries the version it was based on; a stale version gets 409 with the current record. */
+  async update(id: string, body: unknown, user: Express.User): Promise<object> {
+    const version = (body as { version?: unknown } | null)?.version;
+    if (typeof version !== 'number' || !Number.isInteger(version)) throw fieldError('version', 'is required: the version you last read');
+    const { version: _v, ...rest } = body as Record<string, unknown>;
+    const dto = (await parseDto(this.def.dto, rest, { partial: true })) as Record<string, unknown>;
+    await this.ds
+      .transaction(async (manager) => {
+        const existing = await manager.getRepository(this.def.entity).findOne({ where: { id } as never, lock: { mode: 'pessimistic_write' } });
+        if (!existing) throw notFound(this.def.label);
+        if (existing.version !== version) {
+          throw conflict(`Someone else saved this ${this.def.label.toLowerCase()} first (you had version ${version}, it is now ${existing.version}). Review their change and save again.`, {
+            current: this.def.toJson(await this.findEntity(id, manager)),
+          });
+        }
+        const ctx = { manager, user, existing };
+        const columns = await this.def.toColumns(dto, ctx);
+        const merged = manager.getRepository(this.def.entity).merge(existing as E, columns as never);
+        // Touch the row even when only children change, so its version moves on.
+        (merged as ObjectLiteral).updatedAt = new Date();
+        const saved = await manager.getRepository(this.def.entity).save(merged);
+        if (this.def.afterWrite) await this.def.afterWrite(saved, dto, ctx);
+      })
+      .catch(translateDbError);
+    return this.detail(id);
+  }
+
+  async remove(id: string, version: unknown): Promise<void> {
+    const v = Number(version);
+    if (!Number.isInteger(v)) throw fieldError('version', 'is required: the version you last read');
+    await this.ds
+      .transaction(async (manager) => {
+        const existing = await manager.getRepository(this.def.entity).findOne({ where: { id } as never, lock: { mode: 'pessimistic_write' } });
+        if (!existing) throw notFound(this.def.label);
+        if (existing.version !== v) throw conflict(`Someone else changed this ${this.def.label.toLowerCase()} first; reload before deleting.`, { current: this.def.toJson(await this.findEntity(id, manager)) });
+        await manager.getRepository(this.def.entity).delete(id);
+      })
+      .catch(translateDbError);
+  }
+}
+
+async function listQuery(req: Request): Promise<ListQueryDto> {
+  return parseDto(ListQueryDto, { ...(req.query as object) });
+}
+
+/** Everyone signed in reads; the resource's write roles (engineers and admins by default) write. */
+export function resourceRouter<E extends ObjectLiteral>(ds: DataSource, def: ResourceDef<E>): { router: Router; service: ResourceService<E> } {
+  const service = new ResourceService(ds, def);
+  const writers = requireRole(...(def.writeRoles ?? ['engineer', 'admin']));
+  const router = Router();
+  const path = `/${def.path}`;
+  router.get(path, async (req, res) => {
+    res.json(await service.list(await listQuery(req)));
+  });
+  router.get(`${path}/:id`, async (req, res) => {
+    res.json(await service.detail(parseId(req.params.id)));
+  });
+  router.post(path, writers, async (req, res) => {
+    res.status(201).json(await service.create(req.body, req.user!));
+  });
+  router.patch(`${path}/:id`, writers, async (req, res) => {
+    res.json(await service.update(parseId(req.params.id), req.body, req.user!));
+  });
+  router.delete(`${path}/:id`, writers, async (req, res) => {
+    await service.remove(parseId(req.params.id), req.query.version);
+    res.status(204).end();
+  });
+  return { router, service };
+}
+

@@ -1,0 +1,45 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import { resolveSettings } from '../../shared/fit/rules';
+import type { FitSettings } from '../../shared/fit/types';
+import { conflict, fieldError } from '../common/errors';
+import { SiteSettings } from '../entities';
+import type { SettingsDto } from '../registry/registry.dto';
+
+export async function loadSettings(m: EntityManager): Promise<SiteSettings> {
+  const [row] = await m.find(SiteSettings, { order: { createdAt: 'ASC' }, take: 1 });
+  if (row) return row;
+  return m.save(m.create(SiteSettings, { siteName: 'Our site' }));
+}
+
+export function fitSettingsOf(row: SiteSettings): FitSettings {
+  return resolveSettings({
+    tipClearanceMinMm: row.tipClearanceMinMm,
+    tipClearanceMaxMm: row.tipClearanceMaxMm,
+    threadMatchToleranceMm: row.threadMatchToleranceMm,
+    laminarLimit: row.laminarLimit,
+    maxReturnVelocityRatio: row.maxReturnVelocityRatio,
+  });
+}
+
+export const settingsJson = (s: SiteSettings) => ({
+  id: s.id,
+  version: s.version,
+  siteName: s.siteName,
+  tipClearanceMinMm: s.tipClearanceMinMm,
+  tipClearanceMaxMm: s.tipClearanceMaxMm,
+  threadMatchToleranceMm: s.threadMatchToleranceMm,
+  laminarLimit: s.laminarLimit,
+  maxReturnVelocityRatio: s.maxReturnVelocityRatio,
+  updatedAt: s.updatedAt,
+});
+
+export async function updateSettings(ds: DataSource, dto: SettingsDto) {
+  return ds.transaction(async (m) => {
+    const row = await loadSettings(m);
+    if (row.version !== dto.version) throw conflict('Someone else changed the site settings first; review them and save again.', { current: settingsJson(row) });
+    const { version: _v, ...changes } = dto;
+    Object.assign(row, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
+    if (row.tipClearanceMaxMm <= row.tipClearanceMinMm) throw fieldError('tipClearanceMaxMm', 'must be more than the minimum clearance');
+    return settingsJson(await m.save(row));
+  });
+}

@@ -1,0 +1,76 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { computePortFlow } from '../../shared/flow';
+import { checkDrumPackagingCode, parsePackagingCode } from '../../shared/packaging-code';
+import { recommendDipTubeLength } from '../../shared/recommend-length';
+import { identifyThread } from '../../shared/threads/identify';
+import type { ThreadSpecRow } from '../../shared/threads/thread-table';
+import { flowToM3s, fromM3s, toMm, type FlowUnit, type LengthUnit } from '../../shared/units';
+import { badRequest, fieldError } from '../common/errors';
+import { body } from '../common/validate';
+import { DrumType, ThreadSpec } from '../entities';
+import { parseId } from '../registry/resource';
+import { fitSettingsOf, loadSettings } from '../settings/settings.service';
+import { FlowDto, ThreadMatchDto } from './tools.dto';
+
+const rowOf = (t: ThreadSpec): ThreadSpecRow => ({
+  code: t.code,
+  family: t.family,
+  nominalLabel: t.nominalLabel,
+  majorDiameterMm: t.majorDiameterMm,
+  pitchMm: t.pitchMm,
+  threadsPerInch: t.threadsPerInch,
+  flankAngleDeg: t.flankAngleDeg,
+  form: t.form,
+  standard: t.standard,
+});
+
+/** The calculators. They only read, so every signed-in role may use them. */
+export function toolsRouter(ds: DataSource): Router {
+  const router = Router();
+
+  router.post('/tools/thread-match', body(ThreadMatchDto), async (req, res) => {
+    const dto = req.body as ThreadMatchDto;
+    const settings = fitSettingsOf(await loadSettings(ds.manager));
+    // Matched against the site's thread table (the published rows plus any an engineer added).
+    const table = (await ds.manager.find(ThreadSpec)).map(rowOf);
+    const result = identifyThread(
+      {
+        majorDiameterMm: toMm(dto.majorDiameter.value, dto.majorDiameter.unit as LengthUnit),
+        ...(dto.pitchMm !== undefined ? { pitchMm: dto.pitchMm } : {}),
+        ...(dto.threadsPerInch !== undefined ? { threadsPerInch: dto.threadsPerInch } : {}),
+        ...(dto.flankAngleDeg !== undefined ? { flankAngleDeg: dto.flankAngleDeg } : {}),
+        ...(dto.taper !== undefined ? { taper: dto.taper } : {}),
+      },
+      table,
+      { diameterToleranceMm: settings.threadMatchToleranceMm },
+    );
+    res.json(result);
+  });
+
+  router.post('/tools/flow', body(FlowDto), async (req, res) => {
+    const dto = req.body as FlowDto;
+    const settings = fitSettingsOf(await loadSettings(ds.manager));
+    const flowM3s = flowToM3s(dto.flow.value, dto.flow.unit as FlowUnit);
+    const result = computePortFlow({ flowM3s, feedBoreMm: dto.feedBoreMm, returnBoreMm: dto.returnBoreMm ?? null, laminarLimit: settings.laminarLimit });
+    res.json({ ...result, flow: { value: dto.flow.value, unit: dto.flow.unit }, flowGpm: fromM3s(flowM3s, 'gal/min'), flowM3h: fromM3s(flowM3s, 'm3/h'), laminarLimit: settings.laminarLimit });
+  });
+
+  router.get('/tools/packaging-codes/:code', async (req, res) => {
+    const parsed = parsePackagingCode(String(req.params.code));
+    if (!parsed.ok) throw badRequest('invalid_packaging_code', parsed.error, [{ field: 'code', messages: [parsed.error] }]);
+    res.json(parsed);
+  });
+
+  router.get('/tools/drum-types/:id/checks', async (req, res) => {
+    const drum = await ds.manager.findOneBy(DrumType, { id: parseId(req.params.id) });
+    if (!drum) throw fieldError('id', 'does not name an existing drum type');
+    const settings = fitSettingsOf(await loadSettings(ds.manager));
+    res.json({
+      recommendedLength: recommendDipTubeLength({ insideDepthMm: drum.insideDepthMm, tipClearanceMinMm: settings.tipClearanceMinMm, tipClearanceMaxMm: settings.tipClearanceMaxMm }),
+      packaging: drum.unPackagingCode ? checkDrumPackagingCode({ code: drum.unPackagingCode, material: drum.material, head: drum.head }) : [],
+    });
+  });
+
+  return router;
+}
