@@ -1,5 +1,5 @@
 import { Link, usePathname } from 'expo-router';
-import type { ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { ROLE_LABELS } from '@/shared/roles';
 import { isActive, navFor } from './navigation';
@@ -13,8 +13,12 @@ export function AppShell({ children }: { children: ReactNode }) {
   const wide = useIsWide();
   const pathname = usePathname();
   const { session, end } = useSession();
+  const [menuOpen, setMenuOpen] = useState(false);
   if (!session) return null;
   const items = navFor(session.user.role);
+  // On a phone: up to four primary items in the bottom bar, the rest behind "More".
+  const primary = items.length <= 5 ? items : items.filter((i) => i.primary).slice(0, 4);
+  const more = items.filter((i) => !primary.includes(i));
   const who = (
     <View style={styles.who}>
       <Text style={[type.label, wide && { color: colors.onPrimary }]} testID="current-user">
@@ -66,8 +70,17 @@ export function AppShell({ children }: { children: ReactNode }) {
         </View>
       </View>
       <View style={styles.main}>{children}</View>
+      {menuOpen ? (
+        <View style={styles.menu} testID="nav-more-menu">
+          {more.map((item) => (
+            <Link key={item.href} href={item.href as never} testID={item.testID} onPress={() => setMenuOpen(false)} style={styles.menuLink}>
+              <Text style={styles.menuText}>{item.label}</Text>
+            </Link>
+          ))}
+        </View>
+      ) : null}
       <View style={styles.tabs} role="navigation" aria-label="Main">
-        {items.map((item) => {
+        {primary.map((item) => {
           const active = isActive(item.href, pathname);
           return (
             <Link key={item.href} href={item.href as never} testID={item.testID} aria-current={active ? 'page' : undefined} style={[styles.tab, active && styles.tabActive]}>
@@ -75,6 +88,17 @@ export function AppShell({ children }: { children: ReactNode }) {
             </Link>
           );
         })}
+        {more.length ? (
+          <Pressable
+            accessibilityRole="button"
+            aria-expanded={menuOpen}
+            testID="nav-more"
+            onPress={() => setMenuOpen((o) => !o)}
+            style={[styles.tab, more.some((i) => isActive(i.href, pathname)) && styles.tabActive]}
+          >
+            <Text style={[styles.tabText, more.some((i) => isActive(i.href, pathname)) && styles.tabTextActive]}>{menuOpen ? 'Close' : 'More'}</Text>
+          </Pressable>
+        ) : null}
       </View>
     </View>
   );
@@ -86,7 +110,7 @@ const styles = StyleSheet.create({
   sideItems: { gap: space.xs, flex: 1 },
   sideLink: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.md, paddingVertical: space.sm, borderRadius: radius.md, display: 'flex' as never },
   sideLinkActive: { backgroundColor: colors.surface },
-  sideText: { fontFamily: fonts.semibold, fontSize: 16, color: colors.onPrimary },
+  sideText: { fontFamily: fonts.semibold, fontSize: 16, color: colors.onPrimary, textAlign: 'left', width: '100%' },
   sideTextActive: { color: colors.primary },
   sideFoot: { gap: space.sm },
   main: { flex: 1 },
@@ -106,6 +130,9 @@ const styles = StyleSheet.create({
   signOut: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.sm, borderRadius: radius.md },
   signOutWide: { borderWidth: 1, borderColor: '#9CC3CA', alignItems: 'center' },
   signOutText: { fontFamily: fonts.semibold, fontSize: 15, color: colors.primary },
+  menu: { backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.line, paddingVertical: space.xs },
+  menuLink: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.lg, display: 'flex' as never },
+  menuText: { fontFamily: fonts.semibold, fontSize: 16, color: colors.primary },
   tabs: { flexDirection: 'row', borderTopWidth: 1, borderTopColor: colors.line, backgroundColor: colors.surface },
   tab: { flex: 1, minHeight: 56, alignItems: 'center', justifyContent: 'center', display: 'flex' as never, borderTopWidth: 3, borderTopColor: 'transparent' },
   tabActive: { borderTopColor: colors.primary },

@@ -6,17 +6,27 @@ export interface NavItem {
   /** Roles that see the item; the server enforces the same rules on every request. */
   roles: readonly Role[];
   testID: string;
+  /** Shown in the phone's bottom bar; the rest sit behind "More". */
+  primary?: boolean;
 }
 
 const everyone = ['clerk', 'engineer', 'buyer', 'admin'] as const;
 
 export const NAV_ITEMS: NavItem[] = [
-  { href: '/', label: 'Home', roles: everyone, testID: 'nav-home' },
+  { href: '/', label: 'Home', roles: everyone, testID: 'nav-home', primary: true },
+  { href: '/receive', label: 'Dock check', roles: ['clerk', 'engineer', 'admin'], testID: 'nav-receive', primary: true },
+  { href: '/registry/drum-types', label: 'Registry', roles: everyone, testID: 'nav-registry', primary: true },
+  { href: '/sourcing', label: 'Sourcing', roles: ['buyer', 'engineer', 'admin'], testID: 'nav-sourcing', primary: true },
+  { href: '/stations', label: 'Stations', roles: everyone, testID: 'nav-stations', primary: true },
+  { href: '/tools/thread', label: 'Tools', roles: everyone, testID: 'nav-tools' },
   { href: '/admin/users', label: 'People', roles: ['admin'], testID: 'nav-users' },
 ];
 
 export const navFor = (role: Role) => NAV_ITEMS.filter((i) => i.roles.includes(role));
 
 export function isActive(href: string, pathname: string): boolean {
-  return href === '/' ? pathname === '/' : pathname === href || pathname.startsWith(`${href}/`);
+  if (href === '/') return pathname === '/';
+  // Sections: /registry/… and /tools/… are one item each.
+  const section = href.split('/').slice(0, 2).join('/');
+  return pathname === href || pathname.startsWith(`${section}/`) || pathname === section;
 }

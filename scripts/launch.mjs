@@ -206,13 +206,15 @@ function buildServer() {
   }
 }
 
+const webDir = path.resolve(root, env.BUNGWISE_WEB_EXPORT_DIR ?? path.join('dist', 'web'));
+
 function exportWeb() {
-  const hashFile = path.join(root, 'dist', 'web-source-hash');
+  const hashFile = `${webDir}.source-hash`;
   const sourceHash = hashFiles(['app', 'components', 'shared', 'assets', 'app.json', 'babel.config.js', 'package-lock.json', 'metro.config.js']);
   const current = fs.existsSync(hashFile) ? fs.readFileSync(hashFile, 'utf8') : '';
-  if (current === sourceHash && fs.existsSync(path.join(root, 'dist', 'web', 'index.html'))) return;
+  if (current === sourceHash && fs.existsSync(path.join(webDir, 'index.html'))) return;
   log('Exporting the web app (first time or sources changed)...');
-  if (run(path.join(root, 'node_modules', '.bin', 'expo'), ['export', '--platform', 'web', '--output-dir', 'dist/web'], { env: { ...env, CI: '1', EXPO_NO_TELEMETRY: '1' } }) !== 0) {
+  if (run(path.join(root, 'node_modules', '.bin', 'expo'), ['export', '--platform', 'web', '--output-dir', path.relative(root, webDir)], { env: { ...env, CI: '1', EXPO_NO_TELEMETRY: '1' } }) !== 0) {
     fail('The web export failed: see the Expo output above.');
   }
   fs.writeFileSync(hashFile, sourceHash);
@@ -251,7 +253,8 @@ async function main() {
   let bin = null;
   let cluster = { startedHere: false };
   let databaseUrl = env.DATABASE_URL;
-  const dbName = mode === 'test' ? 'bungwise_test' : 'bungwise';
+  // Parallel test runs on one machine may pick their own database and export folder.
+  const dbName = mode === 'test' ? (env.BUNGWISE_TEST_DB ?? 'bungwise_test') : 'bungwise';
   if (!databaseUrl) {
     bin = ensurePostgresBinaries();
     cluster = await startCluster(bin);
@@ -259,7 +262,7 @@ async function main() {
   } else if (mode === 'test') {
     // Never recreate the database a user pointed us at: tests use a sibling database with a _test suffix.
     const url = new URL(databaseUrl);
-    url.pathname = `/${url.pathname.slice(1) || 'bungwise'}_test`;
+    url.pathname = `/${env.BUNGWISE_TEST_DB ?? `${url.pathname.slice(1) || 'bungwise'}_test`}`;
     databaseUrl = url.toString();
   }
 
@@ -280,7 +283,7 @@ async function main() {
       ensureChromium();
       const jest = path.join(root, 'node_modules', '.bin', 'jest');
       const code = run(jest, ['--runInBand', ...passThrough], {
-        env: { ...env, ...dbEnv, JWT_SECRET: env.JWT_SECRET ?? 'test-secret-not-for-production', NODE_ENV: 'test' },
+        env: { ...env, ...dbEnv, JWT_SECRET: env.JWT_SECRET ?? 'test-secret-not-for-production', NODE_ENV: 'test', BUNGWISE_WEB_DIR: webDir },
       });
       cleanup();
       process.exit(code);
@@ -292,7 +295,7 @@ async function main() {
     const server = spawn('node', [path.join(root, 'dist', 'server', 'server', 'index.js')], {
       stdio: 'inherit',
       cwd: root,
-      env: { ...env, ...dbEnv, PORT: String(appPort), JWT_SECRET: jwtSecret, BUNGWISE_WEB_DIR: path.join(root, 'dist', 'web') },
+      env: { ...env, ...dbEnv, PORT: String(appPort), JWT_SECRET: jwtSecret, BUNGWISE_WEB_DIR: webDir },
     });
     const shutdown = () => {
       if (stopping) return;

@@ -13,7 +13,7 @@ export const VIEWPORTS = [
 ] as const;
 export type Viewport = (typeof VIEWPORTS)[number];
 
-const WEB_DIR = path.resolve(__dirname, '..', '..', 'dist', 'web');
+const WEB_DIR = process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'dist', 'web');
 export const SHOTS_DIR = path.resolve(__dirname, '..', 'artifacts', 'screens');
 
 /** The exported web build served by the real app on a free port, over a freshly reset database. */

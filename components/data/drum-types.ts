@@ -1,0 +1,5 @@
+import type { DrumTypeRecord } from '@/shared/api-types';
+import { resourceQueries } from './resource';
+
+export type { DrumTypeRecord };
+export const drumTypeQueries = resourceQueries<DrumTypeRecord, Record<string, unknown>>('drum-types');

@@ -1,0 +1,5 @@
+import type { SlurryRecord } from '@/shared/api-types';
+import { resourceQueries } from './resource';
+
+export type { SlurryRecord };
+export const slurryQueries = resourceQueries<SlurryRecord, Record<string, unknown>>('slurries');

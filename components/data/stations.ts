@@ -1,0 +1,5 @@
+import type { StationRecord } from '@/shared/api-types';
+import { resourceQueries } from './resource';
+
+export type { StationRecord };
+export const stationQueries = resourceQueries<StationRecord, Record<string, unknown>>('stations');

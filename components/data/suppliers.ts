@@ -1,0 +1,5 @@
+import type { SupplierRecord } from '@/shared/api-types';
+import { resourceQueries } from './resource';
+
+export type { SupplierRecord };
+export const supplierQueries = resourceQueries<SupplierRecord, Record<string, unknown>>('suppliers');

@@ -1,0 +1,5 @@
+import type { ThreadSpecRecord } from '@/shared/api-types';
+import { resourceQueries } from './resource';
+
+export type { ThreadSpecRecord };
+export const threadSpecQueries = resourceQueries<ThreadSpecRecord, Record<string, unknown>>('thread-specs');

@@ -1,0 +1,5 @@
+import type { TubeSetRecord } from '@/shared/api-types';
+import { resourceQueries } from './resource';
+
+export type { TubeSetRecord };
+export const tubeSetQueries = resourceQueries<TubeSetRecord, Record<string, unknown>>('tube-sets');

@@ -1,0 +1,242 @@
+// The JSON shapes the registry API answers with, shared by the server's serialisers and the client.
+import type { Role } from './roles';
+
+export type Region = 'NA' | 'EU' | 'JP' | 'TW' | 'KR' | 'CN' | 'SG' | 'other';
+export const REGION_LABELS: Record<Region, string> = {
+  NA: 'North America',
+  EU: 'Europe',
+  JP: 'Japan',
+  TW: 'Taiwan',
+  KR: 'Korea',
+  CN: 'China',
+  SG: 'Singapore',
+  other: 'Other',
+};
+
+export interface Stamped {
+  id: string;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface ListParams {
+  q?: string;
+  sort?: string;
+  order?: 'asc' | 'desc';
+  page?: number;
+  pageSize?: number;
+  region?: string;
+  thread?: string;
+  key?: string;
+  status?: string;
+  supplierId?: string;
+  stationId?: string;
+}
+
+export interface SupplierRecord extends Stamped {
+  name: string;
+  region: Region;
+  contactEmail: string | null;
+  notes: string | null;
+}
+
+export interface ThreadSpecRecord extends Stamped {
+  code: string;
+  family: 'NPS' | 'NPT' | 'G' | 'buttress' | 'other';
+  nominalLabel: string;
+  majorDiameterMm: number;
+  pitchMm: number;
+  threadsPerInch: number;
+  flankAngleDeg: number;
+  form: 'tapered' | 'parallel';
+  standard: string;
+}
+
+export interface KeyCodeRecord extends Stamped {
+  code: string;
+  label: string;
+  marking: string | null;
+}
+
+export interface OpeningRecord {
+  id?: string;
+  label: string;
+  threadCode: string | null;
+  boreMm: number;
+  keyCode: string | null;
+  position: 'large' | 'small' | 'center' | 'other';
+}
+
+export interface DrumTypeRecord extends Stamped {
+  supplierId: string;
+  supplierName: string | null;
+  region: Region;
+  name: string;
+  partNumber: string;
+  nominalCapacityL: number;
+  material: 'steel' | 'plastic' | 'fibre' | 'aluminium' | 'other';
+  head: 'tight' | 'open';
+  unPackagingCode: string | null;
+  outsideHeightMm: number;
+  insideDepthMm: number;
+  outsideDiameterMm: number;
+  openings: OpeningRecord[];
+  /** Detail only. */
+  pairings?: Array<{ id: string; status: PairingStatus; dipTubeId: string; dipTubePartNumber?: string; threadCode?: string; connectorId: string; connectorPartNumber?: string }>;
+  slurries?: Array<{ id: string; name: string }>;
+}
+
+export interface DipTubeRecord extends Stamped {
+  partNumber: string;
+  supplierId: string;
+  supplierName: string | null;
+  threadCode: string | null;
+  lengthMm: number;
+  boreMm: number;
+  odMm: number;
+  material: string;
+  keyCode: string | null;
+  channels: 'feed' | 'feed-return';
+  fitsDrumTypes?: Array<{ id: string; name: string; partNumber: string; insideDepthMm: number }>;
+  pairings?: Array<{ id: string; status: PairingStatus; connectorId: string; connectorPartNumber?: string }>;
+}
+
+export interface ConnectorRecord extends Stamped {
+  partNumber: string;
+  supplierId: string;
+  supplierName: string | null;
+  keyCode: string | null;
+  feedBoreMm: number;
+  feedNominal: string;
+  returnBoreMm: number | null;
+  returnNominal: string | null;
+  returnPath: 'none' | 'restricted' | 'open';
+  suitedTo: 'two-opening' | 'one-opening' | 'both';
+  wettedMaterials: string;
+  stations?: Array<{ id: string; name: string; bay: string; tapping: string }>;
+  pairings?: Array<{ id: string; status: PairingStatus; dipTubeId: string; dipTubePartNumber?: string }>;
+}
+
+export type PairingStatus = 'draft' | 'approved' | 'retired';
+
+export interface PairingReviewRecord {
+  id: string;
+  decision: 'approved' | 'rejected' | 'retired';
+  comment: string;
+  reviewerId: string;
+  reviewerName: string | null;
+  at: string;
+}
+
+export interface PairingRecord extends Stamped {
+  dipTubeId: string;
+  dipTubePartNumber: string | null;
+  threadCode: string | null;
+  connectorId: string;
+  connectorPartNumber: string | null;
+  status: PairingStatus;
+  authorId: string;
+  authorName: string | null;
+  approverId: string | null;
+  approverName: string | null;
+  approvedAt: string | null;
+  notes: string | null;
+  reviews?: PairingReviewRecord[];
+}
+
+export interface SlurryRecord extends Stamped {
+  name: string;
+  supplierId: string;
+  supplierName: string | null;
+  region: Region;
+  drumTypeId: string;
+  drumTypeName: string | null;
+  foams: boolean;
+  shearSensitive: boolean;
+  solidsWtPct: number;
+}
+
+export interface StationRecord extends Stamped {
+  name: string;
+  bay: string;
+  tapping: 'two-opening' | 'one-opening';
+  agitation: 'pump' | 'mechanical';
+  connectorId: string | null;
+  connectorPartNumber: string | null;
+  flowLpm: number;
+  tubeSets?: Array<{ id: string; label: string; state: TubeSetState; dipTubePartNumber: string | null; lastRinsedAt: string | null; lastUsedAt: string | null }>;
+}
+
+export type TubeSetState = 'online' | 'standby' | 'cleaning' | 'ready';
+
+export interface TubeSetRecord extends Stamped {
+  stationId: string;
+  stationName: string | null;
+  label: string;
+  dipTubeId: string;
+  dipTubePartNumber: string | null;
+  state: TubeSetState;
+  lastRinsedAt: string | null;
+  lastRinsedById: string | null;
+  lastRinsedByName: string | null;
+  lastUsedAt: string | null;
+}
+
+export interface SettingsRecord {
+  id: string;
+  version: number;
+  siteName: string;
+  tipClearanceMinMm: number;
+  tipClearanceMaxMm: number;
+  threadMatchToleranceMm: number;
+  laminarLimit: number;
+  maxReturnVelocityRatio: number;
+}
+
+export interface FitRuleRecord {
+  rule: string;
+  outcome: 'pass' | 'caution' | 'fail';
+  message: string;
+  numbers?: Record<string, number>;
+}
+
+export interface FitCandidateRecord {
+  dipTubeId: string;
+  dipTubePartNumber: string;
+  connectorId: string;
+  connectorPartNumber: string;
+  pairingId: string | null;
+  pairingStatus: PairingStatus | null;
+  installedAtStation: boolean;
+  verdict: 'fits' | 'caution' | 'no-fit';
+  rules: FitRuleRecord[];
+  notChecked: Array<{ rule: string; reason: string }>;
+}
+
+export interface FitCheckResult {
+  verdict: 'fits' | 'caution' | 'no-fit';
+  summary: string;
+  drum: { id: string | null; name: string | null; partNumber: string | null; insideDepthMm: number; openings: Array<{ label?: string; threadCode: string | null; keyCode: string | null; boreMm?: number | null }> };
+  station: ({ id?: string; name?: string; tapping: string; agitation: string; flowLpm?: number }) | null;
+  slurry: { id: string; name: string; foams: boolean; shearSensitive: boolean } | null;
+  tubeSet: { id: string; label: string; dipTubeId: string; lastRinsedAt: string | null; lastUsedAt: string | null } | null;
+  settings: { tipClearanceMinMm: number; tipClearanceMaxMm: number; threadMatchToleranceMm: number; laminarLimit: number; maxReturnVelocityRatio: number };
+  candidates: FitCandidateRecord[];
+  candidateCount: number;
+  cautions: Array<{ topic: string; message: string }>;
+}
+
+export interface UserSummary {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+}
