@@ -2,5 +2,6 @@
 // (see DEVELOPERS.md): an explicit list works the same compiled by tsc and under ts-jest.
 import { CreateUsers1764612000000 } from './1764612000000-create-users';
 import { CreateRegistry1764615600000 } from './1764615600000-create-registry';
+import { CreateOperations1764619200000 } from './1764619200000-create-operations';
 
-export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000];
+export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000];

@@ -11,6 +11,10 @@ import { notFound, unavailable } from './common/errors';
 import { errorMiddleware } from './common/error-middleware';
 import { healthRouter } from './health/health.router';
 import { fitCheckRouter } from './fit/fit-check.router';
+import { notificationsRouter } from './notifications/notifications.router';
+import { receivingRouter } from './receiving/receiving.router';
+import { sourcingRouter } from './sourcing/sourcing.router';
+import { rotationRouter } from './stations/rotation.router';
 import { pairingActionsRouter } from './pairings/pairing-actions.router';
 import { RESOURCES, pairingDef } from './registry/definitions';
 import { resourceRouter, ResourceService } from './registry/resource';
@@ -61,9 +65,13 @@ export function createApp(options: AppOptions): Express {
   api.use(usersRouter(ds));
   api.use(settingsRouter(ds));
   api.use(pairingActionsRouter(ds, new ResourceService(ds, pairingDef)));
+  api.use(rotationRouter(ds));
   for (const def of RESOURCES) api.use(resourceRouter(ds, def).router);
   api.use(fitCheckRouter(ds));
   api.use(toolsRouter(ds));
+  api.use(receivingRouter(ds));
+  api.use(sourcingRouter(ds));
+  api.use(notificationsRouter(ds));
   api.use((req) => {
     throw notFound(`The API route ${req.method} ${req.path}`);
   });

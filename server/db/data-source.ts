@@ -16,7 +16,9 @@ export function makeDataSource(url = process.env.DATABASE_URL, options: { poolSi
     migrations: MIGRATIONS,
     migrationsTableName: 'migrations',
     synchronize: false,
-    logging: ['error'],
+    // Failed queries reach the error middleware, which answers them and logs the unexpected ones;
+    // BUNGWISE_SQL_LOG=1 shows every statement.
+    logging: process.env.BUNGWISE_SQL_LOG === '1' ? 'all' : false,
     poolSize: options.poolSize ?? 10,
     extra: { connectionTimeoutMillis: 3000, statement_timeout: 15000, idleTimeoutMillis: 10000 },
   });

@@ -1,7 +1,9 @@
 import { Connector, DipTube, DrumOpening, DrumType, KeyCode, Pairing, PairingReview, Slurry, Station, Supplier, ThreadSpec, TubeSet } from './registry';
+import { ChangeOut, HardwareWarning, Notification, ReceivingCheck, RinseLog, SourcingPlan } from './operations';
 import { SiteSettings } from './site-settings';
 import { User } from './user';
 
+export * from './operations';
 export * from './registry';
 export { SiteSettings, User };
-export const ENTITIES = [User, SiteSettings, Supplier, ThreadSpec, KeyCode, DrumType, DrumOpening, DipTube, Connector, Pairing, PairingReview, Slurry, Station, TubeSet];
+export const ENTITIES = [User, SiteSettings, Supplier, ThreadSpec, KeyCode, DrumType, DrumOpening, DipTube, Connector, Pairing, PairingReview, Slurry, Station, TubeSet, ReceivingCheck, Notification, SourcingPlan, HardwareWarning, RinseLog, ChangeOut];

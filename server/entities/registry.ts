@@ -158,4 +158,8 @@ export class TubeSet extends Base {
   @NullableUuid('last_rinsed_by_id') lastRinsedById: string | null;
   @ManyToOne(() => User) @JoinColumn({ name: 'last_rinsed_by_id' }) lastRinsedBy?: User | null;
   @Column({ name: 'last_used_at', type: 'timestamptz', nullable: true }) lastUsedAt: Date | null;
+  /** The lot and drum this set is threaded into while online or standby. */
+  @NullableText('current_lot_number', 60) currentLotNumber: string | null;
+  @NullableText('current_drum_serial', 60) currentDrumSerial: string | null;
+  @NullableUuid('current_receiving_check_id') currentReceivingCheckId: string | null;
 }

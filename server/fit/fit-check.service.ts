@@ -1,4 +1,4 @@
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import { drumVerdict, evaluateCandidate, handlingCautions } from '../../shared/fit';
 import type { CandidateEvaluation, ConnectorInput, DrumInput, FitSettings, SlurryInput, StationInput, TubeInput, TubeSetInput, Verdict } from '../../shared/fit/types';
 import { describeThread } from '../../shared/fit/rules';
@@ -67,16 +67,31 @@ export class FitCheckService {
       throw fieldError('stationId', 'give either stationId or tapping/agitation/flowLpm, not both');
     }
     const m = this.ds.manager;
-    const settings = fitSettingsOf(await loadSettings(m));
     const drum = dto.drumTypeId ? await this.loadDrum(m, dto.drumTypeId) : await this.adHocDrum(m, dto);
-    if (drum.input.insideDepthMm <= settings.tipClearanceMaxMm) {
-      throw fieldError(dto.drum ? 'drum.insideDepthMm' : 'drumTypeId', `inside depth must be more than the site's largest tip clearance (${settings.tipClearanceMaxMm} mm)`);
-    }
     const slurry = dto.slurryId ? await m.findOneBy(Slurry, { id: dto.slurryId }) : null;
     if (dto.slurryId && !slurry) throw fieldError('slurryId', 'does not name an existing slurry');
     const { station, stationRow } = await this.station(m, dto);
     const tubeSet = await this.nextTubeSet(m, dto, stationRow);
+    return this.run(m, { drum, station, stationRow, slurry: slurry ? { id: slurry.id, name: slurry.name, foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null, tubeSet, fieldForDrum: dto.drum ? 'drum.insideDepthMm' : 'drumTypeId' });
+  }
 
+  /** The same check for callers inside the server (dock records, sourcing plans), by ids and slurry properties. */
+  async checkFor(m: EntityManager, args: { drumTypeId: string; stationId?: string | null; slurry?: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null }) {
+    const drum = await this.loadDrum(m, args.drumTypeId);
+    const { station, stationRow } = await this.station(m, { stationId: args.stationId ?? undefined } as FitCheckDto);
+    const tubeSet = await this.nextTubeSet(m, {} as FitCheckDto, stationRow);
+    return this.run(m, { drum, station, stationRow, slurry: args.slurry ?? null, tubeSet, fieldForDrum: 'drumTypeId' });
+  }
+
+  private async run(
+    m: EntityManager,
+    ctx: { drum: ResolvedDrum; station: StationInput | null; stationRow: Station | null; slurry: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null; tubeSet: TubeSet | null; fieldForDrum: string },
+  ) {
+    const { drum, station, stationRow, slurry, tubeSet } = ctx;
+    const settings = fitSettingsOf(await loadSettings(m));
+    if (drum.input.insideDepthMm <= settings.tipClearanceMaxMm) {
+      throw fieldError(ctx.fieldForDrum, `inside depth must be more than the site's largest tip clearance (${settings.tipClearanceMaxMm} mm)`);
+    }
     const pool = await this.candidatePool(m, drum, stationRow?.connectorId ?? null);
     const slurryInput: SlurryInput | null = slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null;
     const tubeSetInput: TubeSetInput | null = tubeSet ? { lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null;
@@ -114,7 +129,7 @@ export class FitCheckService {
       summary: this.summary(verdict, drum, best, candidates.length),
       drum: { id: drum.id, name: drum.name, partNumber: drum.partNumber, ...drum.input },
       station: stationRow ? { id: stationRow.id, name: stationRow.name, ...station } : station,
-      slurry: slurry ? { id: slurry.id, name: slurry.name, ...slurryInput } : null,
+      slurry: slurry ? { ...slurry, ...slurryInput } : null,
       tubeSet: tubeSet ? { id: tubeSet.id, label: tubeSet.label, dipTubeId: tubeSet.dipTubeId, lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null,
       settings,
       candidates: candidates.slice(0, ANSWER_LIMIT).map(({ handling: _h, ...c }) => c),
@@ -137,7 +152,7 @@ export class FitCheckService {
     return `${what} does not fit any of the ${count} pairing(s) checked. Closest: ${pair}. ${firstProblem?.message ?? ''}`.trim();
   }
 
-  private async loadDrum(m: EntityManager, id: string): Promise<ResolvedDrum> {
+  async loadDrum(m: EntityManager, id: string): Promise<ResolvedDrum> {
     const d = await m.findOne(DrumType, { where: { id }, relations: { openings: { threadSpec: true, keyCode: true } } });
     if (!d) throw fieldError('drumTypeId', 'does not name an existing drum type');
     const openings = [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label));
@@ -179,7 +194,10 @@ export class FitCheckService {
     return { station: null, stationRow: null };
   }
 
-  /** The tube set that would go into this drum: the one named, or the station's standby (else clean and ready) set. */
+  /**
+   * The tube set that would go into this drum: the one named, or the station's clean and ready set. The sets
+   * online and in standby are already in drums; one still being cleaned is not a candidate yet.
+   */
   private async nextTubeSet(m: EntityManager, dto: FitCheckDto, station: Station | null): Promise<TubeSet | null> {
     if (dto.tubeSetId) {
       const set = await m.findOneBy(TubeSet, { id: dto.tubeSetId });
@@ -187,8 +205,7 @@ export class FitCheckService {
       return set;
     }
     if (!station) return null;
-    const sets = await m.find(TubeSet, { where: { stationId: station.id, state: In(['standby', 'ready']) }, order: { state: 'DESC', label: 'ASC' } });
-    return sets[0] ?? null;
+    return m.findOne(TubeSet, { where: { stationId: station.id, state: 'ready' }, order: { label: 'ASC' } });
   }
 
   /**

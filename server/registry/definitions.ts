@@ -404,6 +404,8 @@ export const tubeSetDef: ResourceDef<TubeSet> = {
   },
   toJson: (t) => ({
     ...stamps(t),
+    currentLotNumber: t.currentLotNumber,
+    currentDrumSerial: t.currentDrumSerial,
     stationId: t.stationId,
     stationName: t.station?.name ?? null,
     label: t.label,
@@ -415,10 +417,16 @@ export const tubeSetDef: ResourceDef<TubeSet> = {
     lastRinsedByName: t.lastRinsedBy?.displayName ?? null,
     lastUsedAt: t.lastUsedAt,
   }),
-  toColumns: async (dto, { manager }) => {
+  toColumns: async (dto, { manager, existing }) => {
     if (dto.stationId !== undefined) await ensureExists(manager, Station, dto.stationId, 'stationId', 'station');
     if (dto.dipTubeId !== undefined) await ensureExists(manager, DipTube, dto.dipTubeId, 'dipTubeId', 'dip tube');
-    return pick<TubeSet>(dto, ['stationId', 'label', 'dipTubeId', 'state']);
+    const cols = pick<TubeSet>(dto, ['stationId', 'label', 'dipTubeId']);
+    if (existing) {
+      if (dto.state !== undefined && dto.state !== (existing as TubeSet).state) throw fieldError('state', 'changes through the rotation: rinse, standby and change-out');
+      if (dto.stationId !== undefined && dto.stationId !== (existing as TubeSet).stationId) throw fieldError('stationId', 'cannot change; register a new set at the other station');
+      return cols;
+    }
+    return { ...cols, state: 'cleaning', lastRinsedAt: null, lastUsedAt: null };
   },
 };
 

@@ -168,7 +168,8 @@ export class TubeSetDto {
   @Id stationId: string;
   @Name(40) label: string;
   @Id dipTubeId: string;
-  @OneOf(['online', 'standby', 'cleaning', 'ready']) state: string;
+  /** New sets start in cleaning (they are rinsed before their first drum); later moves go through the rotation. */
+  @IsOptional() @OneOf(['cleaning']) state?: string;
 }
 
 export class SettingsDto {

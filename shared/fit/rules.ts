@@ -16,6 +16,7 @@ import type {
   RuleNotChecked,
   RuleResult,
   TubeInput,
+  TubeSetInput,
 } from './types';
 
 // Site settings until a site sets its own. Clearance 5 to 25 mm: at least 5 mm keeps the tip off the
@@ -300,8 +301,11 @@ function toTime(value: Date | string | null): number | null {
   return (value instanceof Date ? value : new Date(value)).getTime();
 }
 
-export const checkRinse: RuleFn = ({ tubeSet }) => {
-  if (!tubeSet) return notChecked('rinse', 'not checked: no tube set chosen');
+/**
+ * Whether a tube set may go into the next drum. The one home of the rinse rule: the fit check uses it
+ * through checkRinse, the station rotation uses it to refuse a dirty set.
+ */
+export function rinseCheck(tubeSet: TubeSetInput): RuleResult {
   const rinsed = toTime(tubeSet.lastRinsedAt);
   const used = toTime(tubeSet.lastUsedAt);
   if ((rinsed !== null && Number.isNaN(rinsed)) || (used !== null && Number.isNaN(used))) {
@@ -320,7 +324,9 @@ export const checkRinse: RuleFn = ({ tubeSet }) => {
     );
   }
   return pass('rinse', 'This tube set was rinsed after its last drum.');
-};
+}
+
+export const checkRinse: RuleFn = ({ tubeSet }) => (tubeSet ? rinseCheck(tubeSet) : notChecked('rinse', 'not checked: no tube set chosen'));
 
 /** Every rule, in the order results are listed. */
 export const FIT_RULES: ReadonlyArray<{ name: RuleName; check: RuleFn }> = [

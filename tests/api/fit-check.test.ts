@@ -48,7 +48,7 @@ describe('POST /api/fit-checks', () => {
     const best: Candidate = res.body.candidates[0];
     expect(best).toMatchObject({ dipTubePartNumber: demo.fittingTube, connectorPartNumber: demo.fittingHead, verdict: 'fits', pairingStatus: 'approved', installedAtStation: true });
     expect(best.rules.every((r) => r.outcome === 'pass')).toBe(true);
-    expect(best.rules.map((r) => r.rule)).toEqual(expect.arrayContaining(['thread', 'key', 'reach', 'tapping', 'ports', 'openings', 'approval', 'rinse']));
+    expect(best.rules.map((r) => r.rule)).toEqual(expect.arrayContaining(['thread', 'key', 'reach', 'tapping', 'ports', 'openings', 'approval']));
     // The reach rule reports the tip gap in mm and in.
     expect(ruleOf(best, 'reach')!.numbers).toEqual(expect.objectContaining({ gapMm: expect.any(Number), gapIn: expect.any(Number) }));
     expect(ruleOf(best, 'reach')!.numbers!.gapIn).toBeCloseTo(ruleOf(best, 'reach')!.numbers!.gapMm / 25.4, 6); // 1 in = 25.4 mm exactly (NIST SP 811)
@@ -91,6 +91,18 @@ describe('POST /api/fit-checks', () => {
     expect(ports.outcome).toBe('caution');
     // (Df/Dr)^2 at equal flow [derived from v = Q/A]
     expect(ports.numbers!.velocityRatio).toBeCloseTo(ports.numbers!.returnVelocityMs / ports.numbers!.feedVelocityMs, 6);
+  });
+
+  it('a tube set not rinsed since its last drum makes its tube no-fit on the rinse rule', async () => {
+    const sets = await request(app).get(`/api/tube-sets?stationId=${ids.fittingStation}`).set(bearer(clerk));
+    const dirty = sets.body.items.find((s: { label: string }) => s.label === demo.dirtyTubeSet);
+    const res = await check({ drumTypeId: ids.fittingDrum, stationId: ids.fittingStation, tubeSetId: dirty.id });
+    const withSet = (res.body.candidates as Candidate[]).filter((c) => ruleOf(c, 'rinse'));
+    expect(withSet.length).toBeGreaterThan(0);
+    for (const c of withSet) {
+      expect(ruleOf(c, 'rinse')!.outcome).toBe('fail');
+      expect(c.verdict).toBe('no-fit');
+    }
   });
 
   it('checks a drum described by hand (caliper and gauge) like a registered one', async () => {

@@ -1,0 +1,33 @@
+import { Type } from 'class-transformer';
+import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
+import { AdHocDrumDto } from '../fit/fit-check.dto';
+
+export class ReceivingCheckDto {
+  @IsString({ message: 'must be text' }) @MinLength(1, { message: 'is required' }) @MaxLength(60, { message: 'must be at most 60 characters' })
+  @Matches(/^[\p{L}\p{N}][\p{L}\p{N}\-_./ ]*$/u, { message: 'may hold letters, digits, spaces and - _ . /' })
+  lotNumber: string;
+  @IsOptional() @IsUUID('all', { message: 'must be an id' }) supplierId?: string;
+  @IsOptional() @IsUUID('all', { message: 'must be an id' }) slurryId?: string;
+  @IsInt({ message: 'must be a whole number' }) @Min(1, { message: 'must be 1 or more' }) @Max(1000, { message: 'must be at most 1000' }) drumCount: number;
+  @IsOptional() @IsUUID('all', { message: 'must be an id' }) drumTypeId?: string;
+  @IsOptional() @ValidateNested() @Type(() => AdHocDrumDto) drum?: AdHocDrumDto;
+  @IsOptional() @IsUUID('all', { message: 'must be an id' }) stationId?: string;
+}
+
+export class HoldDto {
+  @IsString({ message: 'must be text' }) @MinLength(3, { message: 'must say why (at least 3 characters)' }) @MaxLength(2000) reason: string;
+}
+
+export class ReleaseDto {
+  @IsString({ message: 'must be text' }) @MinLength(3, { message: 'must say why (at least 3 characters)' }) @MaxLength(2000) comment: string;
+}
+
+export class ReceivingListDto {
+  @IsOptional() @IsString() @MaxLength(60) q?: string;
+  @IsOptional() @IsIn(['fits', 'caution', 'no-fit'], { message: 'must be fits, caution or no-fit' }) verdict?: string;
+  @IsOptional() @IsIn(['checked', 'on-hold', 'released'], { message: 'must be checked, on-hold or released' }) status?: string;
+  @IsOptional() @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date, YYYY-MM-DD' }) from?: string;
+  @IsOptional() @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date, YYYY-MM-DD' }) to?: string;
+  @IsOptional() @Type(() => Number) @IsInt({ message: 'must be a whole number' }) @Min(1) page?: number;
+  @IsOptional() @Type(() => Number) @IsInt({ message: 'must be a whole number' }) @Min(1) @Max(200, { message: 'must be at most 200' }) pageSize?: number;
+}

@@ -1,0 +1,140 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import { conflict, fieldError, notFound } from '../common/errors';
+import { DrumType, HardwareWarning, SourcingPlan, Station, Supplier } from '../entities';
+import { FitCheckService } from '../fit/fit-check.service';
+import { notifyRoles } from '../notifications/notifications.service';
+import { ensureExists } from '../registry/refs';
+import { needsForStation, stationsByIds, totalOrder, type StationNeed } from './hardware-needs';
+import type { SourcingPlanDto } from './sourcing.dto';
+
+export const planJson = (p: SourcingPlan) => ({
+  id: p.id,
+  version: p.version,
+  slurryName: p.slurryName,
+  supplierId: p.supplierId,
+  supplierName: p.supplier?.name ?? null,
+  region: p.supplier?.region ?? null,
+  drumTypeId: p.drumTypeId,
+  drumTypeName: p.drumType?.name ?? null,
+  drumTypePartNumber: p.drumType?.partNumber ?? null,
+  startDate: p.startDate,
+  drumsPerMonth: p.drumsPerMonth,
+  stationIds: p.stationIds,
+  foams: p.foams,
+  shearSensitive: p.shearSensitive,
+  notes: p.notes,
+  createdByName: p.createdBy?.displayName ?? null,
+  createdAt: p.createdAt,
+});
+
+export const warningJson = (w: HardwareWarning) => ({
+  id: w.id,
+  version: w.version,
+  source: w.source,
+  sourcingPlanId: w.sourcingPlanId,
+  receivingCheckId: w.receivingCheckId,
+  lotNumber: w.receivingCheck?.lotNumber ?? null,
+  planSlurryName: w.sourcingPlan?.slurryName ?? null,
+  status: w.status,
+  summary: w.summary,
+  needs: w.needs,
+  acknowledgedByName: w.acknowledgedBy?.displayName ?? null,
+  acknowledgedAt: w.acknowledgedAt,
+  resolvedByName: w.resolvedBy?.displayName ?? null,
+  resolvedAt: w.resolvedAt,
+  createdAt: w.createdAt,
+});
+
+/** Buying from a new source: which stations the new drum would reach, whether they fit, what to order. */
+export class SourcingService {
+  private readonly fit: FitCheckService;
+
+  constructor(private readonly ds: DataSource) {
+    this.fit = new FitCheckService(ds);
+  }
+
+  private async impactOf(m: EntityManager, plan: Pick<SourcingPlan, 'drumTypeId' | 'stationIds' | 'slurryName' | 'foams' | 'shearSensitive'>) {
+    const stations = await stationsByIds(m, plan.stationIds);
+    const slurry = { name: plan.slurryName, foams: plan.foams, shearSensitive: plan.shearSensitive };
+    const needs: StationNeed[] = [];
+    for (const s of stations) needs.push(await needsForStation(m, this.fit, plan.drumTypeId, s, slurry));
+    return { stations: needs, order: totalOrder(needs), lacking: needs.filter((n) => n.verdict !== 'fits' || n.order.length > 0) };
+  }
+
+  async create(dto: SourcingPlanDto, userId: string) {
+    const id = await this.ds.transaction(async (m) => {
+      const supplier = await ensureExists(m, Supplier, dto.supplierId, 'supplierId', 'supplier');
+      const drum = await ensureExists(m, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
+      const stationIds = dto.stationIds ?? (await m.find(Station, { select: { id: true } })).map((s) => s.id);
+      const found = await stationsByIds(m, stationIds);
+      if (found.length !== new Set(stationIds).size) throw fieldError('stationIds', 'names a station that does not exist');
+      if (Number.isNaN(Date.parse(dto.startDate))) throw fieldError('startDate', 'must be a real date');
+      const plan = await m.save(
+        m.create(SourcingPlan, {
+          slurryName: dto.slurryName.trim(),
+          supplierId: supplier.id,
+          drumTypeId: drum.id,
+          startDate: dto.startDate,
+          drumsPerMonth: dto.drumsPerMonth,
+          stationIds: [...new Set(stationIds)],
+          foams: dto.foams ?? false,
+          shearSensitive: dto.shearSensitive ?? false,
+          notes: dto.notes?.trim() || null,
+          createdById: userId,
+        }),
+      );
+      const impact = await this.impactOf(m, plan);
+      // A warning and the buyers' notices are written with the plan: all or nothing.
+      if (impact.lacking.length) {
+        const summary = `${plan.slurryName} from ${supplier.name} (${supplier.region}) from ${plan.startDate} arrives in ${drum.name}: ${impact.lacking.length} of ${impact.stations.length} station(s) need hardware.`;
+        await m.save(m.create(HardwareWarning, { source: 'plan', sourcingPlanId: plan.id, receivingCheckId: null, status: 'open', summary, needs: [{ stations: impact.lacking, order: impact.order }] }));
+        await notifyRoles(m, ['buyer'], { kind: 'hardware-gap', title: `Hardware needed for ${plan.slurryName}`, body: summary, link: `/sourcing/${plan.id}` });
+      }
+      return plan.id;
+    });
+    return this.detail(id);
+  }
+
+  async list() {
+    const plans = await this.ds.getRepository(SourcingPlan).find({ relations: { supplier: true, drumType: true, createdBy: true }, order: { createdAt: 'DESC' }, take: 200 });
+    return { items: plans.map(planJson), total: plans.length, page: 1, pageSize: plans.length };
+  }
+
+  async detail(id: string) {
+    const plan = await this.ds.getRepository(SourcingPlan).findOne({ where: { id }, relations: { supplier: true, drumType: true, createdBy: true } });
+    if (!plan) throw notFound('Sourcing plan');
+    const impact = await this.impactOf(this.ds.manager, plan);
+    const warnings = await this.ds.getRepository(HardwareWarning).find({ where: { sourcingPlanId: id }, order: { createdAt: 'DESC' } });
+    return { ...planJson(plan), impact: { stations: impact.stations, order: impact.order }, warnings: warnings.map(warningJson) };
+  }
+
+  async warnings(status?: string) {
+    const rows = await this.ds.getRepository(HardwareWarning).find({
+      where: status ? { status: status as HardwareWarning['status'] } : {},
+      relations: { receivingCheck: true, sourcingPlan: true, acknowledgedBy: true, resolvedBy: true },
+      order: { createdAt: 'DESC' },
+      take: 200,
+    });
+    return { items: rows.map(warningJson), total: rows.length, page: 1, pageSize: rows.length };
+  }
+
+  async moveWarning(id: string, to: 'acknowledged' | 'resolved', userId: string) {
+    await this.ds.transaction(async (m) => {
+      const w = await m.findOne(HardwareWarning, { where: { id }, lock: { mode: 'pessimistic_write' } });
+      if (!w) throw notFound('Warning');
+      if (w.status === 'resolved') throw conflict('This warning is already resolved.');
+      if (to === 'acknowledged' && w.status !== 'open') throw conflict('Only an open warning can be acknowledged.');
+      w.status = to;
+      if (to === 'acknowledged') {
+        w.acknowledgedById = userId;
+        w.acknowledgedAt = new Date();
+      } else {
+        w.resolvedById = userId;
+        w.resolvedAt = new Date();
+      }
+      await m.save(w);
+    });
+    const w = await this.ds.getRepository(HardwareWarning).findOneOrFail({ where: { id }, relations: { receivingCheck: true, sourcingPlan: true, acknowledgedBy: true, resolvedBy: true } });
+    return warningJson(w);
+  }
+}

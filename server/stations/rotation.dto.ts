@@ -1,0 +1,17 @@
+import { IsInt, IsOptional, IsString, IsUUID, MaxLength, Min } from 'class-validator';
+
+export class RinseDto {
+  @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(500, { message: 'must be at most 500 characters' }) note?: string;
+}
+
+export class StandbyDto {
+  /** The receiving check of the lot the new standby drum belongs to (or just its lot number). */
+  @IsOptional() @IsUUID('all', { message: 'must be an id' }) receivingCheckId?: string;
+  @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(60) lotNumber?: string;
+  @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(60) drumSerial?: string;
+  @IsInt({ message: 'is required: the version you last read' }) @Min(1) version: number;
+}
+
+export class VersionedDto {
+  @IsInt({ message: 'is required: the version you last read' }) @Min(1) version: number;
+}
