@@ -15,6 +15,8 @@ const common: Project = {
 };
 
 const config: Config = {
+  // API suites reset and seed PostgreSQL in beforeAll; on a loaded two-core machine that can pass 5 s.
+  testTimeout: 30_000,
   projects: [
     { ...common, displayName: 'unit', testMatch: ['<rootDir>/tests/unit/**/*.test.ts'] },
     { ...common, displayName: 'api', testMatch: ['<rootDir>/tests/api/**/*.test.ts'] },

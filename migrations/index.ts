@@ -3,5 +3,6 @@
 import { CreateUsers1764612000000 } from './1764612000000-create-users';
 import { CreateRegistry1764615600000 } from './1764615600000-create-registry';
 import { CreateOperations1764619200000 } from './1764619200000-create-operations';
+import { CreateImportsAttachmentsOutbox1764622800000 } from './1764622800000-create-imports-attachments-outbox';
 
-export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000];
+export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000, CreateImportsAttachmentsOutbox1764622800000];

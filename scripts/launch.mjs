@@ -232,6 +232,67 @@ function ensureChromium() {
   fail('Chromium is missing for the browser tests: run `sudo apt-get install -y chromium`, then `npm test` again.');
 }
 
+function freePort() {
+  return new Promise((resolve) => {
+    const s = net.createServer();
+    s.listen(0, '127.0.0.1', () => {
+      const { port } = s.address();
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+/**
+ * Local stand-ins for object storage and SMTP (s3rver, maildev) unless real ones are configured. Start
+ * mode uses fixed ports so the inbox address stays the same; test mode takes free ones.
+ */
+async function startDevServices(extraEnv) {
+  const wantS3 = !env.S3_BUCKET;
+  const wantMail = !env.SMTP_URL;
+  if (!wantS3 && !wantMail) return { child: null, env: {} };
+  const ports =
+    mode === 'test'
+      ? { s3: await freePort(), smtp: await freePort(), web: await freePort() }
+      : { s3: Number(env.BUNGWISE_S3_PORT ?? 54330), smtp: Number(env.BUNGWISE_SMTP_PORT ?? 54331), web: Number(env.BUNGWISE_MAIL_WEB_PORT ?? 54332) };
+  if (mode === 'start') {
+    for (const [name, port] of [['BUNGWISE_S3_PORT', ports.s3], ['BUNGWISE_SMTP_PORT', ports.smtp], ['BUNGWISE_MAIL_WEB_PORT', ports.web]]) {
+      if (!(await portFree(port))) fail(`Port ${port} is taken by another program: stop it or set ${name} to a free port.`);
+    }
+  }
+  // Each test run its own scratch store (runs may overlap); start mode keeps its files.
+  const s3Dir = path.join(dataDir, mode === 'test' ? `s3-test-${process.pid}` : 's3');
+  if (mode === 'test') {
+    fs.rmSync(s3Dir, { recursive: true, force: true });
+    process.on('exit', () => fs.rmSync(s3Dir, { recursive: true, force: true }));
+  }
+  const child = spawn('node', [path.join(root, 'dist', 'server', 'server', 'dev-services.js')], {
+    cwd: root,
+    env: { ...env, ...extraEnv, BUNGWISE_S3_PORT: String(ports.s3), BUNGWISE_SMTP_PORT: String(ports.smtp), BUNGWISE_MAIL_WEB_PORT: String(ports.web), BUNGWISE_S3_DIR: s3Dir, S3_BUCKET: env.S3_BUCKET ?? 'bungwise' },
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
+  const ready = await new Promise((resolve) => {
+    let out = '';
+    const timer = setTimeout(() => resolve(null), 30_000);
+    child.stdout.on('data', (d) => {
+      out += d;
+      const line = out.split('\n').find((l) => l.startsWith('{'));
+      if (line) {
+        clearTimeout(timer);
+        resolve(JSON.parse(line));
+      }
+    });
+    child.on('exit', () => resolve(null));
+  });
+  if (!ready) {
+    child.kill('SIGTERM');
+    fail('The local S3 and mail stand-ins would not start: see the message above, or set S3_BUCKET and SMTP_URL to real services.');
+  }
+  const out = {};
+  if (wantS3) Object.assign(out, { S3_ENDPOINT: ready.s3, S3_BUCKET: 'bungwise', S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER', S3_REGION: 'us-east-1' });
+  if (wantMail) Object.assign(out, { SMTP_URL: ready.smtp, BUNGWISE_MAIL_WEB_URL: ready.inbox });
+  return { child, env: out };
+}
+
 function serverCli(args, extraEnv) {
   return run('node', [path.join(root, 'dist', 'server', 'server', 'cli.js'), ...args], { env: { ...env, ...extraEnv } });
 }
@@ -267,7 +328,9 @@ async function main() {
   }
 
   let stopping = false;
+  let services = { child: null, env: {} };
   const cleanup = () => {
+    services.child?.kill('SIGTERM');
     if (cluster.startedHere && bin) {
       log('Stopping the PostgreSQL cluster...');
       stopCluster(bin);
@@ -281,9 +344,10 @@ async function main() {
       if (serverCli(['prepare', '--recreate', '--no-seed'], dbEnv) !== 0) fail('Preparing the test database failed: see the output above.');
       exportWeb();
       ensureChromium();
+      services = await startDevServices(dbEnv);
       const jest = path.join(root, 'node_modules', '.bin', 'jest');
       const code = run(jest, ['--runInBand', ...passThrough], {
-        env: { ...env, ...dbEnv, JWT_SECRET: env.JWT_SECRET ?? 'test-secret-not-for-production', NODE_ENV: 'test', BUNGWISE_WEB_DIR: webDir },
+        env: { ...env, ...dbEnv, ...services.env, JWT_SECRET: env.JWT_SECRET ?? 'test-secret-not-for-production', NODE_ENV: 'test', BUNGWISE_WEB_DIR: webDir },
       });
       cleanup();
       process.exit(code);
@@ -292,10 +356,11 @@ async function main() {
     if (serverCli(['prepare'], dbEnv) !== 0) fail('Preparing the database failed: see the output above.');
     exportWeb();
     const jwtSecret = env.JWT_SECRET ?? ensureSecret('jwt-secret');
+    services = await startDevServices(dbEnv);
     const server = spawn('node', [path.join(root, 'dist', 'server', 'server', 'index.js')], {
       stdio: 'inherit',
       cwd: root,
-      env: { ...env, ...dbEnv, PORT: String(appPort), JWT_SECRET: jwtSecret, BUNGWISE_WEB_DIR: webDir },
+      env: { ...env, ...dbEnv, ...services.env, PORT: String(appPort), JWT_SECRET: jwtSecret, BUNGWISE_WEB_DIR: webDir },
     });
     const shutdown = () => {
       if (stopping) return;

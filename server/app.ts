@@ -10,7 +10,12 @@ import { makeAuthenticator } from './auth/guards';
 import { notFound, unavailable } from './common/errors';
 import { errorMiddleware } from './common/error-middleware';
 import { healthRouter } from './health/health.router';
+import { attachmentsRouter } from './attachments/attachments.router';
 import { fitCheckRouter } from './fit/fit-check.router';
+import { exportsRouter } from './imports/exports.router';
+import type { ImportOptions } from './imports/import.service';
+import { importsRouter } from './imports/imports.router';
+import type { Storage } from './storage/storage';
 import { notificationsRouter } from './notifications/notifications.router';
 import { receivingRouter } from './receiving/receiving.router';
 import { sourcingRouter } from './sourcing/sourcing.router';
@@ -30,6 +35,9 @@ export interface AppOptions {
   signInLimits?: Partial<SignInLimits>;
   /** Request logging (morgan); off in tests to keep their output readable. */
   logRequests?: boolean;
+  /** Object storage for attachments and imported files; without it those routes answer 503. */
+  storage?: Storage | null;
+  imports?: ImportOptions;
 }
 
 /** The app factory: everything under /api, the web app at /. One process is stateless apart from the rate-limit counters. */
@@ -72,6 +80,9 @@ export function createApp(options: AppOptions): Express {
   api.use(receivingRouter(ds));
   api.use(sourcingRouter(ds));
   api.use(notificationsRouter(ds));
+  api.use(attachmentsRouter(ds, options.storage ?? null));
+  api.use(importsRouter(ds, options.storage ?? null, options.imports));
+  api.use(exportsRouter(ds));
   api.use((req) => {
     throw notFound(`The API route ${req.method} ${req.path}`);
   });

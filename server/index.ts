@@ -3,6 +3,8 @@ import path from 'node:path';
 import { createApp } from './app';
 import { jwtSecret } from './auth/tokens';
 import { makeDataSource } from './db/data-source';
+import { MailSender, transportFromEnv } from './mail/sender';
+import { Storage, storageConfigFromEnv } from './storage/storage';
 
 const port = Number(process.env.PORT ?? 8080);
 const ds = makeDataSource();
@@ -20,7 +22,13 @@ async function connect(): Promise<void> {
   }
 }
 
+const storageConfig = storageConfigFromEnv();
+const transport = transportFromEnv();
+// The outbox sender runs beside the API; with several API processes each runs one (rows are claimed with SKIP LOCKED).
+const mailer = transport ? new MailSender(ds, transport) : null;
+
 const app = createApp({
+  storage: storageConfig ? new Storage(storageConfig) : null,
   dataSource: ds,
   jwtSecret: jwtSecret(),
   webDir: process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'web'),
@@ -34,12 +42,18 @@ function announce(): void {
     console.log('[bungwise] Demo sign-ins (password bungwise-demo):');
     for (const role of ['clerk', 'engineer', 'engineer2', 'buyer', 'admin']) console.log(`[bungwise]   ${role.padEnd(9)} ${role}@bungwise.example`);
   }
+  if (process.env.BUNGWISE_MAIL_WEB_URL) console.log(`[bungwise] Outgoing mail (local inbox): ${process.env.BUNGWISE_MAIL_WEB_URL}`);
+  if (!storageConfig) console.log('[bungwise] File storage is off: set S3_BUCKET to keep attachments and imported files.');
+  if (!transport) console.log('[bungwise] E-mail is off: set SMTP_URL to send notices by mail.');
   console.log('[bungwise] Press Ctrl-C to stop.\n');
 }
 
 // Listen at once (health answers "down" meanwhile), announce once the database is reachable.
 const server = app.listen(port, () => {
-  void connect().then(announce);
+  void connect().then(() => {
+    mailer?.start();
+    announce();
+  });
 });
 server.on('error', (err: NodeJS.ErrnoException) => {
   console.error(err.code === 'EADDRINUSE' ? `[bungwise] Port ${port} is taken: stop the other program or set PORT.` : `[bungwise] ${err.message}`);
@@ -47,6 +61,7 @@ server.on('error', (err: NodeJS.ErrnoException) => {
 });
 
 function shutdown(): void {
+  mailer?.stop();
   server.close(() => {
     void ds.destroy().finally(() => process.exit(0));
   });

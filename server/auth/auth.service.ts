@@ -11,6 +11,7 @@ export interface PublicUser {
   role: User['role'];
   active: boolean;
   lengthUnit: 'mm' | 'in';
+  mailOff: string[];
 }
 
 export const toPublicUser = (u: User): PublicUser => ({
@@ -20,6 +21,7 @@ export const toPublicUser = (u: User): PublicUser => ({
   role: u.role,
   active: u.active,
   lengthUnit: u.lengthUnit,
+  mailOff: u.mailOff ?? [],
 });
 
 // One message whatever was wrong, so the answer never tells whether an account exists.

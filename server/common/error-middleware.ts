@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler } from 'express';
+import { MulterError } from 'multer';
 import { QueryFailedError } from 'typeorm';
 import { HttpError } from './errors';
 import { isConnectionError } from '../db/connection-errors';
@@ -16,6 +17,14 @@ export const errorMiddleware: ErrorRequestHandler = (err, _req, res, _next) => {
   }
   if (err?.type === 'entity.too.large') {
     res.status(413).json({ error: { code: 'too_large', message: 'The request body is too large.', details: [{ field: 'body', messages: ['is too large'] }] } });
+    return;
+  }
+  // multer: the upload broke a limit.
+  if (err instanceof MulterError) {
+    const tooLarge = err.code === 'LIMIT_FILE_SIZE';
+    res.status(tooLarge ? 413 : 400).json({
+      error: { code: tooLarge ? 'too_large' : 'bad_upload', message: tooLarge ? 'The file is larger than allowed.' : `The upload was refused: ${err.message}.`, details: [{ field: err.field ?? 'file', messages: [tooLarge ? 'is too large' : err.message] }] },
+    });
     return;
   }
   // The shared computations throw RangeError for values no drum or pipe could have.

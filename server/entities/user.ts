@@ -25,4 +25,8 @@ export class User extends Base {
 
   @Column({ name: 'length_unit', type: 'varchar', length: 2, default: 'mm' })
   lengthUnit: 'mm' | 'in';
+
+  /** Kinds of notice this person does not want by e-mail (they still see them in the app). */
+  @Column({ name: 'mail_off', type: 'varchar', length: 20, array: true, default: () => "'{}'" })
+  mailOff: string[];
 }

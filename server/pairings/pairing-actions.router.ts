@@ -4,6 +4,7 @@ import { requireRole } from '../auth/guards';
 import { conflict, forbidden, notFound } from '../common/errors';
 import { parseDto } from '../common/validate';
 import { Pairing, PairingReview } from '../entities';
+import { notifyUser } from '../notifications/notifications.service';
 import { ResourceService, parseId } from '../registry/resource';
 import { RequiredCommentDto, ReviewDto } from '../registry/registry.dto';
 
@@ -40,7 +41,18 @@ export function pairingActionsRouter(ds: DataSource, pairings: ResourceService<P
       }
       pairing.updatedAt = new Date();
       await m.save(pairing);
-      await m.save(m.create(PairingReview, { pairingId: id, reviewerId: user.id, decision, comment: body.comment?.trim() || (decision === 'approved' ? 'Approved.' : '') }));
+      const comment = body.comment?.trim() || (decision === 'approved' ? 'Approved.' : '');
+      await m.save(m.create(PairingReview, { pairingId: id, reviewerId: user.id, decision, comment }));
+      if (decision !== 'retired' && pairing.authorId !== user.id) {
+        const full = await m.findOne(Pairing, { where: { id }, relations: { dipTube: true, connector: true } });
+        const what = `${full?.dipTube?.partNumber} with ${full?.connector?.partNumber}`;
+        await notifyUser(m, pairing.authorId, {
+          kind: 'pairing-decision',
+          title: `Pairing ${what} ${decision}`,
+          body: `${user.displayName} ${decision} your pairing of ${what}: ${comment}`,
+          link: `/registry/pairings/${id}`,
+        });
+      }
     });
     res.json(await pairings.detail(id));
   };

@@ -4,7 +4,7 @@ import { ChangeOut, DrumType, HardwareWarning, ReceivingCheck, Slurry, Station, 
 import { FitCheckService } from '../fit/fit-check.service';
 import { notifyRoles } from '../notifications/notifications.service';
 import { ensureExists } from '../registry/refs';
-import { needsForStation, totalOrder, type StationNeed } from '../sourcing/hardware-needs';
+import { needsForStation, orderLines, totalOrder, type StationNeed } from '../sourcing/hardware-needs';
 import type { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
 
 const RELATIONS = { supplier: true, slurry: true, drumType: true, station: true, checkedBy: true, heldBy: true, releasedBy: true } as const;
@@ -158,9 +158,19 @@ export class ReceivingService {
       await notifyRoles(
         m,
         ['engineer', 'buyer'],
-        { kind: 'lot-held', title: `${what} on hold`, body: `Held at the dock: ${dto.reason.trim()}`, link: `/receive/${r.id}` },
+        { kind: 'lot-held', title: `${what} on hold`, body: `${what} was put on hold at the dock: ${dto.reason.trim()}`, link: `/receive/${r.id}` },
         userId,
       );
+      // Buyers also hear what the site lacks, with what to order.
+      if (needs.length) {
+        await notifyRoles(m, ['buyer'], {
+          kind: 'hardware-gap',
+          title: `Hardware needed for ${what}`,
+          body: `${what} is held because the site lacks fitting hardware. What to order:`,
+          link: `/sourcing/warnings`,
+          lines: orderLines(totalOrder(needs)),
+        }, userId);
+      }
     });
     return this.detail(id);
   }

@@ -2,6 +2,7 @@ import type { ObjectLiteral, SelectQueryBuilder } from 'typeorm';
 import { fieldError } from '../common/errors';
 import { parseDto } from '../common/validate';
 import { Connector, DipTube, DrumOpening, DrumType, KeyCode, Pairing, PairingReview, Slurry, Station, Supplier, ThreadSpec, TubeSet } from '../entities';
+import { notifyRoles } from '../notifications/notifications.service';
 import { ensureExists, pick, resolveKey, resolveThread } from './refs';
 import { ConnectorDto, DipTubeDto, DrumTypeDto, KeyCodeDto, OpeningDto, PairingDto, SlurryDto, StationDto, SupplierDto, ThreadSpecDto, TubeSetDto } from './registry.dto';
 import type { ResourceDef, WriteContext } from './resource';
@@ -306,6 +307,13 @@ export const pairingDef: ResourceDef<Pairing> = {
     await ensureExists(manager, DipTube, dto.dipTubeId, 'dipTubeId', 'dip tube');
     await ensureExists(manager, Connector, dto.connectorId, 'connectorId', 'connector');
     return { ...pick<Pairing>(dto, ['dipTubeId', 'connectorId', 'notes']), status: 'draft', authorId: user.id, approverId: null, approvedAt: null };
+  },
+  // A new draft asks the other engineers for a review (in the same transaction as the pairing).
+  afterWrite: async (p, _dto, { manager, user, existing }) => {
+    if (existing) return;
+    const full = await manager.findOne(Pairing, { where: { id: p.id }, relations: { dipTube: true, connector: true } });
+    const what = `${full?.dipTube?.partNumber} with ${full?.connector?.partNumber}`;
+    await notifyRoles(manager, ['engineer'], { kind: 'pairing-review', title: `Pairing ${what} awaits review`, body: `${user.displayName} registered the pairing of ${what}; an engineer other than the author approves or rejects it.`, link: `/registry/pairings/${p.id}` }, user.id);
   },
   detailExtras: async (p, m) => ({
     reviews: (await m.find(PairingReview, { where: { pairingId: p.id }, relations: { reviewer: true }, order: { createdAt: 'ASC' } })).map((r) => ({

@@ -123,3 +123,8 @@ export function totalOrder(needs: StationNeed[]): OrderLine[] {
 export async function stationsByIds(m: EntityManager, ids: string[]): Promise<Station[]> {
   return ids.length ? m.find(Station, { where: { id: In(ids) }, order: { name: 'ASC' } }) : [];
 }
+
+/** Order lines as short sentences for notices and e-mail. */
+export function orderLines(order: OrderLine[]): string[] {
+  return order.map((o) => `${o.count} x ${o.description}${o.note ? ` (${o.note})` : ''}`);
+}

@@ -4,7 +4,7 @@ import { DrumType, HardwareWarning, SourcingPlan, Station, Supplier } from '../e
 import { FitCheckService } from '../fit/fit-check.service';
 import { notifyRoles } from '../notifications/notifications.service';
 import { ensureExists } from '../registry/refs';
-import { needsForStation, stationsByIds, totalOrder, type StationNeed } from './hardware-needs';
+import { needsForStation, orderLines, stationsByIds, totalOrder, type StationNeed } from './hardware-needs';
 import type { SourcingPlanDto } from './sourcing.dto';
 
 export const planJson = (p: SourcingPlan) => ({
@@ -88,7 +88,7 @@ export class SourcingService {
       if (impact.lacking.length) {
         const summary = `${plan.slurryName} from ${supplier.name} (${supplier.region}) from ${plan.startDate} arrives in ${drum.name}: ${impact.lacking.length} of ${impact.stations.length} station(s) need hardware.`;
         await m.save(m.create(HardwareWarning, { source: 'plan', sourcingPlanId: plan.id, receivingCheckId: null, status: 'open', summary, needs: [{ stations: impact.lacking, order: impact.order }] }));
-        await notifyRoles(m, ['buyer'], { kind: 'hardware-gap', title: `Hardware needed for ${plan.slurryName}`, body: summary, link: `/sourcing/${plan.id}` });
+        await notifyRoles(m, ['buyer'], { kind: 'hardware-gap', title: `Hardware needed for ${plan.slurryName}`, body: `${summary} What to order:`, link: `/sourcing/${plan.id}`, lines: [...impact.lacking.map((n) => `${n.stationName}: ${n.summary}`), ...orderLines(impact.order)] });
       }
       return plan.id;
     });

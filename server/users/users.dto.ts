@@ -1,5 +1,6 @@
 import { IsBoolean, IsEmail, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import { ROLES, type Role } from '../../shared/roles';
+import { MAIL_KINDS } from '../mail/outbox';
 
 export class CreateUserDto {
   @IsEmail({}, { message: 'must be an e-mail address' })
@@ -38,4 +39,9 @@ export class UpdateMeDto {
   @IsOptional()
   @IsIn(['mm', 'in'], { message: 'must be mm or in' })
   lengthUnit?: 'mm' | 'in';
+
+  /** Kinds of notice not wanted by e-mail. */
+  @IsOptional()
+  @IsIn(MAIL_KINDS, { each: true, message: `must list kinds among ${MAIL_KINDS.join(', ')}` })
+  mailOff?: string[];
 }

@@ -19,9 +19,7 @@ export function usersRouter(ds: DataSource): Router {
     res.json({ user: toPublicUser(user) });
   });
   router.patch('/me', body(UpdateMeDto), async (req, res) => {
-    const dto = req.body as UpdateMeDto;
-    const user = dto.lengthUnit ? await service.setLengthUnit(req.user!.id, dto.lengthUnit) : toPublicUser(await ds.getRepository(User).findOneByOrFail({ id: req.user!.id }));
-    res.json({ user });
+    res.json({ user: await service.updateMe(req.user!.id, req.body as UpdateMeDto) });
   });
 
   router.get('/users', requireRole('admin'), async (_req, res) => {

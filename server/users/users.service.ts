@@ -3,7 +3,7 @@ import { conflict, fieldError, notFound } from '../common/errors';
 import { User } from '../entities';
 import { hashPassword, passwordProblem } from '../auth/passwords';
 import { toPublicUser, type PublicUser } from '../auth/auth.service';
-import type { CreateUserDto, UpdateUserDto } from './users.dto';
+import type { CreateUserDto, UpdateMeDto, UpdateUserDto } from './users.dto';
 
 export class UsersService {
   constructor(private readonly ds: DataSource) {}
@@ -43,10 +43,12 @@ export class UsersService {
     return toPublicUser(await repo.save(user));
   }
 
-  async setLengthUnit(id: string, unit: 'mm' | 'in'): Promise<PublicUser> {
+  /** The signed-in person's own preferences: length unit and which kinds of mail they want. */
+  async updateMe(id: string, dto: UpdateMeDto): Promise<PublicUser> {
     const repo = this.ds.getRepository(User);
     const user = await repo.findOneByOrFail({ id });
-    user.lengthUnit = unit;
+    if (dto.lengthUnit) user.lengthUnit = dto.lengthUnit;
+    if (dto.mailOff) user.mailOff = [...new Set(dto.mailOff)];
     return toPublicUser(await repo.save(user));
   }
 }

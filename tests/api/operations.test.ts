@@ -56,8 +56,10 @@ describe('dock checks', () => {
     expect(held.status).toBe(200);
     expect(held.body).toMatchObject({ status: 'on-hold', holdReason: 'No dip tube reaches this drum design', heldByName: 'Noor Halvorsen' });
     const buyer = await notices(t.buyer);
-    expect(buyer.unread).toBe(before + 1);
-    expect(buyer.items[0]).toMatchObject({ kind: 'lot-held', link: `/receive/${check.body.id}` });
+    // The buyer hears of the hold and of the hardware it needs.
+    expect(buyer.unread).toBe(before + 2);
+    expect(buyer.items.slice(0, 2).map((n: { kind: string }) => n.kind).sort()).toEqual(['hardware-gap', 'lot-held']);
+    expect(buyer.items.find((n: { kind: string }) => n.kind === 'lot-held')).toMatchObject({ link: `/receive/${check.body.id}` });
     expect((await notices(t.engineer)).items[0].kind).toBe('lot-held');
     // The clerk who held it is not notified of their own action.
     expect((await notices(t.clerk)).items.filter((n: { kind: string }) => n.kind === 'lot-held')).toHaveLength(0);

@@ -54,9 +54,18 @@ describe('npm start keeps data across a stop and a start', () => {
   afterAll(() => fs.rmSync(dataDir, { recursive: true, force: true }));
 
   it('prints the URL and the demo sign-ins, stops cleanly on Ctrl-C, and keeps a user created in between', async () => {
-    const env: NodeJS.ProcessEnv = { ...process.env, BUNGWISE_DATA_DIR: dataDir, BUNGWISE_PG_PORT: String(await freePort()), PORT: String(await freePort()), BUNGWISE_LOG_REQUESTS: '0' };
-    delete env.DATABASE_URL;
-    delete env.JWT_SECRET;
+    const env: NodeJS.ProcessEnv = {
+      ...process.env,
+      BUNGWISE_DATA_DIR: dataDir,
+      BUNGWISE_PG_PORT: String(await freePort()),
+      PORT: String(await freePort()),
+      BUNGWISE_S3_PORT: String(await freePort()),
+      BUNGWISE_SMTP_PORT: String(await freePort()),
+      BUNGWISE_MAIL_WEB_PORT: String(await freePort()),
+      BUNGWISE_LOG_REQUESTS: '0',
+    };
+    // A user's start: its own private cluster and local stand-ins, not the test run's.
+    for (const k of ['DATABASE_URL', 'JWT_SECRET', 'S3_ENDPOINT', 'S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY', 'SMTP_URL', 'BUNGWISE_MAIL_WEB_URL']) delete env[k];
     const base = `http://127.0.0.1:${env.PORT}`;
 
     const first = await startLauncher(env);

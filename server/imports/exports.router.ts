@@ -1,0 +1,45 @@
+import { stringify } from 'csv-stringify/sync';
+import { Router } from 'express';
+import type { DataSource, ObjectLiteral } from 'typeorm';
+import { notFound } from '../common/errors';
+import { RESOURCES } from '../registry/definitions';
+import { ListQueryDto } from '../registry/list-query';
+import { ResourceService } from '../registry/resource';
+import { parseDto } from '../common/validate';
+
+/** A cell a spreadsheet would run as a formula (= + - @, tab, CR) gets a leading apostrophe. */
+export function neutralise(value: unknown): string {
+  if (value === null || value === undefined) return '';
+  const s = typeof value === 'object' ? JSON.stringify(value) : String(value);
+  return /^[=+\-@\t\r]/.test(s) ? `'${s}` : s;
+}
+
+/** CSV exports of every registry table, with the same search and filters as the list. */
+export function exportsRouter(ds: DataSource): Router {
+  const router = Router();
+  const services = new Map(RESOURCES.map((def) => [def.path, new ResourceService<ObjectLiteral>(ds, def)]));
+  router.get('/exports/:resource', async (req, res) => {
+    const resource = String(req.params.resource).replace(/\.csv$/, '');
+    const service = services.get(resource);
+    if (!service) throw notFound(`The registry table ${resource}`);
+    const query = await parseDto(ListQueryDto, { ...(req.query as object) });
+    const rows: object[] = [];
+    // Pages of 200 through the list query: the export sees exactly what the list shows.
+    for (let page = 1; ; page++) {
+      const out = await service.list({ ...query, page, pageSize: 200 });
+      rows.push(...out.items);
+      if (rows.length >= out.total || out.items.length === 0 || rows.length >= 100_000) break;
+    }
+    const columns = [...new Set(rows.flatMap((r) => Object.keys(r)))].filter((c) => !['openings', 'createdAt'].includes(c));
+    const records = rows.map((r) => columns.map((c) => neutralise((r as Record<string, unknown>)[c])));
+    // Drum types: their openings as one readable cell.
+    if (resource === 'drum-types') {
+      columns.push('openings');
+      rows.forEach((r, i) => records[i].push(neutralise(((r as { openings?: Array<{ label: string; threadCode: string }> }).openings ?? []).map((o) => `${o.label}: ${o.threadCode}`).join('; '))));
+    }
+    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    res.setHeader('Content-Disposition', `attachment; filename="bungwise-${resource}.csv"`);
+    res.send(stringify([columns, ...records]));
+  });
+  return router;
+}

@@ -1,0 +1,192 @@
+import iconv from 'iconv-lite';
+import type { Express } from 'express';
+import request from 'supertest';
+import type { DataSource } from 'typeorm';
+import { bearer, makeTestApp, tokenFor } from '../support/app';
+import { openTestDataSource, resetDatabase } from '../support/db';
+import { testStorage } from '../support/services';
+
+let ds: DataSource;
+let app: Express;
+let engineer: string;
+let clerk: string;
+let supplierName: string;
+
+const upload = (a: Express, token: string, kind: string, dryRun: boolean, content: Buffer | string, name = 'spec.csv') =>
+  request(a).post('/api/imports').set(bearer(token)).field('kind', kind).field('dryRun', String(dryRun)).attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content, 'utf8'), name);
+
+const tubeCount = async () => Number((await ds.query(`SELECT count(*) AS n FROM dip_tubes`))[0].n);
+
+beforeAll(async () => {
+  ds = await openTestDataSource();
+  await resetDatabase(ds);
+  app = makeTestApp(ds, { storage: testStorage() });
+  engineer = await tokenFor(app, 'engineer@bungwise.example');
+  clerk = await tokenFor(app, 'clerk@bungwise.example');
+  const suppliers = await request(app).get('/api/suppliers?region=NA').set(bearer(clerk));
+  supplierName = suppliers.body.items[0].name;
+});
+
+afterAll(async () => {
+  await ds.destroy();
+});
+
+const cleanFile = () =>
+  [
+    'Supplier,Part Number,Thread,Length (mm),Bore_mm,OD mm,Material,Key,Channels',
+    `${supplierName},IMP-T-001,NPS-2,836,19,25.4,PFA,,feed`,
+    `${supplierName},IMP-T-002,NPS-2,845.5,19,25.4,PVDF,,feed-return`,
+    `${supplierName},IMP-T-003,G-2,830,19,25.4,PFA,,feed`,
+  ].join('\n');
+
+describe('CSV import of dip tubes', () => {
+  it('a dry run counts new rows and writes nothing; the commit writes them all; the file is kept', async () => {
+    const before = await tubeCount();
+    const dry = await upload(app, engineer, 'dip-tubes', true, cleanFile());
+    expect(dry.status).toBe(200);
+    expect(dry.body.counts).toEqual({ new: 3, changed: 0, unchanged: 0, rejected: 0 });
+    expect(dry.body.encoding).toBe('UTF-8');
+    expect(await tubeCount()).toBe(before);
+    const commit = await upload(app, engineer, 'dip-tubes', false, cleanFile());
+    expect(commit.status).toBe(201);
+    expect(commit.body.outcome).toBe('committed');
+    expect(await tubeCount()).toBe(before + 3);
+    const tube = await request(app).get('/api/dip-tubes?q=IMP-T-002').set(bearer(clerk));
+    expect(tube.body.items[0]).toMatchObject({ partNumber: 'IMP-T-002', threadCode: 'NPS-2', lengthMm: 845.5, channels: 'feed-return' });
+    const history = await request(app).get('/api/imports').set(bearer(engineer));
+    expect(history.body.items[0]).toMatchObject({ kind: 'dip-tubes', outcome: 'committed', byName: 'Tomasz Ilunga', counts: { new: 3 } });
+    // The imported file is kept as an attachment of the import.
+    const file = await request(app).get(`/api/attachments/${commit.body.attachmentId}/content`).set(bearer(engineer));
+    expect(file.status).toBe(200);
+    expect(file.text ?? file.body.toString()).toContain('IMP-T-003');
+  });
+
+  it('the same file again changes nothing', async () => {
+    const before = await tubeCount();
+    const again = await upload(app, engineer, 'dip-tubes', false, cleanFile());
+    expect(again.body.counts).toEqual({ new: 0, changed: 0, unchanged: 3, rejected: 0 });
+    expect(await tubeCount()).toBe(before);
+    const tube = await request(app).get('/api/dip-tubes?q=IMP-T-001').set(bearer(clerk));
+    expect(tube.body.items[0].version).toBe(1);
+  });
+
+  it('a changed row is counted as changed and updated; inch columns are converted', async () => {
+    const file = ['supplier,part_number,thread,length_in,bore_in,od_in,material,key,channels', `${supplierName},IMP-T-001,NPS-2,33,0.75,1,PFA,,feed`].join('\n');
+    const res = await upload(app, engineer, 'dip-tubes', false, file);
+    expect(res.body.counts).toEqual({ new: 0, changed: 1, unchanged: 0, rejected: 0 });
+    const tube = await request(app).get('/api/dip-tubes?q=IMP-T-001').set(bearer(clerk));
+    expect(tube.body.items[0].lengthMm).toBeCloseTo(33 * 25.4, 9); // 1 in = 25.4 mm exactly (NIST SP 811)
+    expect(tube.body.items[0].version).toBe(2);
+  });
+
+  it('bad rows are reported by line and column, with the nearest thread codes, and nothing is written', async () => {
+    const before = await tubeCount();
+    const file = [
+      'supplier,part_number,thread,length_mm,bore_mm,od_mm,material,key,channels',
+      `${supplierName},IMP-B-001,NPS-2,836,19,25.4,PFA,,feed`,
+      `${supplierName},IMP-B-002,NPS 2,836,19,25.4,PFA,,feed`,
+      `${supplierName},IMP-B-003,NPS-2,-5,19,25.4,PFA,,feed`,
+      `Nobody Industries,IMP-B-004,NPS-2,836,19,25.4,PFA,,feed`,
+      `${supplierName},IMP-B-005,NPS-2,836,30,25.4,PFA,,feed`,
+    ].join('\n');
+    const res = await upload(app, engineer, 'dip-tubes', false, file);
+    expect(res.status).toBe(422);
+    expect(res.body.error.details.counts).toEqual({ new: 1, changed: 0, unchanged: 0, rejected: 4 });
+    const errors = res.body.error.details.errors as Array<{ line: number; column: string; reason: string }>;
+    expect(errors.map((e) => [e.line, e.column])).toEqual([
+      [3, 'thread'],
+      [4, 'length_mm'],
+      [5, 'supplier'],
+      [6, 'bore_mm'],
+    ]);
+    expect(errors[0].reason).toMatch(/nearest: .*NPS-2/);
+    expect(await tubeCount()).toBe(before);
+  });
+
+  it('a failure part-way through a commit writes nothing', async () => {
+    const faulty = makeTestApp(ds, { storage: testStorage(), imports: { chunkSize: 1, failAfterRows: 2 } });
+    const before = await tubeCount();
+    const file = ['supplier,part_number,thread,length_mm,bore_mm,od_mm,material,key,channels', ...[1, 2, 3].map((i) => `${supplierName},IMP-F-00${i},NPS-2,836,19,25.4,PFA,,feed`)].join('\n');
+    const res = await upload(faulty, engineer, 'dip-tubes', false, file);
+    expect(res.status).toBe(500);
+    expect(await tubeCount()).toBe(before);
+    expect((await request(app).get('/api/dip-tubes?q=IMP-F').set(bearer(clerk))).body.total).toBe(0);
+  });
+
+  it('reads a Shift_JIS file from a Japanese supplier correctly', async () => {
+    const created = await request(app).post('/api/suppliers').set(bearer(engineer)).send({ name: '東雲精機', region: 'JP' });
+    expect(created.status).toBe(201);
+    const text = ['仕入先,part_number,thread,length_mm,bore_mm,od_mm,material,key,channels', '東雲精機,SJ-DT-01,BT-56x4,862,19,25.4,PFA（高純度）,,feed'].join('\r\n');
+    // The header's first cell is not a known column; "supplier" is needed: use an alias row instead.
+    const file = iconv.encode(text.replace('仕入先', 'supplier'), 'Shift_JIS');
+    expect(file.toString('utf8')).not.toContain('東雲精機'); // really not UTF-8
+    const res = await upload(app, engineer, 'dip-tubes', false, file);
+    expect(res.status).toBe(201);
+    expect(res.body.encoding).toBe('Shift_JIS');
+    const tube = await request(app).get('/api/dip-tubes?q=SJ-DT-01').set(bearer(clerk));
+    expect(tube.body.items[0]).toMatchObject({ supplierName: '東雲精機', material: 'PFA（高純度）' });
+  });
+
+  it('accepts a semicolon file with decimal commas; refuses a decimal comma in a comma file', async () => {
+    const semi = ['supplier;part_number;thread;length_mm;bore_mm;od_mm;material;key;channels', `${supplierName};IMP-S-001;NPS-2;836,5;19;25,4;PFA;;feed`].join('\n');
+    const ok = await upload(app, engineer, 'dip-tubes', false, semi);
+    expect(ok.status).toBe(201);
+    expect(ok.body.delimiter).toBe(';');
+    const tube = await request(app).get('/api/dip-tubes?q=IMP-S-001').set(bearer(clerk));
+    expect(tube.body.items[0]).toMatchObject({ lengthMm: 836.5, odMm: 25.4 });
+    const comma = ['supplier,part_number,thread,length_mm,bore_mm,od_mm,material,key,channels', `${supplierName},IMP-S-002,NPS-2,836,5,19,25.4,PFA,,feed`].join('\n');
+    const bad = await upload(app, engineer, 'dip-tubes', true, comma);
+    expect(bad.body.counts.rejected).toBe(1);
+    expect(bad.body.errors[0].reason).toMatch(/decimal comma/);
+  });
+
+  it('refuses an encoding it cannot read, a binary file, an oversized file, a missing column and a clerk', async () => {
+    const latin1 = iconv.encode('supplier,part_number,thread,length_mm,bore_mm,od_mm,material,key,channels\nMüller Rohrtechnik GmbH,X,NPS-2,836,19,25.4,PFA,,feed\n', 'utf16le');
+    const enc = await upload(app, engineer, 'dip-tubes', true, latin1);
+    expect(enc.status).toBe(415);
+    expect(enc.body.error.details[0].field).toBe('file');
+    const png = Buffer.from('89504e470d0a1a0a0000000d49484452', 'hex');
+    expect((await upload(app, engineer, 'dip-tubes', true, png, 'spec.csv')).status).toBe(415);
+    const big = Buffer.alloc(21 * 1024 * 1024, 0x41);
+    const tooBig = await upload(app, engineer, 'dip-tubes', true, big);
+    expect(tooBig.status).toBe(413);
+    const missing = await upload(app, engineer, 'dip-tubes', true, 'supplier,part_number\nA,B\n');
+    expect(missing.status).toBe(400);
+    expect(missing.body.error.message).toMatch(/thread/);
+    expect((await upload(app, clerk, 'dip-tubes', true, cleanFile())).status).toBe(403);
+    const kind = await upload(app, engineer, 'pumps', true, cleanFile());
+    expect(kind.body.error.details[0].field).toBe('kind');
+  });
+
+  it('imports drum types with their openings, one row per opening, and serves a template per kind', async () => {
+    const template = await request(app).get('/api/imports/templates/drum-types').set(bearer(engineer));
+    expect(template.status).toBe(200);
+    const lines = template.text.trim().split('\n');
+    expect(lines[0]).toContain('inside_depth_mm');
+    const file = lines.map((l) => l.replaceAll('Example Drum Co', supplierName).replaceAll('DR-EX-208', 'IMP-DR-1')).join('\n');
+    const res = await upload(app, engineer, 'drum-types', false, file);
+    expect(res.status).toBe(201);
+    expect(res.body.counts).toEqual({ new: 1, changed: 0, unchanged: 0, rejected: 0 });
+    const drum = await request(app).get('/api/drum-types?q=IMP-DR-1').set(bearer(clerk));
+    expect(drum.body.items[0].openings.map((o: { threadCode: string }) => o.threadCode).sort()).toEqual(['NPS-2', 'NPS-3/4']);
+    const again = await upload(app, engineer, 'drum-types', false, file);
+    expect(again.body.counts.unchanged).toBe(1);
+  });
+});
+
+describe('CSV export', () => {
+  it('exports a registry table with formula-like cells neutralised', async () => {
+    const suppliers = await request(app).get('/api/suppliers?region=NA').set(bearer(clerk));
+    const created = await request(app)
+      .post('/api/dip-tubes')
+      .set(bearer(engineer))
+      .send({ partNumber: '=HYPERLINK("http://x")', supplierId: suppliers.body.items[0].id, threadCode: 'NPS-2', lengthMm: 836, boreMm: 19, odMm: 25.4, material: '@SUM(A1)', keyCode: null, channels: 'feed' });
+    expect(created.status).toBe(201);
+    const csv = await request(app).get('/api/exports/dip-tubes.csv?q=HYPERLINK').set(bearer(clerk));
+    expect(csv.status).toBe(200);
+    expect(csv.headers['content-type']).toMatch(/text\/csv/);
+    expect(csv.text).toContain(`"'=HYPERLINK(""http://x"")"`);
+    expect(csv.text).toContain("'@SUM(A1)");
+    expect(csv.text).not.toMatch(/(^|,)=HYPERLINK/m);
+  });
+});
