@@ -4,5 +4,6 @@ import { CreateUsers1764612000000 } from './1764612000000-create-users';
 import { CreateRegistry1764615600000 } from './1764615600000-create-registry';
 import { CreateOperations1764619200000 } from './1764619200000-create-operations';
 import { CreateImportsAttachmentsOutbox1764622800000 } from './1764622800000-create-imports-attachments-outbox';
+import { CreateAuditLog1764626400000 } from './1764626400000-create-audit-log';
 
-export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000, CreateImportsAttachmentsOutbox1764622800000];
+export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000, CreateImportsAttachmentsOutbox1764622800000, CreateAuditLog1764626400000];

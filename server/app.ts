@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import fs from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
+import cors from 'cors';
 import helmet from 'helmet';
 import morgan from 'morgan';
 import type { DataSource } from 'typeorm';
@@ -11,6 +12,7 @@ import { notFound, unavailable } from './common/errors';
 import { errorMiddleware } from './common/error-middleware';
 import { healthRouter } from './health/health.router';
 import { attachmentsRouter } from './attachments/attachments.router';
+import { auditRouter } from './audit/audit';
 import { fitCheckRouter } from './fit/fit-check.router';
 import { exportsRouter } from './imports/exports.router';
 import type { ImportOptions } from './imports/import.service';
@@ -35,6 +37,8 @@ export interface AppOptions {
   signInLimits?: Partial<SignInLimits>;
   /** Request logging (morgan); off in tests to keep their output readable. */
   logRequests?: boolean;
+  /** Other origins allowed to call the API from a browser; by default none (the app's own origin only). */
+  allowedOrigins?: string[];
   /** Object storage for attachments and imported files; without it those routes answer 503. */
   storage?: Storage | null;
   imports?: ImportOptions;
@@ -63,6 +67,10 @@ export function createApp(options: AppOptions): Express {
   if (options.logRequests) app.use(morgan(':method :url :status :res[content-length] - :response-time ms'));
 
   const api = express.Router();
+  // CORS: same-origin only unless origins are listed (BUNGWISE_ALLOWED_ORIGINS); a browser on any other
+  // origin gets no Access-Control-Allow-Origin and cannot read the answers.
+  const allowed = new Set(options.allowedOrigins ?? []);
+  api.use(cors({ origin: (origin, done) => done(null, !!origin && allowed.has(origin)), credentials: false, maxAge: 600 }));
   api.use(express.json({ limit: '1mb' }));
   api.use(healthRouter(ds));
   // Until the first connection is made (the database may start after the server), answer 503, not 500.
@@ -83,10 +91,13 @@ export function createApp(options: AppOptions): Express {
   api.use(attachmentsRouter(ds, options.storage ?? null));
   api.use(importsRouter(ds, options.storage ?? null, options.imports));
   api.use(exportsRouter(ds));
+  api.use(auditRouter(ds));
   api.use((req) => {
     throw notFound(`The API route ${req.method} ${req.path}`);
   });
   app.use('/api', api);
+  // The API router, for tools that list its routes (the role-matrix test).
+  app.locals.apiRouter = api;
 
   if (options.webDir && fs.existsSync(path.join(options.webDir, 'index.html'))) {
     const webDir = options.webDir;

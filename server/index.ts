@@ -33,6 +33,7 @@ const app = createApp({
   jwtSecret: jwtSecret(),
   webDir: process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'web'),
   logRequests: process.env.BUNGWISE_LOG_REQUESTS !== '0',
+  allowedOrigins: (process.env.BUNGWISE_ALLOWED_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
 });
 
 function announce(): void {

@@ -1,3 +1,4 @@
+import { secured } from '../auth/policy';
 import { randomUUID } from 'node:crypto';
 import { Router, type Request } from 'express';
 import multer from 'multer';
@@ -50,13 +51,14 @@ export async function storeAttachment(ds: DataSource, storage: Storage, args: { 
 
 export function attachmentsRouter(ds: DataSource, storage: Storage | null): Router {
   const router = Router();
+  const r = secured(router);
   const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_ATTACHMENT_BYTES, files: 1, fields: 10 } });
   const need = () => {
     if (!storage) throw storageUnavailable();
     return storage;
   };
 
-  router.post('/attachments', upload.single('file'), async (req: Request, res) => {
+  r.post('/attachments', upload.single('file'), async (req: Request, res) => {
     const store = need();
     const ownerKind = ownerKindOf(req.body?.ownerKind);
     const ownerId = parseId(req.body?.ownerId);
@@ -73,7 +75,7 @@ export function attachmentsRouter(ds: DataSource, storage: Storage | null): Rout
     res.status(201).json(attachmentJson(saved));
   });
 
-  router.get('/attachments', async (req, res) => {
+  r.get('/attachments', async (req, res) => {
     const ownerKind = ownerKindOf(req.query.ownerKind);
     const ownerId = parseId(req.query.ownerId);
     const items = await ds.getRepository(Attachment).find({ where: { ownerKind, ownerId }, relations: { uploadedBy: true }, order: { createdAt: 'DESC' } });
@@ -87,7 +89,7 @@ export function attachmentsRouter(ds: DataSource, storage: Storage | null): Rout
   };
 
   // Through the API: the same token and role check as the record it belongs to.
-  router.get('/attachments/:id/content', async (req, res) => {
+  r.get('/attachments/:id/content', async (req, res) => {
     const store = need();
     const a = await load(parseId(req.params.id));
     const obj = await store.get(a.storageKey);
@@ -99,7 +101,7 @@ export function attachmentsRouter(ds: DataSource, storage: Storage | null): Rout
   });
 
   // A two-minute signed link for clients that reach the bucket directly.
-  router.get('/attachments/:id/url', async (req, res) => {
+  r.get('/attachments/:id/url', async (req, res) => {
     const store = need();
     const a = await load(parseId(req.params.id));
     res.json({ url: await store.signedUrl(a.storageKey, a.fileName, 120), expiresInSeconds: 120 });

@@ -1,3 +1,4 @@
+import { secured } from './policy';
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import type { DataSource } from 'typeorm';
@@ -30,7 +31,8 @@ export function authRouter(ds: DataSource, secret: string, limits: SignInLimits)
   });
 
   const router = Router();
-  router.post('/auth/sign-in', perAddress, body(SignInDto), perAccount, async (req, res) => {
+  const r = secured(router);
+  r.post('/auth/sign-in', perAddress, body(SignInDto), perAccount, async (req, res) => {
     const { email, password } = req.body as SignInDto;
     res.json(await service.signIn(email, password));
   });

@@ -1,3 +1,4 @@
+import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { FitCheckService } from './fit-check.service';
@@ -5,7 +6,8 @@ import { FitCheckService } from './fit-check.service';
 export function fitCheckRouter(ds: DataSource): Router {
   const service = new FitCheckService(ds);
   const router = Router();
-  router.post('/fit-checks', async (req, res) => {
+  const r = secured(router);
+  r.post('/fit-checks', async (req, res) => {
     res.json(await service.check(req.body));
   });
   return router;

@@ -1,10 +1,12 @@
+import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 
 /** Health answers from a live query each time, so it reports recovery as soon as the database is back. */
 export function healthRouter(ds: DataSource): Router {
   const router = Router();
-  router.get('/health', async (_req, res) => {
+  const r = secured(router);
+  r.get('/health', async (_req, res) => {
     let db: 'ok' | 'down' = 'down';
     try {
       if (ds.isInitialized) {

@@ -1,3 +1,4 @@
+import { secured } from '../auth/policy';
 import { stringify } from 'csv-stringify/sync';
 import { Router } from 'express';
 import type { DataSource, ObjectLiteral } from 'typeorm';
@@ -17,8 +18,9 @@ export function neutralise(value: unknown): string {
 /** CSV exports of every registry table, with the same search and filters as the list. */
 export function exportsRouter(ds: DataSource): Router {
   const router = Router();
+  const r = secured(router);
   const services = new Map(RESOURCES.map((def) => [def.path, new ResourceService<ObjectLiteral>(ds, def)]));
-  router.get('/exports/:resource', async (req, res) => {
+  r.get('/exports/:resource', async (req, res) => {
     const resource = String(req.params.resource).replace(/\.csv$/, '');
     const service = services.get(resource);
     if (!service) throw notFound(`The registry table ${resource}`);

@@ -12,6 +12,7 @@ import { nearestCodes } from '../registry/refs';
 import { ConnectorDto, DipTubeDto, DrumTypeDto } from '../registry/registry.dto';
 import type { Storage } from '../storage/storage';
 import { COLUMNS, normaliseHeader, type ColumnSpec } from './columns';
+import { audit } from '../audit/audit';
 import { decodeCsv, detectDelimiter } from './decode';
 
 export interface RowError {
@@ -87,6 +88,7 @@ export class ImportService {
       await this.ds.transaction(async (tx) => {
         await this.write(tx, args.kind, planned.filter((r) => r.action !== 'unchanged'));
         await record(tx);
+        await audit(tx, { userId: args.userId, action: 'import', entity: args.kind, entityId: id, summary: `Imported ${args.fileName}: ${counts.new} new, ${counts.changed} changed, ${counts.unchanged} unchanged`, after: { counts } });
       });
     } else {
       await record(m);

@@ -1,7 +1,7 @@
+import { secured } from '../auth/policy';
 import { Router } from 'express';
 import multer from 'multer';
 import type { DataSource } from 'typeorm';
-import { requireRole } from '../auth/guards';
 import { fieldError, notFound } from '../common/errors';
 import { ImportRecord, type ImportKind } from '../entities';
 import { parseId } from '../registry/resource';
@@ -19,18 +19,18 @@ function kindOf(value: unknown): ImportKind {
 
 export function importsRouter(ds: DataSource, storage: Storage | null, options: ImportOptions = {}): Router {
   const service = new ImportService(ds, storage, options);
-  const engineers = requireRole('engineer', 'admin');
   const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 10 } });
   const router = Router();
+  const r = secured(router);
 
-  router.get('/imports/templates/:kind', (req, res) => {
+  r.get('/imports/templates/:kind', (req, res) => {
     const kind = kindOf(req.params.kind);
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
     res.setHeader('Content-Disposition', `attachment; filename="bungwise-${kind}-template.csv"`);
     res.send(templateCsv(kind));
   });
 
-  router.post('/imports', engineers, upload.single('file'), async (req, res) => {
+  r.post('/imports', upload.single('file'), async (req, res) => {
     const kind = kindOf(req.body?.kind);
     const dryRunRaw = String(req.body?.dryRun ?? '');
     if (!['true', 'false'].includes(dryRunRaw)) throw fieldError('dryRun', 'must be true or false');
@@ -39,12 +39,12 @@ export function importsRouter(ds: DataSource, storage: Storage | null, options: 
     res.status(dryRunRaw === 'true' ? 200 : 201).json(result);
   });
 
-  router.get('/imports', engineers, async (_req, res) => {
+  r.get('/imports', async (_req, res) => {
     const items = await service.history();
     res.json({ items, total: items.length, page: 1, pageSize: items.length });
   });
 
-  router.get('/imports/:id', engineers, async (req, res) => {
+  r.get('/imports/:id', async (req, res) => {
     const r = await ds.getRepository(ImportRecord).findOne({ where: { id: parseId(req.params.id) }, relations: { by: true } });
     if (!r) throw notFound('Import');
     res.json({ id: r.id, kind: r.kind, fileName: r.fileName, dryRun: r.dryRun, outcome: r.outcome, encoding: r.encoding, delimiter: r.delimiter, counts: r.counts, errors: r.errors, attachmentId: r.attachmentId, byName: r.by?.displayName ?? null, at: r.createdAt });

@@ -1,3 +1,4 @@
+import { secured } from '../auth/policy';
 import { Router } from 'express';
 import { IsNull, type DataSource } from 'typeorm';
 import { notFound } from '../common/errors';
@@ -8,7 +9,8 @@ import { notificationJson } from './notifications.service';
 /** Each user's own notices; nobody reads another's. */
 export function notificationsRouter(ds: DataSource): Router {
   const router = Router();
-  router.get('/notifications', async (req, res) => {
+  const r = secured(router);
+  r.get('/notifications', async (req, res) => {
     const repo = ds.getRepository(Notification);
     const [items, unread] = await Promise.all([
       repo.find({ where: { userId: req.user!.id }, order: { createdAt: 'DESC' }, take: 50 }),
@@ -16,7 +18,7 @@ export function notificationsRouter(ds: DataSource): Router {
     ]);
     res.json({ items: items.map(notificationJson), unread });
   });
-  router.post('/notifications/:id/read', async (req, res) => {
+  r.post('/notifications/:id/read', async (req, res) => {
     const repo = ds.getRepository(Notification);
     const n = await repo.findOneBy({ id: parseId(req.params.id), userId: req.user!.id });
     if (!n) throw notFound('Notice');
@@ -26,7 +28,7 @@ export function notificationsRouter(ds: DataSource): Router {
     }
     res.json(notificationJson(n));
   });
-  router.post('/notifications/read-all', async (req, res) => {
+  r.post('/notifications/read-all', async (req, res) => {
     await ds.getRepository(Notification).update({ userId: req.user!.id, readAt: IsNull() }, { readAt: new Date() });
     res.status(204).end();
   });

@@ -1,10 +1,11 @@
+import { secured } from '../auth/policy';
 import { Router, type Request, type Response } from 'express';
 import type { DataSource } from 'typeorm';
-import { requireRole } from '../auth/guards';
 import { conflict, forbidden, notFound } from '../common/errors';
 import { parseDto } from '../common/validate';
 import { Pairing, PairingReview } from '../entities';
 import { notifyUser } from '../notifications/notifications.service';
+import { audit } from '../audit/audit';
 import { ResourceService, parseId } from '../registry/resource';
 import { RequiredCommentDto, ReviewDto } from '../registry/registry.dto';
 
@@ -16,7 +17,7 @@ type Decision = 'approved' | 'rejected' | 'retired';
  */
 export function pairingActionsRouter(ds: DataSource, pairings: ResourceService<Pairing>): Router {
   const router = Router();
-  const reviewers = requireRole('engineer', 'admin');
+  const r = secured(router);
 
   const decide = (decision: Decision) => async (req: Request, res: Response) => {
     const id = parseId(req.params.id);
@@ -42,6 +43,7 @@ export function pairingActionsRouter(ds: DataSource, pairings: ResourceService<P
       pairing.updatedAt = new Date();
       await m.save(pairing);
       const comment = body.comment?.trim() || (decision === 'approved' ? 'Approved.' : '');
+      await audit(m, { userId: user.id, action: decision === 'approved' ? 'approve' : decision === 'rejected' ? 'reject' : 'retire', entity: 'pairings', entityId: id, summary: `Pairing ${decision}: ${comment}`, after: { status: pairing.status, comment } });
       await m.save(m.create(PairingReview, { pairingId: id, reviewerId: user.id, decision, comment }));
       if (decision !== 'retired' && pairing.authorId !== user.id) {
         const full = await m.findOne(Pairing, { where: { id }, relations: { dipTube: true, connector: true } });
@@ -57,9 +59,9 @@ export function pairingActionsRouter(ds: DataSource, pairings: ResourceService<P
     res.json(await pairings.detail(id));
   };
 
-  router.post('/pairings/:id/approve', reviewers, decide('approved'));
-  router.post('/pairings/:id/reject', reviewers, decide('rejected'));
-  router.post('/pairings/:id/retire', reviewers, decide('retired'));
+  r.post('/pairings/:id/approve', decide('approved'));
+  r.post('/pairings/:id/reject', decide('rejected'));
+  r.post('/pairings/:id/retire', decide('retired'));
   return router;
 }
 

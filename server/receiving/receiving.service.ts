@@ -5,6 +5,7 @@ import { FitCheckService } from '../fit/fit-check.service';
 import { notifyRoles } from '../notifications/notifications.service';
 import { ensureExists } from '../registry/refs';
 import { needsForStation, orderLines, totalOrder, type StationNeed } from '../sourcing/hardware-needs';
+import { audit } from '../audit/audit';
 import type { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
 
 const RELATIONS = { supplier: true, slurry: true, drumType: true, station: true, checkedBy: true, heldBy: true, releasedBy: true } as const;
@@ -136,6 +137,7 @@ export class ReceivingService {
       r.heldById = userId;
       r.heldAt = new Date();
       await m.save(r);
+      await audit(m, { userId, action: 'hold', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} put on hold: ${r.holdReason}`, after: { status: r.status, holdReason: r.holdReason } });
 
       const what = `Lot ${r.lotNumber} (${r.drumCount} drum${r.drumCount === 1 ? '' : 's'}${drumType ? `, ${drumType.name}` : ''})`;
       let needs: StationNeed[] = [];
@@ -185,6 +187,7 @@ export class ReceivingService {
       r.releasedAt = new Date();
       r.releaseComment = dto.comment.trim();
       await m.save(r);
+      await audit(m, { userId, action: 'release', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} released: ${r.releaseComment}`, before: { status: 'on-hold' }, after: { status: r.status } });
     });
     return this.detail(id);
   }

@@ -1,8 +1,8 @@
+import { secured } from '../auth/policy';
 import { Router, type Request } from 'express';
 import type { ClassConstructor } from 'class-transformer';
 import type { DataSource, EntityManager, EntityTarget, ObjectLiteral, SelectQueryBuilder } from 'typeorm';
-import type { Role } from '../../shared/roles';
-import { requireRole } from '../auth/guards';
+import { audit } from '../audit/audit';
 import { conflict, fieldError, notFound } from '../common/errors';
 import { translateDbError } from '../common/db-errors';
 import { parseDto } from '../common/validate';
@@ -48,7 +48,6 @@ export interface ResourceDef<E extends ObjectLiteral> {
   toColumns: (dto: Record<string, unknown>, ctx: WriteContext) => Promise<Partial<E>>;
   /** Writes child rows (drum openings) after the record itself. */
   afterWrite?: (record: E, dto: Record<string, unknown>, ctx: WriteContext) => Promise<void>;
-  writeRoles?: Role[];
   /** Extra fields on the detail answer (relations to other records). */
   detailExtras?: (record: E, manager: EntityManager) => Promise<object>;
 }
@@ -111,7 +110,10 @@ export class ResourceService<E extends ObjectLiteral> {
         const columns = await this.def.toColumns(dto, ctx);
         const saved = await manager.getRepository(this.def.entity).save(manager.getRepository(this.def.entity).create(columns as E));
         if (this.def.afterWrite) await this.def.afterWrite(saved, dto, ctx);
-        return (saved as ObjectLiteral).id as string;
+        const id = (saved as ObjectLiteral).id as string;
+        const after = this.def.toJson(await this.findEntity(id, manager));
+        await audit(manager, { userId: user.id, action: 'create', entity: this.def.path, entityId: id, summary: `${this.def.label} created`, after });
+        return id;
       })
       .catch(translateDbError);
     return this.detail(id);
@@ -133,18 +135,21 @@ export class ResourceService<E extends ObjectLiteral> {
           });
         }
         const ctx = { manager, user, existing };
+        const before = this.def.toJson(await this.findEntity(id, manager));
         const columns = await this.def.toColumns(dto, ctx);
         const merged = manager.getRepository(this.def.entity).merge(existing as E, columns as never);
         // Touch the row even when only children change, so its version moves on.
         (merged as ObjectLiteral).updatedAt = new Date();
         const saved = await manager.getRepository(this.def.entity).save(merged);
         if (this.def.afterWrite) await this.def.afterWrite(saved, dto, ctx);
+        const after = this.def.toJson(await this.findEntity(id, manager));
+        await audit(manager, { userId: user.id, action: 'update', entity: this.def.path, entityId: id, summary: `${this.def.label} changed: ${Object.keys(dto).join(', ')}`, before, after });
       })
       .catch(translateDbError);
     return this.detail(id);
   }
 
-  async remove(id: string, version: unknown): Promise<void> {
+  async remove(id: string, version: unknown, user: Express.User): Promise<void> {
     const v = Number(version);
     if (!Number.isInteger(v)) throw fieldError('version', 'is required: the version you last read');
     await this.ds
@@ -152,7 +157,9 @@ export class ResourceService<E extends ObjectLiteral> {
         const existing = await manager.getRepository(this.def.entity).findOne({ where: { id } as never, lock: { mode: 'pessimistic_write' } });
         if (!existing) throw notFound(this.def.label);
         if (existing.version !== v) throw conflict(`Someone else changed this ${this.def.label.toLowerCase()} first; reload before deleting.`, { current: this.def.toJson(await this.findEntity(id, manager)) });
+        const before = this.def.toJson(await this.findEntity(id, manager));
         await manager.getRepository(this.def.entity).delete(id);
+        await audit(manager, { userId: user.id, action: 'delete', entity: this.def.path, entityId: id, summary: `${this.def.label} deleted`, before });
       })
       .catch(translateDbError);
   }
@@ -162,26 +169,26 @@ async function listQuery(req: Request): Promise<ListQueryDto> {
   return parseDto(ListQueryDto, { ...(req.query as object) });
 }
 
-/** Everyone signed in reads; the resource's write roles (engineers and admins by default) write. */
+/** List, detail, create, update and delete; who may call each is in the policy table (server/auth/policy.ts). */
 export function resourceRouter<E extends ObjectLiteral>(ds: DataSource, def: ResourceDef<E>): { router: Router; service: ResourceService<E> } {
   const service = new ResourceService(ds, def);
-  const writers = requireRole(...(def.writeRoles ?? ['engineer', 'admin']));
   const router = Router();
+  const r = secured(router);
   const path = `/${def.path}`;
-  router.get(path, async (req, res) => {
+  r.get(path, async (req, res) => {
     res.json(await service.list(await listQuery(req)));
   });
-  router.get(`${path}/:id`, async (req, res) => {
+  r.get(`${path}/:id`, async (req, res) => {
     res.json(await service.detail(parseId(req.params.id)));
   });
-  router.post(path, writers, async (req, res) => {
+  r.post(path, async (req, res) => {
     res.status(201).json(await service.create(req.body, req.user!));
   });
-  router.patch(`${path}/:id`, writers, async (req, res) => {
+  r.patch(`${path}/:id`, async (req, res) => {
     res.json(await service.update(parseId(req.params.id), req.body, req.user!));
   });
-  router.delete(`${path}/:id`, writers, async (req, res) => {
-    await service.remove(parseId(req.params.id), req.query.version);
+  r.delete(`${path}/:id`, async (req, res) => {
+    await service.remove(parseId(req.params.id), req.query.version, req.user!);
     res.status(204).end();
   });
   return { router, service };

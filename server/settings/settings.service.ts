@@ -3,6 +3,7 @@ import { resolveSettings } from '../../shared/fit/rules';
 import type { FitSettings } from '../../shared/fit/types';
 import { conflict, fieldError } from '../common/errors';
 import { SiteSettings } from '../entities';
+import { audit } from '../audit/audit';
 import type { SettingsDto } from '../registry/registry.dto';
 
 export async function loadSettings(m: EntityManager): Promise<SiteSettings> {
@@ -33,13 +34,16 @@ export const settingsJson = (s: SiteSettings) => ({
   updatedAt: s.updatedAt,
 });
 
-export async function updateSettings(ds: DataSource, dto: SettingsDto) {
+export async function updateSettings(ds: DataSource, dto: SettingsDto, userId: string) {
   return ds.transaction(async (m) => {
     const row = await loadSettings(m);
     if (row.version !== dto.version) throw conflict('Someone else changed the site settings first; review them and save again.', { current: settingsJson(row) });
     const { version: _v, ...changes } = dto;
     Object.assign(row, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
     if (row.tipClearanceMaxMm <= row.tipClearanceMinMm) throw fieldError('tipClearanceMaxMm', 'must be more than the minimum clearance');
-    return settingsJson(await m.save(row));
+    const before = settingsJson(await loadSettings(m));
+    const saved = settingsJson(await m.save(row));
+    await audit(m, { userId, action: 'update', entity: 'settings', entityId: row.id, summary: 'Site settings changed', before, after: saved });
+    return saved;
   });
 }

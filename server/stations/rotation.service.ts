@@ -2,6 +2,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { rinseCheck } from '../../shared/fit/rules';
 import { conflict, fieldError, notFound } from '../common/errors';
 import { ChangeOut, ReceivingCheck, RinseLog, Station, TubeSet } from '../entities';
+import { audit } from '../audit/audit';
 import type { RinseDto, StandbyDto } from './rotation.dto';
 
 /**
@@ -29,11 +30,12 @@ export class RotationService {
       set.lastRinsedById = userId;
       await m.save(set);
       await m.save(m.create(RinseLog, { tubeSetId: set.id, rinsedById: userId, rinsedAt: now, note: dto.note?.trim() || null }));
+      await audit(m, { userId, action: 'rinse', entity: 'tube-sets', entityId: set.id, summary: `${set.label} rinsed with DI water`, before: { state: 'cleaning' }, after: { state: 'ready' } });
     });
   }
 
   /** Clean and ready -> standby: the set is threaded into the next drum. Refused without a rinse since its last drum. */
-  async standby(id: string, dto: StandbyDto): Promise<void> {
+  async standby(id: string, dto: StandbyDto, userId: string): Promise<void> {
     await this.ds.transaction(async (m) => {
       const set = await this.lockSet(m, id, dto.version);
       if (set.state !== 'ready') throw conflict(`${set.label} is ${set.state}; only a clean and ready set goes into the standby drum.`);
@@ -54,6 +56,7 @@ export class RotationService {
       set.currentLotNumber = lotNumber;
       set.currentDrumSerial = dto.drumSerial?.trim() || null;
       await m.save(set);
+      await audit(m, { userId, action: 'standby', entity: 'tube-sets', entityId: set.id, summary: `${set.label} into the standby drum${lotNumber ? ` (lot ${lotNumber})` : ''}`, before: { state: 'ready' }, after: { state: 'standby', lotNumber } });
     });
   }
 
@@ -95,6 +98,7 @@ export class RotationService {
           at: now,
         }),
       );
+      await audit(m, { userId, action: 'change-out', entity: 'stations', entityId: stationId, summary: `${station.name}: ${standby.label} online${online ? `, ${online.label} out for cleaning` : ''}`, after: { online: standby.id, cleaning: online?.id ?? null, lotNumber: standby.currentLotNumber } });
     });
   }
 

@@ -1,3 +1,4 @@
+import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { computePortFlow } from '../../shared/flow';
@@ -28,8 +29,9 @@ const rowOf = (t: ThreadSpec): ThreadSpecRow => ({
 /** The calculators. They only read, so every signed-in role may use them. */
 export function toolsRouter(ds: DataSource): Router {
   const router = Router();
+  const r = secured(router);
 
-  router.post('/tools/thread-match', body(ThreadMatchDto), async (req, res) => {
+  r.post('/tools/thread-match', body(ThreadMatchDto), async (req, res) => {
     const dto = req.body as ThreadMatchDto;
     const settings = fitSettingsOf(await loadSettings(ds.manager));
     // Matched against the site's thread table (the published rows plus any an engineer added).
@@ -48,7 +50,7 @@ export function toolsRouter(ds: DataSource): Router {
     res.json(result);
   });
 
-  router.post('/tools/flow', body(FlowDto), async (req, res) => {
+  r.post('/tools/flow', body(FlowDto), async (req, res) => {
     const dto = req.body as FlowDto;
     const settings = fitSettingsOf(await loadSettings(ds.manager));
     const flowM3s = flowToM3s(dto.flow.value, dto.flow.unit as FlowUnit);
@@ -56,13 +58,13 @@ export function toolsRouter(ds: DataSource): Router {
     res.json({ ...result, flow: { value: dto.flow.value, unit: dto.flow.unit }, flowGpm: fromM3s(flowM3s, 'gal/min'), flowM3h: fromM3s(flowM3s, 'm3/h'), laminarLimit: settings.laminarLimit });
   });
 
-  router.get('/tools/packaging-codes/:code', async (req, res) => {
+  r.get('/tools/packaging-codes/:code', async (req, res) => {
     const parsed = parsePackagingCode(String(req.params.code));
     if (!parsed.ok) throw badRequest('invalid_packaging_code', parsed.error, [{ field: 'code', messages: [parsed.error] }]);
     res.json(parsed);
   });
 
-  router.get('/tools/drum-types/:id/checks', async (req, res) => {
+  r.get('/tools/drum-types/:id/checks', async (req, res) => {
     const drum = await ds.manager.findOneBy(DrumType, { id: parseId(req.params.id) });
     if (!drum) throw fieldError('id', 'does not name an existing drum type');
     const settings = fitSettingsOf(await loadSettings(ds.manager));

@@ -1,6 +1,6 @@
+import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
-import { requireRole } from '../auth/guards';
 import { toPublicUser } from '../auth/auth.service';
 import { fieldError } from '../common/errors';
 import { body } from '../common/validate';
@@ -13,23 +13,24 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 export function usersRouter(ds: DataSource): Router {
   const service = new UsersService(ds);
   const router = Router();
+  const r = secured(router);
 
-  router.get('/me', async (req, res) => {
+  r.get('/me', async (req, res) => {
     const user = await ds.getRepository(User).findOneByOrFail({ id: req.user!.id });
     res.json({ user: toPublicUser(user) });
   });
-  router.patch('/me', body(UpdateMeDto), async (req, res) => {
+  r.patch('/me', body(UpdateMeDto), async (req, res) => {
     res.json({ user: await service.updateMe(req.user!.id, req.body as UpdateMeDto) });
   });
 
-  router.get('/users', requireRole('admin'), async (_req, res) => {
+  r.get('/users', async (_req, res) => {
     const items = await service.list();
     res.json({ items, total: items.length, page: 1, pageSize: items.length });
   });
-  router.post('/users', requireRole('admin'), body(CreateUserDto), async (req, res) => {
-    res.status(201).json(await service.create(req.body as CreateUserDto));
+  r.post('/users', body(CreateUserDto), async (req, res) => {
+    res.status(201).json(await service.create(req.body as CreateUserDto, req.user!.id));
   });
-  router.patch('/users/:id', requireRole('admin'), body(UpdateUserDto), async (req, res) => {
+  r.patch('/users/:id', body(UpdateUserDto), async (req, res) => {
     const id = String(req.params.id);
     if (!UUID.test(id)) throw fieldError('id', 'must be a user id');
     res.json(await service.update(id, req.body as UpdateUserDto, req.user!.id));

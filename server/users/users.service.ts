@@ -3,6 +3,7 @@ import { conflict, fieldError, notFound } from '../common/errors';
 import { User } from '../entities';
 import { hashPassword, passwordProblem } from '../auth/passwords';
 import { toPublicUser, type PublicUser } from '../auth/auth.service';
+import { audit } from '../audit/audit';
 import type { CreateUserDto, UpdateMeDto, UpdateUserDto } from './users.dto';
 
 export class UsersService {
@@ -13,7 +14,7 @@ export class UsersService {
     return users.map(toPublicUser);
   }
 
-  async create(dto: CreateUserDto): Promise<PublicUser> {
+  async create(dto: CreateUserDto, actingUserId: string): Promise<PublicUser> {
     const problem = passwordProblem(dto.temporaryPassword);
     if (problem) throw fieldError('temporaryPassword', problem);
     const email = dto.email.trim().toLowerCase();
@@ -27,7 +28,11 @@ export class UsersService {
       active: true,
       mustChangePassword: true,
     });
-    return toPublicUser(await repo.save(user));
+    return this.ds.transaction(async (m) => {
+      const saved = await m.save(user);
+      await audit(m, { userId: actingUserId, action: 'create', entity: 'users', entityId: saved.id, summary: `Person added: ${saved.email} as ${saved.role}`, after: toPublicUser(saved) });
+      return toPublicUser(saved);
+    });
   }
 
   async update(id: string, dto: UpdateUserDto, actingUserId: string): Promise<PublicUser> {
@@ -37,10 +42,15 @@ export class UsersService {
     if (id === actingUserId && (dto.active === false || (dto.role && dto.role !== 'admin'))) {
       throw fieldError(dto.active === false ? 'active' : 'role', 'you cannot deactivate yourself or remove your own administrator role');
     }
+    const before = toPublicUser(user);
     if (dto.role) user.role = dto.role;
     if (dto.active !== undefined) user.active = dto.active;
     if (dto.name) user.displayName = dto.name.trim();
-    return toPublicUser(await repo.save(user));
+    return this.ds.transaction(async (m) => {
+      const saved = toPublicUser(await m.save(user));
+      await audit(m, { userId: actingUserId, action: 'update', entity: 'users', entityId: id, summary: `Person changed: ${saved.email}`, before, after: saved });
+      return saved;
+    });
   }
 
   /** The signed-in person's own preferences: length unit and which kinds of mail they want. */
