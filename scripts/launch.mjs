@@ -6,9 +6,9 @@ import { spawn, spawnSync } from 'node:child_process';
 import { createHash, randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import net from 'node:net';
-import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { fallbackDataDir, findPgBin } from './lib/cluster.mjs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const mode = process.argv[2];
@@ -86,20 +86,7 @@ function checkDiskSpace() {
   }
 }
 
-// 2. PostgreSQL server binaries, from Debian's `postgresql` package.
-function findPgBin() {
-  const base = '/usr/lib/postgresql';
-  if (fs.existsSync(base)) {
-    const versions = fs
-      .readdirSync(base)
-      .filter((v) => fs.existsSync(path.join(base, v, 'bin', 'initdb')))
-      .sort((a, b) => Number(b) - Number(a));
-    if (versions.length) return path.join(base, versions[0], 'bin');
-  }
-  const onPath = runQuiet('sh', ['-c', 'command -v initdb']).stdout?.trim();
-  return onPath ? path.dirname(onPath) : null;
-}
-
+// 2. PostgreSQL server binaries, from Debian's `postgresql` package (findPgBin in scripts/lib/cluster.mjs).
 function ensurePostgresBinaries() {
   let bin = findPgBin();
   if (bin) return bin;
@@ -136,7 +123,7 @@ function prepareDataDirForRoot() {
   if (!isRoot) return;
   const probe = runQuiet('runuser', ['-u', 'postgres', '--', 'test', '-x', dataDir]);
   if (probe.status === 0) return;
-  const fallback = path.join(os.tmpdir(), `bungwise-${createHash('sha1').update(dataDir).digest('hex').slice(0, 10)}`);
+  const fallback = fallbackDataDir(dataDir);
   log(`The postgres user cannot reach ${dataDir}; keeping the cluster in ${fallback} instead (set BUNGWISE_DATA_DIR to choose).`);
   dataDir = fallback;
   fs.mkdirSync(dataDir, { recursive: true });
