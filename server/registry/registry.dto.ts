@@ -51,7 +51,7 @@ const NullableCode = (target: object, key: string) => {
 };
 
 export class VersionDto {
-  @IsInt({ message: 'is required: the version you last read' }) @Min(1) version: number;
+  @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
 }
 
 export class SupplierDto {
@@ -179,5 +179,5 @@ export class SettingsDto {
   @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(10) threadMatchToleranceMm?: number;
   @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(100) @Max(10000) laminarLimit?: number;
   @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
-  @IsInt({ message: 'is required: the version you last read' }) version: number;
+  @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
 }

@@ -8,6 +8,9 @@ import { translateDbError } from '../common/db-errors';
 import { parseDto } from '../common/validate';
 import { ListQueryDto } from './list-query';
 
+/** Versions are PostgreSQL integers. */
+export const MAX_VERSION = 2_147_483_647;
+
 export const UUID_RE = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export interface Page<T> {
@@ -122,7 +125,7 @@ export class ResourceService<E extends ObjectLiteral> {
   /** Optimistic locking: the body carries the version it was based on; a stale version gets 409 with the current record. */
   async update(id: string, body: unknown, user: Express.User): Promise<object> {
     const version = (body as { version?: unknown } | null)?.version;
-    if (typeof version !== 'number' || !Number.isInteger(version)) throw fieldError('version', 'is required: the version you last read');
+    if (typeof version !== 'number' || !Number.isInteger(version) || version < 1 || version > MAX_VERSION) throw fieldError('version', 'is required: the version you last read');
     const { version: _v, ...rest } = body as Record<string, unknown>;
     const dto = (await parseDto(this.def.dto, rest, { partial: true })) as Record<string, unknown>;
     await this.ds
@@ -151,7 +154,7 @@ export class ResourceService<E extends ObjectLiteral> {
 
   async remove(id: string, version: unknown, user: Express.User): Promise<void> {
     const v = Number(version);
-    if (!Number.isInteger(v)) throw fieldError('version', 'is required: the version you last read');
+    if (!Number.isInteger(v) || v < 1 || v > MAX_VERSION) throw fieldError('version', 'is required: the version you last read');
     await this.ds
       .transaction(async (manager) => {
         const existing = await manager.getRepository(this.def.entity).findOne({ where: { id } as never, lock: { mode: 'pessimistic_write' } });

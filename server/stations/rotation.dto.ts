@@ -1,4 +1,4 @@
-import { IsInt, IsOptional, IsString, IsUUID, MaxLength, Min } from 'class-validator';
+import { IsInt, Max, IsOptional, IsString, IsUUID, MaxLength, Min } from 'class-validator';
 
 export class RinseDto {
   @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(500, { message: 'must be at most 500 characters' }) note?: string;
@@ -9,9 +9,9 @@ export class StandbyDto {
   @IsOptional() @IsUUID('all', { message: 'must be an id' }) receivingCheckId?: string;
   @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(60) lotNumber?: string;
   @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(60) drumSerial?: string;
-  @IsInt({ message: 'is required: the version you last read' }) @Min(1) version: number;
+  @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
 }
 
 export class VersionedDto {
-  @IsInt({ message: 'is required: the version you last read' }) @Min(1) version: number;
+  @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
 }
