@@ -3,6 +3,7 @@ import { useState, type ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { ROLE_LABELS } from '@/shared/roles';
 import { isActive, navFor } from './navigation';
+import { NoticesIndicator } from './notifications/notices-indicator';
 import { useSession } from './session';
 import { colors, fonts, minTouch, radius, space, type } from './theme';
 import { Logo } from './ui/logo';
@@ -40,6 +41,7 @@ export function AppShell({ children }: { children: ReactNode }) {
       <View style={styles.wideRoot}>
         <View style={styles.side} role="navigation" aria-label="Main">
           <Logo inverse />
+          <NoticesIndicator inverse />
           <View style={styles.sideItems}>
             {items.map((item) => {
               const active = isActive(item.href, pathname);
@@ -65,6 +67,7 @@ export function AppShell({ children }: { children: ReactNode }) {
       <View style={styles.topBar}>
         <Logo />
         <View style={styles.topRight}>
+          <NoticesIndicator compact />
           {who}
           {signOut}
         </View>
@@ -125,8 +128,9 @@ const styles = StyleSheet.create({
     borderBottomWidth: 1,
     borderBottomColor: colors.line,
   },
-  topRight: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
-  who: { alignItems: 'flex-end' },
+  // The notices bell joined the top bar: name and role may wrap rather than push the bar past a phone's width.
+  topRight: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexShrink: 1 },
+  who: { alignItems: 'flex-end', flexShrink: 1 },
   signOut: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.sm, borderRadius: radius.md },
   signOutWide: { borderWidth: 1, borderColor: '#9CC3CA', alignItems: 'center' },
   signOutText: { fontFamily: fonts.semibold, fontSize: 15, color: colors.primary },

@@ -1,0 +1,3 @@
+import { NoticesScreen } from '@/components/notifications/notices-screen';
+
+export default NoticesScreen;

@@ -1,0 +1,3 @@
+import { HistoryScreen } from '@/components/receive/history-screen';
+
+export default HistoryScreen;

@@ -1,0 +1,3 @@
+import { DockCheckScreen } from '@/components/receive/dock-check-screen';
+
+export default DockCheckScreen;

@@ -1,0 +1,3 @@
+import { ConnectorListScreen } from '@/components/registry/connector-list-screen';
+
+export default ConnectorListScreen;

@@ -1,0 +1,5 @@
+import { ConnectorFormScreen } from '@/components/forms/connector-form';
+
+export default function NewConnectorRoute() {
+  return <ConnectorFormScreen />;
+}

@@ -1,0 +1,3 @@
+import { DipTubeListScreen } from '@/components/registry/dip-tube-list-screen';
+
+export default DipTubeListScreen;

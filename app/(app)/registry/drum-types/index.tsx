@@ -1,0 +1,3 @@
+import { DrumTypeListScreen } from '@/components/registry/drum-type-list-screen';
+
+export default DrumTypeListScreen;

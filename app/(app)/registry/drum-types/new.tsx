@@ -1,0 +1,5 @@
+import { DrumTypeFormScreen } from '@/components/forms/drum-type-form';
+
+export default function NewDrumTypeRoute() {
+  return <DrumTypeFormScreen />;
+}

@@ -1,0 +1,3 @@
+import { PairingListScreen } from '@/components/registry/pairing-list-screen';
+
+export default PairingListScreen;

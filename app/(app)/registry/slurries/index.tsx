@@ -1,0 +1,3 @@
+import { SlurryListScreen } from '@/components/registry/slurry-list-screen';
+
+export default SlurryListScreen;

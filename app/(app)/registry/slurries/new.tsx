@@ -1,0 +1,5 @@
+import { SlurryFormScreen } from '@/components/forms/slurry-form';
+
+export default function NewSlurryRoute() {
+  return <SlurryFormScreen />;
+}

@@ -1,0 +1,3 @@
+import { SupplierListScreen } from '@/components/registry/supplier-list-screen';
+
+export default SupplierListScreen;

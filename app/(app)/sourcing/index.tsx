@@ -1,0 +1,3 @@
+import { PlansScreen } from '@/components/sourcing/plans-screen';
+
+export default PlansScreen;

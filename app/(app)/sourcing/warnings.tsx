@@ -1,0 +1,3 @@
+import { WarningsScreen } from '@/components/sourcing/warnings-screen';
+
+export default WarningsScreen;

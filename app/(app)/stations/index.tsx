@@ -1,0 +1,3 @@
+import { StationsScreen } from '@/components/stations/stations-screen';
+
+export default StationsScreen;

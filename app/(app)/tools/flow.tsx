@@ -1,0 +1,3 @@
+import { FlowScreen } from '@/components/tools/flow-screen';
+
+export default FlowScreen;

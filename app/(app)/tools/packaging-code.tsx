@@ -1,0 +1,3 @@
+import { PackagingCodeScreen } from '@/components/tools/packaging-code-screen';
+
+export default PackagingCodeScreen;

@@ -1,0 +1,3 @@
+import { ThreadScreen } from '@/components/tools/thread-screen';
+
+export default ThreadScreen;

@@ -1,0 +1,111 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { FitRuleRecord, TubeSetState } from '@/shared/api-types';
+import { api } from '../api/client';
+import { receivingKeys } from './receiving';
+import { stationQueries } from './stations';
+import { tubeSetQueries } from './tube-sets';
+
+export interface BoardTubeSet {
+  id: string;
+  version: number;
+  label: string;
+  state: TubeSetState;
+  dipTubeId: string;
+  dipTubePartNumber: string | null;
+  lastRinsedAt: string | null;
+  lastRinsedByName: string | null;
+  lastUsedAt: string | null;
+  currentLotNumber: string | null;
+  currentDrumSerial: string | null;
+  currentReceivingCheckId: string | null;
+  /** Whether the set may go into the next drum, by the shared rinse rule. */
+  rinse: FitRuleRecord;
+}
+
+export interface BoardChangeOut {
+  id: string;
+  at: string;
+  tubeSetLabel: string | null;
+  dipTubePartNumber: string | null;
+  connectorPartNumber: string | null;
+  lotNumber: string | null;
+  receivingCheckId: string | null;
+  drumSerial: string | null;
+  retiredTubeSetLabel: string | null;
+  byName: string | null;
+}
+
+export interface BoardRinse {
+  id: string;
+  at: string;
+  tubeSetLabel: string | null;
+  byName: string | null;
+  note: string | null;
+}
+
+export interface StationBoard {
+  station: { id: string; version: number; name: string; bay: string; tapping: 'two-opening' | 'one-opening'; agitation: 'pump' | 'mechanical'; flowLpm: number; connectorId: string | null; connectorPartNumber: string | null };
+  tubeSets: BoardTubeSet[];
+  changeOuts: BoardChangeOut[];
+  rinses: BoardRinse[];
+}
+
+export interface StandbyInput {
+  id: string;
+  version: number;
+  receivingCheckId?: string;
+  lotNumber?: string;
+  drumSerial?: string;
+}
+
+export const stationBoardKeys = {
+  all: ['station-board'] as const,
+  board: (stationId: string) => ['station-board', stationId] as const,
+};
+
+export function useStationBoardQuery(stationId: string | undefined) {
+  return useQuery({ queryKey: stationBoardKeys.board(stationId ?? ''), queryFn: () => api<StationBoard>(`/stations/${stationId}/board`), enabled: !!stationId });
+}
+
+/**
+ * Every rotation move changes the board, the station list (which shows each set's state and drum) and, for a
+ * change-out, the lot's hardware history; all of them are refreshed after a move, and after a refusal too
+ * (a 409 may mean someone else moved the set first).
+ */
+function useRefreshAfterMove() {
+  const qc = useQueryClient();
+  return () =>
+    Promise.all([
+      qc.invalidateQueries({ queryKey: stationBoardKeys.all }),
+      qc.invalidateQueries({ queryKey: tubeSetQueries.keys.all }),
+      qc.invalidateQueries({ queryKey: stationQueries.keys.all }),
+      qc.invalidateQueries({ queryKey: receivingKeys.all }),
+    ]);
+}
+
+/** Cleaning -> clean and ready, recorded in the rinse log with who and when. */
+export function useRinseMutation() {
+  const refresh = useRefreshAfterMove();
+  return useMutation({
+    mutationFn: ({ id, note }: { id: string; note?: string }) => api<void>(`/tube-sets/${id}/rinse`, { method: 'POST', body: note ? { note } : {} }),
+    onSettled: refresh,
+  });
+}
+
+/** Clean and ready -> standby drum; refused (409) without a rinse since the set's last drum. */
+export function useStandbyMutation() {
+  const refresh = useRefreshAfterMove();
+  return useMutation({
+    mutationFn: ({ id, ...body }: StandbyInput) => api<void>(`/tube-sets/${id}/standby`, { method: 'POST', body }),
+    onSettled: refresh,
+  });
+}
+
+/** Standby -> online, online -> cleaning; the change-out is recorded with the lot, drum, set and head. */
+export function useChangeOutMutation() {
+  const refresh = useRefreshAfterMove();
+  return useMutation({
+    mutationFn: (stationId: string) => api<void>(`/stations/${stationId}/change-out`, { method: 'POST' }),
+    onSettled: refresh,
+  });
+}

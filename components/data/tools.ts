@@ -1,0 +1,71 @@
+import { useMutation, useQuery } from '@tanstack/react-query';
+import type { PortFlowResult } from '@/shared/flow';
+import type { PackagingFinding, ParsedPackagingCode } from '@/shared/packaging-code';
+import type { LengthRecommendation } from '@/shared/recommend-length';
+import type { ThreadIdentification } from '@/shared/threads/identify';
+import type { FlowUnit, LengthUnit } from '@/shared/units';
+import { api } from '../api/client';
+import { drumTypeQueries } from './drum-types';
+
+export type { ThreadIdentification, ParsedPackagingCode, PackagingFinding, LengthRecommendation };
+
+export interface ThreadMatchInput {
+  majorDiameter: { value: number; unit: LengthUnit };
+  threadsPerInch?: number;
+  pitchMm?: number;
+  flankAngleDeg?: number;
+  taper?: 'tapered' | 'parallel';
+}
+
+export interface FlowInput {
+  flow: { value: number; unit: FlowUnit };
+  feedBoreMm: number;
+  returnBoreMm?: number | null;
+}
+
+/** POST /api/tools/flow: the shared computation plus the flow echoed in the other units and the site's laminar limit. */
+export interface FlowAnswer extends PortFlowResult {
+  flow: { value: number; unit: FlowUnit };
+  flowGpm: number;
+  flowM3h: number;
+  laminarLimit: number;
+}
+
+export interface DrumTypeChecks {
+  recommendedLength: LengthRecommendation;
+  packaging: PackagingFinding[];
+}
+
+export const toolKeys = {
+  packagingCode: (code: string) => ['tools', 'packaging-code', code] as const,
+  // Under the drum-types key, so editing a drum type (which invalidates drum-types) refreshes its checks.
+  drumTypeChecks: (id: string) => [...drumTypeQueries.keys.all, 'checks', id] as const,
+};
+
+/** Thread identification from dock measurements; a calculation, so a mutation the screen re-runs on submit. */
+export function useThreadMatchMutation() {
+  return useMutation({ mutationFn: (input: ThreadMatchInput) => api<ThreadIdentification>('/tools/thread-match', { method: 'POST', body: input }) });
+}
+
+export function useFlowMutation() {
+  return useMutation({ mutationFn: (input: FlowInput) => api<FlowAnswer>('/tools/flow', { method: 'POST', body: input }) });
+}
+
+/** The explanation of one UN packaging code; nothing is asked until a code is given. */
+export function usePackagingCodeQuery(code: string | null) {
+  return useQuery({
+    queryKey: toolKeys.packagingCode(code ?? ''),
+    queryFn: () => api<ParsedPackagingCode>(`/tools/packaging-codes/${encodeURIComponent(code ?? '')}`),
+    enabled: !!code,
+    staleTime: Infinity,
+  });
+}
+
+/** Recommended tube length and the UN packaging-code findings for one drum type. */
+export function useDrumTypeChecksQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: toolKeys.drumTypeChecks(id ?? ''),
+    queryFn: () => api<DrumTypeChecks>(`/tools/drum-types/${id}/checks`),
+    enabled: !!id,
+  });
+}

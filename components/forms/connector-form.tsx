@@ -1,0 +1,161 @@
+import { router } from 'expo-router';
+import { Text } from 'react-native';
+import { connectorQueries, type ConnectorRecord } from '../data/connectors';
+import { type } from '../theme';
+import { ChoiceChips } from '../ui/choice-chips';
+import { lengthDraft, LengthField, type LengthDraft } from '../ui/number-field';
+import type { PickedRef } from '../ui/record-picker';
+import { TextField } from '../ui/text-field';
+import { Checks, mmOf } from './checks';
+import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { optionLabel, RETURN_PATH_OPTIONS, SUITED_OPTIONS } from './options';
+import { KeyCodePicker, SupplierPicker } from './pickers';
+import { useRecordForm, type FormSpec } from './use-record-form';
+
+type ReturnPath = ConnectorRecord['returnPath'];
+type SuitedTo = ConnectorRecord['suitedTo'];
+
+export type ConnectorDraft = {
+  partNumber: string;
+  supplierId: PickedRef | null;
+  keyCode: PickedRef | null;
+  suitedTo: SuitedTo | null;
+  wettedMaterials: string;
+  feedBoreMm: LengthDraft;
+  feedNominal: string;
+  returnPath: ReturnPath | null;
+  returnBoreMm: LengthDraft;
+  returnNominal: string;
+};
+
+const LABELS: Record<string, string> = {
+  partNumber: 'Part number',
+  supplierId: 'Supplier',
+  keyCode: 'Key code',
+  suitedTo: 'Suited to',
+  wettedMaterials: 'Wetted materials',
+  feedBoreMm: 'Feed port bore',
+  feedNominal: 'Feed port size',
+  returnPath: 'Return path',
+  returnBoreMm: 'Return port bore',
+  returnNominal: 'Return port size',
+};
+
+const code = (c: string | null): PickedRef | null => (c ? { id: c, label: c } : null);
+const hasReturn = (d: ConnectorDraft) => d.returnPath !== null && d.returnPath !== 'none';
+
+export const connectorSpec: FormSpec<ConnectorRecord, ConnectorDraft> = {
+  noun: 'connector',
+  empty: (unit) => ({
+    partNumber: '',
+    supplierId: null,
+    keyCode: null,
+    suitedTo: null,
+    wettedMaterials: '',
+    feedBoreMm: lengthDraft(null, unit),
+    feedNominal: '',
+    returnPath: null,
+    returnBoreMm: lengthDraft(null, unit),
+    returnNominal: '',
+  }),
+  fromRecord: (c, unit) => ({
+    partNumber: c.partNumber,
+    supplierId: { id: c.supplierId, label: c.supplierName ?? 'Supplier' },
+    keyCode: code(c.keyCode),
+    suitedTo: c.suitedTo,
+    wettedMaterials: c.wettedMaterials,
+    feedBoreMm: lengthDraft(c.feedBoreMm, unit),
+    feedNominal: c.feedNominal,
+    returnPath: c.returnPath,
+    returnBoreMm: lengthDraft(c.returnBoreMm, unit),
+    returnNominal: c.returnNominal ?? '',
+  }),
+  check: (d) => {
+    const c = new Checks();
+    c.text('partNumber', 'Part number', d.partNumber, { max: 60 });
+    c.pick('supplierId', 'Supplier', d.supplierId, 'the supplier who sells it');
+    c.choice('suitedTo', 'Suited to', d.suitedTo);
+    c.text('wettedMaterials', 'Wetted materials', d.wettedMaterials, { max: 200 });
+    c.length('feedBoreMm', 'Feed port bore', d.feedBoreMm, { maxMm: 200 });
+    c.text('feedNominal', 'Feed port size', d.feedNominal, { max: 20 });
+    c.choice('returnPath', 'Return path', d.returnPath);
+    if (hasReturn(d)) {
+      c.length('returnBoreMm', 'Return port bore', d.returnBoreMm, { maxMm: 200 });
+      c.text('returnNominal', 'Return port size', d.returnNominal, { max: 20 });
+    }
+    return c.errors;
+  },
+  // A head without a return path has no return port: its fields are sent empty.
+  toBody: (d) => ({
+    partNumber: d.partNumber.trim(),
+    supplierId: d.supplierId!.id,
+    keyCode: d.keyCode?.id ?? null,
+    suitedTo: d.suitedTo,
+    wettedMaterials: d.wettedMaterials.trim(),
+    feedBoreMm: mmOf(d.feedBoreMm),
+    feedNominal: d.feedNominal.trim(),
+    returnPath: d.returnPath,
+    returnBoreMm: hasReturn(d) ? mmOf(d.returnBoreMm) : null,
+    returnNominal: hasReturn(d) ? d.returnNominal.trim() : null,
+  }),
+  labelOf: (path) => LABELS[path],
+  describe: (key, d) => (key === 'suitedTo' ? optionLabel(SUITED_OPTIONS, d.suitedTo) : key === 'returnPath' ? optionLabel(RETURN_PATH_OPTIONS, d.returnPath) : undefined),
+};
+
+/** Create (no id) or edit a connector (dispense head). */
+export function ConnectorFormScreen({ id }: { id?: string }) {
+  const form = useRecordForm({ spec: connectorSpec, source: connectorQueries, id, onSaved: (c) => router.replace(`/registry/connectors/${c.id}` as never) });
+  const { draft, set, field } = form;
+  const setReturnPath = (v: ReturnPath) => {
+    set('returnPath', v);
+    // Hidden fields must not keep a value that would be saved behind the person's back.
+    if (v === 'none') {
+      set('returnBoreMm', lengthDraft(null, draft.returnBoreMm.unit));
+      set('returnNominal', '');
+    }
+  };
+  return (
+    <FormFrame
+      form={form}
+      title={id ? `Edit connector ${form.base?.partNumber ?? ''}`.trim() : 'New connector'}
+      subtitle="A dispense head: its ports, keying and the tapping it is made for."
+      testID="connector-form"
+      cancelTo={id ? `/registry/connectors/${id}` : '/registry/connectors'}
+    >
+      <FormSection title="Part">
+        <TextField label="Part number" value={draft.partNumber} onChangeText={(v) => set('partNumber', v)} autoCapitalize="characters" autoCorrect={false} testID="form-partNumber" {...field('partNumber')} />
+        <SupplierPicker value={draft.supplierId} onChange={(p) => set('supplierId', p)} testID="form-supplierId" {...field('supplierId')} />
+        <TextField label="Wetted materials" hint="Everything the slurry touches, e.g. PFA, PTFE, FFKM seals." value={draft.wettedMaterials} onChangeText={(v) => set('wettedMaterials', v)} testID="form-wettedMaterials" {...field('wettedMaterials')} />
+      </FormSection>
+      <FormSection title="Keying and tapping">
+        <KeyCodePicker hint="The collar key on the head, if the site keys this line." value={draft.keyCode} onChange={(p) => set('keyCode', p)} testID="form-keyCode" {...field('keyCode')} />
+        <ChoiceChips label="Suited to" options={SUITED_OPTIONS} value={draft.suitedTo} onChange={(v) => set('suitedTo', v)} error={field('suitedTo').error} testID="form-suitedTo" />
+      </FormSection>
+      <FormSection title="Ports" full>
+        <FieldRow>
+          <FieldCell>
+            <LengthField label="Feed port bore" value={draft.feedBoreMm} onChange={(v) => set('feedBoreMm', v)} testID="form-feedBoreMm" {...field('feedBoreMm')} />
+          </FieldCell>
+          <FieldCell>
+            <TextField label="Feed port size" hint="As marked, e.g. 3/4 in." value={draft.feedNominal} onChangeText={(v) => set('feedNominal', v)} testID="form-feedNominal" {...field('feedNominal')} />
+          </FieldCell>
+        </FieldRow>
+        <ChoiceChips label="Return path" options={RETURN_PATH_OPTIONS} value={draft.returnPath} onChange={setReturnPath} error={field('returnPath').error} testID="form-returnPath" />
+        {hasReturn(draft) ? (
+          <FieldRow>
+            <FieldCell>
+              <LengthField label="Return port bore" value={draft.returnBoreMm} onChange={(v) => set('returnBoreMm', v)} testID="form-returnBoreMm" {...field('returnBoreMm')} />
+            </FieldCell>
+            <FieldCell>
+              <TextField label="Return port size" hint="As marked, e.g. 1/2 in." value={draft.returnNominal} onChangeText={(v) => set('returnNominal', v)} testID="form-returnNominal" {...field('returnNominal')} />
+            </FieldCell>
+          </FieldRow>
+        ) : draft.returnPath === 'none' ? (
+          <Text style={type.small} testID="form-no-return">
+            No return port: this head suits two-opening tapping, where the slurry returns through the other opening.
+          </Text>
+        ) : null}
+      </FormSection>
+    </FormFrame>
+  );
+}

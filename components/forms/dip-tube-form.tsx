@@ -1,0 +1,130 @@
+import { router } from 'expo-router';
+import { dipTubeQueries, type DipTubeRecord } from '../data/dip-tubes';
+import { ChoiceChips } from '../ui/choice-chips';
+import { lengthDraft, LengthField, type LengthDraft } from '../ui/number-field';
+import type { PickedRef } from '../ui/record-picker';
+import { TextField } from '../ui/text-field';
+import { Checks, mmOf } from './checks';
+import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { CHANNEL_OPTIONS, optionLabel } from './options';
+import { KeyCodePicker, SupplierPicker, ThreadPicker } from './pickers';
+import { useRecordForm, type FormSpec } from './use-record-form';
+
+type Channels = DipTubeRecord['channels'];
+
+export type DipTubeDraft = {
+  partNumber: string;
+  supplierId: PickedRef | null;
+  material: string;
+  threadCode: PickedRef | null;
+  keyCode: PickedRef | null;
+  channels: Channels | null;
+  lengthMm: LengthDraft;
+  boreMm: LengthDraft;
+  odMm: LengthDraft;
+};
+
+const LABELS: Record<string, string> = {
+  partNumber: 'Part number',
+  supplierId: 'Supplier',
+  material: 'Material',
+  threadCode: 'Thread',
+  keyCode: 'Key code',
+  channels: 'Channels',
+  lengthMm: 'Length',
+  boreMm: 'Bore',
+  odMm: 'Outside diameter',
+};
+
+const code = (c: string | null): PickedRef | null => (c ? { id: c, label: c } : null);
+
+export const dipTubeSpec: FormSpec<DipTubeRecord, DipTubeDraft> = {
+  noun: 'dip tube',
+  empty: (unit) => ({
+    partNumber: '',
+    supplierId: null,
+    material: '',
+    threadCode: null,
+    keyCode: null,
+    channels: null,
+    lengthMm: lengthDraft(null, unit),
+    boreMm: lengthDraft(null, unit),
+    odMm: lengthDraft(null, unit),
+  }),
+  fromRecord: (t, unit) => ({
+    partNumber: t.partNumber,
+    supplierId: { id: t.supplierId, label: t.supplierName ?? 'Supplier' },
+    material: t.material,
+    threadCode: code(t.threadCode),
+    keyCode: code(t.keyCode),
+    channels: t.channels,
+    lengthMm: lengthDraft(t.lengthMm, unit),
+    boreMm: lengthDraft(t.boreMm, unit),
+    odMm: lengthDraft(t.odMm, unit),
+  }),
+  check: (d) => {
+    const c = new Checks();
+    c.text('partNumber', 'Part number', d.partNumber, { max: 60 });
+    c.pick('supplierId', 'Supplier', d.supplierId, 'the supplier who sells it');
+    c.text('material', 'Material', d.material, { max: 40 });
+    c.pick('threadCode', 'Thread', d.threadCode, 'the thread it screws into');
+    c.choice('channels', 'Channels', d.channels);
+    c.length('lengthMm', 'Length', d.lengthMm, { maxMm: 3000 });
+    const bore = c.length('boreMm', 'Bore', d.boreMm, { maxMm: 200 });
+    const od = c.length('odMm', 'Outside diameter', d.odMm, { maxMm: 250 });
+    if (bore !== null && od !== null) c.rule('boreMm', bore < od, 'Bore must be smaller than the outside diameter.');
+    return c.errors;
+  },
+  toBody: (d) => ({
+    partNumber: d.partNumber.trim(),
+    supplierId: d.supplierId!.id,
+    material: d.material.trim(),
+    threadCode: d.threadCode!.id,
+    keyCode: d.keyCode?.id ?? null,
+    channels: d.channels,
+    lengthMm: mmOf(d.lengthMm),
+    boreMm: mmOf(d.boreMm),
+    odMm: mmOf(d.odMm),
+  }),
+  labelOf: (path) => LABELS[path],
+  describe: (key, d) => (key === 'channels' ? optionLabel(CHANNEL_OPTIONS, d.channels) : undefined),
+};
+
+/** Create (no id) or edit a dip tube. */
+export function DipTubeFormScreen({ id }: { id?: string }) {
+  const form = useRecordForm({ spec: dipTubeSpec, source: dipTubeQueries, id, onSaved: (t) => router.replace(`/registry/dip-tubes/${t.id}` as never) });
+  const { draft, set, field } = form;
+  return (
+    <FormFrame
+      form={form}
+      title={id ? `Edit dip tube ${form.base?.partNumber ?? ''}`.trim() : 'New dip tube'}
+      subtitle="Type lengths in mm or inches; they are saved in mm."
+      testID="dip-tube-form"
+      cancelTo={id ? `/registry/dip-tubes/${id}` : '/registry/dip-tubes'}
+    >
+      <FormSection title="Part">
+        <TextField label="Part number" value={draft.partNumber} onChangeText={(v) => set('partNumber', v)} autoCapitalize="characters" autoCorrect={false} testID="form-partNumber" {...field('partNumber')} />
+        <SupplierPicker value={draft.supplierId} onChange={(p) => set('supplierId', p)} testID="form-supplierId" {...field('supplierId')} />
+        <TextField label="Material" hint="The wetted material, e.g. PFA or PVDF." value={draft.material} onChangeText={(v) => set('material', v)} testID="form-material" {...field('material')} />
+      </FormSection>
+      <FormSection title="Thread and keying">
+        <ThreadPicker hint="The bung thread the tube's head screws into." value={draft.threadCode} onChange={(p) => set('threadCode', p)} testID="form-threadCode" {...field('threadCode')} />
+        <KeyCodePicker hint="The collar key on the tube, if the site keys this line." value={draft.keyCode} onChange={(p) => set('keyCode', p)} testID="form-keyCode" {...field('keyCode')} />
+        <ChoiceChips label="Channels" options={CHANNEL_OPTIONS} value={draft.channels} onChange={(v) => set('channels', v)} error={field('channels').error} testID="form-channels" />
+      </FormSection>
+      <FormSection title="Dimensions" full>
+        <FieldRow>
+          <FieldCell>
+            <LengthField label="Length" hint="From the bung seat to the tip." value={draft.lengthMm} onChange={(v) => set('lengthMm', v)} testID="form-lengthMm" {...field('lengthMm')} />
+          </FieldCell>
+          <FieldCell>
+            <LengthField label="Bore" hint="Inside diameter." value={draft.boreMm} onChange={(v) => set('boreMm', v)} testID="form-boreMm" {...field('boreMm')} />
+          </FieldCell>
+          <FieldCell>
+            <LengthField label="Outside diameter" hint="Must pass through the bung." value={draft.odMm} onChange={(v) => set('odMm', v)} testID="form-odMm" {...field('odMm')} />
+          </FieldCell>
+        </FieldRow>
+      </FormSection>
+    </FormFrame>
+  );
+}

@@ -1,0 +1,298 @@
+import { router } from 'expo-router';
+import { StyleSheet, Text, View } from 'react-native';
+import type { OpeningRecord, Region } from '@/shared/api-types';
+import { checkDrumPackagingCode } from '@/shared/packaging-code';
+import type { LengthUnit } from '@/shared/units';
+import { drumTypeQueries, type DrumTypeRecord } from '../data/drum-types';
+import { colors, fonts, radius, space, type } from '../theme';
+import { Button } from '../ui/button';
+import { ChoiceChips } from '../ui/choice-chips';
+import { lengthDraft, LengthField, NumberField, numberText, type LengthDraft } from '../ui/number-field';
+import type { PickedRef } from '../ui/record-picker';
+import { TextField } from '../ui/text-field';
+import { Checks, mmOf, trimOrNull } from './checks';
+import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { HEAD_OPTIONS, MATERIAL_OPTIONS, optionLabel, POSITION_OPTIONS, REGION_OPTIONS } from './options';
+import { KeyCodePicker, SupplierPicker, ThreadPicker } from './pickers';
+import { useRecordForm, type FormSpec, type RecordForm } from './use-record-form';
+
+type Position = OpeningRecord['position'];
+const MAX_OPENINGS = 6;
+
+export type OpeningDraft = {
+  /** Keeps React's list stable while openings are added and removed; never sent. */
+  _key: string;
+  label: string;
+  threadCode: PickedRef | null;
+  boreMm: LengthDraft;
+  keyCode: PickedRef | null;
+  position: Position | null;
+};
+
+export type DrumTypeDraft = {
+  partNumber: string;
+  name: string;
+  supplierId: PickedRef | null;
+  region: Region | null;
+  nominalCapacityL: string;
+  material: DrumTypeRecord['material'] | null;
+  head: DrumTypeRecord['head'] | null;
+  unPackagingCode: string;
+  outsideHeightMm: LengthDraft;
+  insideDepthMm: LengthDraft;
+  outsideDiameterMm: LengthDraft;
+  openings: OpeningDraft[];
+};
+
+const LABELS: Record<string, string> = {
+  partNumber: 'Part number',
+  name: 'Name',
+  supplierId: 'Supplier',
+  region: 'Region',
+  nominalCapacityL: 'Nominal capacity',
+  material: 'Material',
+  head: 'Head',
+  unPackagingCode: 'UN packaging code',
+  outsideHeightMm: 'Outside height',
+  insideDepthMm: 'Inside depth',
+  outsideDiameterMm: 'Outside diameter',
+  openings: 'Openings',
+};
+
+const OPENING_LABELS: Record<string, string> = { label: 'label', threadCode: 'thread', boreMm: 'bore', keyCode: 'key code', position: 'position' };
+
+let nextKey = 0;
+const newKey = () => `o${++nextKey}`;
+const code = (c: string | null): PickedRef | null => (c ? { id: c, label: c } : null);
+
+export const emptyOpening = (unit: LengthUnit): OpeningDraft => ({ _key: newKey(), label: '', threadCode: null, boreMm: lengthDraft(null, unit), keyCode: null, position: null });
+
+/** The packaging-code findings for the draft: a failure to read the code blocks saving, a mismatch is a warning. */
+function packagingFindings(d: DrumTypeDraft) {
+  if (!d.unPackagingCode.trim() || !d.material || !d.head) return [];
+  return checkDrumPackagingCode({ code: d.unPackagingCode, material: d.material, head: d.head });
+}
+
+export const drumTypeSpec: FormSpec<DrumTypeRecord, DrumTypeDraft> = {
+  noun: 'drum type',
+  empty: (unit) => ({
+    partNumber: '',
+    name: '',
+    supplierId: null,
+    region: null,
+    nominalCapacityL: '',
+    material: null,
+    head: null,
+    unPackagingCode: '',
+    outsideHeightMm: lengthDraft(null, unit),
+    insideDepthMm: lengthDraft(null, unit),
+    outsideDiameterMm: lengthDraft(null, unit),
+    openings: [emptyOpening(unit)],
+  }),
+  fromRecord: (d, unit) => ({
+    partNumber: d.partNumber,
+    name: d.name,
+    supplierId: { id: d.supplierId, label: d.supplierName ?? 'Supplier' },
+    region: d.region,
+    nominalCapacityL: numberText(d.nominalCapacityL, 2),
+    material: d.material,
+    head: d.head,
+    unPackagingCode: d.unPackagingCode ?? '',
+    outsideHeightMm: lengthDraft(d.outsideHeightMm, unit),
+    insideDepthMm: lengthDraft(d.insideDepthMm, unit),
+    outsideDiameterMm: lengthDraft(d.outsideDiameterMm, unit),
+    openings: d.openings.map((o) => ({ _key: o.id ?? newKey(), label: o.label, threadCode: code(o.threadCode), boreMm: lengthDraft(o.boreMm, unit), keyCode: code(o.keyCode), position: o.position })),
+  }),
+  check: (d) => {
+    const c = new Checks();
+    c.text('partNumber', 'Part number', d.partNumber, { max: 60 });
+    c.text('name', 'Name', d.name, { max: 120 });
+    c.pick('supplierId', 'Supplier', d.supplierId, 'the drum maker or slurry supplier');
+    c.choice('region', 'Region', d.region);
+    c.number('nominalCapacityL', 'Nominal capacity', d.nominalCapacityL, { min: 0, above: true, max: 3000, unit: 'L' });
+    c.choice('material', 'Material', d.material);
+    c.choice('head', 'Head', d.head);
+    if (d.unPackagingCode.trim().length > 40) c.rule('unPackagingCode', false, 'UN packaging code must be at most 40 characters.');
+    const codeProblem = packagingFindings(d).find((f) => f.outcome === 'fail' && (f.check === 'code' || f.check === 'kind'));
+    if (codeProblem) c.rule('unPackagingCode', false, codeProblem.message);
+    const height = c.length('outsideHeightMm', 'Outside height', d.outsideHeightMm, { maxMm: 3000 });
+    const depth = c.length('insideDepthMm', 'Inside depth', d.insideDepthMm, { maxMm: 3000 });
+    if (height !== null && depth !== null) c.rule('insideDepthMm', depth < height, 'Inside depth must be less than the outside height.');
+    c.length('outsideDiameterMm', 'Outside diameter', d.outsideDiameterMm, { maxMm: 2000 });
+    c.rule('openings', d.openings.length >= 1, 'A drum type needs at least one opening.');
+    c.rule('openings', d.openings.length <= MAX_OPENINGS, `A drum type has at most ${MAX_OPENINGS} openings.`);
+    const seen = new Set<string>();
+    d.openings.forEach((o, i) => {
+      const n = `Opening ${i + 1}`;
+      c.text(`openings.${i}.label`, `${n} label`, o.label, { max: 40 });
+      const label = o.label.trim();
+      if (label) c.rule(`openings.${i}.label`, !seen.has(label), `${n} label must be different from the other openings ("${label}" is used twice).`);
+      seen.add(label);
+      c.pick(`openings.${i}.threadCode`, `${n} thread`, o.threadCode, 'its thread');
+      c.length(`openings.${i}.boreMm`, `${n} bore`, o.boreMm, { maxMm: 500 });
+      c.choice(`openings.${i}.position`, `${n} position`, o.position);
+    });
+    return c.errors;
+  },
+  toBody: (d) => ({
+    partNumber: d.partNumber.trim(),
+    name: d.name.trim(),
+    supplierId: d.supplierId!.id,
+    region: d.region,
+    nominalCapacityL: Number(d.nominalCapacityL.trim().replace(',', '.')),
+    material: d.material,
+    head: d.head,
+    unPackagingCode: trimOrNull(d.unPackagingCode),
+    outsideHeightMm: mmOf(d.outsideHeightMm),
+    insideDepthMm: mmOf(d.insideDepthMm),
+    outsideDiameterMm: mmOf(d.outsideDiameterMm),
+    openings: d.openings.map((o) => ({ label: o.label.trim(), threadCode: o.threadCode!.id, boreMm: mmOf(o.boreMm), keyCode: o.keyCode?.id ?? null, position: o.position })),
+  }),
+  labelOf: (path) => {
+    const m = /^openings\.(\d+)(?:\.(\w+))?$/.exec(path);
+    if (m) return m[2] ? (OPENING_LABELS[m[2]] ? `Opening ${Number(m[1]) + 1} ${OPENING_LABELS[m[2]]}` : undefined) : `Opening ${Number(m[1]) + 1}`;
+    return LABELS[path];
+  },
+  describe: (key, d) => {
+    if (key === 'openings') return d.openings.map((o) => `${o.label || 'unnamed'} (${o.threadCode?.label ?? 'no thread'}${o.keyCode ? `, key ${o.keyCode.label}` : ''})`).join('; ');
+    if (key === 'material') return optionLabel(MATERIAL_OPTIONS, d.material);
+    if (key === 'head') return optionLabel(HEAD_OPTIONS, d.head);
+    if (key === 'region') return optionLabel(REGION_OPTIONS, d.region);
+    return undefined;
+  },
+};
+
+/** The repeatable list of a drum's openings (bungs): label, thread, bore, key and position each. */
+function OpeningsEditor({ form }: { form: RecordForm<DrumTypeRecord, DrumTypeDraft> }) {
+  const { draft, set, field, unit } = form;
+  const change = (i: number, key: keyof OpeningDraft, value: unknown) => {
+    const next = draft.openings.map((o, j) => (j === i ? { ...o, [key]: value } : o));
+    set('openings', next, `openings.${i}.${key}`);
+  };
+  const remove = (i: number) => set('openings', draft.openings.filter((_, j) => j !== i), 'openings');
+  const add = () => {
+    set('openings', [...draft.openings, emptyOpening(unit)], 'openings');
+  };
+  const listError = field('openings').error;
+  return (
+    <View style={styles.openings}>
+      {draft.openings.map((o, i) => {
+        const p = `openings.${i}`;
+        return (
+          <View key={o._key} style={styles.opening} testID={`form-opening-${i}`} role="group" aria-label={`Opening ${i + 1}`}>
+            <View style={styles.openingHead}>
+              <Text role="heading" aria-level={3} style={type.label}>
+                Opening {i + 1}
+              </Text>
+              <Button label="Remove" variant="quiet" accessibilityLabel={`Remove opening ${i + 1}`} disabled={draft.openings.length <= 1} onPress={() => remove(i)} testID={`form-openings-${i}-remove`} />
+            </View>
+            <FieldRow>
+              <FieldCell>
+                <TextField label="Label" hint="As marked or as people say it, e.g. large bung." value={o.label} onChangeText={(v) => change(i, 'label', v)} testID={`form-openings-${i}-label`} {...field(`${p}.label`)} />
+              </FieldCell>
+              <FieldCell>
+                <LengthField label="Bore" hint="Inside diameter of the opening." value={o.boreMm} onChange={(v) => change(i, 'boreMm', v)} testID={`form-openings-${i}-boreMm`} {...field(`${p}.boreMm`)} />
+              </FieldCell>
+            </FieldRow>
+            <FieldRow>
+              <FieldCell>
+                <ThreadPicker value={o.threadCode} onChange={(v) => change(i, 'threadCode', v)} testID={`form-openings-${i}-threadCode`} {...field(`${p}.threadCode`)} />
+              </FieldCell>
+              <FieldCell>
+                <KeyCodePicker value={o.keyCode} onChange={(v) => change(i, 'keyCode', v)} testID={`form-openings-${i}-keyCode`} {...field(`${p}.keyCode`)} />
+              </FieldCell>
+            </FieldRow>
+            <ChoiceChips label="Position" options={POSITION_OPTIONS} value={o.position} onChange={(v) => change(i, 'position', v)} error={field(`${p}.position`).error} testID={`form-openings-${i}-position`} />
+          </View>
+        );
+      })}
+      {listError ? (
+        <Text role="alert" style={styles.error} testID="form-openings-error">
+          {listError}
+        </Text>
+      ) : null}
+      <View style={styles.addRow}>
+        <Button label="Add an opening" variant="secondary" disabled={draft.openings.length >= MAX_OPENINGS} onPress={add} testID="form-openings-add" />
+        {draft.openings.length >= MAX_OPENINGS ? <Text style={type.small}>A drum type has at most {MAX_OPENINGS} openings.</Text> : null}
+      </View>
+    </View>
+  );
+}
+
+/** Create (no id) or edit a drum type with its openings. */
+export function DrumTypeFormScreen({ id }: { id?: string }) {
+  const form = useRecordForm({ spec: drumTypeSpec, source: drumTypeQueries, id, onSaved: (d) => router.replace(`/registry/drum-types/${d.id}` as never) });
+  const { draft, set, field } = form;
+  const warnings = packagingFindings(draft).filter((f) => f.outcome !== 'pass' && f.check !== 'code' && f.check !== 'kind');
+  const explained = packagingFindings(draft).find((f) => f.check === 'code' && f.outcome === 'pass');
+  return (
+    <FormFrame
+      form={form}
+      title={id ? `Edit drum type ${form.base?.partNumber ?? ''}`.trim() : 'New drum type'}
+      subtitle="The drum as it arrives: its size, its UN mark and every opening. Lengths are saved in mm."
+      testID="drum-type-form"
+      cancelTo={id ? `/registry/drum-types/${id}` : '/registry/drum-types'}
+    >
+      <FormSection title="Drum">
+        <TextField label="Part number" value={draft.partNumber} onChangeText={(v) => set('partNumber', v)} autoCapitalize="characters" autoCorrect={false} testID="form-partNumber" {...field('partNumber')} />
+        <TextField label="Name" hint="What people call it, e.g. 55 gal lined steel tight head." value={draft.name} onChangeText={(v) => set('name', v)} testID="form-name" {...field('name')} />
+        <SupplierPicker
+          value={draft.supplierId}
+          onChange={(p, s) => {
+            set('supplierId', p);
+            if (s && !draft.region) set('region', s.region);
+          }}
+          testID="form-supplierId"
+          {...field('supplierId')}
+        />
+        <ChoiceChips label="Region" options={REGION_OPTIONS} value={draft.region} onChange={(v) => set('region', v)} error={field('region').error} testID="form-region" />
+      </FormSection>
+      <FormSection title="Build and marking">
+        <ChoiceChips label="Material" options={MATERIAL_OPTIONS} value={draft.material} onChange={(v) => set('material', v)} error={field('material').error} testID="form-material" />
+        <ChoiceChips label="Head" options={HEAD_OPTIONS} value={draft.head} onChange={(v) => set('head', v)} error={field('head').error} testID="form-head" />
+        <TextField
+          label="UN packaging code"
+          hint="Optional: the code from the UN mark, e.g. 1A1 or 1H1."
+          value={draft.unPackagingCode}
+          onChangeText={(v) => set('unPackagingCode', v)}
+          autoCapitalize="characters"
+          autoCorrect={false}
+          testID="form-unPackagingCode"
+          {...field('unPackagingCode')}
+        />
+        {explained && !field('unPackagingCode').error ? <Text style={type.small}>{explained.message}</Text> : null}
+        {warnings.map((w) => (
+          <Text key={w.check} role="status" style={styles.warning} testID={`form-unPackagingCode-${w.check}`}>
+            ! {w.message}
+          </Text>
+        ))}
+        <NumberField label="Nominal capacity" suffix="L" value={draft.nominalCapacityL} onChangeText={(v) => set('nominalCapacityL', v)} testID="form-nominalCapacityL" {...field('nominalCapacityL')} />
+      </FormSection>
+      <FormSection title="Size" full>
+        <FieldRow>
+          <FieldCell>
+            <LengthField label="Outside height" hint="Overall, bottom chime to top chime." value={draft.outsideHeightMm} onChange={(v) => set('outsideHeightMm', v)} testID="form-outsideHeightMm" {...field('outsideHeightMm')} />
+          </FieldCell>
+          <FieldCell>
+            <LengthField label="Inside depth" hint="Bung seat to inside bottom." value={draft.insideDepthMm} onChange={(v) => set('insideDepthMm', v)} testID="form-insideDepthMm" {...field('insideDepthMm')} />
+          </FieldCell>
+          <FieldCell>
+            <LengthField label="Outside diameter" hint="Across the rolling hoops." value={draft.outsideDiameterMm} onChange={(v) => set('outsideDiameterMm', v)} testID="form-outsideDiameterMm" {...field('outsideDiameterMm')} />
+          </FieldCell>
+        </FieldRow>
+      </FormSection>
+      <FormSection title="Openings" full testID="form-openings">
+        <OpeningsEditor form={form} />
+      </FormSection>
+    </FormFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  openings: { gap: space.md },
+  opening: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: space.md, backgroundColor: colors.paper },
+  openingHead: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
+  addRow: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
+  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  warning: { ...type.body, color: colors.caution },
+});

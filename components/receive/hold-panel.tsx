@@ -1,0 +1,146 @@
+import { useState } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import { ApiError } from '../api/client';
+import { useHoldLotMutation, useReleaseLotMutation, type ReceivingCheckRecord } from '../data/receiving';
+import { useSession } from '../session';
+import { colors, fonts, radius, space, type } from '../theme';
+import { Button } from '../ui/button';
+import { TextField } from '../ui/text-field';
+import { formatWhen, LotStatusChip, SectionTitle } from './parts';
+
+const DOCK_ROLES = ['clerk', 'engineer', 'admin'];
+const RELEASE_ROLES = ['engineer', 'admin'];
+
+/**
+ * A lot that does not fit (or fits only with caution) is put on hold with a reason; an engineer releases it.
+ * `prefix` keeps the test ids of the dock (dock-hold…) and of the lot page (lot-hold…) apart.
+ */
+export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; prefix: 'dock' | 'lot' }) {
+  const { session } = useSession();
+  const role = session?.user.role ?? 'buyer';
+  const hold = useHoldLotMutation();
+  const release = useReleaseLotMutation();
+  const [reason, setReason] = useState('');
+  const [comment, setComment] = useState('');
+  const [reasonError, setReasonError] = useState<string | null>(null);
+  const [commentError, setCommentError] = useState<string | null>(null);
+  const [formError, setFormError] = useState<string | null>(null);
+
+  const onHold = () => {
+    if (reason.trim().length < 3) {
+      setReasonError('Say why the lot is held (at least 3 characters), e.g. "no dip tube reaches this drum".');
+      return;
+    }
+    setReasonError(null);
+    setFormError(null);
+    hold.mutate(
+      { id: record.id, reason: reason.trim() },
+      {
+        onError: (err) => {
+          const fields = err instanceof ApiError ? err.fieldMessages() : {};
+          if (fields.reason) setReasonError(`Reason ${fields.reason}.`);
+          else setFormError(err.message);
+        },
+      },
+    );
+  };
+
+  const onRelease = () => {
+    if (comment.trim().length < 3) {
+      setCommentError('Say why the lot may be used now (at least 3 characters).');
+      return;
+    }
+    setCommentError(null);
+    setFormError(null);
+    release.mutate(
+      { id: record.id, comment: comment.trim() },
+      {
+        onError: (err) => {
+          const fields = err instanceof ApiError ? err.fieldMessages() : {};
+          if (fields.comment) setCommentError(`Comment ${fields.comment}.`);
+          else setFormError(err.message);
+        },
+      },
+    );
+  };
+
+  if (record.status === 'on-hold') {
+    return (
+      <View style={[styles.box, styles.held]} testID={`${prefix}-hold-status`}>
+        <LotStatusChip status="on-hold" />
+        <Text style={[type.heading, { color: colors.noFit }]}>This lot is on hold: do not tap its drums.</Text>
+        <Text style={type.body}>Reason: {record.holdReason}</Text>
+        <Text style={type.small}>
+          Held by {record.heldByName ?? 'someone'} on {formatWhen(record.heldAt)}. Engineers and buyers were told, and a hardware warning lists what to order.
+        </Text>
+        {RELEASE_ROLES.includes(role) ? (
+          <View style={styles.form}>
+            <TextField
+              label="Release comment"
+              hint="What changed, so the lot may be used (e.g. the right tubes arrived)."
+              value={comment}
+              onChangeText={setComment}
+              error={commentError}
+              multiline
+              testID={`${prefix}-release-comment`}
+            />
+            <Button label="Release the lot" variant="secondary" busy={release.isPending} onPress={onRelease} testID={`${prefix}-release`} />
+          </View>
+        ) : (
+          <Text style={type.small}>An engineer releases a held lot.</Text>
+        )}
+        {formError ? (
+          <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
+            {formError}
+          </Text>
+        ) : null}
+      </View>
+    );
+  }
+
+  if (record.status === 'released') {
+    return (
+      <View style={styles.box} testID={`${prefix}-hold-status`}>
+        <LotStatusChip status="released" />
+        <Text style={type.body}>
+          Held ({record.holdReason}), then released by {record.releasedByName ?? 'an engineer'} on {formatWhen(record.releasedAt)}: {record.releaseComment}
+        </Text>
+      </View>
+    );
+  }
+
+  if (record.verdict === 'fits' || !DOCK_ROLES.includes(role)) return null;
+
+  return (
+    <View style={[styles.box, styles.holdAsk]} testID={`${prefix}-hold-panel`}>
+      <SectionTitle>Put this lot on hold</SectionTitle>
+      <Text style={type.body}>
+        {record.verdict === 'no-fit' ? 'No hardware at this site fits these drums.' : 'These drums fit only with caution.'} Holding the lot keeps it off the stations, tells engineers and
+        buyers, and opens a hardware warning.
+      </Text>
+      <TextField
+        label="Reason for the hold"
+        placeholder="e.g. no dip tube reaches the bottom of this drum"
+        value={reason}
+        onChangeText={setReason}
+        error={reasonError}
+        multiline
+        testID={`${prefix}-hold-reason`}
+      />
+      <Button label="Put lot on hold" variant="danger" busy={hold.isPending} onPress={onHold} testID={`${prefix}-hold`} />
+      {formError ? (
+        <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
+          {formError}
+        </Text>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: space.sm, padding: space.lg, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  held: { borderWidth: 3, borderColor: colors.noFit, backgroundColor: colors.noFitSoft },
+  holdAsk: { borderWidth: 2, borderColor: colors.noFit },
+  form: { gap: space.sm, marginTop: space.sm },
+  error: { fontFamily: fonts.semibold, fontSize: 15, color: colors.danger },
+});
