@@ -13,8 +13,8 @@ import { fallbackDataDir, findPgBin } from './lib/cluster.mjs';
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const mode = process.argv[2];
 const passThrough = process.argv.slice(3);
-if (mode !== 'start' && mode !== 'test') {
-  console.error('Usage: node scripts/launch.mjs start|test [jest arguments]');
+if (mode !== 'start' && mode !== 'test' && mode !== 'bench') {
+  console.error('Usage: node scripts/launch.mjs start|test|bench [jest arguments]');
   process.exit(2);
 }
 
@@ -302,7 +302,7 @@ async function main() {
   let cluster = { startedHere: false };
   let databaseUrl = env.DATABASE_URL;
   // Parallel test runs on one machine may pick their own database and export folder.
-  const dbName = mode === 'test' ? (env.BUNGWISE_TEST_DB ?? 'bungwise_test') : 'bungwise';
+  const dbName = mode === 'test' ? (env.BUNGWISE_TEST_DB ?? 'bungwise_test') : mode === 'bench' ? 'bungwise_bench' : 'bungwise';
   if (!databaseUrl) {
     bin = ensurePostgresBinaries();
     cluster = await startCluster(bin);
@@ -327,6 +327,16 @@ async function main() {
   try {
     buildServer();
     const dbEnv = { DATABASE_URL: databaseUrl };
+    if (mode === 'bench') {
+      // A scratch database filled by the benchmark itself; the web export is measured, so it is built first.
+      if (serverCli(['prepare', '--recreate', '--no-seed'], dbEnv) !== 0) fail('Preparing the benchmark database failed: see the output above.');
+      exportWeb();
+      const code = run('node', [path.join(root, 'dist', 'server', 'scripts', 'bench.js')], {
+        env: { ...env, ...dbEnv, BUNGWISE_WEB_DIR: webDir, BUNGWISE_PG_BIN: bin ?? findPgBin() ?? '', JWT_SECRET: 'bench-secret' },
+      });
+      cleanup();
+      process.exit(code);
+    }
     if (mode === 'test') {
       if (serverCli(['prepare', '--recreate', '--no-seed'], dbEnv) !== 0) fail('Preparing the test database failed: see the output above.');
       exportWeb();

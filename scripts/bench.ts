@@ -1,0 +1,260 @@
+// `npm run bench`: the figures that matter at scale, each beside its floor, on this machine, against the
+// real server and PostgreSQL. Run by the launcher against a scratch database (bungwise_bench).
+import 'reflect-metadata';
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import net from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
+import zlib from 'node:zlib';
+import { Client } from 'pg';
+import { THREAD_TABLE } from '../shared/threads/thread-table';
+import { hashPassword } from '../server/auth/passwords';
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const autocannon = require('autocannon');
+
+const root = path.resolve(__dirname, '..', '..', '..');
+const url = process.env.DATABASE_URL!;
+const SIZES = { suppliers: 200, drumTypes: 10_000, tubes: 30_000, connectors: 30_000, pairings: 100_000, importRows: 100_000 };
+
+interface Row {
+  figure: string;
+  value: number;
+  unit: string;
+  floor: number;
+  floorLabel: string;
+  ratio: number;
+  target: string;
+  met: boolean;
+}
+const rows: Row[] = [];
+const log = (s: string) => console.log(`[bench] ${s}`);
+
+function percentile(sorted: number[], p: number): number {
+  if (!sorted.length) return NaN;
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+}
+
+async function freePort(): Promise<number> {
+  return new Promise((resolve) => {
+    const s = net.createServer();
+    s.listen(0, '127.0.0.1', () => {
+      const { port } = s.address() as net.AddressInfo;
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+/** 1. A large invented registry, generated in SQL. */
+async function loadRegistry(db: Client): Promise<void> {
+  const t0 = Date.now();
+  await db.query('BEGIN');
+  for (const row of THREAD_TABLE) {
+    await db.query(
+      `INSERT INTO thread_specs (code, family, nominal_label, major_diameter_mm, pitch_mm, threads_per_inch, flank_angle_deg, form, standard, version) VALUES ($1,$2,$3,$4,$5,$6,$7,$8,$9,1) ON CONFLICT (code) DO NOTHING`,
+      [row.code, row.family, row.nominalLabel, row.majorDiameterMm, row.pitchMm, row.threadsPerInch, row.flankAngleDeg, row.form, row.standard],
+    );
+  }
+  const hash = await hashPassword('bench-password-1');
+  await db.query(`INSERT INTO users (email, display_name, role, password_hash, version) VALUES ('bench.engineer@bungwise.example','Bench Engineer','engineer',$1,1), ('bench.reviewer@bungwise.example','Bench Reviewer','engineer',$1,1), ('bench.clerk@bungwise.example','Bench Clerk','clerk',$1,1)`, [hash]);
+  await db.query(`INSERT INTO site_settings (site_name, version) VALUES ('Bench site', 1)`);
+  await db.query(`INSERT INTO key_codes (code, label, version) SELECT 'BK-' || g, 'Bench key ' || g, 1 FROM generate_series(1, 6) g`);
+  const regions = `(ARRAY['NA','EU','JP','TW','KR','CN','SG','other'])[1 + g % 8]`;
+  await db.query(`INSERT INTO suppliers (name, region, version) SELECT 'Bench Supplier ' || lpad(g::text, 3, '0'), ${regions}, 1 FROM generate_series(1, ${SIZES.suppliers}) g`);
+  await db.query(`CREATE TEMP TABLE s AS SELECT id, row_number() OVER (ORDER BY name) AS n FROM suppliers`);
+  await db.query(`CREATE TEMP TABLE th AS SELECT id, row_number() OVER (ORDER BY code) AS n FROM thread_specs`);
+  await db.query(`CREATE TEMP TABLE k AS SELECT id, row_number() OVER (ORDER BY code) AS n FROM key_codes`);
+  const nThreads = THREAD_TABLE.length;
+  await db.query(`INSERT INTO drum_types (supplier_id, region, name, part_number, nominal_capacity_l, material, head, un_packaging_code, outside_height_mm, inside_depth_mm, outside_diameter_mm, version)
+    SELECT s.id, ${regions}, 'Bench drum ' || g, 'BD-' || lpad(g::text, 6, '0'), 208, CASE WHEN g % 2 = 0 THEN 'steel' ELSE 'plastic' END, 'tight', CASE WHEN g % 2 = 0 THEN '1A1' ELSE '1H1' END, 880, 800 + g % 80, 585, 1
+    FROM generate_series(1, ${SIZES.drumTypes}) g JOIN s ON s.n = 1 + g % ${SIZES.suppliers}`);
+  await db.query(`INSERT INTO drum_openings (drum_type_id, label, thread_spec_id, bore_mm, key_code_id, position, version)
+    SELECT d.id, o.label, th.id, 50, k.id, o.pos, 1
+    FROM (SELECT id, row_number() OVER (ORDER BY part_number) AS n FROM drum_types) d
+    CROSS JOIN (VALUES ('large bung', 'large', 0), ('small bung', 'small', 1)) AS o(label, pos, off)
+    JOIN th ON th.n = 1 + (d.n * 3 + o.off) % ${nThreads}
+    LEFT JOIN k ON k.n = 1 + d.n % 7`);
+  await db.query(`INSERT INTO dip_tubes (part_number, supplier_id, thread_spec_id, length_mm, bore_mm, od_mm, material, key_code_id, channels, version)
+    SELECT 'BT-' || lpad(g::text, 6, '0'), s.id, th.id, 780 + g % 90, 19, 25.4, (ARRAY['PFA','PVDF','HDPE'])[1 + g % 3], k.id, CASE WHEN g % 5 = 0 THEN 'feed-return' ELSE 'feed' END, 1
+    FROM generate_series(1, ${SIZES.tubes}) g JOIN s ON s.n = 1 + g % ${SIZES.suppliers} JOIN th ON th.n = 1 + g % ${nThreads} LEFT JOIN k ON k.n = 1 + g % 7`);
+  await db.query(`INSERT INTO connectors (part_number, supplier_id, key_code_id, feed_bore_mm, feed_nominal, return_bore_mm, return_nominal, return_path, suited_to, wetted_materials, version)
+    SELECT 'BH-' || lpad(g::text, 6, '0'), s.id, k.id, 19.05, '3/4 in', CASE WHEN g % 3 = 0 THEN NULL ELSE 12.7 + (g % 2) * 6.35 END, CASE WHEN g % 3 = 0 THEN NULL ELSE '1/2 in' END,
+      CASE WHEN g % 3 = 0 THEN 'none' ELSE 'open' END, (ARRAY['two-opening','one-opening','both'])[1 + g % 3], 'PFA, PTFE', 1
+    FROM generate_series(1, ${SIZES.connectors}) g JOIN s ON s.n = 1 + g % ${SIZES.suppliers} LEFT JOIN k ON k.n = 1 + g % 7`);
+  // 100,000 distinct (tube, head) pairs: each tube with up to four heads spread over the catalogue.
+  await db.query(`INSERT INTO pairings (dip_tube_id, connector_id, status, author_id, approver_id, approved_at, version)
+    SELECT t.id, c.id, CASE WHEN g % 4 = 0 THEN 'draft' ELSE 'approved' END,
+      (SELECT id FROM users WHERE email = 'bench.engineer@bungwise.example'),
+      CASE WHEN g % 4 = 0 THEN NULL ELSE (SELECT id FROM users WHERE email = 'bench.reviewer@bungwise.example') END,
+      CASE WHEN g % 4 = 0 THEN NULL ELSE now() END, 1
+    FROM generate_series(0, ${SIZES.pairings - 1}) g
+    JOIN (SELECT id, row_number() OVER (ORDER BY part_number) - 1 AS n FROM dip_tubes) t ON t.n = g % ${SIZES.tubes}
+    JOIN (SELECT id, row_number() OVER (ORDER BY part_number) - 1 AS n FROM connectors) c ON c.n = ((g % ${SIZES.tubes}) * 13 + (g / ${SIZES.tubes}) * 7477) % ${SIZES.connectors}
+    ON CONFLICT DO NOTHING`);
+  await db.query('COMMIT');
+  await db.query('ANALYZE');
+  const counts = (await db.query(`SELECT (SELECT count(*) FROM drum_types) AS d, (SELECT count(*) FROM dip_tubes) AS t, (SELECT count(*) FROM connectors) AS c, (SELECT count(*) FROM pairings) AS p, (SELECT count(*) FROM suppliers) AS s`)).rows[0];
+  log(`registry loaded in ${((Date.now() - t0) / 1000).toFixed(1)} s: ${counts.d} drum types, ${counts.t} tubes, ${counts.c} connectors, ${counts.p} pairings, ${counts.s} suppliers`);
+}
+
+async function startServer(port: number): Promise<ChildProcess> {
+  const child = spawn('node', [path.join(root, 'dist', 'server', 'server', 'index.js')], {
+    cwd: root,
+    env: { ...process.env, PORT: String(port), BUNGWISE_LOG_REQUESTS: '0', BUNGWISE_DEMO: '0', S3_BUCKET: '', SMTP_URL: '' },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  for (let i = 0; i < 100; i++) {
+    try {
+      if ((await fetch(`http://127.0.0.1:${port}/api/health`)).status === 200) return child;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error('the server did not become healthy');
+}
+
+function cannon(opts: Record<string, unknown>): Promise<{ requests: { average: number; total: number }; latency: { p50: number; p99: number }; non2xx: number; errors: number }> {
+  return new Promise((resolve, reject) => autocannon({ connections: 20, duration: 10, ...opts }, (err: Error | null, res: never) => (err ? reject(err) : resolve(res))));
+}
+
+async function gzipSizeOfJs(dir: string): Promise<number> {
+  let total = 0;
+  const walk = (d: string) => {
+    for (const f of fs.readdirSync(d)) {
+      const p = path.join(d, f);
+      if (fs.statSync(p).isDirectory()) walk(p);
+      else if (p.endsWith('.js')) total += zlib.gzipSync(fs.readFileSync(p), { level: 9 }).length;
+    }
+  };
+  walk(dir);
+  return total;
+}
+
+/** A bare Expo Router page of the same SDK, exported the same way: the floor for the bundle size. */
+function exportBarePage(): string {
+  const dir = path.join(root, 'dist', 'bench-bare');
+  fs.rmSync(dir, { recursive: true, force: true });
+  fs.mkdirSync(path.join(dir, 'app'), { recursive: true });
+  fs.writeFileSync(path.join(dir, 'package.json'), JSON.stringify({ name: 'bare', private: true, main: 'expo-router/entry' }));
+  fs.writeFileSync(path.join(dir, 'app.json'), JSON.stringify({ expo: { name: 'bare', slug: 'bare', web: { bundler: 'metro', output: 'single' }, plugins: ['expo-router'] } }));
+  fs.writeFileSync(path.join(dir, 'babel.config.js'), "module.exports = (api) => { api.cache(true); return { presets: ['babel-preset-expo'] }; };\n");
+  fs.writeFileSync(path.join(dir, 'app', 'index.tsx'), "import { Text } from 'react-native';\nexport default function Index() { return <Text>Hello</Text>; }\n");
+  fs.symlinkSync(path.join(root, 'node_modules'), path.join(dir, 'node_modules'));
+  const out = spawnSync(path.join(root, 'node_modules', '.bin', 'expo'), ['export', '--platform', 'web', '--output-dir', 'web'], { cwd: dir, env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1' }, encoding: 'utf8' });
+  if (out.status !== 0) throw new Error(`bare export failed: ${out.stderr.slice(-500)}`);
+  return path.join(dir, 'web');
+}
+
+function add(figure: string, value: number, unit: string, floor: number, floorLabel: string, target: string, met: boolean, ratio = value / floor): void {
+  rows.push({ figure, value: Math.round(value * 100) / 100, unit, floor: Math.round(floor * 100) / 100, floorLabel, ratio: Math.round(ratio * 1000) / 1000, target, met });
+}
+
+async function main(): Promise<void> {
+  log(`machine: ${os.cpus().length} cores, ${Math.round(os.totalmem() / 2 ** 30)} GiB, Node ${process.version}`);
+  const db = new Client({ connectionString: url });
+  await db.connect();
+  await loadRegistry(db);
+
+  const port = await freePort();
+  const server = await startServer(port);
+  const base = `http://127.0.0.1:${port}`;
+  try {
+    const signIn = (await (await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: 'bench.clerk@bungwise.example', password: 'bench-password-1' }) })).json()) as { token: string };
+    const engineer = (await (await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: 'bench.engineer@bungwise.example', password: 'bench-password-1' }) })).json()) as { token: string };
+    const auth = { Authorization: `Bearer ${signIn.token}`, 'Content-Type': 'application/json' };
+    const drumIds: string[] = (await db.query(`SELECT id FROM drum_types ORDER BY random() LIMIT 500`)).rows.map((r) => r.id);
+
+    // 2. Fit-check throughput and latency beside GET /api/health.
+    log('fit-check under 20 connections for 10 s...');
+    let i = 0;
+    const fit = await cannon({
+      url: `${base}/api/fit-checks`,
+      method: 'POST',
+      headers: auth,
+      requests: [{ setupRequest: (req: Record<string, unknown>) => ({ ...req, body: JSON.stringify({ drumTypeId: drumIds[i++ % drumIds.length] }) }) }],
+    });
+    log('health floor under 20 connections for 10 s...');
+    const health = await cannon({ url: `${base}/api/health` });
+    if (fit.non2xx || fit.errors) log(`fit-check: ${fit.non2xx} non-2xx, ${fit.errors} errors`);
+    add('fit-check throughput', fit.requests.average, 'req/s', health.requests.average, 'GET /api/health req/s', '>= 0.5 of floor', fit.requests.average >= 0.5 * health.requests.average);
+    add('fit-check p50 latency', fit.latency.p50, 'ms', health.latency.p50, 'health p50 ms', 'report', true);
+    add('fit-check p99 latency', fit.latency.p99, 'ms', health.latency.p99, 'health p99 ms', '< 30 ms', fit.latency.p99 < 30);
+
+    // 3. List search at that size beside the bare SQL, one request at a time.
+    const terms = Array.from({ length: 300 }, (_, k) => `BT-0${String((k * 97) % 300).padStart(3, '0')}`);
+    const apiTimes: number[] = [];
+    for (const q of terms) {
+      const t0 = performance.now();
+      const res = await fetch(`${base}/api/dip-tubes?q=${encodeURIComponent(q)}`, { headers: auth });
+      await res.json();
+      apiTimes.push(performance.now() - t0);
+    }
+    const sqlTimes: number[] = [];
+    for (const q of terms) {
+      const t0 = performance.now();
+      await db.query(
+        `SELECT t.*, s.name, th.code, k.code FROM dip_tubes t LEFT JOIN suppliers s ON s.id = t.supplier_id LEFT JOIN thread_specs th ON th.id = t.thread_spec_id LEFT JOIN key_codes k ON k.id = t.key_code_id
+         WHERE (t.part_number || ' ' || t.material) ILIKE $1 ORDER BY t.part_number, t.id LIMIT 25`,
+        [`%${q}%`],
+      );
+      await db.query(`SELECT count(*) FROM dip_tubes t WHERE (t.part_number || ' ' || t.material) ILIKE $1`, [`%${q}%`]);
+      sqlTimes.push(performance.now() - t0);
+    }
+    apiTimes.sort((a, b) => a - b);
+    sqlTimes.sort((a, b) => a - b);
+    add('list search p50 (GET /api/dip-tubes?q=)', percentile(apiTimes, 50), 'ms', percentile(sqlTimes, 50), 'bare SQL p50 ms', 'report', true);
+    add('list search p99 (GET /api/dip-tubes?q=)', percentile(apiTimes, 99), 'ms', percentile(sqlTimes, 99), 'bare SQL p99 ms', '< 50 ms', percentile(apiTimes, 99) < 50);
+
+    // 4. CSV import of 100,000 rows beside COPY of the same rows.
+    const supplierName = (await db.query(`SELECT name FROM suppliers ORDER BY name LIMIT 1`)).rows[0].name;
+    const lines = ['supplier,part_number,thread,length_mm,bore_mm,od_mm,material,key,channels'];
+    for (let n = 0; n < SIZES.importRows; n++) lines.push(`${supplierName},IMPB-${String(n).padStart(6, '0')},${THREAD_TABLE[n % THREAD_TABLE.length].code},${800 + (n % 60)},19,25.4,PFA,,feed`);
+    const csv = Buffer.from(`${lines.join('\n')}\n`);
+    const file = path.join(os.tmpdir(), `bungwise-bench-${process.pid}.csv`);
+    fs.writeFileSync(file, csv);
+    log(`importing ${SIZES.importRows} rows (${(csv.length / 2 ** 20).toFixed(1)} MB)...`);
+    const form = new FormData();
+    form.set('kind', 'dip-tubes');
+    form.set('dryRun', 'false');
+    form.set('file', new Blob([csv], { type: 'text/csv' }), 'bench.csv');
+    const t0 = performance.now();
+    const imported = await fetch(`${base}/api/imports`, { method: 'POST', headers: { Authorization: `Bearer ${engineer.token}` }, body: form });
+    const body = await imported.json();
+    const importSeconds = (performance.now() - t0) / 1000;
+    if (imported.status !== 201) throw new Error(`import answered ${imported.status}: ${JSON.stringify(body).slice(0, 300)}`);
+    await db.query(`CREATE TABLE bench_copy (supplier text, part_number text, thread text, length_mm float8, bore_mm float8, od_mm float8, material text, key text, channels text)`);
+    const psql = path.join(process.env.BUNGWISE_PG_BIN || '', 'psql');
+    const parsed = new URL(url);
+    const pgEnv = { ...process.env, PGPASSWORD: decodeURIComponent(parsed.password) };
+    parsed.password = '';
+    const c0 = performance.now();
+    const copy = spawnSync(fs.existsSync(psql) ? psql : 'psql', [parsed.toString(), '-c', `\\copy bench_copy FROM '${file}' CSV HEADER`], { env: pgEnv, encoding: 'utf8' });
+    const copySeconds = (performance.now() - c0) / 1000;
+    if (copy.status !== 0) throw new Error(`COPY failed: ${copy.stderr}`);
+    fs.rmSync(file, { force: true });
+    add('CSV import', SIZES.importRows / importSeconds, 'rows/s', SIZES.importRows / copySeconds, 'COPY rows/s', '>= 0.25 of floor', SIZES.importRows / importSeconds >= 0.25 * (SIZES.importRows / copySeconds));
+
+    // 5. The web build's gzipped JavaScript beside a bare Expo Router page.
+    log('exporting a bare Expo Router page for the bundle floor...');
+    const ours = await gzipSizeOfJs(path.join(process.env.BUNGWISE_WEB_DIR ?? path.join(root, 'dist', 'web'), '_expo'));
+    const bare = await gzipSizeOfJs(path.join(exportBarePage(), '_expo'));
+    add('web JS gzipped', ours / 1024, 'KB', bare / 1024, 'bare Expo Router page KB', '<= 1.6 x floor', ours <= 1.6 * bare);
+  } finally {
+    server.kill('SIGTERM');
+    await db.end();
+  }
+
+  const pad = (s: string, n: number) => s.padEnd(n);
+  console.log('');
+  console.log(`${pad('figure', 42)}${pad('value', 16)}${pad('floor', 34)}${pad('ratio', 8)}target`);
+  for (const r of rows) {
+    console.log(`${pad(r.figure, 42)}${pad(`${r.value} ${r.unit}`, 16)}${pad(`${r.floor} (${r.floorLabel})`, 34)}${pad(String(r.ratio), 8)}${r.target}${r.target === 'report' ? '' : r.met ? '  met' : '  MISSED'}`);
+  }
+  console.log(JSON.stringify({ sizes: SIZES, figures: rows }));
+}
+
+main().catch((err) => {
+  console.error(`[bench] failed: ${(err as Error).stack ?? err}`);
+  process.exit(1);
+});
