@@ -14,6 +14,9 @@ const STATUS_RANK: Record<Pairing['status'], number> = { approved: 0, draft: 1, 
 /** Candidates considered per check: enough for any real drum position, bounded for a large registry. */
 const POOL_LIMIT = 60;
 const ANSWER_LIMIT = 20;
+/** Tubes per thread taken from inside the reach window, and either side of it. */
+const TUBES_IN_WINDOW = 40;
+const TUBES_NEAR_MISS = 5;
 
 export interface FitCandidate extends CandidateEvaluation {
   dipTubeId: string;
@@ -92,7 +95,7 @@ export class FitCheckService {
     if (drum.input.insideDepthMm <= settings.tipClearanceMaxMm) {
       throw fieldError(ctx.fieldForDrum, `inside depth must be more than the site's largest tip clearance (${settings.tipClearanceMaxMm} mm)`);
     }
-    const pool = await this.candidatePool(m, drum, stationRow?.connectorId ?? null);
+    const pool = await this.candidatePool(m, drum, stationRow?.connectorId ?? null, settings);
     const slurryInput: SlurryInput | null = slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null;
     const tubeSetInput: TubeSetInput | null = tubeSet ? { lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null;
 
@@ -209,10 +212,25 @@ export class FitCheckService {
   }
 
   /**
-   * Pairings worth judging: those whose tube threads into one of the drum's openings, plus those using the
-   * station's installed head (so the answer can say why the hardware already there does not fit).
+   * Pairings worth judging: those of tubes that thread into one of the drum's openings and reach the
+   * clearance window, then the nearest tubes either side of it (so a near miss can say why), plus those
+   * using the station's installed head. Tubes come from an index range scan per thread; a large registry
+   * is never sorted whole.
    */
-  private async candidatePool(m: EntityManager, drum: ResolvedDrum, installedConnectorId: string | null): Promise<Pairing[]> {
+  private async candidatePool(m: EntityManager, drum: ResolvedDrum, installedConnectorId: string | null, settings: FitSettings): Promise<Pairing[]> {
+    const threads = [...new Set(drum.threadSpecIds)];
+    const lo = drum.input.insideDepthMm - settings.tipClearanceMaxMm;
+    const hi = drum.input.insideDepthMm - settings.tipClearanceMinMm;
+    const tubeIds: string[] = [];
+    for (const thread of threads) {
+      const rows: Array<{ id: string }> = await m.query(
+        `(SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm BETWEEN $2 AND $3 ORDER BY length_mm LIMIT $4)
+         UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm < $2 ORDER BY length_mm DESC LIMIT $5) below)
+         UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm > $3 ORDER BY length_mm ASC LIMIT $5) above)`,
+        [thread, lo, hi, TUBES_IN_WINDOW, TUBES_NEAR_MISS],
+      );
+      tubeIds.push(...rows.map((r) => r.id));
+    }
     const qb = () =>
       m
         .getRepository(Pairing)
@@ -227,7 +245,7 @@ export class FitCheckService {
         .addOrderBy('t.part_number', 'ASC')
         // Every join is many-to-one, so one row per pairing and a plain LIMIT is exact.
         .limit(POOL_LIMIT);
-    const byThread = drum.threadSpecIds.length ? await qb().andWhere('t.thread_spec_id IN (:...ids)', { ids: [...new Set(drum.threadSpecIds)] }).getMany() : [];
+    const byThread = tubeIds.length ? await qb().andWhere('p.dip_tube_id IN (:...tubeIds)', { tubeIds }).getMany() : [];
     if (!installedConnectorId) return byThread;
     const seen = new Set(byThread.map((p) => p.id));
     const atStation = await qb()

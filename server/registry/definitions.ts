@@ -1,4 +1,5 @@
 import type { ObjectLiteral, SelectQueryBuilder } from 'typeorm';
+import type { ThreadSpecRow } from '../../shared/threads/thread-table';
 import { fieldError } from '../common/errors';
 import { parseDto } from '../common/validate';
 import { Connector, DipTube, DrumOpening, DrumType, KeyCode, Pairing, PairingReview, Slurry, Station, Supplier, ThreadSpec, TubeSet } from '../entities';
@@ -10,6 +11,19 @@ import type { ResourceDef, WriteContext } from './resource';
 type Dto = Record<string, unknown>;
 const stamps = (e: { id: string; version: number; createdAt: Date; updatedAt: Date }) => ({ id: e.id, version: e.version, createdAt: e.createdAt, updatedAt: e.updatedAt });
 const byCode = (alias: string, relation: string) => (qb: SelectQueryBuilder<never>, value: string) => qb.andWhere(`${relation}.code = :${alias}`, { [alias]: value });
+
+/** A stored thread spec as a row of the thread table (the shape the shared thread code works on). */
+export const threadRow = (t: ThreadSpec): ThreadSpecRow => ({
+  code: t.code,
+  family: t.family,
+  nominalLabel: t.nominalLabel,
+  majorDiameterMm: t.majorDiameterMm,
+  pitchMm: t.pitchMm,
+  threadsPerInch: t.threadsPerInch,
+  flankAngleDeg: t.flankAngleDeg,
+  form: t.form,
+  standard: t.standard,
+});
 
 export const supplierDef: ResourceDef<Supplier> = {
   path: 'suppliers',
@@ -42,18 +56,7 @@ export const threadSpecDef: ResourceDef<ThreadSpec> = {
   sorts: { code: 't.code', family: 't.family', majorDiameterMm: 't.majorDiameterMm' },
   defaultSort: 'majorDiameterMm',
   filters: { thread: (qb, v) => qb.andWhere('t.family = :family', { family: v }) },
-  toJson: (t) => ({
-    ...stamps(t),
-    code: t.code,
-    family: t.family,
-    nominalLabel: t.nominalLabel,
-    majorDiameterMm: t.majorDiameterMm,
-    pitchMm: t.pitchMm,
-    threadsPerInch: t.threadsPerInch,
-    flankAngleDeg: t.flankAngleDeg,
-    form: t.form,
-    standard: t.standard,
-  }),
+  toJson: (t) => ({ ...stamps(t), ...threadRow(t) }),
   toColumns: async (dto) => pick<ThreadSpec>(dto, ['code', 'family', 'nominalLabel', 'majorDiameterMm', 'pitchMm', 'threadsPerInch', 'flankAngleDeg', 'form', 'standard']),
 };
 

@@ -5,26 +5,15 @@ import { computePortFlow } from '../../shared/flow';
 import { checkDrumPackagingCode, parsePackagingCode } from '../../shared/packaging-code';
 import { recommendDipTubeLength } from '../../shared/recommend-length';
 import { identifyThread } from '../../shared/threads/identify';
-import type { ThreadSpecRow } from '../../shared/threads/thread-table';
 import { flowToM3s, fromM3s, toMm, type FlowUnit, type LengthUnit } from '../../shared/units';
 import { badRequest, fieldError } from '../common/errors';
 import { body } from '../common/validate';
 import { DrumType, ThreadSpec } from '../entities';
+import { threadRow } from '../registry/definitions';
 import { parseId } from '../registry/resource';
 import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 import { FlowDto, ThreadMatchDto } from './tools.dto';
 
-const rowOf = (t: ThreadSpec): ThreadSpecRow => ({
-  code: t.code,
-  family: t.family,
-  nominalLabel: t.nominalLabel,
-  majorDiameterMm: t.majorDiameterMm,
-  pitchMm: t.pitchMm,
-  threadsPerInch: t.threadsPerInch,
-  flankAngleDeg: t.flankAngleDeg,
-  form: t.form,
-  standard: t.standard,
-});
 
 /** The calculators. They only read, so every signed-in role may use them. */
 export function toolsRouter(ds: DataSource): Router {
@@ -35,7 +24,7 @@ export function toolsRouter(ds: DataSource): Router {
     const dto = req.body as ThreadMatchDto;
     const settings = fitSettingsOf(await loadSettings(ds.manager));
     // Matched against the site's thread table (the published rows plus any an engineer added).
-    const table = (await ds.manager.find(ThreadSpec)).map(rowOf);
+    const table = (await ds.manager.find(ThreadSpec)).map(threadRow);
     const result = identifyThread(
       {
         majorDiameterMm: toMm(dto.majorDiameter.value, dto.majorDiameter.unit as LengthUnit),

@@ -24,6 +24,9 @@ beforeAll(async () => {
   for (const r of ['suppliers', 'thread-specs', 'key-codes', 'drum-types', 'dip-tubes', 'connectors', 'pairings', 'slurries', 'stations', 'tube-sets']) {
     realIds[r] = (await request(app).get(`/api/${r}?pageSize=1`).set(bearer(tokens.admin))).body.items[0].id;
   }
+  // An approved pairing: approving or rejecting it again is a conflict (409) for everyone allowed, so the
+  // four-eyes refusal of a draft's own author (a 403 by design) does not depend on which pairing comes first.
+  realIds.pairings = (await request(app).get('/api/pairings?status=approved&pageSize=1').set(bearer(tokens.admin))).body.items[0].id;
 });
 
 afterAll(async () => {
