@@ -1,10 +1,13 @@
 import { connectorQueries, type ConnectorRecord } from '../data/connectors';
 import { useLengthUnit } from '../data/me';
+import { useCanEditRegistry } from './use-can-edit-registry';
+import { AttachmentsPanel } from '../attachments/attachments-panel';
 import { DetailColumns, DetailScreen, FactLink, FactList, RelationList, Section } from './detail-parts';
 import { RETURN_PATH_LABELS, SUITED_TO_LABELS, TAPPING_LABELS } from './labels';
 import { StatusChip } from './status-chip';
 
 export function ConnectorDetailScreen({ id }: { id: string }) {
+  const canEdit = useCanEditRegistry();
   const query = connectorQueries.useDetail(id);
   const { show } = useLengthUnit();
   return (
@@ -46,6 +49,7 @@ export function ConnectorDetailScreen({ id }: { id: string }) {
                     items={(c.stations ?? []).map((s) => ({
                       key: s.id,
                       title: s.name,
+                      href: `/stations/${s.id}`,
                       detail: `${s.bay} · ${TAPPING_LABELS[s.tapping] ?? s.tapping}`,
                       testID: `connector-station-${s.name}`,
                     }))}
@@ -64,6 +68,7 @@ export function ConnectorDetailScreen({ id }: { id: string }) {
                     }))}
                   />
                 </Section>
+                <AttachmentsPanel ownerKind="connector" ownerId={id} canAdd={canEdit} title="Spec sheets and photos" />
               </>
             }
           />

@@ -1,10 +1,13 @@
 import { dipTubeQueries, type DipTubeRecord } from '../data/dip-tubes';
 import { useLengthUnit } from '../data/me';
+import { useCanEditRegistry } from './use-can-edit-registry';
+import { AttachmentsPanel } from '../attachments/attachments-panel';
 import { DetailColumns, DetailScreen, FactLink, FactList, RelationList, Section } from './detail-parts';
 import { CHANNEL_LABELS } from './labels';
 import { StatusChip } from './status-chip';
 
 export function DipTubeDetailScreen({ id }: { id: string }) {
+  const canEdit = useCanEditRegistry();
   const query = dipTubeQueries.useDetail(id);
   const { show } = useLengthUnit();
   return (
@@ -67,6 +70,7 @@ export function DipTubeDetailScreen({ id }: { id: string }) {
                   }))}
                 />
               </Section>
+              <AttachmentsPanel ownerKind="dip-tube" ownerId={id} canAdd={canEdit} title="Spec sheets and photos" />
             </>
           }
         />

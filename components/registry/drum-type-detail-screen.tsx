@@ -1,11 +1,14 @@
 import { drumTypeQueries, type DrumTypeRecord } from '../data/drum-types';
 import { useLengthUnit } from '../data/me';
+import { useCanEditRegistry } from './use-can-edit-registry';
+import { AttachmentsPanel } from '../attachments/attachments-panel';
 import { DetailColumns, DetailScreen, FactLink, FactList, RelationList, Section } from './detail-parts';
 import { DrumTypeChecks } from './drum-type-checks';
 import { HEAD_LABELS, MATERIAL_LABELS, POSITION_LABELS, regionLabel } from './labels';
 import { StatusChip } from './status-chip';
 
 export function DrumTypeDetailScreen({ id }: { id: string }) {
+  const canEdit = useCanEditRegistry();
   const query = drumTypeQueries.useDetail(id);
   const { show } = useLengthUnit();
   return (
@@ -81,6 +84,7 @@ export function DrumTypeDetailScreen({ id }: { id: string }) {
                   items={(d.slurries ?? []).map((s) => ({ key: s.id, title: s.name, href: `/registry/slurries/${s.id}`, testID: `drum-slurry-${s.name}` }))}
                 />
               </Section>
+              <AttachmentsPanel ownerKind="drum-type" ownerId={id} canAdd={canEdit} title="Spec sheets and photos" />
             </>
           }
         />

@@ -11,6 +11,7 @@ import { Pager } from '../ui/pager';
 import { SearchField } from '../ui/search-field';
 import { EmptyState, ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
+import { ExportButton } from '../imports/export-button';
 import { FilterBar, type FilterKind } from './filter-bar';
 import { LinkButton } from './link-button';
 import { UnitToggle } from './unit-toggle';
@@ -115,6 +116,7 @@ export function RegistryListScreen<T extends { id: string }>(props: RegistryList
       actions={
         <>
           {showsLengths ? <UnitToggle /> : null}
+          <ExportButton resource={resource} params={state.query} />
           {canEdit ? <LinkButton href={newHref} label={`New ${noun.one}`} testID="registry-new" /> : null}
         </>
       }

@@ -1,4 +1,5 @@
 import { SectionTabs, type SectionTab } from './section-tabs';
+import { useCanEditRegistry } from './use-can-edit-registry';
 
 export const REGISTRY_TABS: readonly SectionTab[] = [
   { href: '/registry/drum-types', label: 'Drum types', testID: 'registry-nav-drum-types' },
@@ -9,7 +10,10 @@ export const REGISTRY_TABS: readonly SectionTab[] = [
   { href: '/registry/suppliers', label: 'Suppliers', testID: 'registry-nav-suppliers' },
 ];
 
-/** Moves between the registry's resources. */
+const IMPORT_TAB: SectionTab = { href: '/registry/import', label: 'Import', testID: 'registry-nav-import' };
+
+/** Moves between the registry's resources; engineers and admins also see the spec-sheet import. */
 export function RegistryNav() {
-  return <SectionTabs label="Registry" tabs={REGISTRY_TABS} />;
+  const canEdit = useCanEditRegistry();
+  return <SectionTabs label="Registry" tabs={canEdit ? [...REGISTRY_TABS, IMPORT_TAB] : REGISTRY_TABS} />;
 }

@@ -36,25 +36,58 @@ interface ResolvedDrum {
   threadSpecIds: string[];
 }
 
-const tubeInput = (p: Pairing): TubeInput => ({
-  id: p.dipTubeId,
-  partNumber: p.dipTube!.partNumber,
-  threadCode: p.dipTube!.threadSpec!.code,
-  lengthMm: p.dipTube!.lengthMm,
-  keyCode: p.dipTube!.keyCode?.code ?? null,
-  channels: p.dipTube!.channels,
+/** One candidate pairing as a flat row: read with plain SQL, since hydrating entities dominated the cost. */
+interface CandidateRow {
+  pairing_id: string;
+  status: Pairing['status'];
+  dip_tube_id: string;
+  tube_part: string;
+  thread_code: string;
+  length_mm: number;
+  tube_key: string | null;
+  channels: TubeInput['channels'];
+  connector_id: string;
+  head_part: string;
+  head_key: string | null;
+  feed_bore_mm: number;
+  feed_nominal: string;
+  return_bore_mm: number | null;
+  return_nominal: string | null;
+  return_path: ConnectorInput['returnPath'];
+  suited_to: ConnectorInput['suitedTo'];
+}
+
+const CANDIDATE_SQL = `
+  SELECT p.id AS pairing_id, p.status, t.id AS dip_tube_id, t.part_number AS tube_part, th.code AS thread_code, t.length_mm,
+         tk.code AS tube_key, t.channels, c.id AS connector_id, c.part_number AS head_part, ck.code AS head_key,
+         c.feed_bore_mm, c.feed_nominal, c.return_bore_mm, c.return_nominal, c.return_path, c.suited_to
+  FROM pairings p
+  JOIN dip_tubes t ON t.id = p.dip_tube_id
+  JOIN thread_specs th ON th.id = t.thread_spec_id
+  LEFT JOIN key_codes tk ON tk.id = t.key_code_id
+  JOIN connectors c ON c.id = p.connector_id
+  LEFT JOIN key_codes ck ON ck.id = c.key_code_id
+  WHERE p.status <> 'retired'`;
+
+const tubeInput = (p: CandidateRow): TubeInput => ({
+  id: p.dip_tube_id,
+  partNumber: p.tube_part,
+  threadCode: p.thread_code,
+  lengthMm: p.length_mm,
+  keyCode: p.tube_key,
+  channels: p.channels,
 });
 
-const connectorInput = (p: Pairing): ConnectorInput => ({
-  id: p.connectorId,
-  partNumber: p.connector!.partNumber,
-  keyCode: p.connector!.keyCode?.code ?? null,
-  feedBoreMm: p.connector!.feedBoreMm,
-  feedNominal: p.connector!.feedNominal,
-  returnBoreMm: p.connector!.returnBoreMm,
-  returnNominal: p.connector!.returnNominal,
-  returnPath: p.connector!.returnPath,
-  suitedTo: p.connector!.suitedTo,
+const connectorInput = (p: CandidateRow): ConnectorInput => ({
+  id: p.connector_id,
+  partNumber: p.head_part,
+  keyCode: p.head_key,
+  feedBoreMm: p.feed_bore_mm,
+  feedNominal: p.feed_nominal,
+  returnBoreMm: p.return_bore_mm,
+  returnNominal: p.return_nominal,
+  returnPath: p.return_path,
+  suitedTo: p.suited_to,
 });
 
 /** "Which tube and connector pairs fit this drum, and why": the server's authoritative answer. */
@@ -100,13 +133,13 @@ export class FitCheckService {
     const tubeSetInput: TubeSetInput | null = tubeSet ? { lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null;
 
     const candidates: FitCandidate[] = pool.map((p) => ({
-      dipTubeId: p.dipTubeId,
-      dipTubePartNumber: p.dipTube!.partNumber,
-      connectorId: p.connectorId,
-      connectorPartNumber: p.connector!.partNumber,
-      pairingId: p.id,
+      dipTubeId: p.dip_tube_id,
+      dipTubePartNumber: p.tube_part,
+      connectorId: p.connector_id,
+      connectorPartNumber: p.head_part,
+      pairingId: p.pairing_id,
       pairingStatus: p.status,
-      installedAtStation: !!stationRow && stationRow.connectorId === p.connectorId,
+      installedAtStation: !!stationRow && stationRow.connectorId === p.connector_id,
       ...evaluateCandidate({
         drum: drum.input,
         tube: tubeInput(p),
@@ -114,7 +147,7 @@ export class FitCheckService {
         station,
         slurry: slurryInput,
         pairing: { status: p.status },
-        tubeSet: tubeSet && tubeSet.dipTubeId === p.dipTubeId ? tubeSetInput : null,
+        tubeSet: tubeSet && tubeSet.dipTubeId === p.dip_tube_id ? tubeSetInput : null,
         settings,
       }),
     }));
@@ -217,7 +250,7 @@ export class FitCheckService {
    * using the station's installed head. Tubes come from an index range scan per thread; a large registry
    * is never sorted whole.
    */
-  private async candidatePool(m: EntityManager, drum: ResolvedDrum, installedConnectorId: string | null, settings: FitSettings): Promise<Pairing[]> {
+  private async candidatePool(m: EntityManager, drum: ResolvedDrum, installedConnectorId: string | null, settings: FitSettings): Promise<CandidateRow[]> {
     const threads = [...new Set(drum.threadSpecIds)];
     const lo = drum.input.insideDepthMm - settings.tipClearanceMaxMm;
     const hi = drum.input.insideDepthMm - settings.tipClearanceMinMm;
@@ -231,27 +264,11 @@ export class FitCheckService {
       );
       tubeIds.push(...rows.map((r) => r.id));
     }
-    const qb = () =>
-      m
-        .getRepository(Pairing)
-        .createQueryBuilder('p')
-        .innerJoinAndSelect('p.dipTube', 't')
-        .innerJoinAndSelect('t.threadSpec', 'th')
-        .leftJoinAndSelect('t.keyCode', 'tk')
-        .innerJoinAndSelect('p.connector', 'c')
-        .leftJoinAndSelect('c.keyCode', 'ck')
-        .where('p.status <> :retired', { retired: 'retired' })
-        .orderBy("CASE p.status WHEN 'approved' THEN 0 ELSE 1 END", 'ASC')
-        .addOrderBy('t.part_number', 'ASC')
-        // Every join is many-to-one, so one row per pairing and a plain LIMIT is exact.
-        .limit(POOL_LIMIT);
-    const byThread = tubeIds.length ? await qb().andWhere('p.dip_tube_id IN (:...tubeIds)', { tubeIds }).getMany() : [];
+    const order = `ORDER BY CASE p.status WHEN 'approved' THEN 0 ELSE 1 END, t.part_number LIMIT ${POOL_LIMIT}`;
+    const byThread: CandidateRow[] = tubeIds.length ? await m.query(`${CANDIDATE_SQL} AND p.dip_tube_id = ANY($1::uuid[]) ${order}`, [tubeIds]) : [];
     if (!installedConnectorId) return byThread;
-    const seen = new Set(byThread.map((p) => p.id));
-    const atStation = await qb()
-      .andWhere('p.connector_id = :cid', { cid: installedConnectorId })
-      .andWhere(seen.size ? 'p.id NOT IN (:...seen)' : 'TRUE', { seen: [...seen] })
-      .getMany();
+    const seen = byThread.map((p) => p.pairing_id);
+    const atStation: CandidateRow[] = await m.query(`${CANDIDATE_SQL} AND p.connector_id = $1 AND NOT (p.id = ANY($2::uuid[])) ${order}`, [installedConnectorId, seen]);
     return [...byThread, ...atStation];
   }
 }
