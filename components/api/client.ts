@@ -39,6 +39,11 @@ export function setApiToken(next: string | null): void {
   token = next;
 }
 
+/** The bearer token of the signed-in session, for requests that cannot go through `api()` (uploads, file downloads). */
+export function getApiToken(): string | null {
+  return token;
+}
+
 export function setUnauthorizedHandler(handler: (() => void) | null): void {
   onUnauthorized = handler;
 }

@@ -8,6 +8,8 @@ export interface SessionUser {
   name: string;
   role: Role;
   lengthUnit?: 'mm' | 'in';
+  /** Kinds of notice this person does not want by e-mail (they still appear under Notices). */
+  mailOff?: string[];
 }
 
 export interface SignInResult {

@@ -7,6 +7,8 @@ import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { EmptyState, ErrorState, LoadingState } from '../ui/states';
+import { useIsWide } from '../use-layout';
+import { MailPreferencesCard } from './mail-preferences-card';
 
 const KIND_WORDS: Record<NoticeRecord['kind'], string> = {
   'lot-held': 'Lot on hold',
@@ -23,6 +25,7 @@ export function sortNotices(items: NoticeRecord[]): NoticeRecord[] {
 /** The signed-in person's notices: what happened, a link to it, and marking it read. */
 export function NoticesScreen() {
   const router = useRouter();
+  const wide = useIsWide();
   const list = useNotificationsQuery();
   const readAll = useMarkAllNoticesReadMutation();
   const unread = list.data?.unread ?? 0;
@@ -38,19 +41,27 @@ export function NoticesScreen() {
           {readAll.error.message}
         </Text>
       ) : null}
-      {list.isPending ? (
-        <LoadingState label="Loading notices…" />
-      ) : list.isError ? (
-        <ErrorState error={list.error} onRetry={() => list.refetch()} />
-      ) : list.data.items.length === 0 ? (
-        <EmptyState title="No notices" next="You are told here when a lot is held at the dock, a plan needs hardware, or a pairing needs your review." action={{ label: 'Go home', onPress: () => router.push('/') }} />
-      ) : (
-        <View role="list" aria-label="Notices" style={styles.list} testID="notices-list">
-          {sortNotices(list.data.items).map((n) => (
-            <NoticeRow key={n.id} n={n} />
-          ))}
+      {/* On a wide screen the e-mail choices sit beside the notices; on a phone, after them. */}
+      <View style={[styles.columns, wide && styles.columnsWide]}>
+        <View style={[styles.main, wide && styles.mainWide]}>
+          {list.isPending ? (
+            <LoadingState label="Loading notices…" />
+          ) : list.isError ? (
+            <ErrorState error={list.error} onRetry={() => list.refetch()} />
+          ) : list.data.items.length === 0 ? (
+            <EmptyState title="No notices" next="You are told here when a lot is held at the dock, a plan needs hardware, or a pairing needs your review." action={{ label: 'Go home', onPress: () => router.push('/') }} />
+          ) : (
+            <View role="list" aria-label="Notices" style={styles.list} testID="notices-list">
+              {sortNotices(list.data.items).map((n) => (
+                <NoticeRow key={n.id} n={n} />
+              ))}
+            </View>
+          )}
         </View>
-      )}
+        <View style={wide ? styles.side : undefined}>
+          <MailPreferencesCard />
+        </View>
+      </View>
     </Screen>
   );
 }
@@ -91,6 +102,11 @@ function NoticeRow({ n }: { n: NoticeRecord }) {
 }
 
 const styles = StyleSheet.create({
+  columns: { gap: space.lg },
+  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  main: { gap: space.md },
+  mainWide: { flex: 2, minWidth: 0 },
+  side: { flex: 1, minWidth: 280 },
   list: { gap: space.md },
   unread: { borderLeftWidth: 5, borderLeftColor: colors.primary, borderRadius: radius.lg },
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },

@@ -129,10 +129,12 @@ interface CheckResultProps {
   hold?: ReactNode;
   /** Placed after the facts (e.g. a link to the lot page). */
   after?: ReactNode;
+  /** The files kept with the check (delivery notes, label photos). */
+  files?: ReactNode;
 }
 
 /** A recorded check: the verdict at arm's length, what to use, the drum in section, and every rule's reason. */
-export function CheckResult({ record, wide, hold, after }: CheckResultProps) {
+export function CheckResult({ record, wide, hold, after, files }: CheckResultProps) {
   const result = record.result;
   const best = result.candidates[0];
   const banner = <VerdictBanner verdict={result.verdict} summary={result.summary} testID="verdict" />;
@@ -173,6 +175,7 @@ export function CheckResult({ record, wide, hold, after }: CheckResultProps) {
         {use}
         {drawing}
         {recorded}
+        {files}
         {why}
         {caution}
         <OtherCandidates result={result} />
@@ -190,6 +193,7 @@ export function CheckResult({ record, wide, hold, after }: CheckResultProps) {
       </View>
       <View style={[styles.column, styles.half]}>
         {drawing}
+        {files}
         {caution}
         <OtherCandidates result={result} />
       </View>

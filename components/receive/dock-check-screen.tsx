@@ -20,6 +20,7 @@ import { RecordPicker, type PickedRef } from '../ui/record-picker';
 import { ErrorState, LoadingState } from '../ui/states';
 import { TextField } from '../ui/text-field';
 import { useIsWide } from '../use-layout';
+import { CheckFiles } from './check-files';
 import { CheckResult } from './check-result';
 import { HoldPanel } from './hold-panel';
 import { OpeningEditor, type OpeningDraft } from './opening-editor';
@@ -171,6 +172,7 @@ export function DockCheckScreen() {
             record={record.data}
             wide={wide}
             hold={<HoldPanel record={record.data} prefix="dock" />}
+            files={<CheckFiles checkId={record.data.id} />}
             after={
               <TextLink href={`/receive/${record.data.id}`} testID="dock-lot-link">
                 Open the lot page

@@ -5,6 +5,7 @@ import { colors, fonts, space, type } from '../theme';
 import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
+import { CheckFiles } from './check-files';
 import { CheckResult } from './check-result';
 import { HoldPanel } from './hold-panel';
 import { formatWhen, LinkButton, SectionTitle, TextLink } from './parts';
@@ -37,7 +38,7 @@ export function LotScreen({ id }: { id: string }) {
       actions={actions}
       testID="lot-screen"
     >
-      <CheckResult record={r} wide={wide} hold={<HoldPanel record={r} prefix="lot" />} />
+      <CheckResult record={r} wide={wide} hold={<HoldPanel record={r} prefix="lot" />} files={<CheckFiles checkId={r.id} />} />
       <Card testID="lot-history">
         <SectionTitle>Hardware that touched this lot</SectionTitle>
         {r.changeOuts.length === 0 ? (

@@ -6,6 +6,7 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import type { DataSource } from 'typeorm';
 import { makeTestApp } from './app';
 import { openTestDataSource, resetDatabase } from './db';
+import { testStorage } from './services';
 
 export const VIEWPORTS = [
   { name: 'phone', width: 390, height: 844 },
@@ -41,7 +42,8 @@ export class BrowserHarness {
     if (!fs.existsSync(path.join(WEB_DIR, 'index.html'))) throw new Error('dist/web is missing: run the browser tests through `npm test`, which exports the web app.');
     this.ds = await openTestDataSource();
     await resetDatabase(this.ds);
-    const app = makeTestApp(this.ds, { webDir: WEB_DIR, signInLimits: { perAccount: 1000, perAddress: 1000 } });
+    // Object storage (the local S3 stand-in `npm test` starts) for attachments and the files imports keep.
+    const app = makeTestApp(this.ds, { webDir: WEB_DIR, signInLimits: { perAccount: 1000, perAddress: 1000 }, storage: testStorage() });
     this.server = await new Promise<Server>((resolve) => {
       const s = app.listen(0, '127.0.0.1', () => resolve(s));
     });

@@ -1,0 +1,3 @@
+import { ImportScreen } from '@/components/imports/import-screen';
+
+export default ImportScreen;

@@ -1,0 +1,57 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { Linking, Platform } from 'react-native';
+import type { Page } from '@/shared/api-types';
+import { api } from '../api/client';
+import { openFile, saveFile } from '../api/download';
+import { appendFile, upload, type PickedFile } from '../api/upload';
+
+/** The kinds of record a file can belong to (the server's ATTACHMENT_OWNERS). */
+export type AttachmentOwnerKind = 'drum-type' | 'dip-tube' | 'connector' | 'receiving-check' | 'import';
+
+export interface AttachmentRecord {
+  id: string;
+  ownerKind: AttachmentOwnerKind;
+  ownerId: string;
+  fileName: string;
+  /** What the server read from the bytes, not what the name says. */
+  contentType: string;
+  sizeBytes: number;
+  uploadedByName: string | null;
+  createdAt: string;
+}
+
+export const attachmentKeys = {
+  all: ['attachments'] as const,
+  owner: (ownerKind: AttachmentOwnerKind, ownerId: string) => ['attachments', ownerKind, ownerId] as const,
+};
+
+export function useAttachmentsQuery(ownerKind: AttachmentOwnerKind, ownerId: string) {
+  return useQuery({
+    queryKey: attachmentKeys.owner(ownerKind, ownerId),
+    queryFn: () => api<Page<AttachmentRecord>>(`/attachments?ownerKind=${ownerKind}&ownerId=${encodeURIComponent(ownerId)}`),
+    enabled: !!ownerId,
+  });
+}
+
+export function useAttachmentUploadMutation(ownerKind: AttachmentOwnerKind, ownerId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ file, onProgress }: { file: PickedFile; onProgress?: (fraction: number) => void }) => {
+      const form = new FormData();
+      form.append('ownerKind', ownerKind);
+      form.append('ownerId', ownerId);
+      appendFile(form, 'file', file);
+      return upload<AttachmentRecord>('/attachments', form, { onProgress });
+    },
+    onSuccess: () => qc.invalidateQueries({ queryKey: attachmentKeys.owner(ownerKind, ownerId) }),
+  });
+}
+
+/** In the native app the file opens through a two-minute signed link; in a browser, as a blob behind the token. */
+async function openSigned(id: string): Promise<void> {
+  const { url } = await api<{ url: string }>(`/attachments/${id}/url`);
+  await Linking.openURL(url);
+}
+
+export const openAttachment = (id: string, fileName: string) => (Platform.OS === 'web' ? openFile(`/attachments/${id}/content`, fileName) : openSigned(id));
+export const downloadAttachment = (id: string, fileName: string) => (Platform.OS === 'web' ? saveFile(`/attachments/${id}/content`, fileName) : openSigned(id));

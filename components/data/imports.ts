@@ -1,0 +1,112 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Page } from '@/shared/api-types';
+import { api, ApiError } from '../api/client';
+import { saveFile } from '../api/download';
+import { appendFile, upload, type PickedFile } from '../api/upload';
+
+/** The registry tables a spec sheet can fill; each is also that table's API path and query key. */
+export type ImportKind = 'drum-types' | 'dip-tubes' | 'connectors';
+export const IMPORT_KINDS: readonly ImportKind[] = ['drum-types', 'dip-tubes', 'connectors'];
+
+export type ImportOutcome = 'dry-run' | 'committed' | 'refused';
+
+export interface ImportCounts {
+  new: number;
+  changed: number;
+  unchanged: number;
+  rejected: number;
+}
+
+export interface ImportRowError {
+  line: number;
+  column: string;
+  reason: string;
+}
+
+export interface ImportPlannedRow {
+  line: number;
+  action: 'new' | 'changed' | 'unchanged';
+  partNumber: string;
+  supplierId: string;
+}
+
+/** The answer to POST /imports: a dry run, a commit, or (in a 422's details) a refused commit. */
+export interface ImportRun {
+  id: string;
+  kind: ImportKind;
+  fileName: string;
+  dryRun: boolean;
+  outcome: ImportOutcome;
+  encoding: string;
+  delimiter: ',' | ';';
+  header: string[];
+  ignoredColumns: string[];
+  counts: ImportCounts;
+  errors: ImportRowError[];
+  /** The first 200 planned rows. */
+  rows: ImportPlannedRow[];
+  attachmentId: string | null;
+}
+
+/** One past import (GET /imports): dry runs are kept too. */
+export interface ImportHistoryItem {
+  id: string;
+  kind: ImportKind;
+  fileName: string;
+  dryRun: boolean;
+  outcome: ImportOutcome;
+  encoding: string;
+  delimiter: string;
+  counts: ImportCounts;
+  errors: ImportRowError[];
+  attachmentId: string | null;
+  byName: string | null;
+  at: string;
+}
+
+export const importKeys = {
+  all: ['imports'] as const,
+  history: ['imports', 'history'] as const,
+};
+
+export function useImportHistoryQuery(options: { enabled?: boolean } = {}) {
+  return useQuery({ queryKey: importKeys.history, queryFn: () => api<Page<ImportHistoryItem>>('/imports'), ...options });
+}
+
+export interface ImportRunInput {
+  kind: ImportKind;
+  file: PickedFile;
+  dryRun: boolean;
+  onProgress?: (fraction: number) => void;
+}
+
+/**
+ * Sends the file for a dry run or a commit. Every run is recorded, so the history is refreshed either way;
+ * a commit also refreshes the table it wrote to.
+ */
+export function useImportRunMutation() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ kind, file, dryRun, onProgress }: ImportRunInput) => {
+      const form = new FormData();
+      form.append('kind', kind);
+      form.append('dryRun', String(dryRun));
+      appendFile(form, 'file', file);
+      return upload<ImportRun>('/imports', form, { onProgress });
+    },
+    onSettled: (_data, _error, input) => {
+      void qc.invalidateQueries({ queryKey: importKeys.all });
+      if (!input.dryRun) void qc.invalidateQueries({ queryKey: [input.kind] });
+    },
+  });
+}
+
+/** A commit refused for rejected rows answers 422 with the whole run in its details. */
+export function refusedRun(error: unknown): ImportRun | null {
+  if (!(error instanceof ApiError) || error.status !== 422) return null;
+  const details = error.details as ImportRun | null;
+  return details && typeof details === 'object' && 'counts' in details ? details : null;
+}
+
+/** The empty spreadsheet of one kind, with its columns and an example row. */
+export const downloadImportTemplate = (kind: ImportKind) => saveFile(`/imports/templates/${kind}`, `bungwise-${kind}-template.csv`);

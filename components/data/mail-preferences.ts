@@ -1,0 +1,36 @@
+import { useMutation } from '@tanstack/react-query';
+import { api } from '../api/client';
+import { useSession } from '../session';
+import type { SessionUser } from './session';
+
+/** The kinds of notice that can also come by e-mail (the server's MAIL_KINDS), in the words of the settings. */
+export const MAIL_KINDS = [
+  { kind: 'lot-held', label: 'A lot is put on hold at the dock' },
+  { kind: 'hardware-gap', label: 'A plan or held lot needs hardware' },
+  { kind: 'pairing-review', label: 'A pairing awaits my review' },
+  { kind: 'pairing-decision', label: 'My pairing is approved or rejected' },
+] as const;
+export type MailKind = (typeof MAIL_KINDS)[number]['kind'];
+
+/**
+ * The signed-in person's e-mail choices, kept on their account (PATCH /me {mailOff}). Each change is sent at
+ * once; changes run one after another so the last one made is the one kept.
+ */
+export function useMailPreferences() {
+  const { session, updateUser } = useSession();
+  const save = useMutation({
+    scope: { id: 'me' },
+    mutationFn: (mailOff: string[]) => api<{ user: SessionUser }>('/me', { method: 'PATCH', body: { mailOff } }),
+    onSuccess: ({ user }) => updateUser(user),
+  });
+  // While a change is on its way, show it; if it fails, the account's own list shows again.
+  const off: string[] = save.isPending && save.variables ? save.variables : (session?.user.mailOff ?? []);
+  return {
+    isOn: (kind: MailKind) => !off.includes(kind),
+    set: (kind: MailKind, on: boolean) => save.mutate(on ? off.filter((k) => k !== kind) : [...off.filter((k) => k !== kind), kind]),
+    retry: () => (save.variables ? save.mutate(save.variables) : undefined),
+    saving: save.isPending,
+    saved: save.isSuccess,
+    error: save.error,
+  };
+}
