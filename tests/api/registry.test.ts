@@ -247,7 +247,7 @@ describe('pairings and their approval', () => {
     expect(approved.body.reviews.map((r: { decision: string }) => r.decision)).toEqual(['rejected', 'approved']);
     const twice = await request(app).post(`/api/pairings/${draft.body.id}/approve`).set(bearer(engineer2)).send({});
     expect(twice.status).toBe(409);
-    const dup = await request(app).post('/api/pairings').set(bearer(engineer)).send(pair);
+    const dup = await request(app).post('/api/pairings').set(bearer(engineer)).send(pair!);
     expect(dup.status).toBe(409);
   });
 
