@@ -339,6 +339,11 @@ async function main() {
     }
     if (mode === 'test') {
       if (serverCli(['prepare', '--recreate', '--no-seed'], dbEnv) !== 0) fail('Preparing the test database failed: see the output above.');
+      // Metro does not type-check: the client and the tests are checked here, the server by its build.
+      const tsc = path.join(root, 'node_modules', '.bin', 'tsc');
+      if (run(tsc, ['--noEmit', '-p', 'tsconfig.json']) !== 0 || run(tsc, ['--noEmit', '-p', 'tests/tsconfig.json']) !== 0) {
+        fail('The app or the tests do not type-check: fix the TypeScript errors above.');
+      }
       exportWeb();
       ensureChromium();
       services = await startDevServices(dbEnv);
