@@ -4,7 +4,7 @@ import type { CandidateEvaluation, ConnectorInput, DrumInput, FitSettings, Slurr
 import { describeThread } from '../../shared/fit/rules';
 import { fieldError, ValidationFailed } from '../common/errors';
 import { parseDto } from '../common/validate';
-import { DrumType, Pairing, Slurry, Station, TubeSet } from '../entities';
+import { Pairing, Slurry, Station, TubeSet } from '../entities';
 import { resolveKey, resolveThread } from '../registry/refs';
 import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 import { FitCheckDto } from './fit-check.dto';
@@ -188,19 +188,39 @@ export class FitCheckService {
     return `${what} does not fit any of the ${count} pairing(s) checked. Closest: ${pair}. ${firstProblem?.message ?? ''}`.trim();
   }
 
+  /**
+   * A named prepared statement on the pool: the hot fit-check queries are planned once per connection
+   * instead of on every call. Outside a transaction only; inside one (sourcing, holds) the manager runs it.
+   */
+  private async prepared<T>(m: EntityManager, name: string, text: string, values: unknown[]): Promise<T[]> {
+    if (m.queryRunner?.isTransactionActive) return m.query(text, values);
+    const pool = (this.ds.driver as unknown as { master: { query: (q: { name: string; text: string; values: unknown[] }) => Promise<{ rows: T[] }> } }).master;
+    return (await pool.query({ name, text, values })).rows;
+  }
+
+  /** The drum and its openings in one statement (this runs on every dock check). */
   async loadDrum(m: EntityManager, id: string): Promise<ResolvedDrum> {
-    const d = await m.findOne(DrumType, { where: { id }, relations: { openings: { threadSpec: true, keyCode: true } } });
-    if (!d) throw fieldError('drumTypeId', 'does not name an existing drum type');
-    const openings = [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label));
+    const rows: Array<{ name: string; part_number: string; inside_depth_mm: number; label: string | null; thread_spec_id: string | null; thread_code: string | null; key_code: string | null; bore_mm: number | null }> = await m.query(
+      `SELECT d.name, d.part_number, d.inside_depth_mm, o.label, o.thread_spec_id, th.code AS thread_code, k.code AS key_code, o.bore_mm
+       FROM drum_types d
+       LEFT JOIN drum_openings o ON o.drum_type_id = d.id
+       LEFT JOIN thread_specs th ON th.id = o.thread_spec_id
+       LEFT JOIN key_codes k ON k.id = o.key_code_id
+       WHERE d.id = $1
+       ORDER BY o.label`,
+      [id],
+    );
+    if (!rows.length) throw fieldError('drumTypeId', 'does not name an existing drum type');
+    const openings = rows.filter((r) => r.label !== null);
     return {
-      id: d.id,
-      name: d.name,
-      partNumber: d.partNumber,
+      id,
+      name: rows[0].name,
+      partNumber: rows[0].part_number,
       input: {
-        insideDepthMm: d.insideDepthMm,
-        openings: openings.map((o) => ({ label: o.label, threadCode: o.threadSpec?.code ?? null, keyCode: o.keyCode?.code ?? null, boreMm: o.boreMm })),
+        insideDepthMm: rows[0].inside_depth_mm,
+        openings: openings.map((o) => ({ label: o.label!, threadCode: o.thread_code, keyCode: o.key_code, boreMm: o.bore_mm })),
       },
-      threadSpecIds: openings.map((o) => o.threadSpecId),
+      threadSpecIds: openings.map((o) => o.thread_spec_id!),
     };
   }
 
@@ -256,7 +276,9 @@ export class FitCheckService {
     const hi = drum.input.insideDepthMm - settings.tipClearanceMinMm;
     const tubeIds: string[] = [];
     for (const thread of threads) {
-      const rows: Array<{ id: string }> = await m.query(
+      const rows = await this.prepared<{ id: string }>(
+        m,
+        'fit-tubes-in-reach',
         `(SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm BETWEEN $2 AND $3 ORDER BY length_mm LIMIT $4)
          UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm < $2 ORDER BY length_mm DESC LIMIT $5) below)
          UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm > $3 ORDER BY length_mm ASC LIMIT $5) above)`,
@@ -265,10 +287,10 @@ export class FitCheckService {
       tubeIds.push(...rows.map((r) => r.id));
     }
     const order = `ORDER BY CASE p.status WHEN 'approved' THEN 0 ELSE 1 END, t.part_number LIMIT ${POOL_LIMIT}`;
-    const byThread: CandidateRow[] = tubeIds.length ? await m.query(`${CANDIDATE_SQL} AND p.dip_tube_id = ANY($1::uuid[]) ${order}`, [tubeIds]) : [];
+    const byThread = tubeIds.length ? await this.prepared<CandidateRow>(m, 'fit-candidates-by-tube', `${CANDIDATE_SQL} AND p.dip_tube_id = ANY($1::uuid[]) ${order}`, [tubeIds]) : [];
     if (!installedConnectorId) return byThread;
     const seen = byThread.map((p) => p.pairing_id);
-    const atStation: CandidateRow[] = await m.query(`${CANDIDATE_SQL} AND p.connector_id = $1 AND NOT (p.id = ANY($2::uuid[])) ${order}`, [installedConnectorId, seen]);
+    const atStation = await this.prepared<CandidateRow>(m, 'fit-candidates-by-head', `${CANDIDATE_SQL} AND p.connector_id = $1 AND NOT (p.id = ANY($2::uuid[])) ${order}`, [installedConnectorId, seen]);
     return [...byThread, ...atStation];
   }
 }
