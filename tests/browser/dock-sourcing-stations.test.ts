@@ -1,6 +1,6 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, seen, signInAs, textOf, VIEWPORTS, type Viewport } from '../support/browser';
 import { resetDatabase } from '../support/db';
 
 // The operations journeys: a clerk at the dock, a buyer planning a new source, a station's tube-set rotation,
@@ -26,17 +26,6 @@ afterEach(async () => {
   expect(harness.takeConsoleErrors()).toEqual([]);
 });
 
-const text = async (page: Page, testID: string) => (await page.getByTestId(testID).first().textContent()) ?? '';
-
-/** Waits until the element's text matches: the page updates after the request a click started. */
-async function seen(page: Page, testID: string, pattern: RegExp | string) {
-  const re = typeof pattern === 'string' ? new RegExp(pattern.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')) : pattern;
-  try {
-    await page.getByTestId(testID).filter({ hasText: re }).first().waitFor({ timeout: 10_000 });
-  } catch {
-    throw new Error(`${testID} never showed ${re}; it shows "${await text(page, testID).catch(() => '(nothing)')}"`);
-  }
-}
 
 /** Searches a record picker (components/ui/record-picker) and takes the first match. */
 async function pick(page: Page, testID: string, search: string, opened = true) {
@@ -293,7 +282,7 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await page.getByTestId(`change-out-lot-${rotationLot}`).click();
     // The lot page may first show the check as cached at the dock; it refreshes with the change-out.
     await seen(page, 'lot-history', 'Tube set Set C');
-    const history = await text(page, 'lot-history');
+    const history = await textOf(page, 'lot-history');
     expect(history).toContain(demo.fittingStation);
     expect(history).toContain('Tube set Set C');
     expect(history).toContain(demo.fittingHead);

@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import type { BrowserContext, Page } from 'playwright-core';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, seen, signInAs, textOf, VIEWPORTS, type Viewport } from '../support/browser';
 
 // Spec-sheet imports (a file with a bad row, then a clean one), files kept with a lot at the dock, and the
 // e-mail choices on the notices screen. Part and lot numbers differ per viewport: both runs share one database.
@@ -24,17 +24,6 @@ afterEach(async () => {
   expect(harness.takeConsoleErrors()).toEqual([]);
 });
 
-const text = async (page: Page, testID: string) => (await page.getByTestId(testID).first().textContent()) ?? '';
-
-/** Waits until the element's text matches: the page updates after the request a click started. */
-async function seen(page: Page, testID: string, pattern: RegExp | string) {
-  const re = typeof pattern === 'string' ? new RegExp(pattern.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')) : pattern;
-  try {
-    await page.getByTestId(testID).filter({ hasText: re }).first().waitFor({ timeout: 10_000 });
-  } catch {
-    throw new Error(`${testID} never showed ${re}; it shows "${await text(page, testID).catch(() => '(nothing)')}"`);
-  }
-}
 
 /** Screens scroll inside the app, so a full-page shot shows one screenful: scroll the part to look at into view. */
 async function shotOf(page: Page, testID: string, name: string, viewport: Viewport) {

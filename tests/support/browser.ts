@@ -83,3 +83,16 @@ export async function signInAs(page: Page, baseUrl: string, email: string, passw
   await page.getByTestId('sign-in-password').fill(password);
   await page.getByTestId('sign-in-submit').click();
 }
+
+/** The first element's text with that test id ('' when it has none). */
+export const textOf = async (page: Page, testID: string) => (await page.getByTestId(testID).first().textContent()) ?? '';
+
+/** Waits until the element's text matches: the page updates after the request a click started. */
+export async function seen(page: Page, testID: string, pattern: RegExp | string): Promise<void> {
+  const re = typeof pattern === 'string' ? new RegExp(pattern.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')) : pattern;
+  try {
+    await page.getByTestId(testID).filter({ hasText: re }).first().waitFor({ timeout: 10_000 });
+  } catch {
+    throw new Error(`${testID} never showed ${re}; it shows "${await textOf(page, testID).catch(() => '(nothing)')}"`);
+  }
+}
