@@ -100,7 +100,7 @@ async function loadRegistry(db: Client): Promise<void> {
 async function startServer(port: number): Promise<ChildProcess> {
   const child = spawn('node', [path.join(root, 'dist', 'server', 'server', 'index.js')], {
     cwd: root,
-    env: { ...process.env, PORT: String(port), BUNGWISE_LOG_REQUESTS: '0', BUNGWISE_DEMO: '0', S3_BUCKET: '', SMTP_URL: '' },
+    env: { ...process.env, PORT: String(port), BUNGWISE_LOG_REQUESTS: '0', BUNGWISE_DEMO: '0', S3_BUCKET: '', SMTP_URL: '', BUNGWISE_IMPORT_TIMING: '1' },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   for (let i = 0; i < 100; i++) {

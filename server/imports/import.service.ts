@@ -60,14 +60,21 @@ export class ImportService {
   ) {}
 
   async run(args: { kind: ImportKind; dryRun: boolean; fileName: string; bytes: Buffer; userId: string }) {
+    // BUNGWISE_IMPORT_TIMING=1 logs where an import spends its time (the benchmark reads it).
+    const started = performance.now();
+    const phases: Record<string, number> = {};
+    const mark = (name: string) => (phases[name] = Math.round(performance.now() - started));
     const { text, encoding } = decodeCsv(args.bytes);
     const delimiter = detectDelimiter(text);
+    mark('decoded');
     const m = this.ds.manager;
     const refs = await this.references(m);
     const parsed = await this.parseRows(args.kind, text, delimiter, refs);
+    mark('parsed and validated');
     const { errors, ignoredColumns, header } = parsed;
     const rows = args.kind === 'drum-types' ? parsed.rows : this.dropRepeats(parsed.rows, errors, header);
     const planned = await this.plan(m, args.kind, rows);
+    mark('planned');
     const counts = {
       new: planned.filter((r) => r.action === 'new').length,
       changed: planned.filter((r) => r.action === 'changed').length,
@@ -80,6 +87,7 @@ export class ImportService {
     const attachmentId = this.storage
       ? (await storeAttachment(this.ds, this.storage, { ownerKind: 'import', ownerId: id, fileName: args.fileName, contentType: 'text/csv', bytes: args.bytes, userId: args.userId })).id
       : null;
+    mark('file kept');
 
     const record = (mgr: EntityManager) =>
       mgr.save(mgr.create(ImportRecord, { id, kind: args.kind, fileName: args.fileName.slice(0, 255), dryRun: args.dryRun, outcome, encoding, delimiter, counts, errors: errors.slice(0, MAX_ERRORS), attachmentId, byId: args.userId }));
@@ -90,6 +98,7 @@ export class ImportService {
         await record(tx);
         await audit(tx, { userId: args.userId, action: 'import', entity: args.kind, entityId: id, summary: `Imported ${args.fileName}: ${counts.new} new, ${counts.changed} changed, ${counts.unchanged} unchanged`, after: { counts } });
       });
+      mark('written');
     } else {
       await record(m);
     }
@@ -108,6 +117,7 @@ export class ImportService {
       rows: planned.slice(0, 200).map((r) => ({ line: r.line, action: r.action, partNumber: r.partNumber, supplierId: r.supplierId })),
       attachmentId,
     };
+    if (process.env.BUNGWISE_IMPORT_TIMING === '1') console.error(`[bungwise] import of ${rows.length} rows, ms since start: ${JSON.stringify(phases)}`);
     if (outcome === 'refused') {
       throw new HttpError(422, 'import_refused', `Nothing was written: ${counts.rejected} row(s) have problems. Fix them (see details) and import again.`, body);
     }
