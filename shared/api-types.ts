@@ -240,3 +240,22 @@ export interface UserSummary {
   name: string;
   role: Role;
 }
+
+/** One thing to order: registered parts by part number, an approval, or a specification to buy to. */
+export interface OrderLine {
+  kind: 'dip-tube' | 'connector' | 'approval' | 'spec';
+  id?: string;
+  partNumber?: string;
+  description: string;
+  note?: string;
+  count: number;
+}
+
+/** What one station needs to run a drum type (a sourcing plan's impact, a held lot's warning). */
+export interface StationNeed {
+  stationId: string;
+  stationName: string;
+  verdict: 'fits' | 'caution' | 'no-fit';
+  summary: string;
+  order: OrderLine[];
+}

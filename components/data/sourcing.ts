@@ -1,27 +1,13 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page, Region } from '@/shared/api-types';
+import type { OrderLine, Page, Region, StationNeed } from '@/shared/api-types';
+
+export type { OrderLine };
 import { api } from '../api/client';
 import { notificationKeys } from './notifications';
 import { warningKeys, type HardwareWarningRecord } from './warnings';
 
-/** One thing to order: registered parts by part number, an approval, or a specification to buy to. */
-export interface OrderLine {
-  kind: 'dip-tube' | 'connector' | 'approval' | 'spec';
-  id?: string;
-  partNumber?: string;
-  description: string;
-  note?: string;
-  count: number;
-}
-
 /** What one station needs to run the plan's drum. */
-export interface StationImpact {
-  stationId: string;
-  stationName: string;
-  verdict: 'fits' | 'caution' | 'no-fit';
-  summary: string;
-  order: OrderLine[];
-}
+export type StationImpact = StationNeed;
 
 export interface SourcingPlanRecord {
   id: string;

@@ -5,17 +5,15 @@ import { DEFAULT_TURBULENT_FROM, type PortFlow } from '@/shared/flow';
 import { FLOW_UNITS, isFlowUnit, type FlowUnit } from '@/shared/units';
 import { ApiError } from '../api/client';
 import { useFlowMutation, type FlowAnswer, type FlowInput } from '../data/tools';
-import { Screen } from '../screen';
 import { colors, fonts, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ChoiceChips } from '../ui/choice-chips';
 import { ErrorState } from '../ui/states';
 import { TextField } from '../ui/text-field';
-import { useIsWide } from '../use-layout';
 import { FlowPlot } from './flow-plot';
 import { parseNumber, positiveProblem } from './parse-number';
-import { useRevealOnPhone } from './use-reveal';
+import { ToolPage } from './tool-page';
 
 const FLOW_LABELS: Record<FlowUnit, string> = { 'L/min': 'L/min', 'gal/min': 'US gal/min', 'm3/h': 'm³/h' };
 const REGIME_LABELS: Record<PortFlow['regime'], string> = { laminar: 'Laminar', transitional: 'Transitional', turbulent: 'Turbulent' };
@@ -25,7 +23,6 @@ const fmt = (x: number, digits: number) => x.toLocaleString('en-US', { maximumFr
 
 /** Velocities, wall shear rates and flow regimes in a dispense head's feed and return bores at one flow. */
 export function FlowScreen() {
-  const wide = useIsWide();
   // A connector's page opens this with its bores filled in: /tools/flow?feed=19.05&return=12.7
   const params = useLocalSearchParams<{ feed?: string; return?: string; flow?: string; unit?: string }>();
   const calc = useFlowMutation();
@@ -34,7 +31,6 @@ export function FlowScreen() {
   const [feed, setFeed] = useState(one(params.feed));
   const [ret, setRet] = useState(one(params.return));
   const [errors, setErrors] = useState<Record<string, string | null>>({});
-  const resultRef = useRevealOnPhone(calc.data);
 
   const submit = () => {
     const q = parseNumber(flow);
@@ -93,16 +89,7 @@ export function FlowScreen() {
     );
   }
 
-  return (
-    <Screen title="Flow and shear" subtitle="How fast slurry moves through a dispense head's ports, and how hard it is sheared at the wall." testID="tools-flow">
-      <View style={[styles.cols, wide && styles.colsWide]}>
-        <View style={[styles.col, wide && styles.formCol]}>{form}</View>
-        <View ref={resultRef} style={[styles.col, wide && styles.resultCol]} aria-live="polite">
-          {result}
-        </View>
-      </View>
-    </Screen>
-  );
+  return <ToolPage title={"Flow and shear"} subtitle={"How fast slurry moves through a dispense head's ports, and how hard it is sheared at the wall."} testID={"tools-flow"} form={form} result={result} answer={calc.data} formFlex={4} resultFlex={7} />;
 }
 
 function FlowResult({ answer, input }: { answer: FlowAnswer; input: FlowInput }) {
@@ -176,11 +163,6 @@ function Row({ label, value, testID }: { label: string; value: string; testID?: 
 }
 
 const styles = StyleSheet.create({
-  cols: { gap: space.lg },
-  colsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  col: { gap: space.lg },
-  formCol: { flex: 4, minWidth: 0 },
-  resultCol: { flex: 7, minWidth: 0 },
   result: { gap: space.md },
   ratio: { gap: space.xs, marginTop: space.sm },
   big: { fontFamily: fonts.bold, fontSize: 36, lineHeight: 42, color: colors.ink },

@@ -6,16 +6,14 @@ import { ApiError } from '../api/client';
 import { useLengthUnit } from '../data/me';
 import { useThreadMatchMutation, type ThreadIdentification, type ThreadMatchInput } from '../data/tools';
 import { TextLink } from '../registry/detail-parts';
-import { Screen } from '../screen';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ChoiceChips } from '../ui/choice-chips';
 import { ErrorState } from '../ui/states';
 import { TextField } from '../ui/text-field';
-import { useIsWide } from '../use-layout';
 import { parseNumber, positiveProblem } from './parse-number';
-import { useRevealOnPhone } from './use-reveal';
+import { ToolPage } from './tool-page';
 
 type CountKind = 'tpi' | 'pitch';
 type Flank = 'unknown' | '55' | '60';
@@ -28,7 +26,6 @@ const UNIT_OPTIONS = [
 
 /** Identifies a bung or tube thread from what can be measured at the dock, and says what to measure next. */
 export function ThreadScreen() {
-  const wide = useIsWide();
   const { unit: preferred } = useLengthUnit();
   const match = useThreadMatchMutation();
   const [diameter, setDiameter] = useState('');
@@ -38,7 +35,6 @@ export function ThreadScreen() {
   const [flank, setFlank] = useState<Flank>('unknown');
   const [taper, setTaper] = useState<Taper>('unknown');
   const [errors, setErrors] = useState<Record<string, string | null>>({});
-  const resultRef = useRevealOnPhone(match.data);
 
   const submit = () => {
     const d = parseNumber(diameter);
@@ -144,16 +140,7 @@ export function ThreadScreen() {
     );
   }
 
-  return (
-    <Screen title="Thread identifier" subtitle="Name a thread from a caliper reading and a gauge, before a dip tube is forced into the wrong bung." testID="tools-thread">
-      <View style={[styles.cols, wide && styles.colsWide]}>
-        <View style={[styles.col, wide && styles.formCol]}>{form}</View>
-        <View ref={resultRef} style={[styles.col, wide && styles.resultCol]} aria-live="polite">
-          {result}
-        </View>
-      </View>
-    </Screen>
-  );
+  return <ToolPage title={"Thread identifier"} subtitle={"Name a thread from a caliper reading and a gauge, before a dip tube is forced into the wrong bung."} testID={"tools-thread"} form={form} result={result} answer={match.data} formFlex={5} resultFlex={6} />;
 }
 
 function ThreadResult({ answer }: { answer: ThreadIdentification }) {
@@ -227,11 +214,6 @@ function Fact({ label, value, testID }: { label: string; value: string; testID?:
 }
 
 const styles = StyleSheet.create({
-  cols: { gap: space.lg },
-  colsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  col: { gap: space.lg },
-  formCol: { flex: 5, minWidth: 0 },
-  resultCol: { flex: 6, minWidth: 0 },
   pair: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'flex-start' },
   grow: { flex: 1, minWidth: 180 },
   result: { gap: space.md },

@@ -2,29 +2,15 @@ import { In, type EntityManager } from 'typeorm';
 import { evaluateCandidate } from '../../shared/fit';
 import { describeThread } from '../../shared/fit/rules';
 import { recommendDipTubeLength } from '../../shared/recommend-length';
+import type { OrderLine, StationNeed } from '../../shared/api-types';
 import { Connector, DipTube, Pairing, Station, TubeSet } from '../entities';
+
+export type { OrderLine, StationNeed };
 import type { FitCheckService } from '../fit/fit-check.service';
 import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 
 /** Three sets per drum position: one online, one standby, one being cleaned [practice]. */
 export const SETS_PER_POSITION = 3;
-
-export interface OrderLine {
-  kind: 'dip-tube' | 'connector' | 'approval' | 'spec';
-  id?: string;
-  partNumber?: string;
-  description: string;
-  note?: string;
-  count: number;
-}
-
-export interface StationNeed {
-  stationId: string;
-  stationName: string;
-  verdict: 'fits' | 'caution' | 'no-fit';
-  summary: string;
-  order: OrderLine[];
-}
 
 interface SlurryFlags {
   name: string;
