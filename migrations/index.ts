@@ -6,5 +6,6 @@ import { CreateOperations1764619200000 } from './1764619200000-create-operations
 import { CreateImportsAttachmentsOutbox1764622800000 } from './1764622800000-create-imports-attachments-outbox';
 import { CreateAuditLog1764626400000 } from './1764626400000-create-audit-log';
 import { IndexTubeReach1764630000000 } from './1764630000000-index-tube-reach';
+import { CoverTubeReach1764633600000 } from './1764633600000-cover-tube-reach';
 
-export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000, CreateImportsAttachmentsOutbox1764622800000, CreateAuditLog1764626400000, IndexTubeReach1764630000000];
+export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000, CreateImportsAttachmentsOutbox1764622800000, CreateAuditLog1764626400000, IndexTubeReach1764630000000, CoverTubeReach1764633600000];

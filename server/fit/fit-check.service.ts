@@ -1,12 +1,13 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { drumVerdict, evaluateCandidate, handlingCautions } from '../../shared/fit';
 import type { CandidateEvaluation, ConnectorInput, DrumInput, FitSettings, SlurryInput, StationInput, TubeInput, TubeSetInput, Verdict } from '../../shared/fit/types';
-import { describeThread } from '../../shared/fit/rules';
+import { describeThread, resolveSettings } from '../../shared/fit/rules';
 import { fieldError, ValidationFailed } from '../common/errors';
 import { parseDto } from '../common/validate';
 import { Pairing, Slurry, Station, TubeSet } from '../entities';
 import { resolveKey, resolveThread } from '../registry/refs';
-import { fitSettingsOf, loadSettings } from '../settings/settings.service';
+import { loadSettings } from '../settings/settings.service';
+import { preparedQuery } from '../db/prepared';
 import { FitCheckDto } from './fit-check.dto';
 
 const SEVERITY: Record<Verdict, number> = { fits: 0, caution: 1, 'no-fit': 2 };
@@ -15,8 +16,8 @@ const STATUS_RANK: Record<Pairing['status'], number> = { approved: 0, draft: 1, 
 const POOL_LIMIT = 60;
 const ANSWER_LIMIT = 20;
 /** Tubes per thread taken from inside the reach window, and either side of it. */
-const TUBES_IN_WINDOW = 40;
-const TUBES_NEAR_MISS = 5;
+const TUBES_IN_WINDOW = 20;
+const TUBES_NEAR_MISS = 3;
 
 export interface FitCandidate extends CandidateEvaluation {
   dipTubeId: string;
@@ -69,6 +70,55 @@ const CANDIDATE_SQL = `
   LEFT JOIN key_codes ck ON ck.id = c.key_code_id
   WHERE p.status <> 'retired'`;
 
+/** Approved pairings first, then by part numbers: which candidates make the pool when there are more. */
+const POOL_ORDER = `CASE status WHEN 'approved' THEN 0 ELSE 1 END, tube_part, head_part`;
+
+/**
+ * $1 the drum type, or null for a hand-described drum with depth $2 and thread ids $3; $4 the station's
+ * installed head or null; $5 tubes per thread inside the reach window, $6 either side of it; $7 pool size.
+ */
+export const SNAPSHOT_SQL = `
+  WITH st AS (SELECT * FROM site_settings ORDER BY created_at LIMIT 1),
+  d AS (SELECT name, part_number, inside_depth_mm FROM drum_types WHERE id = $1::uuid),
+  o AS (
+    SELECT o.label, o.thread_spec_id, th.code AS thread_code, k.code AS key_code, o.bore_mm
+    FROM drum_openings o JOIN thread_specs th ON th.id = o.thread_spec_id LEFT JOIN key_codes k ON k.id = o.key_code_id
+    WHERE o.drum_type_id = $1::uuid),
+  reach AS (
+    SELECT depth - st.tip_clearance_max_mm AS lo, depth - st.tip_clearance_min_mm AS hi
+    FROM st, (SELECT coalesce((SELECT inside_depth_mm FROM d), $2::float8) AS depth) depth),
+  threads AS (SELECT thread_spec_id AS id FROM o UNION SELECT unnest($3::uuid[])),
+  tubes AS (
+    SELECT x.id FROM threads, reach, LATERAL (
+      (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm BETWEEN reach.lo AND reach.hi ORDER BY length_mm LIMIT $5::int)
+      UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm < reach.lo ORDER BY length_mm DESC LIMIT $6::int) below)
+      UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm > reach.hi ORDER BY length_mm ASC LIMIT $6::int) above)) x),
+  by_tube AS (
+    SELECT x.* FROM tubes, LATERAL (${CANDIDATE_SQL} AND p.dip_tube_id = tubes.id OFFSET 0) x
+    ORDER BY ${POOL_ORDER} LIMIT $7::int),
+  by_head AS (
+    SELECT x.* FROM (${CANDIDATE_SQL} AND p.connector_id = $4::uuid) x WHERE x.pairing_id NOT IN (SELECT pairing_id FROM by_tube)
+    ORDER BY ${POOL_ORDER} LIMIT $7::int),
+  pool AS (SELECT 0 AS part, * FROM by_tube UNION ALL SELECT 1, * FROM by_head)
+  SELECT (SELECT to_jsonb(st) FROM st) AS settings,
+         (SELECT to_jsonb(d) FROM d) AS drum,
+         (SELECT coalesce(jsonb_agg(o ORDER BY o.label), '[]') FROM o) AS openings,
+         (SELECT coalesce(jsonb_agg(to_jsonb(pool) - 'part' ORDER BY part, ${POOL_ORDER}), '[]') FROM pool) AS candidates`;
+
+interface SnapshotRow {
+  settings: { tip_clearance_min_mm: number; tip_clearance_max_mm: number; thread_match_tolerance_mm: number; laminar_limit: number; max_return_velocity_ratio: number } | null;
+  drum: { name: string; part_number: string; inside_depth_mm: number } | null;
+  openings: Array<{ label: string; thread_spec_id: string; thread_code: string; key_code: string | null; bore_mm: number }>;
+  candidates: CandidateRow[];
+}
+
+/** A drum to check: a registered drum type by id, or one described by hand (already resolved to thread ids). */
+interface AdHocDrum {
+  input: DrumInput;
+  threadSpecIds: string[];
+}
+type DrumRef = { id: string } | AdHocDrum;
+
 const tubeInput = (p: CandidateRow): TubeInput => ({
   id: p.dip_tube_id,
   partNumber: p.tube_part,
@@ -103,7 +153,7 @@ export class FitCheckService {
       throw fieldError('stationId', 'give either stationId or tapping/agitation/flowLpm, not both');
     }
     const m = this.ds.manager;
-    const drum = dto.drumTypeId ? await this.loadDrum(m, dto.drumTypeId) : await this.adHocDrum(m, dto);
+    const drum: DrumRef = dto.drumTypeId ? { id: dto.drumTypeId } : await this.adHocDrum(m, dto);
     const slurry = dto.slurryId ? await m.findOneBy(Slurry, { id: dto.slurryId }) : null;
     if (dto.slurryId && !slurry) throw fieldError('slurryId', 'does not name an existing slurry');
     const { station, stationRow } = await this.station(m, dto);
@@ -113,22 +163,17 @@ export class FitCheckService {
 
   /** The same check for callers inside the server (dock records, sourcing plans), by ids and slurry properties. */
   async checkFor(m: EntityManager, args: { drumTypeId: string; stationId?: string | null; slurry?: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null }) {
-    const drum = await this.loadDrum(m, args.drumTypeId);
     const { station, stationRow } = await this.station(m, { stationId: args.stationId ?? undefined } as FitCheckDto);
     const tubeSet = await this.nextTubeSet(m, {} as FitCheckDto, stationRow);
-    return this.run(m, { drum, station, stationRow, slurry: args.slurry ?? null, tubeSet, fieldForDrum: 'drumTypeId' });
+    return this.run(m, { drum: { id: args.drumTypeId }, station, stationRow, slurry: args.slurry ?? null, tubeSet, fieldForDrum: 'drumTypeId' });
   }
 
   private async run(
     m: EntityManager,
-    ctx: { drum: ResolvedDrum; station: StationInput | null; stationRow: Station | null; slurry: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null; tubeSet: TubeSet | null; fieldForDrum: string },
+    ctx: { drum: DrumRef; station: StationInput | null; stationRow: Station | null; slurry: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null; tubeSet: TubeSet | null; fieldForDrum: string },
   ) {
-    const { drum, station, stationRow, slurry, tubeSet } = ctx;
-    const settings = fitSettingsOf(await loadSettings(m));
-    if (drum.input.insideDepthMm <= settings.tipClearanceMaxMm) {
-      throw fieldError(ctx.fieldForDrum, `inside depth must be more than the site's largest tip clearance (${settings.tipClearanceMaxMm} mm)`);
-    }
-    const pool = await this.candidatePool(m, drum, stationRow?.connectorId ?? null, settings);
+    const { station, stationRow, slurry, tubeSet } = ctx;
+    const { drum, settings, pool } = await this.snapshot(m, ctx.drum, stationRow?.connectorId ?? null, ctx.fieldForDrum);
     const slurryInput: SlurryInput | null = slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null;
     const tubeSetInput: TubeSetInput | null = tubeSet ? { lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null;
 
@@ -188,16 +233,6 @@ export class FitCheckService {
     return `${what} does not fit any of the ${count} pairing(s) checked. Closest: ${pair}. ${firstProblem?.message ?? ''}`.trim();
   }
 
-  /**
-   * A named prepared statement on the pool: the hot fit-check queries are planned once per connection
-   * instead of on every call. Outside a transaction only; inside one (sourcing, holds) the manager runs it.
-   */
-  private async prepared<T>(m: EntityManager, name: string, text: string, values: unknown[]): Promise<T[]> {
-    if (m.queryRunner?.isTransactionActive) return m.query(text, values);
-    const pool = (this.ds.driver as unknown as { master: { query: (q: { name: string; text: string; values: unknown[] }) => Promise<{ rows: T[] }> } }).master;
-    return (await pool.query({ name, text, values })).rows;
-  }
-
   /** The drum and its openings in one statement (this runs on every dock check). */
   async loadDrum(m: EntityManager, id: string): Promise<ResolvedDrum> {
     const rows: Array<{ name: string; part_number: string; inside_depth_mm: number; label: string | null; thread_spec_id: string | null; thread_code: string | null; key_code: string | null; bore_mm: number | null }> = await m.query(
@@ -224,7 +259,7 @@ export class FitCheckService {
     };
   }
 
-  private async adHocDrum(m: EntityManager, dto: FitCheckDto): Promise<ResolvedDrum> {
+  private async adHocDrum(m: EntityManager, dto: FitCheckDto): Promise<AdHocDrum> {
     const drum = dto.drum!;
     const openings = [];
     const ids: string[] = [];
@@ -234,7 +269,7 @@ export class FitCheckService {
       ids.push(spec.id);
       openings.push({ label: o.label ?? `opening ${i + 1}`, threadCode: spec.code, keyCode: o.keyCode ?? null, boreMm: o.boreMm ?? null });
     }
-    return { id: null, name: null, partNumber: null, input: { insideDepthMm: drum.insideDepthMm, openings }, threadSpecIds: ids };
+    return { input: { insideDepthMm: drum.insideDepthMm, openings }, threadSpecIds: ids };
   }
 
   private async station(m: EntityManager, dto: FitCheckDto): Promise<{ station: StationInput | null; stationRow: Station | null }> {
@@ -265,32 +300,48 @@ export class FitCheckService {
   }
 
   /**
-   * Pairings worth judging: those of tubes that thread into one of the drum's openings and reach the
-   * clearance window, then the nearest tubes either side of it (so a near miss can say why), plus those
-   * using the station's installed head. Tubes come from an index range scan per thread; a large registry
-   * is never sorted whole.
+   * Everything one check reads, in one prepared statement (a round trip to the database costs more here than
+   * judging the candidates): the site settings, the drum and its openings, and the pairings worth judging.
+   * Those are the pairings of tubes that thread into one of the drum's openings and reach the clearance
+   * window, then the nearest tubes either side of it (so a near miss can say why), plus those using the
+   * station's installed head. Tubes come from an index range scan per thread; a large registry is never
+   * sorted whole.
    */
-  private async candidatePool(m: EntityManager, drum: ResolvedDrum, installedConnectorId: string | null, settings: FitSettings): Promise<CandidateRow[]> {
-    const threads = [...new Set(drum.threadSpecIds)];
-    const lo = drum.input.insideDepthMm - settings.tipClearanceMaxMm;
-    const hi = drum.input.insideDepthMm - settings.tipClearanceMinMm;
-    const tubeIds: string[] = [];
-    for (const thread of threads) {
-      const rows = await this.prepared<{ id: string }>(
-        m,
-        'fit-tubes-in-reach',
-        `(SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm BETWEEN $2 AND $3 ORDER BY length_mm LIMIT $4)
-         UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm < $2 ORDER BY length_mm DESC LIMIT $5) below)
-         UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = $1 AND length_mm > $3 ORDER BY length_mm ASC LIMIT $5) above)`,
-        [thread, lo, hi, TUBES_IN_WINDOW, TUBES_NEAR_MISS],
-      );
-      tubeIds.push(...rows.map((r) => r.id));
+  private async snapshot(m: EntityManager, ref: DrumRef, installedConnectorId: string | null, fieldForDrum: string): Promise<{ drum: ResolvedDrum; settings: FitSettings; pool: CandidateRow[] }> {
+    const drumTypeId = 'id' in ref ? ref.id : null;
+    const adHoc = 'input' in ref ? ref : null;
+    const [row] = await preparedQuery<SnapshotRow>(
+      this.ds,
+      'fit-snapshot',
+      SNAPSHOT_SQL,
+      [drumTypeId, adHoc?.input.insideDepthMm ?? null, adHoc?.threadSpecIds ?? [], installedConnectorId, TUBES_IN_WINDOW, TUBES_NEAR_MISS, POOL_LIMIT],
+      m,
+    );
+    if (!row.settings) {
+      await loadSettings(m); // a new site: create its settings row with the defaults, then read again
+      return this.snapshot(m, ref, installedConnectorId, fieldForDrum);
     }
-    const order = `ORDER BY CASE p.status WHEN 'approved' THEN 0 ELSE 1 END, t.part_number LIMIT ${POOL_LIMIT}`;
-    const byThread = tubeIds.length ? await this.prepared<CandidateRow>(m, 'fit-candidates-by-tube', `${CANDIDATE_SQL} AND p.dip_tube_id = ANY($1::uuid[]) ${order}`, [tubeIds]) : [];
-    if (!installedConnectorId) return byThread;
-    const seen = byThread.map((p) => p.pairing_id);
-    const atStation = await this.prepared<CandidateRow>(m, 'fit-candidates-by-head', `${CANDIDATE_SQL} AND p.connector_id = $1 AND NOT (p.id = ANY($2::uuid[])) ${order}`, [installedConnectorId, seen]);
-    return [...byThread, ...atStation];
+    const settings = resolveSettings({
+      tipClearanceMinMm: row.settings.tip_clearance_min_mm,
+      tipClearanceMaxMm: row.settings.tip_clearance_max_mm,
+      threadMatchToleranceMm: row.settings.thread_match_tolerance_mm,
+      laminarLimit: row.settings.laminar_limit,
+      maxReturnVelocityRatio: row.settings.max_return_velocity_ratio,
+    });
+    if (drumTypeId && !row.drum) throw fieldError('drumTypeId', 'does not name an existing drum type');
+    const drum: ResolvedDrum =
+      drumTypeId && row.drum
+        ? {
+            id: drumTypeId,
+            name: row.drum.name,
+            partNumber: row.drum.part_number,
+            input: { insideDepthMm: row.drum.inside_depth_mm, openings: row.openings.map((o) => ({ label: o.label, threadCode: o.thread_code, keyCode: o.key_code, boreMm: o.bore_mm })) },
+            threadSpecIds: row.openings.map((o) => o.thread_spec_id),
+          }
+        : { id: null, name: null, partNumber: null, input: adHoc!.input, threadSpecIds: adHoc!.threadSpecIds };
+    if (drum.input.insideDepthMm <= settings.tipClearanceMaxMm) {
+      throw fieldError(fieldForDrum, `inside depth must be more than the site's largest tip clearance (${settings.tipClearanceMaxMm} mm)`);
+    }
+    return { drum, settings, pool: row.candidates };
   }
 }
