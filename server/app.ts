@@ -4,6 +4,7 @@ import path from 'node:path';
 import express, { type Express } from 'express';
 import cors from 'cors';
 import helmet from 'helmet';
+import onHeaders from 'on-headers';
 import morgan from 'morgan';
 import type { DataSource } from 'typeorm';
 import { authRouter, DEFAULT_SIGN_IN_LIMITS, type SignInLimits } from './auth/auth.router';
@@ -13,6 +14,7 @@ import { errorMiddleware } from './common/error-middleware';
 import { healthRouter } from './health/health.router';
 import { attachmentsRouter } from './attachments/attachments.router';
 import { auditRouter } from './audit/audit';
+import type { ChangeFeed } from './db/change-feed';
 import { fitCheckRouter } from './fit/fit-check.router';
 import { exportsRouter } from './imports/exports.router';
 import type { ImportOptions } from './imports/import.service';
@@ -42,13 +44,23 @@ export interface AppOptions {
   /** Object storage for attachments and imported files; without it those routes answer 503. */
   storage?: Storage | null;
   imports?: ImportOptions;
+  /**
+   * The change feed: with it, the signed-in users and the fit answers to registry-only questions are kept
+   * in memory until their tables change. Created before the app (which registers what it keeps), started
+   * and stopped by the caller.
+   */
+  changes?: ChangeFeed | null;
 }
 
-/** The app factory: everything under /api, the web app at /. One process is stateless apart from the rate-limit counters. */
+/** The app factory: everything under /api, the web app at /. One process is stateless apart from the rate-limit counters
+ * and the kept fit answers (which every process drops when the registry changes). */
 export function createApp(options: AppOptions): Express {
   const { dataSource: ds, jwtSecret } = options;
   const app = express();
   app.disable('x-powered-by');
+  // No ETag on API answers: nothing sends If-None-Match for them, and hashing each body cost a twentieth
+  // of the fit check's CPU. Static files keep theirs (express.static sets its own).
+  app.set('etag', false);
   app.set('trust proxy', 'loopback');
   app.use(
     helmet({
@@ -77,13 +89,28 @@ export function createApp(options: AppOptions): Express {
   api.use((_req, _res, next) => next(ds.isInitialized ? undefined : unavailable()));
   api.use(authRouter(ds, jwtSecret, { ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits }));
   // Everything below needs a valid token.
-  api.use(makeAuthenticator(ds, jwtSecret));
+  const changes = options.changes ?? null;
+  const fitAnswers = changes?.keep<Buffer>('bungwise_registry', { maxSize: 32 * 2 ** 20, sizeOf: (json) => json.length }) ?? null;
+  if (changes) {
+    // Read your own writes: a change accepted by this process drops what it keeps before its answer is
+    // sent, without waiting for the database's notice (which the other processes act on).
+    api.use((req, res, next) => {
+      if (req.method !== 'GET' && req.method !== 'HEAD' && req.path !== '/fit-checks') {
+        onHeaders(res, () => {
+          if (res.statusCode < 400) changes.invalidateAll();
+        });
+      }
+      next();
+    });
+  }
+  api.use(makeAuthenticator(ds, jwtSecret, changes));
+  // The dock's hot path first: every router above it is matched against each request.
+  api.use(fitCheckRouter(ds, fitAnswers));
   api.use(usersRouter(ds));
   api.use(settingsRouter(ds));
   api.use(pairingActionsRouter(ds, new ResourceService(ds, pairingDef)));
   api.use(rotationRouter(ds));
   for (const def of RESOURCES) api.use(resourceRouter(ds, def).router);
-  api.use(fitCheckRouter(ds));
   api.use(toolsRouter(ds));
   api.use(receivingRouter(ds));
   api.use(sourcingRouter(ds));

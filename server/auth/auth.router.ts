@@ -1,3 +1,5 @@
+import { ClusterMemoryStoreWorker } from '@express-rate-limit/cluster-memory-store';
+import cluster from 'node:cluster';
 import { secured } from './policy';
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
@@ -21,11 +23,15 @@ const tooMany = new HttpError(429, 'too_many_attempts', 'Too many failed sign-in
 
 export function authRouter(ds: DataSource, secret: string, limits: SignInLimits): Router {
   const service = new AuthService(ds, secret);
+  // Under the cluster primary (server/index.ts) failures are counted there for every worker; a single
+  // process counts them itself.
+  const store = (prefix: string) => (cluster.isWorker ? { store: new ClusterMemoryStoreWorker({ prefix }) } : {});
   const common = { windowMs: limits.windowMs, skipSuccessfulRequests: true, standardHeaders: 'draft-8' as const, legacyHeaders: false, handler: (_req: Request, _res: unknown, next: (err: unknown) => void) => next(tooMany) };
   // Only failures count (skipSuccessfulRequests); an account is limited wherever the attempts come from.
-  const perAddress = rateLimit({ ...common, limit: limits.perAddress });
+  const perAddress = rateLimit({ ...common, ...store('sign-in-address'), limit: limits.perAddress });
   const perAccount = rateLimit({
     ...common,
+    ...store('sign-in-account'),
     limit: limits.perAccount,
     keyGenerator: (req: Request) => `acct:${String(req.body?.email ?? '').trim().toLowerCase()}`,
   });

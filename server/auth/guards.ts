@@ -5,6 +5,7 @@ import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { DataSource } from 'typeorm';
 import type { Role } from '../../shared/roles';
 import { forbidden, unauthorized } from '../common/errors';
+import type { ChangeFeed } from '../db/change-feed';
 import { preparedQuery } from '../db/prepared';
 
 declare global {
@@ -21,6 +22,9 @@ declare global {
   }
 }
 
+/** What is kept for a token whose user no longer exists. */
+const NO_USER = { active: false } as const;
+
 interface UserRow {
   id: string;
   email: string;
@@ -30,12 +34,19 @@ interface UserRow {
 }
 
 /**
- * A passport instance per app (tests build several apps). The user is loaded on every request, so a
- * deactivated user or a changed role takes effect at once, whatever the token says. The lookup is one
- * prepared statement, and the secret is a KeyObject made once: given a string, the JWT library tries to
- * read it as a public key on every request, which cost about a tenth of a busy server's CPU.
+ * A passport instance per app (tests build several apps). The token names the user; the user's row decides,
+ * so a deactivated user or a changed role takes effect at once, whatever the token says. With a change feed
+ * the rows are kept in memory until the users table changes (every process is told at commit); without
+ * one, or while its connection is down, the row is read on every request by one prepared statement.
+ * The secret is a KeyObject made once: given a string, the JWT library tries to read it as a public key on
+ * every request, which cost about a tenth of a busy server's CPU.
  */
-export function makeAuthenticator(dataSource: DataSource, secret: string): RequestHandler {
+export function makeAuthenticator(dataSource: DataSource, secret: string, changes: ChangeFeed | null = null): RequestHandler {
+  const kept = changes?.keep<Express.User | typeof NO_USER>('bungwise_users', { maxSize: 10_000, sizeOf: () => 1 }) ?? null;
+  const read = async (id: string): Promise<Express.User | typeof NO_USER> => {
+    const [u] = await preparedQuery<UserRow>(dataSource, 'auth-user', 'SELECT id, email, display_name, role, active FROM users WHERE id = $1', [id]);
+    return u ? { id: u.id, email: u.email, displayName: u.display_name, role: u.role, active: u.active } : NO_USER;
+  };
   // The JWT library accepts a KeyObject at run time; passport-jwt's types only list string and Buffer.
   const key = createSecretKey(Buffer.from(secret, 'utf8')) as unknown as Buffer;
   const instance = new passport.Passport();
@@ -44,9 +55,8 @@ export function makeAuthenticator(dataSource: DataSource, secret: string): Reque
       { jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(), secretOrKey: key, algorithms: ['HS256'], issuer: 'bungwise' },
       (payload: { sub?: string }, done: (err: unknown, user?: Express.User | false) => void) => {
         if (!payload.sub) return done(null, false);
-        preparedQuery<UserRow>(dataSource, 'auth-user', 'SELECT id, email, display_name, role, active FROM users WHERE id = $1', [payload.sub])
-          .then(([u]) => done(null, u && u.active ? { id: u.id, email: u.email, displayName: u.display_name, role: u.role, active: u.active } : false))
-          .catch((err) => done(err));
+        const id = payload.sub;
+        (kept ? kept.through(id, () => read(id)) : read(id)).then((user) => done(null, user.active ? user : false)).catch((err) => done(err));
       },
     ),
   );

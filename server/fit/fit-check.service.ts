@@ -8,6 +8,7 @@ import { Pairing, Slurry, Station, TubeSet } from '../entities';
 import { resolveKey, resolveThread } from '../registry/refs';
 import { loadSettings } from '../settings/settings.service';
 import { preparedQuery } from '../db/prepared';
+import type { Kept } from '../db/change-feed';
 import { FitCheckDto } from './fit-check.dto';
 
 const SEVERITY: Record<Verdict, number> = { fits: 0, caution: 1, 'no-fit': 2 };
@@ -142,9 +143,35 @@ const connectorInput = (p: CandidateRow): ConnectorInput => ({
 
 /** "Which tube and connector pairs fit this drum, and why": the server's authoritative answer. */
 export class FitCheckService {
-  constructor(private readonly ds: DataSource) {}
+  constructor(
+    private readonly ds: DataSource,
+    private readonly answers: Kept<Buffer> | null = null,
+  ) {}
 
+  /** The check for one request body. */
   async check(body: unknown) {
+    return this.compute(await this.parse(body));
+  }
+
+  /**
+   * The answer as UTF-8 JSON, from the kept answers when the question is about the registry alone (a
+   * drum type, with a slurry or a described station at most). With a registered station or tube set the
+   * rinse rules depend on the clock and on rotation, so those are always computed.
+   */
+  async answer(body: unknown): Promise<{ json: Buffer; cache: 'hit' | 'miss' | 'bypass'; stored: boolean }> {
+    const dto = await this.parse(body);
+    const key = this.answers && dto.drumTypeId && !dto.stationId && !dto.tubeSetId ? JSON.stringify([dto.drumTypeId.toLowerCase(), dto.slurryId?.toLowerCase() ?? null, dto.tapping ?? null, dto.agitation ?? null, dto.flowLpm ?? null]) : null;
+    const encode = (answer: unknown) => Buffer.from(JSON.stringify(answer));
+    if (!key || !this.answers) return { json: encode(await this.compute(dto)), cache: 'bypass', stored: false };
+    const kept = this.answers.get(key);
+    if (kept !== undefined) return { json: kept, cache: 'hit', stored: true };
+    const ticket = this.answers.ticket();
+    const json = encode(await this.compute(dto));
+    if (ticket === null) return { json, cache: 'bypass', stored: false };
+    return { json, cache: 'miss', stored: this.answers.set(key, ticket, json) };
+  }
+
+  private async parse(body: unknown): Promise<FitCheckDto> {
     const dto = await parseDto(FitCheckDto, body);
     if (!dto.drumTypeId === !dto.drum) {
       throw new ValidationFailed([{ field: dto.drumTypeId ? 'drum' : 'drumTypeId', messages: ['give either drumTypeId or drum, not both and not neither'] }]);
@@ -152,6 +179,10 @@ export class FitCheckService {
     if (dto.stationId && (dto.tapping || dto.agitation || dto.flowLpm !== undefined)) {
       throw fieldError('stationId', 'give either stationId or tapping/agitation/flowLpm, not both');
     }
+    return dto;
+  }
+
+  private async compute(dto: FitCheckDto) {
     const m = this.ds.manager;
     const drum: DrumRef = dto.drumTypeId ? { id: dto.drumTypeId } : await this.adHocDrum(m, dto);
     const slurry = dto.slurryId ? await m.findOneBy(Slurry, { id: dto.slurryId }) : null;

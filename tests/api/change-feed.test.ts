@@ -1,0 +1,177 @@
+// What a server process keeps in memory (fit answers, signed-in users) must never outlive a change to the
+// tables it came from: changes through this process, changes by another process (plain SQL here), and
+// changes made while the process could not hear the database's notices.
+import type { Express } from 'express';
+import request from 'supertest';
+import type { DataSource } from 'typeorm';
+import { ChangeFeed } from '../../server/db/change-feed';
+import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
+import { bearer, makeTestApp, tokenFor } from '../support/app';
+import { openTestDataSource, resetDatabase } from '../support/db';
+
+let ds: DataSource;
+let feed: ChangeFeed;
+let app: Express; // keeps answers
+let plain: Express; // computes every answer: the reference
+let clerk: string;
+let engineer: string;
+let drumId: string;
+
+type Answer = { verdict: string; candidates: Array<{ dipTubeId: string; dipTubePartNumber: string; pairingId: string | null }> };
+const ask = (on: Express, body: object = { drumTypeId: drumId }) => request(on).post('/api/fit-checks').set(bearer(clerk)).send(body);
+
+async function until<T>(what: string, probe: () => Promise<T>, done: (v: T) => boolean, ms = 5000): Promise<T> {
+  const end = Date.now() + ms;
+  for (;;) {
+    const v = await probe();
+    if (done(v)) return v;
+    if (Date.now() > end) throw new Error(`timed out waiting for ${what}`);
+    await new Promise((r) => setTimeout(r, 50));
+  }
+}
+
+const cleanups: Array<() => Promise<unknown>> = [];
+const onCleanup = (fn: () => Promise<unknown>) => cleanups.push(fn);
+afterEach(async () => {
+  while (cleanups.length) await cleanups.pop()!();
+});
+
+/** Asks twice so the answer is kept, and returns it. */
+async function warm(): Promise<Answer> {
+  await ask(app);
+  const res = await ask(app);
+  expect(res.headers['cache-status']).toBe('bungwise; hit');
+  return res.body;
+}
+
+beforeAll(async () => {
+  ds = await openTestDataSource();
+  await resetDatabase(ds);
+  feed = new ChangeFeed(process.env.DATABASE_URL!, 1000);
+  app = makeTestApp(ds, { changes: feed });
+  plain = makeTestApp(ds);
+  await feed.start();
+  expect(feed.isListening).toBe(true);
+  clerk = await tokenFor(app, 'clerk@bungwise.example');
+  engineer = await tokenFor(app, 'engineer@bungwise.example');
+  [{ id: drumId }] = await ds.query(`SELECT id FROM drum_types WHERE part_number = $1`, [demo.fittingDrum]);
+});
+
+afterAll(async () => {
+  await feed.stop();
+  await ds.destroy();
+});
+
+describe('kept fit answers', () => {
+  it('keeps an answer about a drum type and serves the same answer again', async () => {
+    const first = await ask(app, { drumTypeId: drumId, slurryId: undefined });
+    expect(first.status).toBe(200);
+    expect(first.headers['cache-status']).toMatch(/^bungwise; fwd=miss(; stored)?$/);
+    const second = await ask(app);
+    expect(second.headers['cache-status']).toBe('bungwise; hit');
+    expect(second.body).toEqual(first.body);
+    expect(second.body).toEqual((await ask(plain)).body);
+  });
+
+  it('always computes an answer for a registered station, whose rinse rule depends on the clock', async () => {
+    const [{ id: stationId }] = await ds.query(`SELECT id FROM stations WHERE name = $1`, [demo.fittingStation]);
+    const a = await ask(app, { drumTypeId: drumId, stationId });
+    const b = await ask(app, { drumTypeId: drumId, stationId });
+    expect([a.status, b.status]).toEqual([200, 200]);
+    expect(b.headers['cache-status']).toBe('bungwise; fwd=bypass');
+  });
+
+  it('does not keep bad questions', async () => {
+    for (let i = 0; i < 2; i++) {
+      const res = await ask(app, { drumTypeId: '00000000-0000-4000-8000-000000000000' });
+      expect(res.status).toBe(400);
+      expect(res.body.error.details[0].field).toBe('drumTypeId');
+      expect(res.headers['cache-status']).toBeUndefined();
+    }
+  });
+
+  it('drops kept answers as soon as this process accepts a registry change, without waiting for the notice', async () => {
+    const before = await warm();
+    await ds.query(`ALTER TABLE dip_tubes DISABLE TRIGGER dip_tubes_notify`); // no notice: only this process's own hook can drop them
+    onCleanup(() => ds.query(`ALTER TABLE dip_tubes ENABLE TRIGGER dip_tubes_notify`));
+    const best = before.candidates[0];
+    const [{ version }] = await ds.query(`SELECT version FROM dip_tubes WHERE id = $1`, [best.dipTubeId]);
+    // A tube far too short for this drum: it can no longer be the best candidate.
+    const changed = await request(app).patch(`/api/dip-tubes/${best.dipTubeId}`).set(bearer(engineer)).send({ version, lengthMm: 300 });
+    expect(changed.status).toBe(200);
+    const after = await ask(app);
+    expect(after.headers['cache-status']).not.toBe('bungwise; hit');
+    expect(after.body).toEqual((await ask(plain)).body);
+    expect(after.body.candidates[0]?.dipTubeId).not.toBe(best.dipTubeId);
+  });
+
+  it('drops kept answers when another process changes the registry, once the database announces it', async () => {
+    const before = await warm();
+    const best = before.candidates[0];
+    expect(best.pairingId).not.toBeNull();
+    await ds.query(`UPDATE pairings SET status = 'retired' WHERE id = $1`, [best.pairingId]);
+    const after = await until('the change notice', () => ask(app), (r) => r.headers['cache-status'] !== 'bungwise; hit');
+    expect(after.body).toEqual((await ask(plain)).body);
+    expect(after.body.candidates.map((c: { pairingId: string }) => c.pairingId)).not.toContain(best.pairingId);
+  });
+
+  it('keeps nothing while it cannot hear the notices, and sees changes made meanwhile', async () => {
+    await warm();
+    await ds.query(`SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE datname = current_database() AND query LIKE 'LISTEN bungwise_%'`);
+    await until('the listener to drop', async () => feed.isListening, (v) => !v);
+    const [{ id: tubeId, version }] = await ds.query(
+      `SELECT t.id, t.version FROM dip_tubes t JOIN pairings p ON p.dip_tube_id = t.id WHERE p.status = 'approved' ORDER BY t.part_number LIMIT 1`,
+    );
+    await ds.query(`UPDATE dip_tubes SET length_mm = 310, version = version + 1 WHERE id = $1 AND version = $2`, [tubeId, version]);
+    const down = await ask(app);
+    expect(feed.isListening).toBe(false);
+    expect(down.headers['cache-status']).toBe('bungwise; fwd=bypass');
+    expect(down.body).toEqual((await ask(plain)).body);
+    await until('the listener to come back', async () => feed.isListening, (v) => v);
+    const again = await ask(app);
+    expect(again.headers['cache-status']).toBe('bungwise; fwd=miss; stored');
+    expect((await ask(app)).headers['cache-status']).toBe('bungwise; hit');
+  });
+});
+
+describe('kept users', () => {
+  it('refuses a token at once when the user is deactivated by another process', async () => {
+    const token = await tokenFor(plain, 'buyer@bungwise.example');
+    expect((await request(app).get('/api/notifications').set(bearer(token))).status).toBe(200);
+    await ds.query(`UPDATE users SET active = false WHERE email = 'buyer@bungwise.example'`);
+    try {
+      const refused = await until('the users notice', () => request(app).get('/api/notifications').set(bearer(token)), (r) => r.status !== 200);
+      expect(refused.status).toBe(401);
+    } finally {
+      await ds.query(`UPDATE users SET active = true WHERE email = 'buyer@bungwise.example'`);
+    }
+    await until('the user to be allowed again', () => request(app).get('/api/notifications').set(bearer(token)), (r) => r.status === 200);
+  });
+
+  it('takes a deactivation through this process at once, without waiting for the notice', async () => {
+    await ds.query(`ALTER TABLE users DISABLE TRIGGER users_notify`);
+    onCleanup(() => ds.query(`ALTER TABLE users ENABLE TRIGGER users_notify`));
+    const admin = await tokenFor(app, 'admin@bungwise.example');
+    const token = await tokenFor(plain, 'buyer@bungwise.example');
+    expect((await request(app).get('/api/notifications').set(bearer(token))).status).toBe(200);
+    const [{ id }] = await ds.query(`SELECT id FROM users WHERE email = 'buyer@bungwise.example'`);
+    const off = await request(app).patch(`/api/users/${id}`).set(bearer(admin)).send({ active: false });
+    expect(off.status).toBe(200);
+    expect((await request(app).get('/api/notifications').set(bearer(token))).status).toBe(401);
+    await ds.query(`UPDATE users SET active = true WHERE id = $1`, [id]);
+  });
+});
+
+describe('a kept value read before a change', () => {
+  it('is not kept when a change was announced while it was read', () => {
+    const kept = feed.keep<{ n: number }>('bungwise_registry', { maxSize: 10, sizeOf: () => 1 });
+    const ticket = kept.ticket();
+    expect(ticket).not.toBeNull();
+    kept.invalidate(); // a notice arrives while the value is being read
+    expect(kept.set('k', ticket, { n: 1 })).toBe(false);
+    expect(kept.get('k')).toBeUndefined();
+    const fresh = kept.ticket();
+    expect(kept.set('k', fresh, { n: 2 })).toBe(true);
+    expect(kept.get('k')).toEqual({ n: 2 });
+  });
+});
