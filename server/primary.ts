@@ -3,7 +3,7 @@ import cluster, { type Worker } from 'node:cluster';
 import { announce, EXIT_CANNOT_LISTEN } from './announce';
 
 /**
- * Starts the workers, announces once the first one answers, starts a worker again if one dies, and on
+ * Starts the workers, announces once they all answer, starts a worker again if one dies, and on
  * Ctrl-C or SIGTERM lets every worker finish its requests before exiting.
  */
 export async function runPrimary(workers: number): Promise<void> {
@@ -12,11 +12,15 @@ export async function runPrimary(workers: number): Promise<void> {
   await new ClusterMemoryStorePrimary().init();
   let stopping = false;
   let announced = false;
+  const ready = new Set<number>();
 
   const start = (): Worker => {
     const worker = cluster.fork();
     worker.on('message', (msg: { bungwise?: string }) => {
-      if (msg?.bungwise === 'ready' && !announced) {
+      // Announce once every first worker has its database connection, so no early request meets one that has not.
+      if (msg?.bungwise !== 'ready' || announced) return;
+      ready.add(worker.id);
+      if (ready.size >= workers) {
         announced = true;
         announce(port, workers);
       }

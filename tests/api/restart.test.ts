@@ -63,6 +63,8 @@ describe('npm start keeps data across a stop and a start', () => {
       BUNGWISE_SMTP_PORT: String(await freePort()),
       BUNGWISE_MAIL_WEB_PORT: String(await freePort()),
       BUNGWISE_LOG_REQUESTS: '0',
+      // Two server processes whatever the machine: the sign-in limit below must count across both.
+      BUNGWISE_WORKERS: '2',
     };
     // A user's start: its own private cluster and local stand-ins, not the test run's.
     for (const k of ['DATABASE_URL', 'JWT_SECRET', 'S3_ENDPOINT', 'S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY', 'SMTP_URL', 'BUNGWISE_MAIL_WEB_URL']) delete env[k];
@@ -86,6 +88,13 @@ describe('npm start keeps data across a stop and a start', () => {
       expect(again.status).toBe(200);
       // The demo scenario is not loaded twice.
       expect(second.output()).not.toContain('Loaded the demo scenario');
+      expect(second.output()).toContain('(2 server processes)');
+      // Eight failures are allowed per account; the ninth is refused, whichever process answers each one.
+      const statuses: number[] = [];
+      for (let i = 0; i < 9; i++) {
+        statuses.push((await request(base).post('/api/auth/sign-in').send({ email: 'night.shift@bungwise.example', password: `wrong-password-${i}` })).status);
+      }
+      expect(statuses).toEqual([...Array(8).fill(401), 429]);
     } finally {
       expect(await stopLauncher(second.child)).toBe(0);
     }
