@@ -97,21 +97,27 @@ async function loadRegistry(db: Client): Promise<void> {
   log(`registry loaded in ${((Date.now() - t0) / 1000).toFixed(1)} s: ${counts.d} drum types, ${counts.t} tubes, ${counts.c} connectors, ${counts.p} pairings, ${counts.s} suppliers`);
 }
 
+/** Starts the server as `npm start` does (one process per core) and waits until it says every process answers. */
 async function startServer(port: number): Promise<ChildProcess> {
   const child = spawn('node', [path.join(root, 'dist', 'server', 'server', 'index.js')], {
     cwd: root,
     env: { ...process.env, PORT: String(port), BUNGWISE_LOG_REQUESTS: '0', BUNGWISE_DEMO: '0', S3_BUCKET: '', SMTP_URL: '', BUNGWISE_IMPORT_TIMING: '1' },
-    stdio: ['ignore', 'ignore', 'inherit'],
+    stdio: ['ignore', 'pipe', 'inherit'],
   });
-  for (let i = 0; i < 100; i++) {
-    try {
-      if ((await fetch(`http://127.0.0.1:${port}/api/health`)).status === 200) return child;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error('the server did not become healthy');
+  return new Promise((resolve, reject) => {
+    let out = '';
+    const timer = setTimeout(() => reject(new Error('the server did not start within 30 s')), 30_000);
+    child.stdout!.on('data', (d: Buffer) => {
+      out += d;
+      const running = out.match(/Bungwise is running at \S+( \((\d+) server processes\))?/);
+      if (running) {
+        clearTimeout(timer);
+        log(`server: ${running[2] ?? 1} process(es)`);
+        resolve(child);
+      }
+    });
+    child.on('exit', (code) => reject(new Error(`the server exited with ${code}`)));
+  });
 }
 
 function cannon(opts: Record<string, unknown>): Promise<{ requests: { average: number; total: number }; latency: { p50: number; p99: number }; non2xx: number; errors: number }> {
@@ -182,7 +188,7 @@ async function main(): Promise<void> {
     };
     log('fit-check, first ask for each drum type, under 20 connections for 10 s...');
     const cold = await fitLoad(coldIds, 10, true);
-    if (cold.requests.total > coldIds.length) throw new Error('the cold fit-check pass ran out of drum types never asked');
+    if (cold.non2xx || cold.errors || cold.requests.total > coldIds.length) throw new Error(`the first-ask pass is not valid: ${cold.requests.total} asks of ${coldIds.length} drum types, ${cold.non2xx} non-2xx, ${cold.errors} errors`);
     log('fit-check warm-up over 500 drum types for 3 s...');
     await fitLoad(drumIds, 3);
     log('fit-check, steady state, under 20 connections for 10 s...');
