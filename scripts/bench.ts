@@ -199,8 +199,8 @@ async function main(): Promise<void> {
     add('fit-check throughput', fit.requests.average, 'req/s', health.requests.average, 'GET /api/health req/s', '>= 0.5 of floor', fit.requests.average >= 0.5 * health.requests.average);
     add('fit-check p50 latency', fit.latency.p50, 'ms', health.latency.p50, 'health p50 ms', 'report', true);
     add('fit-check p99 latency', fit.latency.p99, 'ms', health.latency.p99, 'health p99 ms', '< 30 ms', fit.latency.p99 < 30);
-    add('fit-check throughput, first ask', cold.requests.average, 'req/s', health.requests.average, 'GET /api/health req/s', 'report', true);
-    add('fit-check p99 latency, first ask', cold.latency.p99, 'ms', health.latency.p99, 'health p99 ms', 'report', true);
+    add('fit-check throughput, first ask', cold.requests.average, 'req/s', health.requests.average, 'GET /api/health req/s', '>= 0.5 of floor', cold.requests.average >= 0.5 * health.requests.average);
+    add('fit-check p99 latency, first ask', cold.latency.p99, 'ms', health.latency.p99, 'health p99 ms', '< 30 ms', cold.latency.p99 < 30);
 
     // 3. List search at that size beside the bare SQL, one request at a time.
     const terms = Array.from({ length: 300 }, (_, k) => `BT-0${String((k * 97) % 300).padStart(3, '0')}`);

@@ -2,30 +2,45 @@ import { ClusterMemoryStorePrimary } from '@express-rate-limit/cluster-memory-st
 import cluster, { type Worker } from 'node:cluster';
 import { announce, EXIT_CANNOT_LISTEN } from './announce';
 
+/** Restarts allowed within CRASH_WINDOW_MS before the primary gives up and exits non-zero. */
+const MAX_RESTARTS = 5;
+const CRASH_WINDOW_MS = 60_000;
+
 /**
- * Starts the workers, announces once they all answer, starts a worker again if one dies, and on
- * Ctrl-C or SIGTERM lets every worker finish its requests before exiting.
+ * Starts the workers, announces once every one of them answers, starts a worker again if one dies later
+ * (waiting longer after each crash, and giving up on a crash loop), and on Ctrl-C or SIGTERM lets every
+ * worker finish its requests before exiting. A worker that dies before it ever answered (bad
+ * configuration, port taken) stops the whole server with a non-zero exit code.
  */
 export async function runPrimary(workers: number): Promise<void> {
   const port = Number(process.env.PORT ?? 8080);
   // The sign-in limits count failures across all workers, here.
   await new ClusterMemoryStorePrimary().init();
+  // Each worker's database pools get a share, so the total stays near what one process used to open.
+  const poolShare = process.env.BUNGWISE_DB_POOL ?? String(Math.max(2, Math.ceil(20 / workers)));
   let stopping = false;
   let announced = false;
-  const ready = new Set<number>();
+  let readyCount = 0;
+  const ready = new WeakSet<Worker>();
+  const restarts: number[] = [];
 
-  const start = (): Worker => {
-    const worker = cluster.fork();
+  const start = (): void => {
+    const worker = cluster.fork({ BUNGWISE_DB_POOL: poolShare });
     worker.on('message', (msg: { bungwise?: string }) => {
-      // Announce once every first worker has its database connection, so no early request meets one that has not.
-      if (msg?.bungwise !== 'ready' || announced) return;
-      ready.add(worker.id);
-      if (ready.size >= workers) {
+      if (msg?.bungwise !== 'ready' || ready.has(worker)) return;
+      ready.add(worker);
+      readyCount++;
+      if (!announced && readyCount >= workers) {
         announced = true;
         announce(port, workers);
       }
     });
-    return worker;
+  };
+
+  const giveUp = (code: number) => {
+    stopping = true;
+    for (const w of Object.values(cluster.workers ?? {})) w?.process.kill('SIGTERM');
+    process.exit(code);
   };
 
   cluster.on('exit', (worker, code, signal) => {
@@ -33,19 +48,32 @@ export async function runPrimary(workers: number): Promise<void> {
       if (!Object.keys(cluster.workers ?? {}).length) process.exit(0);
       return;
     }
-    if (code === EXIT_CANNOT_LISTEN) {
-      stopping = true;
-      for (const w of Object.values(cluster.workers ?? {})) w?.kill('SIGTERM');
-      process.exit(1);
+    if (code === EXIT_CANNOT_LISTEN || !ready.has(worker)) {
+      if (code !== EXIT_CANNOT_LISTEN) console.error(`[bungwise] a server process failed while starting (${signal ?? `exit code ${code}`}); stopping`);
+      giveUp(1);
+      return;
     }
-    console.error(`[bungwise] server process ${worker.process.pid} stopped (${signal ?? `exit code ${code}`}); starting another`);
-    setTimeout(start, 500).unref();
+    const now = Date.now();
+    while (restarts.length && now - restarts[0] > CRASH_WINDOW_MS) restarts.shift();
+    if (restarts.length >= MAX_RESTARTS) {
+      console.error(`[bungwise] server processes stopped ${restarts.length + 1} times within a minute; stopping`);
+      giveUp(1);
+      return;
+    }
+    restarts.push(now);
+    const delay = 500 * 2 ** (restarts.length - 1);
+    console.error(`[bungwise] server process ${worker.process.pid} stopped (${signal ?? `exit code ${code}`}); starting another in ${delay} ms`);
+    // Not unref'd: with every worker gone, this timer is what keeps the primary alive to restart one.
+    setTimeout(() => {
+      if (!stopping) start();
+    }, delay);
   });
 
   const stop = () => {
     if (stopping) return;
     stopping = true;
     for (const w of Object.values(cluster.workers ?? {})) w?.process.kill('SIGTERM');
+    if (!Object.keys(cluster.workers ?? {}).length) process.exit(0);
     setTimeout(() => process.exit(0), 8000).unref();
   };
   process.on('SIGINT', stop);

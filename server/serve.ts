@@ -5,6 +5,7 @@ import { announce, EXIT_CANNOT_LISTEN } from './announce';
 import { createApp } from './app';
 import { jwtSecret } from './auth/tokens';
 import { makeDataSource } from './db/data-source';
+import { closePreparedPool } from './db/prepared';
 import { ChangeFeed } from './db/change-feed';
 import { MailSender, transportFromEnv } from './mail/sender';
 import { Storage, storageConfigFromEnv } from './storage/storage';
@@ -67,7 +68,7 @@ function shutdown(): void {
   mailer?.stop();
   void changes?.stop();
   server.close(() => {
-    void ds.destroy().finally(() => process.exit(0));
+    void Promise.allSettled([closePreparedPool(ds), ds.destroy()]).finally(() => process.exit(0));
   });
   setTimeout(() => process.exit(0), 5000).unref();
 }

@@ -4,6 +4,19 @@ import type { CHANGE_CHANNELS } from '../../migrations/1764637200000-change-noti
 
 export type ChangeChannel = keyof typeof CHANGE_CHANNELS;
 
+/**
+ * A backstop, not the mechanism: nothing is kept longer than this even if every notice were lost without
+ * the connection showing it (the heartbeat below catches a dead connection within HEARTBEAT_MS + 3 s).
+ */
+const KEEP_AT_MOST_MS = 5 * 60_000;
+const HEARTBEAT_MS = 5000;
+
+export interface KeepOptions<V> {
+  maxSize: number;
+  sizeOf: (value: V) => number;
+  ttlMs?: number;
+}
+
 /** Values read from the database, kept until a change to their tables is announced. */
 export class Kept<V extends object> {
   private generation = 0;
@@ -11,9 +24,9 @@ export class Kept<V extends object> {
 
   constructor(
     private readonly feed: ChangeFeed,
-    options: { maxSize: number; sizeOf: (value: V) => number },
+    options: KeepOptions<V>,
   ) {
-    this.values = new LRUCache<string, V>({ maxSize: options.maxSize, sizeCalculation: (v) => Math.max(1, options.sizeOf(v)) });
+    this.values = new LRUCache<string, V>({ maxSize: options.maxSize, sizeCalculation: (v) => Math.max(1, options.sizeOf(v)), ttl: options.ttlMs ?? KEEP_AT_MOST_MS });
   }
 
   /** Drops every kept value. */
@@ -61,6 +74,7 @@ export class ChangeFeed {
   private listening = false;
   private stopped = false;
   private retry: NodeJS.Timeout | null = null;
+  private heartbeat: NodeJS.Timeout | null = null;
   private readonly kept = new Map<ChangeChannel, Array<Kept<object>>>();
 
   constructor(
@@ -69,7 +83,7 @@ export class ChangeFeed {
   ) {}
 
   /** A store of values from one channel's tables, bounded by the total of `sizeOf`. */
-  keep<V extends object>(channel: ChangeChannel, options: { maxSize: number; sizeOf: (value: V) => number }): Kept<V> {
+  keep<V extends object>(channel: ChangeChannel, options: KeepOptions<V>): Kept<V> {
     const store = new Kept<V>(this, options);
     this.kept.set(channel, [...(this.kept.get(channel) ?? []), store as unknown as Kept<object>]);
     return store;
@@ -102,12 +116,14 @@ export class ChangeFeed {
 
   private down(): void {
     this.listening = false;
+    if (this.heartbeat) clearInterval(this.heartbeat);
+    this.heartbeat = null;
     this.invalidateAll();
   }
 
   private async connect(): Promise<void> {
     if (this.stopped) return;
-    const client = new Client({ connectionString: this.databaseUrl, connectionTimeoutMillis: 3000, keepAlive: true });
+    const client = new Client({ connectionString: this.databaseUrl, connectionTimeoutMillis: 3000, keepAlive: true, keepAliveInitialDelayMillis: 10_000, query_timeout: 3000 });
     client.on('notification', (msg) => {
       for (const s of this.kept.get(msg.channel as ChangeChannel) ?? []) s.invalidate();
     });
@@ -127,6 +143,15 @@ export class ChangeFeed {
       // Changes committed before LISTEN took effect were never announced here: start empty.
       this.invalidateAll();
       this.listening = true;
+      // A connection dropped without a word (a firewall, a fail-over) would otherwise go unnoticed for
+      // hours while notices are lost: a query that does not answer within 3 s ends it.
+      this.heartbeat = setInterval(() => {
+        client.query('SELECT 1').catch(() => {
+          lost();
+          void client.end().catch(() => undefined);
+        });
+      }, HEARTBEAT_MS);
+      this.heartbeat.unref();
     } catch {
       lost();
       await client.end().catch(() => undefined);

@@ -19,9 +19,10 @@ export function makeDataSource(url = process.env.DATABASE_URL, options: { poolSi
     // Failed queries reach the error middleware, which answers them and logs the unexpected ones;
     // BUNGWISE_SQL_LOG=1 shows every statement.
     logging: process.env.BUNGWISE_SQL_LOG === '1' ? 'all' : false,
-    poolSize: options.poolSize ?? 10,
-    // JIT off: the fit check's generic plan is costed above jit_above_cost, and compiling it took 44 ms
-    // on every execution for a query that runs in 3 ms. Short OLTP statements never gain from JIT.
-    extra: { connectionTimeoutMillis: 3000, statement_timeout: 15000, idleTimeoutMillis: 10000, options: '-c jit=off -c plan_cache_mode=force_generic_plan' },
+    // Per server process; the primary divides the default among its workers (server/primary.ts).
+    poolSize: options.poolSize ?? (Number(process.env.BUNGWISE_DB_POOL) || 10),
+    // JIT off: plans costed above jit_above_cost (the fit check's generic plan is) were compiled on every
+    // execution, 44 ms for a statement that runs in 3 ms. Short OLTP statements never gain from JIT.
+    extra: { connectionTimeoutMillis: 3000, statement_timeout: 15000, idleTimeoutMillis: 10000, options: '-c jit=off' },
   });
 }
