@@ -72,11 +72,13 @@ const CANDIDATE_SQL = `
   WHERE p.status <> 'retired'`;
 
 /** Approved pairings first, then by part numbers: which candidates make the pool when there are more. */
-const POOL_ORDER = `CASE status WHEN 'approved' THEN 0 ELSE 1 END, tube_part, head_part`;
+const POOL_ORDER = `CASE p.status WHEN 'approved' THEN 0 ELSE 1 END, t.part_number, c.part_number`;
+const CANDIDATE_ORDER = `CASE status WHEN 'approved' THEN 0 ELSE 1 END, tube_part, head_part`;
 
 /**
  * $1 the drum type, or null for a hand-described drum with depth $2 and thread ids $3; $4 the station's
- * installed head or null; $5 tubes per thread inside the reach window, $6 either side of it; $7 pool size.
+ * installed head or null. The limits are written into the text (not parameters) so the generic plan is
+ * costed for the real sizes: a few dozen index lookups, never a scan of the pairings.
  */
 export const SNAPSHOT_SQL = `
   WITH st AS (SELECT * FROM site_settings ORDER BY created_at LIMIT 1),
@@ -91,20 +93,25 @@ export const SNAPSHOT_SQL = `
   threads AS (SELECT thread_spec_id AS id FROM o UNION SELECT unnest($3::uuid[])),
   tubes AS (
     SELECT x.id FROM threads, reach, LATERAL (
-      (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm BETWEEN reach.lo AND reach.hi ORDER BY length_mm LIMIT $5::int)
-      UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm < reach.lo ORDER BY length_mm DESC LIMIT $6::int) below)
-      UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm > reach.hi ORDER BY length_mm ASC LIMIT $6::int) above)) x),
+      (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm BETWEEN reach.lo AND reach.hi ORDER BY length_mm LIMIT ${TUBES_IN_WINDOW})
+      UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm < reach.lo ORDER BY length_mm DESC LIMIT ${TUBES_NEAR_MISS}) below)
+      UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm > reach.hi ORDER BY length_mm ASC LIMIT ${TUBES_NEAR_MISS}) above)) x),
+  pairs AS (
+    SELECT p.* FROM tubes, LATERAL (SELECT id, status, dip_tube_id, connector_id FROM pairings WHERE dip_tube_id = tubes.id AND status <> 'retired' OFFSET 0) p),
   by_tube AS (
-    SELECT x.* FROM tubes, LATERAL (${CANDIDATE_SQL} AND p.dip_tube_id = tubes.id OFFSET 0) x
-    ORDER BY ${POOL_ORDER} LIMIT $7::int),
+    SELECT p.id FROM pairs p JOIN dip_tubes t ON t.id = p.dip_tube_id JOIN connectors c ON c.id = p.connector_id
+    ORDER BY ${POOL_ORDER} LIMIT ${POOL_LIMIT}),
   by_head AS (
-    SELECT x.* FROM (${CANDIDATE_SQL} AND p.connector_id = $4::uuid) x WHERE x.pairing_id NOT IN (SELECT pairing_id FROM by_tube)
-    ORDER BY ${POOL_ORDER} LIMIT $7::int),
-  pool AS (SELECT 0 AS part, * FROM by_tube UNION ALL SELECT 1, * FROM by_head)
+    SELECT p.id FROM pairings p JOIN dip_tubes t ON t.id = p.dip_tube_id JOIN connectors c ON c.id = p.connector_id
+    WHERE p.connector_id = $4::uuid AND p.status <> 'retired' AND p.id NOT IN (SELECT id FROM by_tube)
+    ORDER BY ${POOL_ORDER} LIMIT ${POOL_LIMIT}),
+  pool AS (
+    SELECT CASE WHEN x.pairing_id IN (SELECT id FROM by_tube) THEN 0 ELSE 1 END AS part, x.*
+    FROM (${CANDIDATE_SQL} AND p.id IN (SELECT id FROM by_tube UNION ALL SELECT id FROM by_head)) x)
   SELECT (SELECT to_jsonb(st) FROM st) AS settings,
          (SELECT to_jsonb(d) FROM d) AS drum,
          (SELECT coalesce(jsonb_agg(o ORDER BY o.label), '[]') FROM o) AS openings,
-         (SELECT coalesce(jsonb_agg(to_jsonb(pool) - 'part' ORDER BY part, ${POOL_ORDER}), '[]') FROM pool) AS candidates`;
+         (SELECT coalesce(jsonb_agg(to_jsonb(pool) - 'part' ORDER BY part, ${CANDIDATE_ORDER}), '[]') FROM pool) AS candidates`;
 
 interface SnapshotRow {
   settings: { tip_clearance_min_mm: number; tip_clearance_max_mm: number; thread_match_tolerance_mm: number; laminar_limit: number; max_return_velocity_ratio: number } | null;
@@ -345,7 +352,7 @@ export class FitCheckService {
       this.ds,
       'fit-snapshot',
       SNAPSHOT_SQL,
-      [drumTypeId, adHoc?.input.insideDepthMm ?? null, adHoc?.threadSpecIds ?? [], installedConnectorId, TUBES_IN_WINDOW, TUBES_NEAR_MISS, POOL_LIMIT],
+      [drumTypeId, adHoc?.input.insideDepthMm ?? null, adHoc?.threadSpecIds ?? [], installedConnectorId],
       m,
     );
     if (!row.settings) {
