@@ -43,3 +43,32 @@ describe.each(VIEWPORTS)('sign-in at $name width ($width px)', (viewport) => {
     await context.close();
   }, 30_000);
 });
+
+describe('a choice of chips from the keyboard', () => {
+  it('reaches the chosen chip with Tab, moves and chooses with the arrow keys, and chooses with Space', async () => {
+    const { context, page } = await harness.page(VIEWPORTS[1]);
+    await signInAs(page, harness.baseUrl, 'admin@bungwise.example');
+    await page.getByTestId('home-admin').waitFor();
+    await page.goto(`${harness.baseUrl}/admin/users`);
+    await page.getByTestId('user-role').waitFor();
+    const checked = async () => page.locator('[data-testid="user-role"] [role="radio"][aria-checked="true"]').getAttribute('aria-label');
+    const focused = () => page.evaluate(() => document.activeElement?.getAttribute('data-testid'));
+    const start = await checked();
+    expect(start).toBe('Receiving clerk');
+    // Only the chosen chip is a tab stop.
+    const tabStops = await page.locator('[data-testid="user-role"] [role="radio"]').evaluateAll((els) => els.map((e) => e.getAttribute('tabindex')));
+    expect(tabStops).toEqual(['0', '-1', '-1', '-1']);
+    await page.getByTestId('user-role-clerk').focus();
+    await page.keyboard.press('ArrowRight');
+    expect(await checked()).toBe('Engineer');
+    expect(await focused()).toBe('user-role-engineer');
+    await page.keyboard.press('ArrowLeft');
+    await page.keyboard.press('ArrowLeft');
+    expect(await checked()).toBe('Administrator');
+    expect(await focused()).toBe('user-role-admin');
+    await page.getByTestId('user-role-buyer').focus();
+    await page.keyboard.press(' ');
+    expect(await checked()).toBe('Buyer');
+    await context.close();
+  }, 30_000);
+});
