@@ -231,7 +231,11 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
     expect(await active()).toBe('form-channels-feed');
     await page.keyboard.press('Enter');
     await expect(page.getByTestId('form-channels-feed').getAttribute('aria-checked')).resolves.toBe('true');
-    await page.keyboard.press('Tab');
+    // A chip group is one tab stop: the arrow keys move inside it, Tab leaves it.
+    await page.keyboard.press('ArrowRight');
+    await expect(page.getByTestId('form-channels-feed-return').getAttribute('aria-checked')).resolves.toBe('true');
+    await page.keyboard.press('ArrowLeft');
+    await expect(page.getByTestId('form-channels-feed').getAttribute('aria-checked')).resolves.toBe('true');
     await page.keyboard.press('Tab');
     expect(await active()).toBe('form-lengthMm');
     await page.keyboard.type('33');
