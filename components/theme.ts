@@ -43,3 +43,20 @@ export const type = {
 export const breakpoints = { wide: 900 } as const;
 export const maxContentWidth = 1040;
 export const minTouch = 44;
+
+/** The one look of a text input, its error state, and the message under a field. */
+export const field = {
+  input: {
+    minHeight: minTouch,
+    borderWidth: 1.5,
+    borderColor: colors.inkMuted,
+    borderRadius: radius.md,
+    paddingHorizontal: space.md,
+    fontFamily: fonts.regular,
+    fontSize: 17,
+    color: colors.ink,
+    backgroundColor: colors.surface,
+  },
+  inputError: { borderColor: colors.danger, borderWidth: 2 },
+  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+} as const;

@@ -3,7 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { PickedFile } from '../api/upload';
 import { downloadAttachment, openAttachment, useAttachmentsQuery, useAttachmentUploadMutation, type AttachmentOwnerKind, type AttachmentRecord } from '../data/attachments';
 import { formatWhen, SectionTitle } from '../receive/parts';
-import { colors, fonts, radius, space, type } from '../theme';
+import { colors, fonts, radius, space, type, field } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { UploadProgress } from '../ui/progress-bar';
@@ -147,7 +147,7 @@ const styles = StyleSheet.create({
   about: { flex: 1, minWidth: 0, gap: 2 },
   name: { fontFamily: fonts.semibold, fontSize: 16, color: colors.ink },
   rowButtons: { flexDirection: 'row', gap: space.xs, flexWrap: 'wrap' },
-  rowError: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  rowError: field.error,
   adding: { gap: space.sm, marginTop: space.xs },
   buttons: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
   problem: { gap: space.xs, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.danger, backgroundColor: colors.dangerSoft },

@@ -4,7 +4,7 @@ import type { OpeningRecord, Region } from '@/shared/api-types';
 import { checkDrumPackagingCode } from '@/shared/packaging-code';
 import type { LengthUnit } from '@/shared/units';
 import { drumTypeQueries, type DrumTypeRecord } from '../data/drum-types';
-import { colors, fonts, radius, space, type } from '../theme';
+import { colors, radius, space, type, field } from '../theme';
 import { Button } from '../ui/button';
 import { ChoiceChips } from '../ui/choice-chips';
 import { lengthDraft, LengthField, NumberField, numberText, type LengthDraft } from '../ui/number-field';
@@ -293,6 +293,6 @@ const styles = StyleSheet.create({
   opening: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: space.md, backgroundColor: colors.paper },
   openingHead: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
   addRow: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
-  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  error: field.error,
   warning: { ...type.body, color: colors.caution },
 });

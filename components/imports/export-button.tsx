@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { ListParams } from '@/shared/api-types';
 import { saveFile } from '../api/download';
-import { fonts, colors, space } from '../theme';
+import { space, field } from '../theme';
 import { Button } from '../ui/button';
 
 interface ExportButtonProps {
@@ -44,5 +44,5 @@ export function ExportButton({ resource, params = {}, label = 'Export CSV', test
 
 const styles = StyleSheet.create({
   wrap: { gap: space.xs, alignItems: 'flex-start' },
-  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger, maxWidth: 320 },
+  error: { ...field.error, maxWidth: 320 },
 });

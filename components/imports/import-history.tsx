@@ -3,7 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { downloadAttachment } from '../data/attachments';
 import { useImportHistoryQuery, type ImportHistoryItem } from '../data/imports';
 import { formatWhen, SectionTitle, Tag } from '../receive/parts';
-import { colors, fonts, radius, space, type } from '../theme';
+import { colors, fonts, radius, space, type, field } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
@@ -149,5 +149,5 @@ const styles = StyleSheet.create({
   cardHead: { flexDirection: 'row', alignItems: 'flex-start', justifyContent: 'space-between', gap: space.sm },
   cardFoot: { flexDirection: 'row', marginLeft: -space.lg },
   shrink: { flexShrink: 1 },
-  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  error: field.error,
 });

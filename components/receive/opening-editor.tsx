@@ -5,7 +5,7 @@ import { ApiError } from '../api/client';
 import { keyCodeQueries, type KeyCodeRecord } from '../data/key-codes';
 import { useLengthUnit } from '../data/me';
 import { useThreadMatchMutation, type ThreadIdentification } from '../data/tools';
-import { colors, fonts, minTouch, radius, space, type } from '../theme';
+import { colors, fonts, minTouch, radius, space, type, field } from '../theme';
 import { Button } from '../ui/button';
 import { ChoiceChips } from '../ui/choice-chips';
 import { NumberField, parseNumber } from '../ui/number-field';
@@ -195,5 +195,5 @@ const styles = StyleSheet.create({
   matchTitle: { fontFamily: fonts.semibold, fontSize: 16, color: colors.ink },
   matchTitleOn: { color: colors.onPrimary },
   focusRing: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 2 } as object,
-  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  error: field.error,
 });

@@ -1,6 +1,6 @@
 import { useRef } from 'react';
 import { Platform, Pressable, StyleSheet, Text, View } from 'react-native';
-import { colors, fonts, minTouch, radius, space, type } from '../theme';
+import { colors, fonts, minTouch, radius, space, type, field } from '../theme';
 
 interface ChoiceChipsProps<T extends string> {
   label: string;
@@ -86,5 +86,5 @@ const styles = StyleSheet.create({
   chipOn: { backgroundColor: colors.primary, borderColor: colors.primary },
   text: { fontFamily: fonts.semibold, fontSize: 15, color: colors.ink },
   textOn: { color: colors.onPrimary },
-  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  error: field.error,
 });

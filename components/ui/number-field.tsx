@@ -1,7 +1,7 @@
 import { forwardRef, useId, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
 import { fromMm, LENGTH_UNITS, toMm, type LengthUnit } from '@/shared/units';
-import { colors, fonts, minTouch, radius, space, type } from '../theme';
+import { colors, fonts, minTouch, radius, space, type, field } from '../theme';
 
 // ---------------------------------------------------------------------------------------------------
 // Numbers as typed. A form keeps the text the person typed (so "12." survives a re-render) and parses
@@ -174,21 +174,9 @@ export const LengthField = forwardRef<TextInput, LengthFieldProps>(function Leng
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
-  input: {
-    flex: 1,
-    minWidth: 0,
-    minHeight: minTouch,
-    borderWidth: 1.5,
-    borderColor: colors.inkMuted,
-    borderRadius: radius.md,
-    paddingHorizontal: space.md,
-    fontFamily: fonts.regular,
-    fontSize: 17,
-    color: colors.ink,
-    backgroundColor: colors.surface,
-  },
+  input: { ...field.input, flex: 1, minWidth: 0 },
   inputFocused: { borderColor: colors.focus, borderWidth: 2 },
-  inputError: { borderColor: colors.danger, borderWidth: 2 },
+  inputError: field.inputError,
   units: { flexDirection: 'row', borderRadius: radius.md, borderWidth: 1.5, borderColor: colors.inkMuted, overflow: 'visible' },
   unit: { minHeight: minTouch - 3, minWidth: minTouch + 4, paddingHorizontal: space.sm, alignItems: 'center', justifyContent: 'center', backgroundColor: colors.surface, borderRadius: radius.md - 2 },
   unitOn: { backgroundColor: colors.primary },
@@ -196,5 +184,5 @@ const styles = StyleSheet.create({
   unitTextOn: { color: colors.onPrimary },
   focusRing: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 2 } as object,
   suffix: { fontFamily: fonts.semibold, fontSize: 16, color: colors.inkMuted, minWidth: 36 },
-  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  error: field.error,
 });

@@ -2,7 +2,7 @@ import type { UseQueryResult } from '@tanstack/react-query';
 import { forwardRef, useEffect, useId, useImperativeHandle, useRef, useState } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import type { ListParams, Page } from '@/shared/api-types';
-import { colors, fonts, minTouch, radius, space, type } from '../theme';
+import { colors, fonts, minTouch, radius, space, type, field } from '../theme';
 import { Button } from './button';
 import { focusNativeId } from './focus';
 
@@ -235,20 +235,8 @@ const styles = StyleSheet.create({
   chosenText: { flex: 1, fontFamily: fonts.semibold },
   panel: { gap: space.xs },
   searchRow: { flexDirection: 'row', gap: space.sm, alignItems: 'center' },
-  input: {
-    flex: 1,
-    minWidth: 0,
-    minHeight: minTouch,
-    borderWidth: 1.5,
-    borderColor: colors.inkMuted,
-    borderRadius: radius.md,
-    paddingHorizontal: space.md,
-    fontFamily: fonts.regular,
-    fontSize: 17,
-    color: colors.ink,
-    backgroundColor: colors.surface,
-  },
-  inputError: { borderColor: colors.danger, borderWidth: 2 },
+  input: { ...field.input, flex: 1, minWidth: 0 },
+  inputError: field.inputError,
   options: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, backgroundColor: colors.surface, overflow: 'hidden' },
   option: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.md, paddingVertical: space.xs, borderBottomWidth: 1, borderBottomColor: colors.line },
   optionOn: { backgroundColor: colors.surfaceSunk },
@@ -256,5 +244,5 @@ const styles = StyleSheet.create({
   optionLabel: { fontFamily: fonts.semibold, fontSize: 16, color: colors.primary },
   focusRing: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: -3 } as object,
   note: { flexDirection: 'row', alignItems: 'center', gap: space.sm, padding: space.md },
-  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  error: field.error,
 });

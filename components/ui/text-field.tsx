@@ -1,6 +1,6 @@
 import { forwardRef, useId } from 'react';
 import { StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
-import { colors, fonts, minTouch, radius, space, type } from '../theme';
+import { colors, space, type, field } from '../theme';
 
 interface TextFieldProps extends Omit<TextInputProps, 'style'> {
   label: string;
@@ -39,17 +39,7 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
 
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
-  input: {
-    minHeight: minTouch,
-    borderWidth: 1.5,
-    borderColor: colors.inkMuted,
-    borderRadius: radius.md,
-    paddingHorizontal: space.md,
-    fontFamily: fonts.regular,
-    fontSize: 17,
-    color: colors.ink,
-    backgroundColor: colors.surface,
-  },
-  inputError: { borderColor: colors.danger, borderWidth: 2 },
-  error: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
+  input: field.input,
+  inputError: field.inputError,
+  error: field.error,
 });
