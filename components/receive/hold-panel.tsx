@@ -26,43 +26,36 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
   const [commentError, setCommentError] = useState<string | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
 
-  const onHold = () => {
-    if (reason.trim().length < 3) {
-      setReasonError('Say why the lot is held (at least 3 characters), e.g. "no dip tube reaches this drum".');
+  /** Hold and release each need a note of at least 3 characters; the server's word on that field goes beside it. */
+  const submitNote = (
+    note: string,
+    field: 'reason' | 'comment',
+    tooShort: string,
+    setFieldError: (message: string | null) => void,
+    send: (note: string, options: { onError: (err: Error) => void }) => void,
+  ) => {
+    if (note.trim().length < 3) {
+      setFieldError(tooShort);
       return;
     }
-    setReasonError(null);
+    setFieldError(null);
     setFormError(null);
-    hold.mutate(
-      { id: record.id, reason: reason.trim() },
-      {
-        onError: (err) => {
-          const fields = err instanceof ApiError ? err.fieldMessages() : {};
-          if (fields.reason) setReasonError(`Reason ${fields.reason}.`);
-          else setFormError(err.message);
-        },
+    send(note.trim(), {
+      onError: (err) => {
+        const fields = err instanceof ApiError ? err.fieldMessages() : {};
+        if (fields[field]) setFieldError(`${field === 'reason' ? 'Reason' : 'Comment'} ${fields[field]}.`);
+        else setFormError(err.message);
       },
-    );
+    });
   };
-
-  const onRelease = () => {
-    if (comment.trim().length < 3) {
-      setCommentError('Say why the lot may be used now (at least 3 characters).');
-      return;
-    }
-    setCommentError(null);
-    setFormError(null);
-    release.mutate(
-      { id: record.id, comment: comment.trim() },
-      {
-        onError: (err) => {
-          const fields = err instanceof ApiError ? err.fieldMessages() : {};
-          if (fields.comment) setCommentError(`Comment ${fields.comment}.`);
-          else setFormError(err.message);
-        },
-      },
+  const onHold = () =>
+    submitNote(reason, 'reason', 'Say why the lot is held (at least 3 characters), e.g. "no dip tube reaches this drum".', setReasonError, (note, options) =>
+      hold.mutate({ id: record.id, reason: note }, options),
     );
-  };
+  const onRelease = () =>
+    submitNote(comment, 'comment', 'Say why the lot may be used now (at least 3 characters).', setCommentError, (note, options) =>
+      release.mutate({ id: record.id, comment: note }, options),
+    );
 
   if (record.status === 'on-hold') {
     return (
