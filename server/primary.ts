@@ -37,9 +37,12 @@ export async function runPrimary(workers: number): Promise<void> {
     });
   };
 
-  const giveUp = (code: number) => {
+  const stopWorkers = () => {
     stopping = true;
     for (const w of Object.values(cluster.workers ?? {})) w?.process.kill('SIGTERM');
+  };
+  const giveUp = (code: number) => {
+    stopWorkers();
     process.exit(code);
   };
 
@@ -71,8 +74,7 @@ export async function runPrimary(workers: number): Promise<void> {
 
   const stop = () => {
     if (stopping) return;
-    stopping = true;
-    for (const w of Object.values(cluster.workers ?? {})) w?.process.kill('SIGTERM');
+    stopWorkers();
     if (!Object.keys(cluster.workers ?? {}).length) process.exit(0);
     setTimeout(() => process.exit(0), 8000).unref();
   };
