@@ -52,8 +52,8 @@ export interface AppOptions {
   changes?: ChangeFeed | null;
 }
 
-/** The app factory: everything under /api, the web app at /. One process is stateless apart from the rate-limit counters
- * and the kept fit answers (which every process drops when the registry changes). */
+/** The app factory: everything under /api, the web app at /. One process is stateless apart from the kept fit
+ * answers and signed-in users (which every process drops when their tables change). */
 export function createApp(options: AppOptions): Express {
   const { dataSource: ds, jwtSecret } = options;
   const app = express();
