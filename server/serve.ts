@@ -4,6 +4,7 @@ import path from 'node:path';
 import { announce, EXIT_CANNOT_LISTEN } from './announce';
 import { createApp } from './app';
 import { jwtSecret } from './auth/tokens';
+import { trustProxyFromEnv } from './common/security-headers';
 import { makeDataSource } from './db/data-source';
 import { closePreparedPool } from './db/prepared';
 import { ChangeFeed } from './db/change-feed';
@@ -42,6 +43,8 @@ const app = createApp({
   jwtSecret: jwtSecret(),
   webDir: process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'web'),
   logRequests: process.env.BUNGWISE_LOG_REQUESTS !== '0',
+  publicUrl: process.env.BUNGWISE_PUBLIC_URL,
+  trustProxy: trustProxyFromEnv(),
   allowedOrigins: (process.env.BUNGWISE_ALLOWED_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
 });
 
