@@ -94,8 +94,13 @@ export class SignInGuard {
     }
     // The owner is in: this attempt and the failures before it from this address were theirs (typos), so
     // none of them count any longer; failures from other addresses still do.
+    // (Never below zero: another counter's window may have started afresh meanwhile.)
     const own = accountAddr.consumedPoints;
-    await Promise.all([this.byAddress.reward(address, own), this.byAccountAddress.delete(pair), this.byAccount.reward(account, own)]).catch(() => undefined);
+    await Promise.all([
+      this.byAddress.reward(address, Math.min(own, addr.consumedPoints)),
+      this.byAccountAddress.delete(pair),
+      this.byAccount.reward(account, Math.min(own, acct.consumedPoints)),
+    ]).catch(() => undefined);
     return result;
   }
 }
