@@ -36,6 +36,24 @@ const target = parsed.toString();
 const ready = spawnSync(tool('pg_isready'), ['-d', target], { env: pgEnv, encoding: 'utf8' });
 if (ready.status !== 0) stop('The database is not running: start Bungwise (`npm start`) in another terminal, or check DATABASE_URL.');
 
+// A restore under a running server would leave it answering 500s: its named prepared statements were
+// planned against the tables and types the restore drops ("cached plan must not change result type"),
+// and what it keeps in memory describes the old data. So the restore refuses while any server process
+// is connected. Every server connection carries this application_name (SERVER_APPLICATION_NAME in
+// server/db/data-source.ts: change both together), and each process holds one open while it runs.
+const SERVER_APPLICATION_NAME = 'bungwise-server';
+
+function refuseWhileServed() {
+  const sql = `SELECT count(*), string_agg(DISTINCT coalesce(host(client_addr), 'this machine'), ', ')
+    FROM pg_stat_activity WHERE datname = current_database() AND application_name = '${SERVER_APPLICATION_NAME}' AND pid <> pg_backend_pid()`;
+  const q = spawnSync(tool('psql'), ['-X', '-A', '-t', '-v', 'ON_ERROR_STOP=1', '-d', target, '-c', sql], { env: pgEnv, encoding: 'utf8' });
+  if (q.status !== 0) stop(`Could not check whether a server is using the database (${(q.stderr || '').trim()}); nothing was restored.`);
+  const [connections, from] = q.stdout.trim().split('|');
+  if (Number(connections) > 0) {
+    stop(`Bungwise is serving this database (${connections} connection${connections === '1' ? '' : 's'} from ${from}): stop every server process using it, then restore again. Nothing was restored.`);
+  }
+}
+
 if (command === 'backup') {
   const stamp = new Date().toISOString().replace(/[:T]/g, '-').replace(/\..*/, '');
   const file = path.resolve(fileArg ?? path.join(dataDir, 'backups', `bungwise-${stamp}.dump`));
@@ -45,6 +63,7 @@ if (command === 'backup') {
   console.log(`[bungwise] Backed up to ${file} (${Math.round(fs.statSync(file).size / 1024)} KB).`);
 } else {
   if (!fileArg || !fs.existsSync(fileArg)) stop('Name the backup file to restore: npm run db:restore -- FILE');
+  refuseWhileServed();
   // --clean drops what the dump holds before recreating it; one transaction: all of it or none.
   const out = spawnSync(tool('pg_restore'), ['--clean', '--if-exists', '--no-owner', '--single-transaction', '--dbname', target, fileArg], { env: pgEnv, stdio: 'inherit' });
   if (out.status !== 0) stop('pg_restore failed: see its message above; the database was left as it was.');

@@ -3,7 +3,6 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import cors from 'cors';
-import helmet from 'helmet';
 import onHeaders from 'on-headers';
 import morgan from 'morgan';
 import type { DataSource } from 'typeorm';
@@ -11,6 +10,7 @@ import { authRouter, DEFAULT_SIGN_IN_LIMITS, type SignInLimits } from './auth/au
 import { makeAuthenticator } from './auth/guards';
 import { notFound, unavailable } from './common/errors';
 import { errorMiddleware } from './common/error-middleware';
+import { securityHeaders } from './common/security-headers';
 import { healthRouter } from './health/health.router';
 import { attachmentsRouter } from './attachments/attachments.router';
 import { auditRouter } from './audit/audit';
@@ -39,6 +39,10 @@ export interface AppOptions {
   signInLimits?: Partial<SignInLimits>;
   /** Request logging (morgan); off in tests to keep their output readable. */
   logRequests?: boolean;
+  /** The app's public address (`BUNGWISE_PUBLIC_URL`); an https one makes every answer send the HTTPS-only headers. */
+  publicUrl?: string;
+  /** Express's `trust proxy` (`BUNGWISE_TRUST_PROXY`); loopback by default. */
+  trustProxy?: boolean | number | string;
   /** Other origins allowed to call the API from a browser; by default none (the app's own origin only). */
   allowedOrigins?: string[];
   /** Object storage for attachments and imported files; without it those routes answer 503. */
@@ -52,8 +56,8 @@ export interface AppOptions {
   changes?: ChangeFeed | null;
 }
 
-/** The app factory: everything under /api, the web app at /. One process is stateless apart from the rate-limit counters
- * and the kept fit answers (which every process drops when the registry changes). */
+/** The app factory: everything under /api, the web app at /. One process is stateless apart from the kept fit
+ * answers and signed-in users (which every process drops when their tables change). */
 export function createApp(options: AppOptions): Express {
   const { dataSource: ds, jwtSecret } = options;
   const app = express();
@@ -61,21 +65,9 @@ export function createApp(options: AppOptions): Express {
   // No ETag on API answers: nothing sends If-None-Match for them, and hashing each body cost a twentieth
   // of the fit check's CPU. Static files keep theirs (express.static sets its own).
   app.set('etag', false);
-  app.set('trust proxy', 'loopback');
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        directives: {
-          defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
-          styleSrc: ["'self'", "'unsafe-inline'"], // react-native-web writes its styles at run time
-          imgSrc: ["'self'", 'data:', 'blob:'],
-          fontSrc: ["'self'", 'data:'],
-          connectSrc: ["'self'"],
-        },
-      },
-    }),
-  );
+  // Which proxies may tell the client's address and protocol (X-Forwarded-For, -Proto): loopback by default.
+  app.set('trust proxy', options.trustProxy ?? 'loopback');
+  app.use(securityHeaders(options.publicUrl));
   if (options.logRequests) app.use(morgan(':method :url :status :res[content-length] - :response-time ms'));
 
   const api = express.Router();

@@ -1,6 +1,6 @@
 // The server's entry: one process per core (BUNGWISE_WORKERS overrides, 1 runs a single process), sharing
 // the port through node:cluster. Each process is stateless apart from what it keeps in memory, which the
-// change feed keeps true; the sign-in rate limits are counted in the primary for all of them.
+// change feed keeps true; the sign-in limits are counted in the database for all of them.
 import cluster from 'node:cluster';
 import os from 'node:os';
 

@@ -1,4 +1,3 @@
-import { ClusterMemoryStorePrimary } from '@express-rate-limit/cluster-memory-store';
 import cluster, { type Worker } from 'node:cluster';
 import { announce, EXIT_CANNOT_LISTEN } from './announce';
 
@@ -12,10 +11,8 @@ const CRASH_WINDOW_MS = 60_000;
  * worker finish its requests before exiting. A worker that dies before it ever answered (bad
  * configuration, port taken) stops the whole server with a non-zero exit code.
  */
-export async function runPrimary(workers: number): Promise<void> {
+export function runPrimary(workers: number): void {
   const port = Number(process.env.PORT ?? 8080);
-  // The sign-in limits count failures across all workers, here.
-  await new ClusterMemoryStorePrimary().init();
   // Each worker's database pools get a share, so the total stays near what one process used to open.
   const poolShare = process.env.BUNGWISE_DB_POOL ?? String(Math.max(2, Math.ceil(20 / workers)));
   let stopping = false;

@@ -4,6 +4,7 @@ import path from 'node:path';
 import { announce, EXIT_CANNOT_LISTEN } from './announce';
 import { createApp } from './app';
 import { jwtSecret } from './auth/tokens';
+import { trustProxyFromEnv } from './common/security-headers';
 import { makeDataSource } from './db/data-source';
 import { closePreparedPool } from './db/prepared';
 import { ChangeFeed } from './db/change-feed';
@@ -32,8 +33,10 @@ const transport = transportFromEnv();
 const mailer = transport ? new MailSender(ds, transport) : null;
 
 // Signed-in users and fit answers kept in memory until the database announces a change to their tables
-// (BUNGWISE_KEEP=0 reads them on every request instead).
-const changes = process.env.BUNGWISE_KEEP === '0' ? null : new ChangeFeed(process.env.DATABASE_URL!);
+// (BUNGWISE_KEEP=0 reads them on every request instead). The feed's connection runs either way: it is
+// how `npm run db:restore` sees that this process uses the database, even while the pools are idle.
+const feed = new ChangeFeed(process.env.DATABASE_URL!);
+const changes = process.env.BUNGWISE_KEEP === '0' ? null : feed;
 
 const app = createApp({
   changes,
@@ -42,6 +45,8 @@ const app = createApp({
   jwtSecret: jwtSecret(),
   webDir: process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'web'),
   logRequests: process.env.BUNGWISE_LOG_REQUESTS !== '0',
+  publicUrl: process.env.BUNGWISE_PUBLIC_URL,
+  trustProxy: trustProxyFromEnv(),
   allowedOrigins: (process.env.BUNGWISE_ALLOWED_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
 });
 
@@ -49,7 +54,7 @@ const app = createApp({
 // Listen at once (health answers "down" meanwhile), announce once the database is reachable.
 const server = app.listen(port, () => {
   void connect().then(async () => {
-    await changes?.start();
+    await feed.start();
     mailer?.start();
     // Under a primary (server/index.ts) the primary announces once for all workers.
     if (cluster.isWorker) process.send?.({ bungwise: 'ready' });
@@ -66,7 +71,7 @@ function shutdown(): void {
   if (stopping) return;
   stopping = true;
   mailer?.stop();
-  void changes?.stop();
+  void feed.stop();
   server.close(() => {
     void Promise.allSettled([closePreparedPool(ds), ds.destroy()]).finally(() => process.exit(0));
   });

@@ -1,6 +1,7 @@
 import { LRUCache } from 'lru-cache';
 import { Client } from 'pg';
 import type { CHANGE_CHANNELS } from '../../migrations/1764637200000-change-notify';
+import { SERVER_APPLICATION_NAME } from './data-source';
 
 export type ChangeChannel = keyof typeof CHANGE_CHANNELS;
 
@@ -123,7 +124,7 @@ export class ChangeFeed {
 
   private async connect(): Promise<void> {
     if (this.stopped) return;
-    const client = new Client({ connectionString: this.databaseUrl, connectionTimeoutMillis: 3000, keepAlive: true, keepAliveInitialDelayMillis: 10_000, query_timeout: 3000 });
+    const client = new Client({ connectionString: this.databaseUrl, application_name: SERVER_APPLICATION_NAME, connectionTimeoutMillis: 3000, keepAlive: true, keepAliveInitialDelayMillis: 10_000, query_timeout: 3000 });
     client.on('notification', (msg) => {
       for (const s of this.kept.get(msg.channel as ChangeChannel) ?? []) s.invalidate();
     });

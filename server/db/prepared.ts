@@ -1,6 +1,7 @@
 import { Pool } from 'pg';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { PostgresConnectionOptions } from 'typeorm/driver/postgres/PostgresConnectionOptions';
+import { SERVER_APPLICATION_NAME } from './data-source';
 
 const hotPools = new WeakMap<DataSource, Pool>();
 
@@ -21,6 +22,7 @@ function hotPool(ds: DataSource): Pool {
       idleTimeoutMillis: 10000,
       allowExitOnIdle: true,
       statement_timeout: 15000,
+      application_name: SERVER_APPLICATION_NAME,
       options: '-c jit=off -c plan_cache_mode=force_generic_plan',
     });
     // An idle connection dropped (the database restarted): the pool opens a new one on the next query.

@@ -63,7 +63,7 @@ describe('npm start keeps data across a stop and a start', () => {
       BUNGWISE_SMTP_PORT: String(await freePort()),
       BUNGWISE_MAIL_WEB_PORT: String(await freePort()),
       BUNGWISE_LOG_REQUESTS: '0',
-      // Two server processes whatever the machine: the sign-in limit below must count across both.
+      // Two server processes whatever the machine: the sign-in limit below must count across both (in the database).
       BUNGWISE_WORKERS: '2',
     };
     // A user's start: its own private cluster and local stand-ins, not the test run's.

@@ -17,8 +17,17 @@ export type Viewport = (typeof VIEWPORTS)[number];
 const WEB_DIR = process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'dist', 'web');
 export const SHOTS_DIR = path.resolve(__dirname, '..', 'artifacts', 'screens');
 
+export interface HarnessOptions {
+  /** The address the server listens on; loopback unless a test needs the machine's own network address. */
+  bind?: string;
+  /** The host the browser loads the app from (`baseUrl`). */
+  host?: string;
+}
+
 /** The exported web build served by the real app on a free port, over a freshly reset database. */
 export class BrowserHarness {
+  constructor(private readonly options: HarnessOptions = {}) {}
+
   ds!: DataSource;
   server!: Server;
   browser!: Browser;
@@ -44,10 +53,11 @@ export class BrowserHarness {
     await resetDatabase(this.ds);
     // Object storage (the local S3 stand-in `npm test` starts) for attachments and the files imports keep.
     const app = makeTestApp(this.ds, { webDir: WEB_DIR, signInLimits: { perAccount: 1000, perAddress: 1000 }, storage: testStorage() });
+    const { bind = '127.0.0.1', host = '127.0.0.1' } = this.options;
     this.server = await new Promise<Server>((resolve) => {
-      const s = app.listen(0, '127.0.0.1', () => resolve(s));
+      const s = app.listen(0, bind, () => resolve(s));
     });
-    this.baseUrl = `http://127.0.0.1:${(this.server.address() as AddressInfo).port}`;
+    this.baseUrl = `http://${host.includes(':') ? `[${host}]` : host}:${(this.server.address() as AddressInfo).port}`;
     this.browser = await chromium.launch({
       executablePath: process.env.BUNGWISE_CHROMIUM ?? '/usr/bin/chromium',
       args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
