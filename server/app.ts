@@ -67,11 +67,15 @@ export function createApp(options: AppOptions): Express {
       contentSecurityPolicy: {
         directives: {
           defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
+          // WebAssembly compiles only with 'wasm-unsafe-eval' (CSP3): the label scanner's decoder. It allows no eval of JS.
+          scriptSrc: ["'self'", "'wasm-unsafe-eval'"],
           styleSrc: ["'self'", "'unsafe-inline'"], // react-native-web writes its styles at run time
           imgSrc: ["'self'", 'data:', 'blob:'],
           fontSrc: ["'self'", 'data:'],
           connectSrc: ["'self'"],
+          // Helmet adds upgrade-insecure-requests by default: on the plant's plain-http intranet address the
+          // browser then asks for every script over https and the app never loads.
+          upgradeInsecureRequests: null,
         },
       },
     }),
