@@ -29,6 +29,24 @@ export interface LabelScan {
 
 type Found = (label: DrumLabel) => void;
 
+interface Started {
+  reader: CodeReader | null;
+  stream: MediaStream | null;
+  problem: string | null;
+}
+
+/** The decoder and the camera, opened side by side; no reader means nothing can be read. */
+async function startScan(): Promise<Started> {
+  const camera = liveCameraUnavailable();
+  const [r, s] = await Promise.allSettled([openCodeReader(), camera ? Promise.reject(new Error(camera)) : openRearCamera()]);
+  if (r.status === 'rejected') {
+    if (s.status === 'fulfilled') stopCamera(s.value);
+    return { reader: null, stream: null, problem: 'The barcode decoder could not be loaded. Check the connection and try again, or type the lot number.' };
+  }
+  if (s.status === 'fulfilled') return { reader: r.value, stream: s.value, problem: null };
+  return { reader: r.value, stream: null, problem: camera ?? cameraErrorSentence(s.reason) };
+}
+
 /** The camera, the decoder and the parser for one opening of the scanner; `onFound` gets the first label that reads. */
 export function useLabelScan(onFound: Found): LabelScan {
   const [phase, setPhase] = useState<ScanPhase>('starting');
@@ -74,24 +92,16 @@ export function useLabelScan(onFound: Found): LabelScan {
     // A local flag, not `done`: a re-run of this effect must not adopt the camera an earlier run opened.
     let cancelled = false;
     done.current = false;
-    const camera = liveCameraUnavailable();
-    Promise.allSettled([openCodeReader(), camera ? Promise.reject(new Error(camera)) : openRearCamera()]).then(([r, s]) => {
-      if (s.status === 'fulfilled' && (cancelled || r.status === 'rejected')) stopCamera(s.value);
-      if (cancelled) return;
-      if (r.status === 'rejected') {
-        setPhase('failed');
-        setCameraProblem('The barcode decoder could not be loaded. Check the connection and try again, or type the lot number.');
+    void startScan().then((started) => {
+      if (cancelled) {
+        stopCamera(started.stream);
         return;
       }
-      reader.current = r.value;
-      setEngine(r.value.engine);
-      if (s.status === 'fulfilled') {
-        stream.current = s.value;
-        setPhase('live');
-      } else {
-        setPhase('photo');
-        setCameraProblem(camera ?? cameraErrorSentence(s.reason));
-      }
+      reader.current = started.reader;
+      stream.current = started.stream;
+      setEngine(started.reader?.engine ?? null);
+      setCameraProblem(started.problem);
+      setPhase(!started.reader ? 'failed' : started.stream ? 'live' : 'photo');
     });
     return () => {
       cancelled = true;

@@ -15,6 +15,8 @@ const harness = new BrowserHarness();
 const work = fs.mkdtempSync(path.join(os.tmpdir(), 'bungwise-scan-'));
 const GTIN = '09506000134352'; // GS1's example GTIN (check digit 2; see tests/unit/gs1-label.test.ts)
 const SCANNER = 'dock-lot-scan-scanner';
+// Each test restarts Chromium, loads the decoder and signs in: more than the default 30 s on a busy two-core machine.
+const SLOW = 90_000;
 
 beforeAll(() => harness.start(), 60_000);
 afterAll(async () => {
@@ -102,7 +104,7 @@ describe.each(VIEWPORTS)('scanning a drum label at $name width ($width px)', (vi
     await pickFittingDrum(page);
     await page.getByTestId('dock-submit').click();
     await seen(page, 'record-lot', lot);
-  });
+  }, SLOW);
 
   it('GS1-128 and a plain QR code through the camera', async () => {
     await cameraShowing(`128-${viewport.name}`, 'gs1-128', `(01)${GTIN}(10)${lot}-B(17)280200`);
@@ -119,7 +121,7 @@ describe.each(VIEWPORTS)('scanning a drum label at $name width ($width px)', (vi
     expect(await lotValue(page)).toBe(`${lot}-Q`);
     expect(await page.getByTestId('dock-lot-label-expiry').count()).toBe(0);
     expectOnlyOwnOrigin(requests);
-  });
+  }, SLOW);
 
   it('a label with a wrong check digit gets a sentence, the scanner stays open, and cancelling leaves typing', async () => {
     await cameraShowing(`bad-${viewport.name}`, 'gs1datamatrix', `(01)09506000134359(10)${lot}`, true);
@@ -142,7 +144,7 @@ describe.each(VIEWPORTS)('scanning a drum label at $name width ($width px)', (vi
     await page.getByTestId('dock-lot').fill(`${lot}-T`);
     expect(await page.getByTestId('dock-lot-label').count()).toBe(0);
     expectOnlyOwnOrigin(requests);
-  });
+  }, SLOW);
 });
 
 describe.each(VIEWPORTS)('the photo fallback on a plain-http intranet address at $name width ($width px)', (viewport: Viewport) => {
@@ -173,5 +175,5 @@ describe.each(VIEWPORTS)('the photo fallback on a plain-http intranet address at
     expect(await lotValue(page)).toBe(lot);
     await harness.shot(page, 'scan-photo-filled', viewport);
     expectOnlyOwnOrigin(requests, origin());
-  });
+  }, SLOW);
 });
