@@ -43,6 +43,8 @@ export const type = {
 export const breakpoints = { wide: 900 } as const;
 export const maxContentWidth = 1040;
 export const minTouch = 44;
+/** Controls pressed in work gloves (the label scanner) are this tall at least: above the 48 px asked for gloves. */
+export const gloveTouch = 56;
 
 /** The one look of a text input, its error state, and the message under a field. */
 export const field = {

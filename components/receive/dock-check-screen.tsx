@@ -1,6 +1,8 @@
 import { useEffect, useRef, useState } from 'react';
 import { StyleSheet, Text, View, type TextInput } from 'react-native';
 import { REGION_LABELS, type DrumTypeRecord, type SlurryRecord, type StationRecord, type SupplierRecord } from '@/shared/api-types';
+import type { DrumLabel } from '@/shared/gs1';
+import { lotNumberProblem } from '@/shared/lot-number';
 import { ApiError } from '../api/client';
 import { drumTypeQueries } from '../data/drum-types';
 import { useLengthUnit } from '../data/me';
@@ -18,11 +20,11 @@ import { HandlingCaution } from '../ui/handling-caution';
 import { LengthField, lengthDraft, lengthDraftMm, NumberField, parseNumber, type LengthDraft } from '../ui/number-field';
 import { RecordPicker, type PickedRef } from '../ui/record-picker';
 import { ErrorState, LoadingState } from '../ui/states';
-import { TextField } from '../ui/text-field';
 import { useIsWide } from '../use-layout';
 import { CheckFiles } from './check-files';
 import { CheckResult } from './check-result';
 import { HoldPanel } from './hold-panel';
+import { LotNumberField } from './lot-number-field';
 import { OpeningEditor, type OpeningDraft } from './opening-editor';
 import { LinkButton, SectionTitle, TextLink } from './parts';
 import { revealNativeId } from './reveal';
@@ -50,6 +52,8 @@ export function DockCheckScreen() {
   const record = useReceivingCheckQuery(recordId);
 
   const [lot, setLot] = useState('');
+  // The scanned drum label (GTIN, dates, serial) for the lot's checks; null when the lot was typed.
+  const [label, setLabel] = useState<DrumLabel | null>(null);
   const [count, setCount] = useState('1');
   const [supplier, setSupplier] = useState<PickedRef | null>(null);
   const [slurry, setSlurry] = useState<PickedRef | null>(null);
@@ -83,6 +87,7 @@ export function DockCheckScreen() {
     const problems: Errors = {};
     const n = parseNumber(count);
     if (!lot.trim()) problems.lotNumber = 'Enter the lot number from the drum label.';
+    else problems.lotNumber = lotNumberProblem(lot.trim());
     if (n === null || Number.isNaN(n) || !Number.isInteger(n) || n < 1) problems.drumCount = 'Enter how many drums arrived: a whole number, 1 or more.';
     let drum: ReceivingCheckInput['drum'];
     if (mode === 'pick') {
@@ -143,6 +148,7 @@ export function DockCheckScreen() {
   const startAgain = () => {
     setRecordId(undefined);
     setLot('');
+    setLabel(null);
     setCount('1');
     setSupplier(null);
     setSlurry(null);
@@ -190,17 +196,7 @@ export function DockCheckScreen() {
   const lotCard = (
     <Card>
       <SectionTitle>The lot</SectionTitle>
-      <TextField
-        ref={lotRef}
-        label="Lot number"
-        hint="As printed on the drum label."
-        value={lot}
-        onChangeText={setLot}
-        autoCapitalize="characters"
-        autoCorrect={false}
-        error={errors.lotNumber}
-        testID="dock-lot"
-      />
+      <LotNumberField ref={lotRef} value={lot} onChangeText={setLot} label={label} onLabel={setLabel} error={errors.lotNumber} testID="dock-lot" />
       <NumberField label="Drums in this lot" value={count} onChangeText={setCount} inputMode="numeric" suffix="drums" error={errors.drumCount} testID="dock-count" />
       <RecordPicker<SlurryRecord>
         label="Slurry"

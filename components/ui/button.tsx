@@ -1,13 +1,15 @@
 import { ActivityIndicator, Pressable, StyleSheet, Text, type PressableProps } from 'react-native';
-import { colors, fonts, minTouch, radius, space } from '../theme';
+import { colors, fonts, gloveTouch, minTouch, radius, space } from '../theme';
 
 interface ButtonProps extends Omit<PressableProps, 'children' | 'style'> {
   label: string;
   variant?: 'primary' | 'secondary' | 'danger' | 'quiet';
   busy?: boolean;
+  /** Taller, for use in gloves (the label scanner). */
+  large?: boolean;
 }
 
-export function Button({ label, variant = 'primary', busy = false, disabled, ...rest }: ButtonProps) {
+export function Button({ label, variant = 'primary', busy = false, large = false, disabled, ...rest }: ButtonProps) {
   const isDisabled = disabled || busy;
   return (
     <Pressable
@@ -18,6 +20,7 @@ export function Button({ label, variant = 'primary', busy = false, disabled, ...
       style={({ pressed, focused }: { pressed: boolean; focused?: boolean }) => [
         styles.base,
         styles[variant],
+        large && styles.large,
         pressed && styles[`${variant}Pressed` as const],
         focused && styles.focused,
         isDisabled && styles.disabled,
@@ -43,6 +46,7 @@ const styles = StyleSheet.create({
     borderWidth: 2,
     borderColor: 'transparent',
   },
+  large: { minHeight: gloveTouch, minWidth: gloveTouch },
   primary: { backgroundColor: colors.primary },
   primaryPressed: { backgroundColor: colors.primaryPressed },
   secondary: { backgroundColor: colors.surface, borderColor: colors.primary },

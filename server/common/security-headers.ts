@@ -3,7 +3,8 @@ import helmet from 'helmet';
 
 const DIRECTIVES = {
   defaultSrc: ["'self'"],
-  scriptSrc: ["'self'"],
+  // WebAssembly compiles only with 'wasm-unsafe-eval' (CSP3): the label scanner's decoder. It allows no eval of JS.
+  scriptSrc: ["'self'", "'wasm-unsafe-eval'"],
   styleSrc: ["'self'", "'unsafe-inline'"], // react-native-web writes its styles at run time
   imgSrc: ["'self'", 'data:', 'blob:'],
   fontSrc: ["'self'", 'data:'],

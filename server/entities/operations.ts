@@ -1,4 +1,5 @@
 import { Column, Entity, JoinColumn, ManyToOne } from 'typeorm';
+import { LOT_NUMBER_MAX_LENGTH } from '../../shared/lot-number';
 import { Base } from './base';
 import { NullableText, NullableUuid, Text, Uuid } from './columns';
 import { Connector, DipTube, DrumType, Slurry, Station, Supplier, TubeSet } from './registry';
@@ -8,7 +9,7 @@ export type Verdict = 'fits' | 'caution' | 'no-fit';
 
 @Entity({ name: 'receiving_checks' })
 export class ReceivingCheck extends Base {
-  @Text('lot_number', 60) lotNumber: string;
+  @Text('lot_number', LOT_NUMBER_MAX_LENGTH) lotNumber: string;
   @NullableUuid('supplier_id') supplierId: string | null;
   @ManyToOne(() => Supplier) @JoinColumn({ name: 'supplier_id' }) supplier?: Supplier | null;
   @NullableUuid('slurry_id') slurryId: string | null;
@@ -101,7 +102,7 @@ export class ChangeOut extends Base {
   @ManyToOne(() => Connector) @JoinColumn({ name: 'connector_id' }) connector?: Connector | null;
   @NullableUuid('receiving_check_id') receivingCheckId: string | null;
   @ManyToOne(() => ReceivingCheck) @JoinColumn({ name: 'receiving_check_id' }) receivingCheck?: ReceivingCheck | null;
-  @NullableText('lot_number', 60) lotNumber: string | null;
+  @NullableText('lot_number', LOT_NUMBER_MAX_LENGTH) lotNumber: string | null;
   @NullableText('drum_serial', 60) drumSerial: string | null;
   @NullableUuid('retired_tube_set_id') retiredTubeSetId: string | null;
   @ManyToOne(() => TubeSet) @JoinColumn({ name: 'retired_tube_set_id' }) retiredTubeSet?: TubeSet | null;

@@ -1,4 +1,5 @@
 import { Column, Entity, JoinColumn, ManyToOne, OneToMany } from 'typeorm';
+import { LOT_NUMBER_MAX_LENGTH } from '../../shared/lot-number';
 import { Base } from './base';
 import { Bool, Float, NullableFloat, NullableText, NullableUuid, Text, Uuid } from './columns';
 import { User } from './user';
@@ -159,7 +160,7 @@ export class TubeSet extends Base {
   @ManyToOne(() => User) @JoinColumn({ name: 'last_rinsed_by_id' }) lastRinsedBy?: User | null;
   @Column({ name: 'last_used_at', type: 'timestamptz', nullable: true }) lastUsedAt: Date | null;
   /** The lot and drum this set is threaded into while online or standby. */
-  @NullableText('current_lot_number', 60) currentLotNumber: string | null;
+  @NullableText('current_lot_number', LOT_NUMBER_MAX_LENGTH) currentLotNumber: string | null;
   @NullableText('current_drum_serial', 60) currentDrumSerial: string | null;
   @NullableUuid('current_receiving_check_id') currentReceivingCheckId: string | null;
 }

@@ -1,10 +1,12 @@
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
+import { LOT_NUMBER_MAX_LENGTH, LOT_NUMBER_MESSAGES, LOT_NUMBER_PATTERN } from '../../shared/lot-number';
 import { AdHocDrumDto } from '../fit/fit-check.dto';
 
 export class ReceivingCheckDto {
-  @IsString({ message: 'must be text' }) @MinLength(1, { message: 'is required' }) @MaxLength(60, { message: 'must be at most 60 characters' })
-  @Matches(/^[\p{L}\p{N}][\p{L}\p{N}\-_./ ]*$/u, { message: 'may hold letters, digits, spaces and - _ . /' })
+  @IsString({ message: 'must be text' }) @MinLength(1, { message: LOT_NUMBER_MESSAGES.required })
+  @MaxLength(LOT_NUMBER_MAX_LENGTH, { message: LOT_NUMBER_MESSAGES.tooLong })
+  @Matches(LOT_NUMBER_PATTERN, { message: LOT_NUMBER_MESSAGES.characters })
   lotNumber: string;
   @IsOptional() @IsUUID('all', { message: 'must be an id' }) supplierId?: string;
   @IsOptional() @IsUUID('all', { message: 'must be an id' }) slurryId?: string;

@@ -128,6 +128,10 @@ describe('headers', () => {
     expect(res.headers['x-content-type-options']).toBe('nosniff');
     expect(res.headers['x-frame-options']).toBe('SAMEORIGIN');
     expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+    // The label scanner's decoder is WebAssembly: compiling it needs 'wasm-unsafe-eval' (CSP Level 3), which allows no JS eval.
+    expect(res.headers['content-security-policy']).toMatch(/script-src 'self' 'wasm-unsafe-eval'(;|$)/);
+    // On the plant's plain-http address an upgrade would send every script request to https, where nothing answers.
+    expect(res.headers['content-security-policy']).not.toContain('upgrade-insecure-requests');
     expect(res.headers['access-control-allow-origin']).toBeUndefined();
     const preflight = await request(app).options('/api/dip-tubes').set('Origin', 'http://elsewhere.example').set('Access-Control-Request-Method', 'POST');
     expect(preflight.headers['access-control-allow-origin']).toBeUndefined();

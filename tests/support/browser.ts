@@ -58,11 +58,17 @@ export class BrowserHarness {
       const s = app.listen(0, bind, () => resolve(s));
     });
     this.baseUrl = `http://${host.includes(':') ? `[${host}]` : host}:${(this.server.address() as AddressInfo).port}`;
+    await this.launch();
+    fs.mkdirSync(SHOTS_DIR, { recursive: true });
+  }
+
+  /** (Re)starts Chromium, with extra command-line switches when a test needs them (a fake camera: `fakeCameraArgs`). */
+  async launch(extraArgs: string[] = []): Promise<void> {
+    await this.browser?.close();
     this.browser = await chromium.launch({
       executablePath: process.env.BUNGWISE_CHROMIUM ?? '/usr/bin/chromium',
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', ...extraArgs],
     });
-    fs.mkdirSync(SHOTS_DIR, { recursive: true });
   }
 
   async stop(): Promise<void> {
@@ -85,6 +91,14 @@ export class BrowserHarness {
   async shot(page: Page, name: string, viewport: Viewport): Promise<void> {
     await page.screenshot({ path: path.join(SHOTS_DIR, `${name}-${viewport.name}.png`), fullPage: true });
   }
+}
+
+/**
+ * Chromium's fake camera playing a Y4M (or MJPEG) file in a loop, with the permission prompt accepted.
+ * Switches of Chromium's own (media/capture/video/fake_video_capture_device_factory, content switches).
+ */
+export function fakeCameraArgs(videoFile: string): string[] {
+  return ['--use-fake-device-for-media-stream', '--use-fake-ui-for-media-stream', `--use-file-for-fake-video-capture=${videoFile}`];
 }
 
 export async function signInAs(page: Page, baseUrl: string, email: string, password = 'bungwise-demo'): Promise<void> {
