@@ -5,12 +5,11 @@ import { validateSync, type ValidationError } from 'class-validator';
 import { parse } from 'csv-parse';
 import type { DataSource, EntityManager } from 'typeorm';
 import { inToMm } from '../../shared/units';
-import { storeAttachment } from '../attachments/attachments.router';
+import type { AttachmentsService } from '../attachments/attachments.service';
 import { HttpError } from '../common/errors';
-import { DrumOpening, DrumType, ImportRecord, KeyCode, Supplier, ThreadSpec, type ImportKind } from '../entities';
+import { DrumOpening, DrumType, fitFileName, ImportRecord, KeyCode, Supplier, ThreadSpec, type ImportKind } from '../entities';
 import { nearestCodes } from '../registry/refs';
 import { ConnectorDto, DipTubeDto, DrumTypeDto } from '../registry/registry.dto';
-import type { Storage } from '../storage/storage';
 import { COLUMNS, normaliseHeader, type ColumnSpec } from './columns';
 import { audit } from '../audit/audit';
 import { decodeCsv, detectDelimiter } from './decode';
@@ -55,7 +54,7 @@ function firstProblem(errors: ValidationError[]): { field: string; message: stri
 export class ImportService {
   constructor(
     private readonly ds: DataSource,
-    private readonly storage: Storage | null,
+    private readonly attachments: AttachmentsService,
     private readonly options: ImportOptions = {},
   ) {}
 
@@ -83,25 +82,21 @@ export class ImportService {
     };
     const id = randomUUID();
     const outcome: ImportRecord['outcome'] = args.dryRun ? 'dry-run' : counts.rejected ? 'refused' : 'committed';
-    // The file itself is kept with the import's record.
-    const attachmentId = this.storage
-      ? (await storeAttachment(this.ds, this.storage, { ownerKind: 'import', ownerId: id, fileName: args.fileName, contentType: 'text/csv', bytes: args.bytes, userId: args.userId })).id
-      : null;
-    mark('file kept');
-
-    const record = (mgr: EntityManager) =>
-      mgr.save(mgr.create(ImportRecord, { id, kind: args.kind, fileName: args.fileName.slice(0, 255), dryRun: args.dryRun, outcome, encoding, delimiter, counts, errors: errors.slice(0, MAX_ERRORS), attachmentId, byId: args.userId }));
-
-    if (outcome === 'committed') {
-      await this.ds.transaction(async (tx) => {
-        await this.write(tx, args.kind, planned.filter((r) => r.action !== 'unchanged'));
-        await record(tx);
+    const record = (tx: EntityManager, attachmentId: string | null) =>
+      tx.save(tx.create(ImportRecord, { id, kind: args.kind, fileName: fitFileName(args.fileName), dryRun: args.dryRun, outcome, encoding, delimiter, counts, errors: errors.slice(0, MAX_ERRORS), attachmentId, byId: args.userId }));
+    // The rows, the import's record, its audit line and the kept file's row: one transaction, all or nothing.
+    const writeAll = async (tx: EntityManager, attachmentId: string | null) => {
+      if (outcome === 'committed') await this.write(tx, args.kind, planned.filter((r) => r.action !== 'unchanged'));
+      await record(tx, attachmentId);
+      if (outcome === 'committed') {
         await audit(tx, { userId: args.userId, action: 'import', entity: args.kind, entityId: id, summary: `Imported ${args.fileName}: ${counts.new} new, ${counts.changed} changed, ${counts.unchanged} unchanged`, after: { counts } });
-      });
-      mark('written');
-    } else {
-      await record(m);
-    }
+      }
+      return attachmentId;
+    };
+    // The file itself is kept with the import's record (its bytes are put in the store just before).
+    const file = { ownerKind: 'import' as const, ownerId: id, fileName: args.fileName, contentType: 'text/csv', bytes: args.bytes, userId: args.userId };
+    const attachmentId = this.attachments.enabled ? await this.attachments.keepWith(file, (tx, a) => writeAll(tx, a.id)) : await this.ds.transaction((tx) => writeAll(tx, null));
+    mark('written');
     const body = {
       id,
       kind: args.kind,
