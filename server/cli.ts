@@ -2,6 +2,8 @@ import 'reflect-metadata';
 import { Client } from 'pg';
 import { makeDataSource } from './db/data-source';
 import { seedIfEmpty } from '../seeds';
+import { AttachmentsService } from './attachments/attachments.service';
+import { Storage, storageConfigFromEnv } from './storage/storage';
 
 /** `prepare [--recreate] [--no-seed]`: create the database if missing, run migrations, seed when empty. */
 async function prepare(args: string[]): Promise<void> {
@@ -38,8 +40,24 @@ async function prepare(args: string[]): Promise<void> {
   }
 }
 
+/** `sweep-files [hours]`: removes stored files that no attachment row names, older than `hours` (default 1). */
+async function sweepFiles(args: string[]): Promise<void> {
+  const config = storageConfigFromEnv();
+  if (!config) throw new Error('S3_BUCKET is not set: there is no file storage to sweep.');
+  const hours = Number(args[0] ?? 1);
+  if (!(hours >= 0)) throw new Error(`"${args[0]}" is not a number of hours.`);
+  const ds = makeDataSource(undefined, { poolSize: 2 });
+  await ds.initialize();
+  try {
+    const { checked, deleted } = await new AttachmentsService(ds, new Storage(config)).sweep({ olderThanMs: hours * 3_600_000 });
+    console.log(`[bungwise] Checked ${checked} stored file(s); removed ${deleted.length} that no attachment names${deleted.length ? `: ${deleted.join(', ')}` : ''}.`);
+  } finally {
+    await ds.destroy();
+  }
+}
+
 const [command, ...args] = process.argv.slice(2);
-const commands: Record<string, (a: string[]) => Promise<void>> = { prepare };
+const commands: Record<string, (a: string[]) => Promise<void>> = { prepare, 'sweep-files': sweepFiles };
 const fn = commands[command ?? ''];
 if (!fn) {
   console.error(`Usage: node dist/server/server/cli.js ${Object.keys(commands).join('|')}`);

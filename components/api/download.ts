@@ -28,9 +28,19 @@ export async function fetchFile(path: string): Promise<{ blob: Blob; fileName: s
   return { blob: await res.blob(), fileName: fileNameOf(res.headers.get('Content-Disposition')) };
 }
 
+/** The name in Content-Disposition: the UTF-8 `filename*` (RFC 8187) when there is one, else the plain (ASCII) one. */
 function fileNameOf(disposition: string | null): string | null {
-  const m = disposition ? /filename="?([^";]+)"?/i.exec(disposition) : null;
-  return m ? m[1] : null;
+  if (!disposition) return null;
+  const extended = /filename\*\s*=\s*UTF-8''([^;\s]+)/i.exec(disposition);
+  if (extended) {
+    try {
+      return decodeURIComponent(extended[1]);
+    } catch {
+      // A malformed escape: the plain name below.
+    }
+  }
+  const plain = /filename\s*=\s*"?([^";]+)"?/i.exec(disposition);
+  return plain ? plain[1] : null;
 }
 
 function requireWeb(): void {

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
+import { SPEC_SHEET_ENCODINGS_TEXT } from '@/shared/encodings';
 import type { PickedFile } from '../api/upload';
 import { formatSize, pickCsv } from '../attachments/pick-file';
 import { downloadImportTemplate, IMPORT_KINDS, refusedRun, useImportRunMutation, type ImportKind, type ImportRun } from '../data/imports';
@@ -130,7 +131,7 @@ function ImportFlow() {
   const fileCard = (
     <Card style={wide ? styles.half : undefined} testID="import-step-file">
       <SectionTitle>2. The CSV file</SectionTitle>
-      <Text style={type.small}>Comma- or semicolon-separated, UTF-8 or a legacy encoding. It is checked first; nothing is written until you import it.</Text>
+      <Text style={type.small}>Comma- or semicolon-separated, in {SPEC_SHEET_ENCODINGS_TEXT}. It is checked first; nothing is written until you import it.</Text>
       {file ? (
         <View style={styles.chosen} testID="import-file">
           <Text style={[type.body, styles.strong]} testID="import-file-name">

@@ -6,11 +6,15 @@ import { User } from './user';
 export const ATTACHMENT_OWNERS = ['drum-type', 'dip-tube', 'connector', 'receiving-check', 'import'] as const;
 export type AttachmentOwner = (typeof ATTACHMENT_OWNERS)[number];
 
+/** File names are kept up to 255 characters, cut by code point so a name never ends in half a UTF-16 pair. */
+export const FILE_NAME_LENGTH = 255;
+export const fitFileName = (name: string) => Array.from(name).slice(0, FILE_NAME_LENGTH).join('');
+
 @Entity({ name: 'attachments' })
 export class Attachment extends Base {
   @Text('owner_kind', 20) ownerKind: AttachmentOwner;
   @Uuid('owner_id') ownerId: string;
-  @Text('file_name', 255) fileName: string;
+  @Text('file_name', FILE_NAME_LENGTH) fileName: string;
   @Text('content_type', 100) contentType: string;
   @Column({ name: 'size_bytes', type: 'integer' }) sizeBytes: number;
   @Text('storage_key', 300) storageKey: string;
@@ -23,7 +27,7 @@ export type ImportKind = 'drum-types' | 'dip-tubes' | 'connectors';
 @Entity({ name: 'imports' })
 export class ImportRecord extends Base {
   @Text('kind', 12) kind: ImportKind;
-  @Text('file_name', 255) fileName: string;
+  @Text('file_name', FILE_NAME_LENGTH) fileName: string;
   @Column({ name: 'dry_run', type: 'boolean' }) dryRun: boolean;
   @Text('outcome', 10) outcome: 'dry-run' | 'committed' | 'refused';
   @Text('encoding', 20) encoding: string;

@@ -1,11 +1,12 @@
 import { secured } from '../auth/policy';
 import { Router } from 'express';
-import multer from 'multer';
 import type { DataSource } from 'typeorm';
 import { fieldError, notFound } from '../common/errors';
 import { ImportRecord, type ImportKind } from '../entities';
 import { parseId } from '../registry/resource';
 import type { Storage } from '../storage/storage';
+import { AttachmentsService } from '../attachments/attachments.service';
+import { memoryUpload } from '../attachments/upload';
 import { templateCsv } from './columns';
 import { ImportService, type ImportOptions } from './import.service';
 
@@ -18,8 +19,8 @@ function kindOf(value: unknown): ImportKind {
 }
 
 export function importsRouter(ds: DataSource, storage: Storage | null, options: ImportOptions = {}): Router {
-  const service = new ImportService(ds, storage, options);
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 10 } });
+  const service = new ImportService(ds, new AttachmentsService(ds, storage), options);
+  const upload = memoryUpload(MAX_IMPORT_BYTES);
   const router = Router();
   const r = secured(router);
 

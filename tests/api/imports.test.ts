@@ -1,10 +1,13 @@
+import { randomUUID } from 'node:crypto';
 import iconv from 'iconv-lite';
 import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { bearer, makeTestApp, tokenFor } from '../support/app';
 import { openTestDataSource, resetDatabase } from '../support/db';
-import { testStorage } from '../support/services';
+import { AttachmentsService } from '../../server/attachments/attachments.service';
+import { storedKeys, testStorage, unreachableStorage } from '../support/services';
+import { TUBE_HEADER } from '../support/spec-sheets';
 
 let ds: DataSource;
 let app: Express;
@@ -16,6 +19,7 @@ const upload = (a: Express, token: string, kind: string, dryRun: boolean, conten
   request(a).post('/api/imports').set(bearer(token)).field('kind', kind).field('dryRun', String(dryRun)).attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content, 'utf8'), name);
 
 const tubeCount = async () => Number((await ds.query(`SELECT count(*) AS n FROM dip_tubes`))[0].n);
+const importCount = async () => Number((await ds.query(`SELECT count(*) AS n FROM imports`))[0].n);
 
 beforeAll(async () => {
   ds = await openTestDataSource();
@@ -141,8 +145,9 @@ describe('CSV import of dip tubes', () => {
   });
 
   it('refuses an encoding it cannot read, a binary file, an oversized file, a missing column and a clerk', async () => {
-    const latin1 = iconv.encode('supplier,part_number,thread,length_mm,bore_mm,od_mm,material,key,channels\nMüller Rohrtechnik GmbH,X,NPS-2,836,19,25.4,PFA,,feed\n', 'utf16le');
-    const enc = await upload(app, engineer, 'dip-tubes', true, latin1);
+    // UTF-16 without a byte-order mark cannot be told from binary data.
+    const utf16 = iconv.encode('supplier,part_number,thread,length_mm,bore_mm,od_mm,material,key,channels\nMüller Rohrtechnik GmbH,X,NPS-2,836,19,25.4,PFA,,feed\n', 'utf16le');
+    const enc = await upload(app, engineer, 'dip-tubes', true, utf16);
     expect(enc.status).toBe(415);
     expect(enc.body.error.details[0].field).toBe('file');
     const png = Buffer.from('89504e470d0a1a0a0000000d49484452', 'hex');
@@ -188,5 +193,109 @@ describe('CSV export', () => {
     expect(csv.text).toContain(`"'=HYPERLINK(""http://x"")"`);
     expect(csv.text).toContain("'@SUM(A1)");
     expect(csv.text).not.toMatch(/(^|,)=HYPERLINK/m);
+  });
+});
+
+describe('spec sheets in each encoding', () => {
+  const supplier = async (name: string, region: string) => {
+    const res = await request(app).post('/api/suppliers').set(bearer(engineer)).send({ name, region });
+    expect(res.status).toBe(201);
+  };
+  const tube = async (partNumber: string) => (await request(app).get(`/api/dip-tubes?q=${encodeURIComponent(partNumber)}`).set(bearer(clerk))).body.items[0];
+  const sheet = (rows: string[]) => [TUBE_HEADER, ...rows].join('\r\n') + '\r\n';
+
+  it('commits a Windows-1252 sheet as written (DT-Müller, once read as Shift_JIS) and records the encoding read', async () => {
+    await supplier('Müller Rohrtechnik GmbH', 'EU');
+    const file = iconv.encode(sheet(['Müller Rohrtechnik GmbH,DT-Müller-ÄÖÜ,NPS-2,836,19,25.4,PFA,,feed']), 'windows-1252');
+    const res = await upload(app, engineer, 'dip-tubes', false, file, 'mueller.csv');
+    expect(res.status).toBe(201);
+    expect(res.body.encoding).toBe('Windows-1252');
+    expect(await tube('DT-Müller-ÄÖÜ')).toMatchObject({ partNumber: 'DT-Müller-ÄÖÜ', supplierName: 'Müller Rohrtechnik GmbH' });
+    const record = await request(app).get(`/api/imports/${res.body.id}`).set(bearer(engineer));
+    expect(record.body.encoding).toBe('Windows-1252');
+  });
+
+  it('commits a Taiwanese (Big5), a Korean (EUC-KR) and a UTF-16 sheet', async () => {
+    await supplier('台灣精密管件股份有限公司', 'TW');
+    await supplier('한국정밀공업 주식회사', 'KR');
+    const big5 = await upload(app, engineer, 'dip-tubes', false, iconv.encode(sheet(['台灣精密管件股份有限公司,TW-DT-01,NPS-2,836,19,25.4,聚四氟乙烯,,feed']), 'Big5'));
+    expect([big5.status, big5.body.encoding]).toEqual([201, 'Big5']);
+    expect(await tube('TW-DT-01')).toMatchObject({ supplierName: '台灣精密管件股份有限公司', material: '聚四氟乙烯' });
+    const korean = await upload(app, engineer, 'dip-tubes', false, iconv.encode(sheet(['한국정밀공업 주식회사,KR-DT-01,NPS-2,836,19,25.4,불소수지,,feed']), 'EUC-KR'));
+    expect([korean.status, korean.body.encoding]).toEqual([201, 'EUC-KR']);
+    expect(await tube('KR-DT-01')).toMatchObject({ supplierName: '한국정밀공업 주식회사', material: '불소수지' });
+    const utf16 = await upload(app, engineer, 'dip-tubes', false, iconv.encode(sheet([`${supplierName},U16-DT-01,NPS-2,836,19,25.4,PFA（高純度）,,feed`]), 'utf-16le', { addBOM: true }));
+    expect([utf16.status, utf16.body.encoding]).toEqual([201, 'UTF-16LE (BOM)']);
+    expect(await tube('U16-DT-01')).toMatchObject({ material: 'PFA（高純度）' });
+  });
+
+  it('refuses a byte soup with a 400 naming the encodings it could not choose between, and writes nothing', async () => {
+    const before = await tubeCount();
+    const imports = await importCount();
+    // Letters and high bytes half and half (the generator of tests/unit/decode.test.ts, seed 1).
+    let s = 1;
+    const rnd = (n: number) => ((s = (s * 1103515245 + 12345) & 0x7fffffff) >>> 16) % n;
+    const soup = Buffer.from(Array.from({ length: 200 }, () => (rnd(1000) < 500 ? 0x80 + rnd(128) : 'abcdefghijklmnopqrstuvwxyz0123456789,\n'.charCodeAt(rnd(38)))));
+    const res = await upload(app, engineer, 'dip-tubes', false, soup);
+    expect(res.status).toBe(400);
+    expect(res.body.error).toMatchObject({ code: 'encoding_uncertain', details: [{ field: 'file' }] });
+    expect(res.body.error.message).toMatch(/reads as \S+ hardly better than as \S+/);
+    expect(await tubeCount()).toBe(before);
+    expect(await importCount()).toBe(imports);
+  });
+});
+
+describe('the kept file of an import', () => {
+  it('a failed commit leaves no attachment row and no stored object', async () => {
+    const storage = testStorage();
+    const faulty = makeTestApp(ds, { storage, imports: { chunkSize: 1, failAfterRows: 1 } });
+    const rowsBefore = Number((await ds.query(`SELECT count(*) AS n FROM attachments WHERE owner_kind = 'import'`))[0].n);
+    const keysBefore = new Set(await storedKeys(storage, 'import/'));
+    const file = [TUBE_HEADER, `${supplierName},IMP-K-001,NPS-2,836,19,25.4,PFA,,feed`, `${supplierName},IMP-K-002,NPS-2,836,19,25.4,PFA,,feed`].join('\n');
+    expect((await upload(faulty, engineer, 'dip-tubes', false, file)).status).toBe(500);
+    expect(Number((await ds.query(`SELECT count(*) AS n FROM attachments WHERE owner_kind = 'import'`))[0].n)).toBe(rowsBefore);
+    const orphans = (await storedKeys(storage, 'import/')).filter((k) => !keysBefore.has(k));
+    expect(orphans).toEqual([]);
+  });
+
+  it('the sweep removes an object left by a process killed before its commit, and keeps the ones rows name', async () => {
+    const storage = testStorage();
+    const kept = await upload(app, engineer, 'dip-tubes', true, cleanFile());
+    const keptKey = (await ds.query(`SELECT storage_key FROM attachments WHERE id = $1`, [kept.body.attachmentId]))[0].storage_key as string;
+    // What a killed import leaves: the object is put, the transaction never commits.
+    const orphanPrefix = `import/${randomUUID()}/`;
+    await storage.put(`${orphanPrefix}${randomUUID()}`, Buffer.from('a,b\n'), 'text/csv');
+    const sweeper = new AttachmentsService(ds, storage);
+    const young = await sweeper.sweep({ prefixes: [orphanPrefix] });
+    expect(young.deleted).toEqual([]); // within the grace period an import may still be writing its row
+    const swept = await sweeper.sweep({ olderThanMs: 0, prefixes: [orphanPrefix, keptKey.replace(/[^/]+$/, '')] });
+    expect(swept.deleted).toEqual([expect.stringMatching(new RegExp(`^${orphanPrefix}`))]);
+    expect(await storedKeys(storage, orphanPrefix)).toEqual([]);
+    expect(await storedKeys(storage, keptKey)).toEqual([keptKey]);
+  });
+
+  it('keeps a non-ASCII file name as the browser sent it, in the answer, the history and the kept file', async () => {
+    const name = 'Prüfblatt-東京.csv';
+    const res = await upload(app, engineer, 'dip-tubes', true, cleanFile(), name);
+    expect(res.status).toBe(200);
+    expect(res.body.fileName).toBe(name);
+    expect((await request(app).get(`/api/imports/${res.body.id}`).set(bearer(engineer))).body.fileName).toBe(name);
+    const files = await request(app).get(`/api/attachments?ownerKind=import&ownerId=${res.body.id}`).set(bearer(engineer));
+    expect(files.body.items.map((f: { fileName: string }) => f.fileName)).toEqual([name]);
+    const content = await request(app).get(`/api/attachments/${res.body.attachmentId}/content`).set(bearer(engineer));
+    expect(content.headers['content-disposition']).toContain(`filename*=UTF-8''${encodeURIComponent(name)}`);
+  });
+
+  it('an object-store outage answers 503 naming file storage, and writes nothing', async () => {
+    const down = makeTestApp(ds, { storage: await unreachableStorage() });
+    const before = await tubeCount();
+    const imports = await importCount();
+    const file = [TUBE_HEADER, `${supplierName},IMP-O-001,NPS-2,836,19,25.4,PFA,,feed`].join('\n');
+    const res = await upload(down, engineer, 'dip-tubes', false, file);
+    expect(res.status).toBe(503);
+    expect(res.body.error.code).toBe('storage_unavailable');
+    expect(res.body.error.message).toMatch(/file storage/i);
+    expect(await tubeCount()).toBe(before);
+    expect(await importCount()).toBe(imports);
   });
 });
