@@ -11,7 +11,7 @@ import { sessionToken } from './tokens';
 /** A wrong current password: a 400 naming the field (a 401 would end the session in the client), counted by the router's limiter. */
 export class WrongCurrentPassword extends ValidationFailed {}
 
-const WRONG_CURRENT = 'is not your current password';
+const WRONG_CURRENT = 'is not right; check it and try again';
 
 const linkInvalid = () =>
   new HttpError(400, 'reset_link_invalid', 'This reset link has been used or has expired. Ask for a new one from the sign-in screen.', [{ field: 'token', messages: ['has been used or has expired'] }]);

@@ -50,7 +50,7 @@ describe('changing one’s own password', () => {
     const res = await changePassword(buyer, 'not-my-password', 'amber-sluice-lantern');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('validation_failed');
-    expect(res.body.error.details).toEqual([{ field: 'currentPassword', messages: ['is not your current password'] }]);
+    expect(res.body.error.details).toEqual([{ field: 'currentPassword', messages: ['is not right; check it and try again'] }]);
     expect((await me(buyer)).status).toBe(200);
     expect((await tokenFor(app, 'buyer@bungwise.example')).length).toBeGreaterThan(0);
   });
