@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import { hashPassword, passwordProblem } from '../server/auth/passwords';
+import { hashPassword } from '../server/auth/passwords';
+import { passwordProblem } from '../shared/passwords';
 import { SiteSettings, User } from '../server/entities';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SITE_NAME } from './people';
 import { seedDemoRegistry } from './demo-registry';

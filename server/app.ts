@@ -8,6 +8,8 @@ import morgan from 'morgan';
 import type { DataSource } from 'typeorm';
 import { authRouter, DEFAULT_SIGN_IN_LIMITS, type SignInLimits } from './auth/auth.router';
 import { makeAuthenticator } from './auth/guards';
+import { passwordChangeGate } from './auth/password-gate';
+import { DEFAULT_PASSWORD_LIMITS, passwordRouters, type PasswordLimits } from './auth/password.router';
 import { notFound, unavailable } from './common/errors';
 import { errorMiddleware } from './common/error-middleware';
 import { securityHeaders } from './common/security-headers';
@@ -37,6 +39,8 @@ export interface AppOptions {
   /** Folder of the exported web app; served at `/` with a fallback to index.html for client routes. */
   webDir?: string;
   signInLimits?: Partial<SignInLimits>;
+  /** "Forgot password" and wrong-current-password limits (tests lower or raise them). */
+  passwordLimits?: Partial<PasswordLimits>;
   /** Request logging (morgan); off in tests to keep their output readable. */
   logRequests?: boolean;
   /** The app's public address (`BUNGWISE_PUBLIC_URL`); an https one makes every answer send the HTTPS-only headers. */
@@ -80,7 +84,8 @@ export function createApp(options: AppOptions): Express {
   // Until the first connection is made (the database may start after the server), answer 503, not 500.
   api.use((_req, _res, next) => next(ds.isInitialized ? undefined : unavailable()));
   api.use(authRouter(ds, jwtSecret, { ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits }));
-  // Everything below needs a valid token.
+  const passwords = passwordRouters(ds, jwtSecret, { ...DEFAULT_PASSWORD_LIMITS, ...options.passwordLimits });
+  api.use(passwords.forgot);
   const changes = options.changes ?? null;
   const fitAnswers = changes?.keep<Buffer>('bungwise_registry', { maxSize: 32 * 2 ** 20, sizeOf: (json) => json.length }) ?? null;
   if (changes) {
@@ -95,10 +100,17 @@ export function createApp(options: AppOptions): Express {
       next();
     });
   }
+  // After the drop-what-is-kept step above: a reset from an e-mailed link bumps the session epoch, and this
+  // process must refuse the old tokens at once, not when the database's notice arrives.
+  api.use(passwords.reset);
+  // Everything below needs a valid token.
   api.use(makeAuthenticator(ds, jwtSecret, changes));
+  // An account with a temporary password may only change it (and read itself) until it has.
+  api.use(passwordChangeGate());
   // The dock's hot path first: every router above it is matched against each request.
   api.use(fitCheckRouter(ds, fitAnswers));
   api.use(usersRouter(ds));
+  api.use(passwords.signedIn);
   api.use(settingsRouter(ds));
   api.use(pairingActionsRouter(ds, new ResourceService(ds, pairingDef)));
   api.use(rotationRouter(ds));

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
+import { MIN_PASSWORD_LENGTH } from '@/shared/passwords';
 import { ROLE_LABELS, ROLES, type Role } from '@/shared/roles';
 import { ApiError } from '../api/client';
 import { useUserCreateMutation, useUsersQuery, useUserUpdateMutation, type UserRow } from '../data/users';
@@ -12,6 +13,7 @@ import { ChoiceChips } from '../ui/choice-chips';
 import { EmptyState, ErrorState, LoadingState } from '../ui/states';
 import { TextField } from '../ui/text-field';
 import { useIsWide } from '../use-layout';
+import { ResetPasswordPanel } from './reset-password-panel';
 
 const roleOptions = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
 
@@ -41,7 +43,7 @@ function NewUserForm() {
       <ChoiceChips label="Role" options={roleOptions} value={form.role} onChange={(role) => setForm({ ...form, role })} error={errors.role} testID="user-role" />
       <TextField
         label="Temporary password"
-        hint="At least 12 characters. Share it in person; they change it after signing in."
+        hint={`At least ${MIN_PASSWORD_LENGTH} characters. Share it in person; they change it after signing in.`}
         value={form.temporaryPassword}
         onChangeText={(temporaryPassword) => setForm({ ...form, temporaryPassword })}
         error={errors.temporaryPassword}
@@ -70,9 +72,10 @@ function UserCard({ user, self }: { user: UserRow; self: boolean }) {
       <Text style={type.heading}>{user.name}</Text>
       <Text style={type.small}>
         {user.email} · {ROLE_LABELS[user.role]} · {user.active ? 'active' : 'deactivated'}
+        {user.mustChangePassword ? ' · on a temporary password' : ''}
       </Text>
       {self ? (
-        <Text style={type.small}>This is you.</Text>
+        <Text style={type.small}>This is you. Change your own password under Notices.</Text>
       ) : (
         <View style={styles.actions}>
           <ChoiceChips label="Role" options={roleOptions} value={user.role} onChange={(role) => update.mutate({ id: user.id, role })} />
@@ -84,6 +87,7 @@ function UserCard({ user, self }: { user: UserRow; self: boolean }) {
             testID={`user-toggle-${user.email}`}
           />
           {update.error ? <Text style={{ ...type.small, color: colors.danger }}>{update.error.message}</Text> : null}
+          <ResetPasswordPanel user={user} />
         </View>
       )}
     </Card>

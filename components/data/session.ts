@@ -10,6 +10,8 @@ export interface SessionUser {
   lengthUnit?: 'mm' | 'in';
   /** Kinds of notice this person does not want by e-mail (they still appear under Notices). */
   mailOff?: string[];
+  /** An account made or reset by an administrator: the password change comes before anything else. */
+  mustChangePassword?: boolean;
 }
 
 export interface SignInResult {

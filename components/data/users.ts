@@ -8,6 +8,8 @@ export interface UserRow {
   name: string;
   role: Role;
   active: boolean;
+  /** Still on a temporary password (new, or reset by an administrator). */
+  mustChangePassword: boolean;
 }
 
 export interface Page<T> {
@@ -35,6 +37,15 @@ export function useUserUpdateMutation() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ id, ...body }: { id: string; role?: Role; active?: boolean }) => api<UserRow>(`/users/${id}`, { method: 'PATCH', body }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: userKeys.all }),
+  });
+}
+
+/** An administrator's reset: the answer holds the temporary password, shown once and kept nowhere in the client. */
+export function useUserResetPasswordMutation() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => api<{ user: UserRow; temporaryPassword: string }>(`/users/${id}/reset-password`, { method: 'POST' }),
     onSuccess: () => qc.invalidateQueries({ queryKey: userKeys.all }),
   });
 }

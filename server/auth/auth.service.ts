@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { unauthorized } from '../common/errors';
 import { User } from '../entities';
 import { verifyPassword } from './passwords';
-import { signToken } from './tokens';
+import { sessionToken } from './tokens';
 
 export interface PublicUser {
   id: string;
@@ -12,6 +12,8 @@ export interface PublicUser {
   active: boolean;
   lengthUnit: 'mm' | 'in';
   mailOff: string[];
+  /** The client sends this person to the password change first; the server refuses everything else meanwhile. */
+  mustChangePassword: boolean;
 }
 
 export const toPublicUser = (u: User): PublicUser => ({
@@ -22,6 +24,7 @@ export const toPublicUser = (u: User): PublicUser => ({
   active: u.active,
   lengthUnit: u.lengthUnit,
   mailOff: u.mailOff ?? [],
+  mustChangePassword: u.mustChangePassword,
 });
 
 // One message whatever was wrong, so the answer never tells whether an account exists.
@@ -44,6 +47,6 @@ export class AuthService {
       .getOne();
     const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
     if (!user || !ok || !user.active) throw unauthorized(WRONG);
-    return { token: signToken({ sub: user.id, role: user.role }, this.secret), user: toPublicUser(user) };
+    return { token: sessionToken(user, this.secret), user: toPublicUser(user) };
   }
 }

@@ -18,6 +18,10 @@ declare global {
       displayName: string;
       role: Role;
       active: boolean;
+      /** Set for an account made or reset by an administrator: only the password change is open to it. */
+      mustChangePassword: boolean;
+      /** Tokens carrying another epoch were signed before a password change or reset, and are refused. */
+      sessionEpoch: number;
     }
   }
 }
@@ -31,11 +35,14 @@ interface UserRow {
   display_name: string;
   role: Role;
   active: boolean;
+  must_change_password: boolean;
+  session_epoch: number;
 }
 
 /**
  * A passport instance per app (tests build several apps). The token names the user; the user's row decides,
- * so a deactivated user or a changed role takes effect at once, whatever the token says. With a change feed
+ * so a deactivated user, a changed role or a password change (the session epoch) takes effect at once, whatever
+ * the token says. With a change feed
  * the rows are kept in memory until the users table changes (every process is told at commit); without
  * one, or while its connection is down, the row is read on every request by one prepared statement.
  * The secret is a KeyObject made once: given a string, the JWT library tries to read it as a public key on
@@ -44,8 +51,8 @@ interface UserRow {
 export function makeAuthenticator(dataSource: DataSource, secret: string, changes: ChangeFeed | null = null): RequestHandler {
   const kept = changes?.keep<Express.User | typeof NO_USER>('bungwise_users', { maxSize: 10_000, sizeOf: () => 1 }) ?? null;
   const read = async (id: string): Promise<Express.User | typeof NO_USER> => {
-    const [u] = await preparedQuery<UserRow>(dataSource, 'auth-user', 'SELECT id, email, display_name, role, active FROM users WHERE id = $1', [id]);
-    return u ? { id: u.id, email: u.email, displayName: u.display_name, role: u.role, active: u.active } : NO_USER;
+    const [u] = await preparedQuery<UserRow>(dataSource, 'auth-user', 'SELECT id, email, display_name, role, active, must_change_password, session_epoch FROM users WHERE id = $1', [id]);
+    return u ? { id: u.id, email: u.email, displayName: u.display_name, role: u.role, active: u.active, mustChangePassword: u.must_change_password, sessionEpoch: u.session_epoch } : NO_USER;
   };
   // The JWT library accepts a KeyObject at run time; passport-jwt's types only list string and Buffer.
   const key = createSecretKey(Buffer.from(secret, 'utf8')) as unknown as Buffer;
@@ -53,10 +60,11 @@ export function makeAuthenticator(dataSource: DataSource, secret: string, change
   instance.use(
     new JwtStrategy(
       { jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(), secretOrKey: key, algorithms: ['HS256'], issuer: 'bungwise' },
-      (payload: { sub?: string }, done: (err: unknown, user?: Express.User | false) => void) => {
+      (payload: { sub?: string; ep?: unknown }, done: (err: unknown, user?: Express.User | false) => void) => {
         if (!payload.sub) return done(null, false);
         const id = payload.sub;
-        (kept ? kept.through(id, () => read(id)) : read(id)).then((user) => done(null, user.active ? user : false)).catch((err) => done(err));
+        const epoch = payload.ep ?? 0;
+        (kept ? kept.through(id, () => read(id)) : read(id)).then((user) => done(null, user.active && user.sessionEpoch === epoch ? user : false)).catch((err) => done(err));
       },
     ),
   );

@@ -1,22 +1,23 @@
 import bcrypt from 'bcryptjs';
-
-export const MIN_PASSWORD_LENGTH = 12;
-
-// A short list of passwords that appear at the top of every leaked-password list, plus this product's own
-// name: long enough to pass the length rule, still guessed first.
-const COMMON = new Set([
-  'password1234', 'password12345', '123456789012', '1234567890123', 'qwertyuiop12', 'qwerty123456', 'iloveyou1234',
-  'administrator', 'letmein12345', 'welcome12345', 'changeme1234', 'passw0rd1234', 'aaaaaaaaaaaa', '111111111111',
-  'abc123456789', 'football1234', 'monkey123456', 'bungwise1234', 'bungwisebungwise', 'password123!',
-]);
-
-/** Returns a reason when the password is not acceptable, or null. */
-export function passwordProblem(password: string): string | null {
-  if (password.length < MIN_PASSWORD_LENGTH) return `must be at least ${MIN_PASSWORD_LENGTH} characters`;
-  if (password.length > 200) return 'must be at most 200 characters';
-  if (COMMON.has(password.toLowerCase())) return 'is too common; choose another';
-  return null;
-}
+import { createHash, randomBytes, randomInt } from 'node:crypto';
 
 export const hashPassword = (password: string) => bcrypt.hash(password, 10);
 export const verifyPassword = (password: string, hash: string) => bcrypt.compare(password, hash);
+
+// No 0/O, 1/l/I: a temporary password is read off a screen and typed on a phone, often with gloves on.
+const TEMPORARY_ALPHABET = 'abcdefghjkmnpqrstuvwxyz23456789';
+
+/** Three groups of four from a 31-letter alphabet (59 bits), e.g. "k7pm-3xq9-tr4w": passes the password rule. */
+export function temporaryPassword(): string {
+  const group = () => Array.from({ length: 4 }, () => TEMPORARY_ALPHABET[randomInt(TEMPORARY_ALPHABET.length)]).join('');
+  return [group(), group(), group()].join('-');
+}
+
+/** A reset link's secret (256 bits) and the hash that is all the database keeps of it. */
+export function newResetToken(): { token: string; hash: string } {
+  const token = randomBytes(32).toString('base64url');
+  return { token, hash: hashResetToken(token) };
+}
+
+// SHA-256 without a salt is enough here: the token is random and long, so there is nothing to look up.
+export const hashResetToken = (token: string) => createHash('sha256').update(token, 'utf8').digest('hex');

@@ -21,11 +21,17 @@ const REGISTRY = ['suppliers', 'thread-specs', 'key-codes', 'drum-types', 'dip-t
 export const POLICY: Readonly<Record<string, Access>> = {
   'GET /api/health': 'public',
   'POST /api/auth/sign-in': 'public',
+  // Both answer the same whether or not the address exists; limited per address and per target e-mail.
+  'POST /api/auth/forgot-password': 'public',
+  // The single-use token from the e-mailed link is the credential.
+  'POST /api/auth/reset-password': 'public',
   'GET /api/me': EVERYONE,
   'PATCH /api/me': EVERYONE,
+  'POST /api/me/password': EVERYONE,
   'GET /api/users': ADMINS,
   'POST /api/users': ADMINS,
   'PATCH /api/users/:id': ADMINS,
+  'POST /api/users/:id/reset-password': ADMINS,
   'GET /api/settings': EVERYONE,
   'PATCH /api/settings': ENGINEERS,
   ...Object.fromEntries(

@@ -28,8 +28,21 @@ export class SignInRefused extends HttpError {
   }
 }
 
+/**
+ * One fixed-window counter in PostgreSQL (rate-limiter-flexible, table `sign_in_counters`, created by its
+ * migration), on TypeORM's pool: the sign-in limits below and the password-request limits
+ * (server/auth/password.router.ts) count here, so every process on every machine sees the same counts.
+ */
+export function counter(ds: DataSource, keyPrefix: string, points: number, windowMs: number, clearExpiredByTimeout = false): RateLimiterPostgres {
+  const duration = Math.max(1, Math.ceil(windowMs / 1000));
+  return new RateLimiterPostgres({ storeClient: ds, storeType: 'typeorm', tableName: SIGN_IN_COUNTERS_TABLE, tableCreated: true, clearExpiredByTimeout, keyPrefix, points, duration });
+}
+
+/** How long until a counter's window ends, for Retry-After. */
+export const retryAfterS = (r: RateLimiterRes) => Math.max(1, Math.ceil(r.msBeforeNext / 1000));
+
 // The account part of a key: e-mails can be long and need not sit in plain text in a counters table.
-const accountKey = (email: string) => createHash('sha256').update(email.trim().toLowerCase()).digest('base64url');
+export const accountKey = (email: string) => createHash('sha256').update(email.trim().toLowerCase()).digest('base64url');
 
 /**
  * Failed sign-ins counted in PostgreSQL (rate-limiter-flexible), so every server process on every machine
@@ -53,13 +66,10 @@ export class SignInGuard {
     ds: DataSource,
     private readonly limits: SignInLimits,
   ) {
-    const duration = Math.max(1, Math.ceil(limits.windowMs / 1000));
-    // One table for the three (each key carries its prefix); TypeORM's pool; one of them deletes expired rows.
-    const make = (keyPrefix: string, points: number, clearExpiredByTimeout: boolean) =>
-      new RateLimiterPostgres({ storeClient: ds, storeType: 'typeorm', tableName: SIGN_IN_COUNTERS_TABLE, tableCreated: true, clearExpiredByTimeout, keyPrefix, points, duration });
-    this.byAddress = make('addr', limits.perAddress, true);
-    this.byAccountAddress = make('acct-addr', limits.perAccount, false);
-    this.byAccount = make('acct', limits.perAccount, false);
+    // One table for the three (each key carries its prefix); one of them deletes expired rows.
+    this.byAddress = counter(ds, 'addr', limits.perAddress, limits.windowMs, true);
+    this.byAccountAddress = counter(ds, 'acct-addr', limits.perAccount, limits.windowMs);
+    this.byAccount = counter(ds, 'acct', limits.perAccount, limits.windowMs);
   }
 
   /** Runs `attempt` (the password check) if the counts allow it; a 401 from it stays counted. */
@@ -80,7 +90,7 @@ export class SignInGuard {
       // (this attempt is its first) may try.
       acct.consumedPoints - accountAddr.consumedPoints >= this.limits.perAccount && accountAddr.consumedPoints > 1 && acct,
     ].filter((r): r is RateLimiterRes => !!r);
-    if (over.length) throw new SignInRefused(Math.max(1, Math.ceil(Math.max(...over.map((r) => r.msBeforeNext)) / 1000)), 429);
+    if (over.length) throw new SignInRefused(Math.max(...over.map(retryAfterS)), 429);
 
     let result: T;
     try {

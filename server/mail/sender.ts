@@ -1,6 +1,11 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import type { DataSource } from 'typeorm';
 import { OutboxMessage } from '../entities';
+import { ACCOUNT_MAIL_KINDS } from './outbox';
+
+const ACCOUNT_KINDS = new Set<string>(ACCOUNT_MAIL_KINDS);
+/** What is left of mail about an account once sent: its link carried a reset token, which is kept nowhere else. */
+export const SENT_ACCOUNT_MAIL = '(sent; the link it carried is not kept)';
 
 export interface SenderOptions {
   intervalMs?: number;
@@ -61,6 +66,7 @@ export class MailSender {
             msg.status = 'sent';
             msg.sentAt = new Date();
             msg.lastError = null;
+            if (ACCOUNT_KINDS.has(msg.kind)) msg.textBody = msg.htmlBody = SENT_ACCOUNT_MAIL;
             sent++;
           } catch (err) {
             msg.attempts += 1;

@@ -1,7 +1,8 @@
 import type { DataSource } from 'typeorm';
 import { conflict, fieldError, notFound } from '../common/errors';
 import { User } from '../entities';
-import { hashPassword, passwordProblem } from '../auth/passwords';
+import { hashPassword } from '../auth/passwords';
+import { passwordProblem } from '../../shared/passwords';
 import { toPublicUser, type PublicUser } from '../auth/auth.service';
 import { audit } from '../audit/audit';
 import type { CreateUserDto, UpdateMeDto, UpdateUserDto } from './users.dto';

@@ -1,0 +1,3 @@
+import { ChangePasswordScreen } from '@/components/auth/change-password-screen';
+
+export default ChangePasswordScreen;

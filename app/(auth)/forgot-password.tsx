@@ -1,0 +1,3 @@
+import { ForgotPasswordScreen } from '@/components/auth/forgot-password-screen';
+
+export default ForgotPasswordScreen;

@@ -1,0 +1,3 @@
+import { ResetPasswordScreen } from '@/components/auth/reset-password-screen';
+
+export default ResetPasswordScreen;

@@ -1,0 +1,51 @@
+import type { ReactNode } from 'react';
+import { KeyboardAvoidingView, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { colors, radius, space, type } from '../theme';
+import { Logo } from '../ui/logo';
+
+/** The one layout of the signed-out screens (sign-in, forgot, reset) and the forced password change: a centred card. */
+export function AuthFrame({ title, lead, children, testID }: { title: string; lead?: string; children: ReactNode; testID?: string }) {
+  return (
+    <KeyboardAvoidingView style={styles.root} behavior="padding">
+      <ScrollView contentContainerStyle={styles.scroll}>
+        <View style={styles.card} testID={testID}>
+          <Logo />
+          <View style={{ gap: space.xs }}>
+            <Text role="heading" aria-level={1} style={type.title}>
+              {title}
+            </Text>
+            {lead ? <Text style={[type.body, { color: colors.inkMuted }]}>{lead}</Text> : null}
+          </View>
+          {children}
+        </View>
+      </ScrollView>
+    </KeyboardAvoidingView>
+  );
+}
+
+/** A message for the whole form: a problem (`alert`) or a confirmation (`status`), said by screen readers as it appears. */
+export function FormMessage({ kind, children, testID }: { kind: 'problem' | 'done'; children: ReactNode; testID?: string }) {
+  return (
+    <Text role={kind === 'problem' ? 'alert' : 'status'} testID={testID} style={[styles.message, kind === 'problem' ? styles.problem : styles.done]}>
+      {children}
+    </Text>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { flex: 1, backgroundColor: colors.paper },
+  scroll: { flexGrow: 1, justifyContent: 'center', alignItems: 'center', padding: space.lg },
+  card: {
+    width: '100%',
+    maxWidth: 420,
+    gap: space.lg,
+    padding: space.xl,
+    backgroundColor: colors.surface,
+    borderRadius: radius.lg,
+    borderWidth: 1,
+    borderColor: colors.line,
+  },
+  message: { ...type.body, fontFamily: type.label.fontFamily, padding: space.md, borderRadius: radius.md },
+  problem: { color: colors.danger, backgroundColor: colors.dangerSoft },
+  done: { color: colors.fits, backgroundColor: colors.fitsSoft },
+});
