@@ -16,6 +16,11 @@ import { clearInbox, inbox, smtpUrl } from '../support/services';
 let ds: DataSource;
 let app: Express; // limits high enough for the tests that are not about them
 
+// The limits count in PostgreSQL and every test app here shares them: each test starts with none counted.
+beforeEach(async () => {
+  if (ds?.isInitialized) await ds.query('DELETE FROM sign_in_counters');
+});
+
 beforeAll(async () => {
   ds = await openTestDataSource();
   await resetDatabase(ds);

@@ -14,6 +14,11 @@ let ds: DataSource;
 let app: Express;
 let admin: string;
 
+// The limits count in PostgreSQL and every test app here shares them: each test starts with none counted.
+beforeEach(async () => {
+  if (ds?.isInitialized) await ds.query('DELETE FROM sign_in_counters');
+});
+
 beforeAll(async () => {
   ds = await openTestDataSource();
   await resetDatabase(ds);
