@@ -1,24 +1,25 @@
 import { secured } from '../auth/policy';
 import { randomUUID } from 'node:crypto';
 import { Router, type Request } from 'express';
-import multer from 'multer';
 import type { DataSource, EntityTarget, ObjectLiteral } from 'typeorm';
 import type { Role } from '../../shared/roles';
 import { forbidden, HttpError, notFound } from '../common/errors';
 import { fieldError } from '../common/errors';
 import { Attachment, ATTACHMENT_OWNERS, Connector, DipTube, DrumType, ImportRecord, ReceivingCheck, type AttachmentOwner } from '../entities';
+import { singleFileUpload } from '../common/uploads';
+import { refuseQuery } from '../common/validate';
 import { parseId } from '../registry/resource';
 import type { Storage } from '../storage/storage';
 import { ATTACHMENT_TYPES, MAX_ATTACHMENT_BYTES, sniffType } from './file-kind';
 
 /** Who may attach to each kind of record: the same roles that may change that record. Everyone signed in reads. */
-const OWNERS: Record<AttachmentOwner, { entity: EntityTarget<ObjectLiteral>; label: string; writers: Role[] }> = {
-  'drum-type': { entity: DrumType, label: 'drum type', writers: ['engineer', 'admin'] },
-  'dip-tube': { entity: DipTube, label: 'dip tube', writers: ['engineer', 'admin'] },
-  connector: { entity: Connector, label: 'connector', writers: ['engineer', 'admin'] },
-  'receiving-check': { entity: ReceivingCheck, label: 'receiving check', writers: ['clerk', 'engineer', 'admin'] },
-  import: { entity: ImportRecord, label: 'import', writers: ['engineer', 'admin'] },
-};
+const OWNERS = new Map<AttachmentOwner, { entity: EntityTarget<ObjectLiteral>; label: string; writers: Role[] }>([
+  ['drum-type', { entity: DrumType, label: 'drum type', writers: ['engineer', 'admin'] }],
+  ['dip-tube', { entity: DipTube, label: 'dip tube', writers: ['engineer', 'admin'] }],
+  ['connector', { entity: Connector, label: 'connector', writers: ['engineer', 'admin'] }],
+  ['receiving-check', { entity: ReceivingCheck, label: 'receiving check', writers: ['clerk', 'engineer', 'admin'] }],
+  ['import', { entity: ImportRecord, label: 'import', writers: ['engineer', 'admin'] }],
+]);
 
 export const attachmentJson = (a: Attachment) => ({
   id: a.id,
@@ -52,17 +53,17 @@ export async function storeAttachment(ds: DataSource, storage: Storage, args: { 
 export function attachmentsRouter(ds: DataSource, storage: Storage | null): Router {
   const router = Router();
   const r = secured(router);
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_ATTACHMENT_BYTES, files: 1, fields: 10 } });
+  const upload = singleFileUpload({ fileSize: MAX_ATTACHMENT_BYTES, files: 1, fields: 10 });
   const need = () => {
     if (!storage) throw storageUnavailable();
     return storage;
   };
 
-  r.post('/attachments', upload.single('file'), async (req: Request, res) => {
+  r.post('/attachments', upload, async (req: Request, res) => {
     const store = need();
     const ownerKind = ownerKindOf(req.body?.ownerKind);
     const ownerId = parseId(req.body?.ownerId);
-    const owner = OWNERS[ownerKind];
+    const owner = OWNERS.get(ownerKind)!;
     if (!owner.writers.includes(req.user!.role)) throw forbidden(`Attaching to a ${owner.label} needs the role ${owner.writers.join(' or ')}.`);
     if (!(await ds.getRepository(owner.entity).existsBy({ id: ownerId }))) throw fieldError('ownerId', `does not name an existing ${owner.label}`);
     const file = req.file;
@@ -76,6 +77,7 @@ export function attachmentsRouter(ds: DataSource, storage: Storage | null): Rout
   });
 
   r.get('/attachments', async (req, res) => {
+    refuseQuery(req, ['ownerKind', 'ownerId']);
     const ownerKind = ownerKindOf(req.query.ownerKind);
     const ownerId = parseId(req.query.ownerId);
     const items = await ds.getRepository(Attachment).find({ where: { ownerKind, ownerId }, relations: { uploadedBy: true }, order: { createdAt: 'DESC' } });

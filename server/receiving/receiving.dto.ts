@@ -1,5 +1,6 @@
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
+import { IsCalendarDate, PageParam, PageSizeParam } from '../common/fields';
 import { AdHocDrumDto } from '../fit/fit-check.dto';
 
 export class ReceivingCheckDto {
@@ -23,11 +24,11 @@ export class ReleaseDto {
 }
 
 export class ReceivingListDto {
-  @IsOptional() @IsString() @MaxLength(60) q?: string;
+  @IsOptional() @IsString({ message: 'must be given once, as text' }) @MaxLength(60) q?: string;
   @IsOptional() @IsIn(['fits', 'caution', 'no-fit'], { message: 'must be fits, caution or no-fit' }) verdict?: string;
   @IsOptional() @IsIn(['checked', 'on-hold', 'released'], { message: 'must be checked, on-hold or released' }) status?: string;
-  @IsOptional() @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date, YYYY-MM-DD' }) from?: string;
-  @IsOptional() @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date, YYYY-MM-DD' }) to?: string;
-  @IsOptional() @Type(() => Number) @IsInt({ message: 'must be a whole number' }) @Min(1) page?: number;
-  @IsOptional() @Type(() => Number) @IsInt({ message: 'must be a whole number' }) @Min(1) @Max(200, { message: 'must be at most 200' }) pageSize?: number;
+  @IsOptional() @IsCalendarDate() from?: string;
+  @IsOptional() @IsCalendarDate() to?: string;
+  @PageParam page?: number;
+  @PageSizeParam pageSize?: number;
 }

@@ -1,4 +1,4 @@
-import { IsBoolean, IsEmail, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsBoolean, IsEmail, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import { ROLES, type Role } from '../../shared/roles';
 import { MAIL_KINDS } from '../mail/outbox';
 
@@ -41,7 +41,11 @@ export class UpdateMeDto {
   lengthUnit?: 'mm' | 'in';
 
   /** Kinds of notice not wanted by e-mail. */
+  // IsIn with each: true also passes a single string that is one of the kinds ("lot-held"), which would
+  // then be stored letter by letter: the list itself is checked first.
   @IsOptional()
+  @IsArray({ message: `must be a list of kinds among ${MAIL_KINDS.join(', ')}` })
+  @ArrayMaxSize(MAIL_KINDS.length * 2, { message: `must list at most ${MAIL_KINDS.length * 2} kinds` })
   @IsIn(MAIL_KINDS, { each: true, message: `must list kinds among ${MAIL_KINDS.join(', ')}` })
   mailOff?: string[];
 }
