@@ -1,11 +1,18 @@
 import { Transform } from 'class-transformer';
-import { IsInt, IsOptional, Max, Min, ValidateBy } from 'class-validator';
+import { IsInt, IsOptional, Max, Min, ValidateBy, ValidateIf } from 'class-validator';
 import { DATE_MESSAGE, isCalendarDate, isDateOrTimestamp } from '../../shared/dates';
 
 // Field rules that several DTOs share, so each limit and each word lives once.
 
 /** A record id as PostgreSQL's uuid type reads it; anything else is refused before a query is built. */
 export const UUID_RE = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * A field that may be left out, but is not null when given. class-validator's IsOptional also lets null
+ * through, which then reached NOT NULL columns as a 500 (PATCH /api/settings {"tipClearanceMinMm": null});
+ * IsOptional is for the fields where null means "clear it".
+ */
+export const Optional = () => ValidateIf((_object, value) => value !== undefined);
 
 /** Pages beyond this hold nothing in any registry of ours; the bound keeps OFFSET inside PostgreSQL's bigint. */
 export const MAX_PAGE = 100_000;

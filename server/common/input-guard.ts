@@ -32,7 +32,8 @@ const join = (prefix: string, key: string) => (prefix ? `${prefix}.${key}` : key
 export function bodyProblem(value: unknown, field = '', depth = 0): FieldProblem | null {
   if (typeof value === 'string') return textProblem(value, field || 'body', BODY_CONTROL);
   if (value === null || typeof value !== 'object') return null;
-  if (depth >= MAX_BODY_DEPTH) return { field: field || 'body', messages: [`is nested too deeply (more than ${MAX_BODY_DEPTH} levels)`] };
+  // Named by its outermost field (a path twelve levels long helps nobody), or as the body itself.
+  if (depth >= MAX_BODY_DEPTH) return { field: /^\d*$/.test(field.split('.')[0]) ? 'body' : field.split('.')[0], messages: [`is nested too deeply (more than ${MAX_BODY_DEPTH} levels)`] };
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {
       const p = bodyProblem(value[i], join(field, String(i)), depth + 1);
@@ -91,8 +92,9 @@ function encodingProblem(req: Request): HttpError | null {
   const refuse = (message: string) => new HttpError(415, 'unsupported_encoding', message, [{ field: 'Content-Encoding', messages: [message] }]);
   if (encoding !== 'identity' && req.is('multipart')) return refuse('An upload must be sent uncompressed.');
   if (!READABLE_ENCODINGS.has(encoding)) return refuse(`The body is compressed as "${encoding.slice(0, 40)}", which this server does not read; send it uncompressed, or as gzip, deflate or br.`);
-  // req.is answers null without a body, false for another type.
-  if (req.is(['json', 'multipart']) === false) {
+  // A body of length 0 (what a browser sends with a bare POST) is no body.
+  const hasBody = req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length']) > 0;
+  if (hasBody && !req.is(['json', 'multipart'])) {
     return new HttpError(415, 'unsupported_type', 'Send the body as JSON (Content-Type: application/json), or a file as multipart/form-data.', [{ field: 'Content-Type', messages: ['must be application/json or multipart/form-data'] }]);
   }
   return null;

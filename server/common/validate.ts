@@ -24,8 +24,9 @@ export async function parseDto<T extends object>(cls: ClassConstructor<T>, plain
     throw new ValidationFailed([{ field: 'body', messages: ['must be a JSON object'] }]);
   }
   const instance = plainToInstance(cls, plain, { enableImplicitConversion: false });
-  // A partial update validates only the fields it carries.
-  const errors = await validate(instance, { whitelist: true, forbidNonWhitelisted: true, forbidUnknownValues: true, skipMissingProperties: !!options.partial });
+  // A partial update validates only the fields it carries; a field carried as null is validated (and
+  // refused where null means nothing), where skipMissingProperties would let it reach a NOT NULL column.
+  const errors = await validate(instance, { whitelist: true, forbidNonWhitelisted: true, forbidUnknownValues: true, skipUndefinedProperties: !!options.partial });
   if (errors.length) throw new ValidationFailed(flatten(errors, options.source ?? 'body'));
   return instance;
 }

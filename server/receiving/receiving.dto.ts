@@ -1,18 +1,18 @@
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
-import { IsCalendarDate, PageParam, PageSizeParam } from '../common/fields';
+import { IsCalendarDate, Optional, PageParam, PageSizeParam } from '../common/fields';
 import { AdHocDrumDto } from '../fit/fit-check.dto';
 
 export class ReceivingCheckDto {
   @IsString({ message: 'must be text' }) @MinLength(1, { message: 'is required' }) @MaxLength(60, { message: 'must be at most 60 characters' })
   @Matches(/^[\p{L}\p{N}][\p{L}\p{N}\-_./ ]*$/u, { message: 'may hold letters, digits, spaces and - _ . /' })
   lotNumber: string;
-  @IsOptional() @IsUUID('all', { message: 'must be an id' }) supplierId?: string;
-  @IsOptional() @IsUUID('all', { message: 'must be an id' }) slurryId?: string;
+  @Optional() @IsUUID('all', { message: 'must be an id' }) supplierId?: string;
+  @Optional() @IsUUID('all', { message: 'must be an id' }) slurryId?: string;
   @IsInt({ message: 'must be a whole number' }) @Min(1, { message: 'must be 1 or more' }) @Max(1000, { message: 'must be at most 1000' }) drumCount: number;
-  @IsOptional() @IsUUID('all', { message: 'must be an id' }) drumTypeId?: string;
-  @IsOptional() @ValidateNested() @Type(() => AdHocDrumDto) drum?: AdHocDrumDto;
-  @IsOptional() @IsUUID('all', { message: 'must be an id' }) stationId?: string;
+  @Optional() @IsUUID('all', { message: 'must be an id' }) drumTypeId?: string;
+  @Optional() @ValidateNested() @Type(() => AdHocDrumDto) drum?: AdHocDrumDto;
+  @Optional() @IsUUID('all', { message: 'must be an id' }) stationId?: string;
 }
 
 export class HoldDto {

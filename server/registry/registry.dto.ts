@@ -18,6 +18,7 @@ import {
   ValidateIf,
   ValidateNested,
 } from 'class-validator';
+import { Optional } from '../common/fields';
 import { REGIONS, SUITED_TO, THREAD_FAMILIES } from '../entities/registry';
 
 // Shared field rules. Lengths are mm; the upper bounds reject absurd values (a drum is not 10 m deep).
@@ -143,7 +144,7 @@ export class PairingUpdateDto {
 }
 
 export class ReviewDto {
-  @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(2000) comment?: string;
+  @Optional() @IsString({ message: 'must be text' }) @MaxLength(2000) comment?: string;
 }
 
 export class RequiredCommentDto {
@@ -174,15 +175,15 @@ export class TubeSetDto {
   @Name(40) label: string;
   @Id dipTubeId: string;
   /** New sets start in cleaning (they are rinsed before their first drum); later moves go through the rotation. */
-  @IsOptional() @OneOf(['cleaning']) state?: string;
+  @Optional() @OneOf(['cleaning']) state?: string;
 }
 
 export class SettingsDto {
-  @IsOptional() @Name() siteName?: string;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(500) tipClearanceMinMm?: number;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0.1) @Max(500) tipClearanceMaxMm?: number;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(10) threadMatchToleranceMm?: number;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(100) @Max(10000) laminarLimit?: number;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
+  @Optional() @Name() siteName?: string;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(500) tipClearanceMinMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0.1) @Max(500) tipClearanceMaxMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(10) threadMatchToleranceMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(100) @Max(10000) laminarLimit?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
   @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
 }

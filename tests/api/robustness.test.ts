@@ -114,8 +114,9 @@ async function call(c: Call): Promise<request.Response> {
   let req = request(base)[c.method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](c.path).timeout(20_000);
   if (c.token) req = req.set(bearer(c.token));
   for (const [name, value] of Object.entries(c.headers ?? {})) req = req.set(name, value);
-  // Sent as bytes, so superagent adds no content type of its own.
-  return c.body === undefined ? req : req.send(Buffer.isBuffer(c.body) ? c.body : Buffer.from(c.body));
+  // Sent as bytes, as they are: superagent adds no content type of its own to a Buffer, but would run it
+  // through JSON.stringify for a JSON content type without the identity serializer.
+  return c.body === undefined ? req : req.serialize((bytes: unknown) => bytes as string).send(Buffer.isBuffer(c.body) ? c.body : Buffer.from(c.body));
 }
 
 async function expectSound(label: string, c: Call): Promise<void> {
