@@ -1,4 +1,4 @@
-import type { ObjectLiteral, SelectQueryBuilder } from 'typeorm';
+import type { ObjectLiteral } from 'typeorm';
 import type { ThreadSpecRow } from '../../shared/threads/thread-table';
 import { fieldError } from '../common/errors';
 import { parseDto } from '../common/validate';

@@ -1,3 +1,4 @@
+import path from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { parse } from 'csv-parse/sync';
 import type { Express } from 'express';
@@ -130,6 +131,10 @@ describe('bad input answers a 4xx naming the field, never a 500', () => {
     expectRefused(await get('/api/suppliers/%E0%A4%A'), 'path');
     expectRefused(await get('/api/exports/%FF'), 'path');
     expectRefused(await get('/api/suppliers?q=%E0%A4%A'), 'q');
+    // Outside the API too: the web app's fallback route decodes its path the same way.
+    const web = makeTestApp(ds, { webDir: process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'dist', 'web') });
+    expectRefused(await request(web).get('/registry/%E0%A4%A'), 'path');
+    expect((await request(web).get('/registry/suppliers')).status).toBe(200);
   });
 
   it('answers encodings it does not read with 415, and a damaged body or upload with 400', async () => {
