@@ -13,6 +13,7 @@ import { DEFAULT_PASSWORD_LIMITS, passwordRouters, type PasswordLimits } from '.
 import { notFound, unavailable } from './common/errors';
 import { errorMiddleware } from './common/error-middleware';
 import { securityHeaders } from './common/security-headers';
+import { bodyGuard, requestGuard } from './common/input-guard';
 import { healthRouter } from './health/health.router';
 import { attachmentsRouter } from './attachments/attachments.router';
 import { auditRouter } from './audit/audit';
@@ -79,7 +80,10 @@ export function createApp(options: AppOptions): Express {
   // origin gets no Access-Control-Allow-Origin and cannot read the answers.
   const allowed = new Set(options.allowedOrigins ?? []);
   api.use(cors({ origin: (origin, done) => done(null, !!origin && allowed.has(origin)), credentials: false, maxAge: 600 }));
+  // The input guard first: paths, queries, encodings and bodies no route should see get a 400 or 415 here.
+  api.use(requestGuard);
   api.use(express.json({ limit: '1mb' }));
+  api.use(bodyGuard);
   api.use(healthRouter(ds));
   // Until the first connection is made (the database may start after the server), answer 503, not 500.
   api.use((_req, _res, next) => next(ds.isInitialized ? undefined : unavailable()));

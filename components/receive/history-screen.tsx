@@ -1,6 +1,7 @@
 import { Link, useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
+import { isCalendarDate } from '@/shared/dates';
 import { VerdictChip } from '../fit/verdict';
 import { useLengthUnit } from '../data/me';
 import { useReceivingChecksQuery, type LotStatus, type ReceivingCheckRow, type Verdict } from '../data/receiving';
@@ -32,10 +33,9 @@ const STATUSES = [
   { value: 'released', label: 'Released' },
 ] as const;
 
-const DATE = /^\d{4}-\d{2}-\d{2}$/;
 const dateProblem = (text: string): string | null => {
   if (!text.trim()) return null;
-  return DATE.test(text.trim()) && !Number.isNaN(Date.parse(text.trim())) ? null : 'Enter a date as YYYY-MM-DD, e.g. 2026-05-14.';
+  return isCalendarDate(text.trim()) ? null : 'Enter a date as YYYY-MM-DD, e.g. 2026-05-14.';
 };
 
 /** Every recorded dock check, newest first, filtered by verdict, status, lot and date; each opens its lot page. */

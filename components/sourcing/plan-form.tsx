@@ -2,6 +2,7 @@ import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { REGION_LABELS, type DrumTypeRecord, type Region, type SupplierRecord } from '@/shared/api-types';
+import { isCalendarDate } from '@/shared/dates';
 import { ApiError } from '../api/client';
 import { drumTypeQueries } from '../data/drum-types';
 import { useSourcingPlanCreateMutation, type SourcingPlanInput } from '../data/sourcing';
@@ -22,8 +23,6 @@ const STATION_MODES = [
   { value: 'all', label: 'All stations' },
   { value: 'some', label: 'Choose stations' },
 ] as const;
-
-const DATE = /^\d{4}-\d{2}-\d{2}$/;
 
 /** "Slurry X from supplier Y (region R) from date D, N drums a month": the plan, then its impact page. */
 export function PlanForm() {
@@ -47,7 +46,7 @@ export function PlanForm() {
   const sentence = [
     slurryName.trim() || 'Slurry …',
     `from ${supplier ? `${supplier.label} (${REGION_LABELS[supplier.region]})` : '…'}`,
-    `from ${DATE.test(startDate.trim()) ? formatDate(startDate.trim()) : '…'},`,
+    `from ${isCalendarDate(startDate.trim()) ? formatDate(startDate.trim()) : '…'},`,
     `${n && !Number.isNaN(n) ? n : 'N'} drums a month`,
     `in ${drumType?.label ?? '…'},`,
     stationMode === 'all' ? 'to every station.' : `to ${chosen.length} chosen station${chosen.length === 1 ? '' : 's'}.`,
@@ -58,7 +57,7 @@ export function PlanForm() {
     if (!slurryName.trim()) problems.slurryName = 'Name the slurry.';
     if (!supplier) problems.supplierId = 'Pick the supplier.';
     if (!drumType) problems.drumTypeId = 'Pick the drum type the slurry arrives in.';
-    if (!DATE.test(startDate.trim()) || Number.isNaN(Date.parse(startDate.trim()))) problems.startDate = 'Enter the first delivery date as YYYY-MM-DD, e.g. 2027-02-01.';
+    if (!isCalendarDate(startDate.trim())) problems.startDate = 'Enter the first delivery date as YYYY-MM-DD, e.g. 2027-02-01.';
     if (n === null || Number.isNaN(n) || !Number.isInteger(n) || n < 1) problems.drumsPerMonth = 'Enter drums a month: a whole number, 1 or more.';
     if (stationMode === 'some' && chosen.length === 0) problems.stationIds = 'Choose at least one station, or plan for all stations.';
     setErrors(problems);

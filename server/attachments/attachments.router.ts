@@ -6,7 +6,8 @@ import { parseId } from '../registry/resource';
 import { attachmentDisposition, type Storage } from '../storage/storage';
 import { AttachmentsService } from './attachments.service';
 import { MAX_ATTACHMENT_BYTES } from './file-kind';
-import { memoryUpload } from './upload';
+import { singleFileUpload } from '../common/uploads';
+import { refuseQuery } from '../common/validate';
 
 const LINK_SECONDS = 120;
 
@@ -15,13 +16,14 @@ export function attachmentsRouter(ds: DataSource, storage: Storage | null): Rout
   const service = new AttachmentsService(ds, storage);
   const router = Router();
   const r = secured(router);
-  const upload = memoryUpload(MAX_ATTACHMENT_BYTES);
+  const upload = singleFileUpload({ fileSize: MAX_ATTACHMENT_BYTES, files: 1, fields: 10 });
 
-  r.post('/attachments', upload.single('file'), async (req, res) => {
+  r.post('/attachments', upload, async (req, res) => {
     res.status(201).json(await service.upload(req.user!, req.body, req.file));
   });
 
   r.get('/attachments', async (req, res) => {
+    refuseQuery(req, ['ownerKind', 'ownerId']);
     const items = await service.list(req.user!.role, req.query);
     res.json({ items, total: items.length, page: 1, pageSize: items.length });
   });

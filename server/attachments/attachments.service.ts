@@ -13,15 +13,15 @@ import { ATTACHMENT_TYPES, sniffType } from './file-kind';
  * Each kind of record files are kept with, and the routes whose access its files follow: reading a file needs
  * what reading the record needs, attaching one what changing it needs (an import's file: what importing needs).
  */
-const OWNERS: Record<AttachmentOwner, { entity: EntityTarget<ObjectLiteral>; label: string; read: string; write: string }> = {
-  'drum-type': { entity: DrumType, label: 'drum type', read: 'GET /api/drum-types/:id', write: 'PATCH /api/drum-types/:id' },
-  'dip-tube': { entity: DipTube, label: 'dip tube', read: 'GET /api/dip-tubes/:id', write: 'PATCH /api/dip-tubes/:id' },
-  connector: { entity: Connector, label: 'connector', read: 'GET /api/connectors/:id', write: 'PATCH /api/connectors/:id' },
-  'receiving-check': { entity: ReceivingCheck, label: 'receiving check', read: 'GET /api/receiving-checks/:id', write: 'POST /api/receiving-checks' },
-  import: { entity: ImportRecord, label: 'import', read: 'GET /api/imports/:id', write: 'POST /api/imports' },
-};
+const OWNERS: ReadonlyMap<AttachmentOwner, { entity: EntityTarget<ObjectLiteral>; label: string; read: string; write: string }> = new Map<AttachmentOwner, { entity: EntityTarget<ObjectLiteral>; label: string; read: string; write: string }>([
+  ['drum-type', { entity: DrumType, label: 'drum type', read: 'GET /api/drum-types/:id', write: 'PATCH /api/drum-types/:id' }],
+  ['dip-tube', { entity: DipTube, label: 'dip tube', read: 'GET /api/dip-tubes/:id', write: 'PATCH /api/dip-tubes/:id' }],
+  ['connector', { entity: Connector, label: 'connector', read: 'GET /api/connectors/:id', write: 'PATCH /api/connectors/:id' }],
+  ['receiving-check', { entity: ReceivingCheck, label: 'receiving check', read: 'GET /api/receiving-checks/:id', write: 'POST /api/receiving-checks' }],
+  ['import', { entity: ImportRecord, label: 'import', read: 'GET /api/imports/:id', write: 'POST /api/imports' }],
+]);
 // Like secured(): a kind whose routes have no policy line stops the server at start-up rather than guess.
-for (const [kind, o] of Object.entries(OWNERS)) {
+for (const [kind, o] of OWNERS) {
   for (const key of [o.read, o.write]) if (!POLICY[key]) throw new Error(`Attachments of ${kind} follow ${key}, which has no line in POLICY (server/auth/policy.ts)`);
 }
 
@@ -74,7 +74,7 @@ export class AttachmentsService {
 
   /** 403 unless the role may read (or attach to) that kind of record, by the record's own policy. */
   assertMay(role: Role, kind: AttachmentOwner, action: 'read' | 'write'): void {
-    const owner = OWNERS[kind];
+    const owner = OWNERS.get(kind)!;
     const access = POLICY[owner[action]];
     if (allows(access, role)) return;
     const who = Array.isArray(access) ? ` needs the role ${access.join(' or ')}` : ' is not allowed';
@@ -121,7 +121,7 @@ export class AttachmentsService {
     const ownerKind = ownerKindOf(body?.ownerKind);
     const ownerId = parseId(body?.ownerId);
     this.assertMay(user.role, ownerKind, 'write');
-    const owner = OWNERS[ownerKind];
+    const owner = OWNERS.get(ownerKind)!;
     if (!(await this.ds.getRepository(owner.entity).existsBy({ id: ownerId }))) throw fieldError('ownerId', `does not name an existing ${owner.label}`);
     if (!file) throw fieldError('file', 'is required: a PDF or a photo');
     const type = await sniffType(file.buffer);

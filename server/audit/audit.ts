@@ -1,9 +1,9 @@
 import { Router } from 'express';
-import { IsDateString, IsIn, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min } from 'class-validator';
-import { Type } from 'class-transformer';
+import { IsIn, IsOptional, IsString, IsUUID, MaxLength } from 'class-validator';
 import type { DataSource, EntityManager } from 'typeorm';
 import { secured } from '../auth/policy';
-import { parseDto } from '../common/validate';
+import { IsDateOrTimestamp, PageParam, PageSizeParam } from '../common/fields';
+import { parseQuery } from '../common/validate';
 
 export interface AuditEvent {
   userId: string | null;
@@ -29,14 +29,14 @@ export async function audit(m: EntityManager, e: AuditEvent): Promise<void> {
 }
 
 class AuditQueryDto {
-  @IsOptional() @IsString() @MaxLength(30) entity?: string;
+  @IsOptional() @IsString({ message: 'must be given once, as text' }) @MaxLength(30) entity?: string;
   @IsOptional() @IsUUID('all', { message: 'must be an id' }) entityId?: string;
   @IsOptional() @IsUUID('all', { message: 'must be an id' }) userId?: string;
-  @IsOptional() @IsString() @MaxLength(20) action?: string;
-  @IsOptional() @IsDateString({}, { message: 'must be a date' }) from?: string;
-  @IsOptional() @IsDateString({}, { message: 'must be a date' }) to?: string;
-  @IsOptional() @Type(() => Number) @IsInt({ message: 'must be a whole number' }) @Min(1) page?: number;
-  @IsOptional() @Type(() => Number) @IsInt({ message: 'must be a whole number' }) @Min(1) @Max(200, { message: 'must be at most 200' }) pageSize?: number;
+  @IsOptional() @IsString({ message: 'must be given once, as text' }) @MaxLength(20) action?: string;
+  @IsOptional() @IsDateOrTimestamp() from?: string;
+  @IsOptional() @IsDateOrTimestamp() to?: string;
+  @PageParam page?: number;
+  @PageSizeParam pageSize?: number;
   @IsOptional() @IsIn(['asc', 'desc'], { message: 'must be asc or desc' }) order?: 'asc' | 'desc';
 }
 
@@ -45,7 +45,7 @@ export function auditRouter(ds: DataSource): Router {
   const router = Router();
   const r = secured(router);
   r.get('/audit', async (req, res) => {
-    const q = await parseDto(AuditQueryDto, { ...(req.query as object) });
+    const q = await parseQuery(AuditQueryDto, req);
     const where: string[] = [];
     const params: unknown[] = [];
     const add = (sql: string, v: unknown) => {

@@ -6,6 +6,11 @@ import { User } from './user';
 
 export const REGIONS = ['NA', 'EU', 'JP', 'TW', 'KR', 'CN', 'SG', 'other'] as const;
 export type Region = (typeof REGIONS)[number];
+// The closed sets that DTOs validate and list filters accept, with the columns typed from them.
+export const THREAD_FAMILIES = ['NPS', 'NPT', 'G', 'buttress', 'other'] as const;
+export const SUITED_TO = ['two-opening', 'one-opening', 'both'] as const;
+export const PAIRING_STATUSES = ['draft', 'approved', 'retired'] as const;
+export const TUBE_SET_STATES = ['online', 'standby', 'cleaning', 'ready'] as const;
 
 @Entity({ name: 'suppliers' })
 export class Supplier extends Base {
@@ -18,7 +23,7 @@ export class Supplier extends Base {
 @Entity({ name: 'thread_specs' })
 export class ThreadSpec extends Base {
   @Text('code', 40) code: string;
-  @Text('family', 12) family: 'NPS' | 'NPT' | 'G' | 'buttress' | 'other';
+  @Text('family', 12) family: (typeof THREAD_FAMILIES)[number];
   @Text('nominal_label', 40) nominalLabel: string;
   @Float('major_diameter_mm') majorDiameterMm: number;
   @Float('pitch_mm') pitchMm: number;
@@ -93,7 +98,7 @@ export class Connector extends Base {
   @NullableFloat('return_bore_mm') returnBoreMm: number | null;
   @NullableText('return_nominal', 20) returnNominal: string | null;
   @Text('return_path', 12) returnPath: 'none' | 'restricted' | 'open';
-  @Text('suited_to', 12) suitedTo: 'two-opening' | 'one-opening' | 'both';
+  @Text('suited_to', 12) suitedTo: (typeof SUITED_TO)[number];
   @Text('wetted_materials', 200) wettedMaterials: string;
 }
 
@@ -103,7 +108,7 @@ export class Pairing extends Base {
   @ManyToOne(() => DipTube) @JoinColumn({ name: 'dip_tube_id' }) dipTube?: DipTube;
   @Uuid('connector_id') connectorId: string;
   @ManyToOne(() => Connector) @JoinColumn({ name: 'connector_id' }) connector?: Connector;
-  @Text('status', 10) status: 'draft' | 'approved' | 'retired';
+  @Text('status', 10) status: (typeof PAIRING_STATUSES)[number];
   @Uuid('author_id') authorId: string;
   @ManyToOne(() => User) @JoinColumn({ name: 'author_id' }) author?: User;
   @NullableUuid('approver_id') approverId: string | null;
@@ -154,7 +159,7 @@ export class TubeSet extends Base {
   @Text('label', 40) label: string;
   @Uuid('dip_tube_id') dipTubeId: string;
   @ManyToOne(() => DipTube) @JoinColumn({ name: 'dip_tube_id' }) dipTube?: DipTube;
-  @Text('state', 10) state: 'online' | 'standby' | 'cleaning' | 'ready';
+  @Text('state', 10) state: (typeof TUBE_SET_STATES)[number];
   @Column({ name: 'last_rinsed_at', type: 'timestamptz', nullable: true }) lastRinsedAt: Date | null;
   @NullableUuid('last_rinsed_by_id') lastRinsedById: string | null;
   @ManyToOne(() => User) @JoinColumn({ name: 'last_rinsed_by_id' }) lastRinsedBy?: User | null;

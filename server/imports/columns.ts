@@ -15,8 +15,9 @@ const text = (field: string, names: string[], required = true): ColumnSpec => ({
 const number = (field: string, names: string[], required = true): ColumnSpec => ({ field, names, kind: 'number', required });
 const length = (field: string, names: string[], required = true): ColumnSpec => ({ field, names, kind: 'length', required });
 
-export const COLUMNS: Record<ImportKind, ColumnSpec[]> = {
-  'dip-tubes': [
+/** The columns of each kind; a Map, since the kind comes from the request. */
+export const COLUMNS: ReadonlyMap<ImportKind, ColumnSpec[]> = new Map<ImportKind, ColumnSpec[]>([
+  ['dip-tubes', [
     text('supplier', ['supplier', 'suppliername', 'vendor']),
     text('partNumber', ['partnumber', 'partno', 'part']),
     text('threadCode', ['thread', 'threadcode', 'threadspec']),
@@ -26,8 +27,8 @@ export const COLUMNS: Record<ImportKind, ColumnSpec[]> = {
     text('material', ['material']),
     text('keyCode', ['key', 'keycode'], false),
     text('channels', ['channels', 'channel']),
-  ],
-  connectors: [
+  ]],
+  ['connectors', [
     text('supplier', ['supplier', 'suppliername', 'vendor']),
     text('partNumber', ['partnumber', 'partno', 'part']),
     text('keyCode', ['key', 'keycode'], false),
@@ -38,8 +39,8 @@ export const COLUMNS: Record<ImportKind, ColumnSpec[]> = {
     text('returnPath', ['returnpath']),
     text('suitedTo', ['suitedto', 'tapping']),
     text('wettedMaterials', ['wettedmaterials', 'wetted', 'materials']),
-  ],
-  'drum-types': [
+  ]],
+  ['drum-types', [
     text('supplier', ['supplier', 'suppliername', 'vendor']),
     text('partNumber', ['partnumber', 'partno', 'part']),
     text('name', ['name', 'drumname', 'description']),
@@ -56,26 +57,26 @@ export const COLUMNS: Record<ImportKind, ColumnSpec[]> = {
     length('openingBoreMm', ['openingbore', 'bore']),
     text('openingKey', ['openingkey', 'key', 'keycode'], false),
     text('openingPosition', ['openingposition', 'position']),
-  ],
-};
+  ]],
+]);
 
 /** The header of the downloadable template for each kind, in mm. */
 export function templateCsv(kind: ImportKind): string {
-  const header = COLUMNS[kind].map((c) => (c.kind === 'length' ? `${toSnake(c.field.replace(/Mm$/, ''))}_mm` : toSnake(c.field))).join(',');
-  const example: Record<ImportKind, string> = {
+  const header = COLUMNS.get(kind)!.map((c) => (c.kind === 'length' ? `${toSnake(c.field.replace(/Mm$/, ''))}_mm` : toSnake(c.field))).join(',');
+  const example = new Map<ImportKind, string>(Object.entries({
     'dip-tubes': 'Example Tube Works,DT-EX-0001,NPS-2,836,19,25.4,PFA,,feed',
     connectors: 'Example Tube Works,DH-EX-0001,,19.05,3/4 in,19.05,3/4 in,open,both,"PFA, PTFE, FFKM seals"',
     'drum-types':
       'Example Drum Co,DR-EX-208,Example 208 L steel tight head,NA,208,steel,tight,1A1,880,851,585,large bung,NPS-2,50,,large\n' +
       'Example Drum Co,DR-EX-208,Example 208 L steel tight head,NA,208,steel,tight,1A1,880,851,585,small bung,NPS-3/4,19,,small',
-  };
-  const note: Record<ImportKind, string> = {
+  }) as Array<[ImportKind, string]>);
+  const note = new Map<ImportKind, string>(Object.entries({
     'dip-tubes': '',
     connectors: '',
     // Drum types: one row per opening; rows with the same supplier and part number make one drum type.
     'drum-types': '',
-  };
-  return `${header}\n${example[kind]}\n${note[kind]}`.trimEnd() + '\n';
+  }) as Array<[ImportKind, string]>);
+  return `${header}\n${example.get(kind)}\n${note.get(kind)}`.trimEnd() + '\n';
 }
 
 function toSnake(s: string): string {

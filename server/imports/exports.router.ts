@@ -4,14 +4,16 @@ import { Router } from 'express';
 import type { DataSource, ObjectLiteral } from 'typeorm';
 import { notFound } from '../common/errors';
 import { RESOURCES } from '../registry/definitions';
-import { ListQueryDto } from '../registry/list-query';
 import { ResourceService } from '../registry/resource';
-import { parseDto } from '../common/validate';
 
-/** A cell a spreadsheet would run as a formula (= + - @, tab, CR) gets a leading apostrophe. */
+/**
+ * One CSV cell: dates as plain ISO 8601 (JSON.stringify would wrap them in quotes of their own, which the
+ * CSV writer then doubles), other objects as JSON. A cell a spreadsheet would run as a formula (= + - @,
+ * tab, CR) gets a leading apostrophe.
+ */
 export function neutralise(value: unknown): string {
   if (value === null || value === undefined) return '';
-  const s = typeof value === 'object' ? JSON.stringify(value) : String(value);
+  const s = value instanceof Date ? value.toISOString() : typeof value === 'object' ? JSON.stringify(value) : String(value);
   return /^[=+\-@\t\r]/.test(s) ? `'${s}` : s;
 }
 
@@ -24,7 +26,8 @@ export function exportsRouter(ds: DataSource): Router {
     const resource = String(req.params.resource).replace(/\.csv$/, '');
     const service = services.get(resource);
     if (!service) throw notFound(`The registry table ${resource}`);
-    const query = await parseDto(ListQueryDto, { ...(req.query as object) });
+    // The same checks as the list: sort keys and filters of this table only.
+    const query = await service.parseQuery(req);
     const rows: object[] = [];
     // Pages of 200 through the list query: the export sees exactly what the list shows.
     for (let page = 1; ; page++) {

@@ -2,11 +2,12 @@ import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { fieldError, notFound } from '../common/errors';
+import { singleFileUpload } from '../common/uploads';
+import { refuseQuery } from '../common/validate';
 import { ImportRecord, type ImportKind } from '../entities';
 import { parseId } from '../registry/resource';
 import type { Storage } from '../storage/storage';
 import { AttachmentsService } from '../attachments/attachments.service';
-import { memoryUpload } from '../attachments/upload';
 import { templateCsv } from './columns';
 import { ImportService, type ImportOptions } from './import.service';
 
@@ -20,7 +21,7 @@ function kindOf(value: unknown): ImportKind {
 
 export function importsRouter(ds: DataSource, storage: Storage | null, options: ImportOptions = {}): Router {
   const service = new ImportService(ds, new AttachmentsService(ds, storage), options);
-  const upload = memoryUpload(MAX_IMPORT_BYTES);
+  const upload = singleFileUpload({ fileSize: MAX_IMPORT_BYTES, files: 1, fields: 10 });
   const router = Router();
   const r = secured(router);
 
@@ -31,7 +32,7 @@ export function importsRouter(ds: DataSource, storage: Storage | null, options: 
     res.send(templateCsv(kind));
   });
 
-  r.post('/imports', upload.single('file'), async (req, res) => {
+  r.post('/imports', upload, async (req, res) => {
     const kind = kindOf(req.body?.kind);
     const dryRunRaw = String(req.body?.dryRun ?? '');
     if (!['true', 'false'].includes(dryRunRaw)) throw fieldError('dryRun', 'must be true or false');
@@ -40,7 +41,8 @@ export function importsRouter(ds: DataSource, storage: Storage | null, options: 
     res.status(dryRunRaw === 'true' ? 200 : 201).json(result);
   });
 
-  r.get('/imports', async (_req, res) => {
+  r.get('/imports', async (req, res) => {
+    refuseQuery(req);
     const items = await service.history();
     res.json({ items, total: items.length, page: 1, pageSize: items.length });
   });

@@ -18,7 +18,7 @@ export interface RowError {
   reason: string;
 }
 
-const DTO: Record<ImportKind, new () => object> = { 'dip-tubes': DipTubeDto, connectors: ConnectorDto, 'drum-types': DrumTypeDto };
+const DTO = new Map<ImportKind, new () => object>([['dip-tubes', DipTubeDto], ['connectors', ConnectorDto], ['drum-types', DrumTypeDto]]);
 
 function firstProblem(errors: ValidationError[]): { field: string; message: string } | null {
   for (const e of errors) {
@@ -45,7 +45,7 @@ export async function loadReferences(m: EntityManager) {
 /** Reads the CSV as a stream, maps headers to fields and units, and validates each row like the API does. */
 export async function parseRows(kind: ImportKind, text: string, delimiter: ',' | ';', refs: References) {
   const parser = Readable.from([text]).pipe(parse({ delimiter, relax_column_count: true, skip_empty_lines: true, trim: true, bom: true }));
-  const specs = COLUMNS[kind];
+  const specs = COLUMNS.get(kind)!;
   const errors: RowError[] = [];
   const rows: Array<{ line: number; values: Record<string, unknown> }> = [];
   let header: string[] | null = null;
@@ -158,9 +158,9 @@ function resolveRow(kind: ImportKind, values: Record<string, unknown>, line: num
         }
       : { ...values, supplier: undefined };
   delete (dto as Record<string, unknown>).supplier;
-  const problem = firstProblem(validateSync(plainToInstance(DTO[kind], dto), { whitelist: true, forbidNonWhitelisted: false }));
+  const problem = firstProblem(validateSync(plainToInstance(DTO.get(kind)!, dto), { whitelist: true, forbidNonWhitelisted: false }));
   if (problem) {
-    const field = OPENING_FIELDS[problem.field] ?? problem.field;
+    const field = OPENING_FIELDS.get(problem.field) ?? problem.field;
     errors.push({ line, column: col(field), reason: `${field} ${problem.message}` });
     return false;
   }
@@ -182,13 +182,13 @@ function resolveRow(kind: ImportKind, values: Record<string, unknown>, line: num
 type References = Awaited<ReturnType<typeof loadReferences>>;
 
 /** Drum-type rows carry one opening each; validation names the nested field, the file names the column. */
-const OPENING_FIELDS: Record<string, string> = {
-  'openings.0.label': 'openingLabel',
-  'openings.0.threadCode': 'openingThread',
-  'openings.0.boreMm': 'openingBoreMm',
-  'openings.0.keyCode': 'openingKey',
-  'openings.0.position': 'openingPosition',
-};
+const OPENING_FIELDS = new Map([
+  ['openings.0.label', 'openingLabel'],
+  ['openings.0.threadCode', 'openingThread'],
+  ['openings.0.boreMm', 'openingBoreMm'],
+  ['openings.0.keyCode', 'openingKey'],
+  ['openings.0.position', 'openingPosition'],
+]);
 
 /** The checks the API makes across fields, which class-validator does not express. */
 function crossFieldProblem(kind: ImportKind, v: Record<string, unknown>): { field: string; reason: string } | null {

@@ -3,6 +3,7 @@ import { Router } from 'express';
 import { IsNull, type DataSource } from 'typeorm';
 import { notFound } from '../common/errors';
 import { Notification } from '../entities';
+import { refuseQuery } from '../common/validate';
 import { parseId } from '../registry/resource';
 import { notificationJson } from './notifications.service';
 
@@ -11,6 +12,7 @@ export function notificationsRouter(ds: DataSource): Router {
   const router = Router();
   const r = secured(router);
   r.get('/notifications', async (req, res) => {
+    refuseQuery(req);
     const repo = ds.getRepository(Notification);
     const [items, unread] = await Promise.all([
       repo.find({ where: { userId: req.user!.id }, order: { createdAt: 'DESC' }, take: 50 }),

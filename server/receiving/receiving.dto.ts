@@ -1,6 +1,7 @@
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
 import { LOT_NUMBER_MAX_LENGTH, LOT_NUMBER_MESSAGES, LOT_NUMBER_PATTERN } from '../../shared/lot-number';
+import { IsCalendarDate, Optional, PageParam, PageSizeParam } from '../common/fields';
 import { AdHocDrumDto } from '../fit/fit-check.dto';
 
 export class ReceivingCheckDto {
@@ -8,12 +9,12 @@ export class ReceivingCheckDto {
   @MaxLength(LOT_NUMBER_MAX_LENGTH, { message: LOT_NUMBER_MESSAGES.tooLong })
   @Matches(LOT_NUMBER_PATTERN, { message: LOT_NUMBER_MESSAGES.characters })
   lotNumber: string;
-  @IsOptional() @IsUUID('all', { message: 'must be an id' }) supplierId?: string;
-  @IsOptional() @IsUUID('all', { message: 'must be an id' }) slurryId?: string;
+  @Optional() @IsUUID('all', { message: 'must be an id' }) supplierId?: string;
+  @Optional() @IsUUID('all', { message: 'must be an id' }) slurryId?: string;
   @IsInt({ message: 'must be a whole number' }) @Min(1, { message: 'must be 1 or more' }) @Max(1000, { message: 'must be at most 1000' }) drumCount: number;
-  @IsOptional() @IsUUID('all', { message: 'must be an id' }) drumTypeId?: string;
-  @IsOptional() @ValidateNested() @Type(() => AdHocDrumDto) drum?: AdHocDrumDto;
-  @IsOptional() @IsUUID('all', { message: 'must be an id' }) stationId?: string;
+  @Optional() @IsUUID('all', { message: 'must be an id' }) drumTypeId?: string;
+  @Optional() @ValidateNested() @Type(() => AdHocDrumDto) drum?: AdHocDrumDto;
+  @Optional() @IsUUID('all', { message: 'must be an id' }) stationId?: string;
 }
 
 export class HoldDto {
@@ -25,11 +26,11 @@ export class ReleaseDto {
 }
 
 export class ReceivingListDto {
-  @IsOptional() @IsString() @MaxLength(60) q?: string;
+  @IsOptional() @IsString({ message: 'must be given once, as text' }) @MaxLength(60) q?: string;
   @IsOptional() @IsIn(['fits', 'caution', 'no-fit'], { message: 'must be fits, caution or no-fit' }) verdict?: string;
   @IsOptional() @IsIn(['checked', 'on-hold', 'released'], { message: 'must be checked, on-hold or released' }) status?: string;
-  @IsOptional() @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date, YYYY-MM-DD' }) from?: string;
-  @IsOptional() @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date, YYYY-MM-DD' }) to?: string;
-  @IsOptional() @Type(() => Number) @IsInt({ message: 'must be a whole number' }) @Min(1) page?: number;
-  @IsOptional() @Type(() => Number) @IsInt({ message: 'must be a whole number' }) @Min(1) @Max(200, { message: 'must be at most 200' }) pageSize?: number;
+  @IsOptional() @IsCalendarDate() from?: string;
+  @IsOptional() @IsCalendarDate() to?: string;
+  @PageParam page?: number;
+  @PageSizeParam pageSize?: number;
 }

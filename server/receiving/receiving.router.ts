@@ -1,7 +1,7 @@
 import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
-import { body, parseDto } from '../common/validate';
+import { body, parseQuery } from '../common/validate';
 import { parseId } from '../registry/resource';
 import { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
 import { ReceivingService } from './receiving.service';
@@ -11,7 +11,7 @@ export function receivingRouter(ds: DataSource): Router {
   const router = Router();
   const r = secured(router);
   r.get('/receiving-checks', async (req, res) => {
-    res.json(await service.list(await parseDto(ReceivingListDto, { ...(req.query as object) })));
+    res.json(await service.list(await parseQuery(ReceivingListDto, req)));
   });
   r.get('/receiving-checks/:id', async (req, res) => {
     res.json(await service.detail(parseId(req.params.id)));

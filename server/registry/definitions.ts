@@ -1,16 +1,25 @@
-import type { ObjectLiteral, SelectQueryBuilder } from 'typeorm';
+import type { ObjectLiteral } from 'typeorm';
 import type { ThreadSpecRow } from '../../shared/threads/thread-table';
 import { fieldError } from '../common/errors';
 import { parseDto } from '../common/validate';
 import { Connector, DipTube, DrumOpening, DrumType, KeyCode, Pairing, PairingReview, Slurry, Station, Supplier, ThreadSpec, TubeSet } from '../entities';
 import { notifyRoles } from '../notifications/notifications.service';
+import { PAIRING_STATUSES, REGIONS, SUITED_TO, THREAD_FAMILIES, TUBE_SET_STATES } from '../entities/registry';
+import { anId, codeLike, oneOf, type ListFilter } from './list-query';
 import { ensureExists, pick, resolveKey, resolveThread } from './refs';
-import { ConnectorDto, DipTubeDto, DrumTypeDto, KeyCodeDto, OpeningDto, PairingDto, SlurryDto, StationDto, SupplierDto, ThreadSpecDto, TubeSetDto } from './registry.dto';
+import { KEY_CODE_PATTERN, KEY_CODE_SAYS, THREAD_CODE_PATTERN, THREAD_CODE_SAYS, ConnectorDto, DipTubeDto, DrumTypeDto, KeyCodeDto, OpeningDto, PairingDto, SlurryDto, StationDto, SupplierDto, ThreadSpecDto, TubeSetDto } from './registry.dto';
 import type { ResourceDef, WriteContext } from './resource';
 
 type Dto = Record<string, unknown>;
 const stamps = (e: { id: string; version: number; createdAt: Date; updatedAt: Date }) => ({ id: e.id, version: e.version, createdAt: e.createdAt, updatedAt: e.updatedAt });
-const byCode = (alias: string, relation: string) => (qb: SelectQueryBuilder<never>, value: string) => qb.andWhere(`${relation}.code = :${alias}`, { [alias]: value });
+// The rules of each filter value; a value outside its rule is a 400 naming the parameter, not an empty list.
+const region = oneOf(REGIONS);
+const threadCode = codeLike(THREAD_CODE_PATTERN, `must be a thread code (it ${THREAD_CODE_SAYS})`);
+const keyCode = codeLike(KEY_CODE_PATTERN, `must be a key code (it ${KEY_CODE_SAYS})`);
+const filter = <E extends ObjectLiteral>(rule: ListFilter<E>['rule'], apply: ListFilter<E>['apply']): ListFilter<E> => ({ rule, apply });
+/** A filter on the code of a joined thread spec or key code. */
+const byCode = <E extends ObjectLiteral>(param: 'thread' | 'key', relation: string): ListFilter<E> =>
+  filter(param === 'thread' ? threadCode : keyCode, (qb, value) => qb.andWhere(`${relation}.code = :${param}`, { [param]: value }));
 
 /** A stored thread spec as a row of the thread table (the shape the shared thread code works on). */
 export const threadRow = (t: ThreadSpec): ThreadSpecRow => ({
@@ -35,7 +44,7 @@ export const supplierDef: ResourceDef<Supplier> = {
   search: ['s.name', 's.contact_email'],
   sorts: { name: 's.name', region: 's.region', updatedAt: 's.updatedAt' },
   defaultSort: 'name',
-  filters: { region: (qb, v) => qb.andWhere('s.region = :region', { region: v }) },
+  filters: { region: filter(region, (qb, v) => qb.andWhere('s.region = :region', { region: v })) },
   toJson: (s) => ({ ...stamps(s), name: s.name, region: s.region, contactEmail: s.contactEmail, notes: s.notes }),
   toColumns: async (dto) => pick<Supplier>(dto, ['name', 'region', 'contactEmail', 'notes']),
   detailExtras: async (s, m) => ({
@@ -55,7 +64,8 @@ export const threadSpecDef: ResourceDef<ThreadSpec> = {
   search: ['t.code', 't.nominal_label', 't.standard'],
   sorts: { code: 't.code', family: 't.family', majorDiameterMm: 't.majorDiameterMm' },
   defaultSort: 'majorDiameterMm',
-  filters: { thread: (qb, v) => qb.andWhere('t.family = :family', { family: v }) },
+  // On the thread table, ?thread= is the family.
+  filters: { thread: filter(oneOf(THREAD_FAMILIES), (qb, v) => qb.andWhere('t.family = :family', { family: v })) },
   toJson: (t) => ({ ...stamps(t), ...threadRow(t) }),
   toColumns: async (dto) => pick<ThreadSpec>(dto, ['code', 'family', 'nominalLabel', 'majorDiameterMm', 'pitchMm', 'threadsPerInch', 'flankAngleDeg', 'form', 'standard']),
 };
@@ -130,11 +140,12 @@ export const drumTypeDef: ResourceDef<DrumType> = {
   sorts: { name: 'd.name', partNumber: 'd.partNumber', region: 'd.region', insideDepthMm: 'd.insideDepthMm', nominalCapacityL: 'd.nominalCapacityL', updatedAt: 'd.updatedAt' },
   defaultSort: 'name',
   filters: {
-    region: (qb, v) => qb.andWhere('d.region = :region', { region: v }),
-    supplierId: (qb, v) => qb.andWhere('d.supplier_id = :supplierId', { supplierId: v }),
-    thread: (qb, v) =>
+    region: filter(region, (qb, v) => qb.andWhere('d.region = :region', { region: v })),
+    supplierId: filter(anId, (qb, v) => qb.andWhere('d.supplier_id = :supplierId', { supplierId: v })),
+    thread: filter(threadCode, (qb, v) =>
       qb.andWhere('d.id IN (SELECT fo.drum_type_id FROM drum_openings fo JOIN thread_specs ft ON ft.id = fo.thread_spec_id WHERE ft.code = :thread)', { thread: v }),
-    key: (qb, v) => qb.andWhere('d.id IN (SELECT fo.drum_type_id FROM drum_openings fo JOIN key_codes fk ON fk.id = fo.key_code_id WHERE fk.code = :key)', { key: v }),
+    ),
+    key: filter(keyCode, (qb, v) => qb.andWhere('d.id IN (SELECT fo.drum_type_id FROM drum_openings fo JOIN key_codes fk ON fk.id = fo.key_code_id WHERE fk.code = :key)', { key: v })),
   },
   toJson: drumTypeJson,
   toColumns: async (dto, { manager, existing }) => {
@@ -187,9 +198,9 @@ export const dipTubeDef: ResourceDef<DipTube> = {
   sorts: { partNumber: 't.partNumber', lengthMm: 't.lengthMm', thread: 'th.code', updatedAt: 't.updatedAt' },
   defaultSort: 'partNumber',
   filters: {
-    thread: byCode('thread', 'th') as never,
-    key: byCode('key', 'k') as never,
-    supplierId: (qb, v) => qb.andWhere('t.supplier_id = :supplierId', { supplierId: v }),
+    thread: byCode('thread', 'th'),
+    key: byCode('key', 'k'),
+    supplierId: filter(anId, (qb, v) => qb.andWhere('t.supplier_id = :supplierId', { supplierId: v })),
   },
   toJson: dipTubeJson,
   toColumns: async (dto, { manager, existing }) => {
@@ -242,9 +253,10 @@ export const connectorDef: ResourceDef<Connector> = {
   sorts: { partNumber: 'c.partNumber', feedBoreMm: 'c.feedBoreMm', suitedTo: 'c.suitedTo', updatedAt: 'c.updatedAt' },
   defaultSort: 'partNumber',
   filters: {
-    key: byCode('key', 'k') as never,
-    supplierId: (qb, v) => qb.andWhere('c.supplier_id = :supplierId', { supplierId: v }),
-    status: (qb, v) => qb.andWhere('c.suited_to = :suited', { suited: v }),
+    key: byCode('key', 'k'),
+    supplierId: filter(anId, (qb, v) => qb.andWhere('c.supplier_id = :supplierId', { supplierId: v })),
+    // On connectors, ?status= is what the head is suited to.
+    status: filter(oneOf(SUITED_TO), (qb, v) => qb.andWhere('c.suited_to = :suited', { suited: v })),
   },
   toJson: connectorJson,
   toColumns: async (dto, { manager, existing }) => {
@@ -297,9 +309,9 @@ export const pairingDef: ResourceDef<Pairing> = {
   sorts: { status: 'p.status', updatedAt: 'p.updatedAt', dipTube: 'pt.partNumber', connector: 'pc.partNumber' },
   defaultSort: 'updatedAt',
   filters: {
-    status: (qb, v) => qb.andWhere('p.status = :status', { status: v }),
-    thread: byCode('thread', 'ptt') as never,
-    key: byCode('key', 'ptk') as never,
+    status: filter(oneOf(PAIRING_STATUSES), (qb, v) => qb.andWhere('p.status = :status', { status: v })),
+    thread: byCode('thread', 'ptt'),
+    key: byCode('key', 'ptk'),
   },
   toJson: pairingJson,
   toColumns: async (dto, { manager, user, existing }) => {
@@ -341,8 +353,8 @@ export const slurryDef: ResourceDef<Slurry> = {
   sorts: { name: 'sl.name', region: 'sl.region', updatedAt: 'sl.updatedAt' },
   defaultSort: 'name',
   filters: {
-    region: (qb, v) => qb.andWhere('sl.region = :region', { region: v }),
-    supplierId: (qb, v) => qb.andWhere('sl.supplier_id = :supplierId', { supplierId: v }),
+    region: filter(region, (qb, v) => qb.andWhere('sl.region = :region', { region: v })),
+    supplierId: filter(anId, (qb, v) => qb.andWhere('sl.supplier_id = :supplierId', { supplierId: v })),
   },
   toJson: (s) => ({
     ...stamps(s),
@@ -410,8 +422,9 @@ export const tubeSetDef: ResourceDef<TubeSet> = {
   sorts: { label: 'ts.label', station: 'st.name', state: 'ts.state', lastRinsedAt: 'ts.lastRinsedAt' },
   defaultSort: 'station',
   filters: {
-    stationId: (qb, v) => qb.andWhere('ts.station_id = :stationId', { stationId: v }),
-    status: (qb, v) => qb.andWhere('ts.state = :state', { state: v }),
+    stationId: filter(anId, (qb, v) => qb.andWhere('ts.station_id = :stationId', { stationId: v })),
+    // On tube sets, ?status= is the set's state in the rotation.
+    status: filter(oneOf(TUBE_SET_STATES), (qb, v) => qb.andWhere('ts.state = :state', { state: v })),
   },
   toJson: (t) => ({
     ...stamps(t),

@@ -18,11 +18,17 @@ import {
   ValidateIf,
   ValidateNested,
 } from 'class-validator';
-import { REGIONS } from '../entities/registry';
+import { Optional } from '../common/fields';
+import { REGIONS, SUITED_TO, THREAD_FAMILIES } from '../entities/registry';
 
 // Shared field rules. Lengths are mm; the upper bounds reject absurd values (a drum is not 10 m deep).
 const num = { allowNaN: false, allowInfinity: false };
 const NUMBER = 'must be a number';
+/** What a thread code and a key code may hold; the list filters check the same forms. */
+export const THREAD_CODE_PATTERN = /^[A-Za-z0-9][A-Za-z0-9/.\-x ]*$/;
+export const THREAD_CODE_SAYS = 'may hold letters, digits, / . - and x';
+export const KEY_CODE_PATTERN = /^[A-Za-z0-9][A-Za-z0-9\-_]*$/;
+export const KEY_CODE_SAYS = 'may hold letters, digits, - and _';
 const Mm = (max: number) => (target: object, key: string) => {
   IsNumber(num, { message: NUMBER })(target, key);
   Min(0.1, { message: 'must be more than 0 mm' })(target, key);
@@ -62,8 +68,8 @@ export class SupplierDto {
 }
 
 export class ThreadSpecDto {
-  @Code @Matches(/^[A-Za-z0-9][A-Za-z0-9/.\-x ]*$/, { message: 'may hold letters, digits, / . - and x' }) code: string;
-  @OneOf(['NPS', 'NPT', 'G', 'buttress', 'other']) family: string;
+  @Code @Matches(THREAD_CODE_PATTERN, { message: THREAD_CODE_SAYS }) code: string;
+  @OneOf(THREAD_FAMILIES) family: string;
   @Name(40) nominalLabel: string;
   @Mm(1000) majorDiameterMm: number;
   @Mm(50) pitchMm: number;
@@ -74,7 +80,7 @@ export class ThreadSpecDto {
 }
 
 export class KeyCodeDto {
-  @Code @Matches(/^[A-Za-z0-9][A-Za-z0-9\-_]*$/, { message: 'may hold letters, digits, - and _' }) code: string;
+  @Code @Matches(KEY_CODE_PATTERN, { message: KEY_CODE_SAYS }) code: string;
   @Name() label: string;
   @IsOptional() @IsString() @MaxLength(200) marking?: string | null;
 }
@@ -123,7 +129,7 @@ export class ConnectorDto {
   @IsOptional() @ValidateIf((_o, v) => v !== null) @Mm(200) returnBoreMm?: number | null;
   @IsOptional() @ValidateIf((_o, v) => v !== null) @Name(20) returnNominal?: string | null;
   @OneOf(['none', 'restricted', 'open']) returnPath: string;
-  @OneOf(['two-opening', 'one-opening', 'both']) suitedTo: string;
+  @OneOf(SUITED_TO) suitedTo: string;
   @Name(200) wettedMaterials: string;
 }
 
@@ -138,7 +144,7 @@ export class PairingUpdateDto {
 }
 
 export class ReviewDto {
-  @IsOptional() @IsString({ message: 'must be text' }) @MaxLength(2000) comment?: string;
+  @Optional() @IsString({ message: 'must be text' }) @MaxLength(2000) comment?: string;
 }
 
 export class RequiredCommentDto {
@@ -169,15 +175,15 @@ export class TubeSetDto {
   @Name(40) label: string;
   @Id dipTubeId: string;
   /** New sets start in cleaning (they are rinsed before their first drum); later moves go through the rotation. */
-  @IsOptional() @OneOf(['cleaning']) state?: string;
+  @Optional() @OneOf(['cleaning']) state?: string;
 }
 
 export class SettingsDto {
-  @IsOptional() @Name() siteName?: string;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(500) tipClearanceMinMm?: number;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0.1) @Max(500) tipClearanceMaxMm?: number;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(10) threadMatchToleranceMm?: number;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(100) @Max(10000) laminarLimit?: number;
-  @IsOptional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
+  @Optional() @Name() siteName?: string;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(500) tipClearanceMinMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0.1) @Max(500) tipClearanceMaxMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(10) threadMatchToleranceMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(100) @Max(10000) laminarLimit?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
   @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
 }

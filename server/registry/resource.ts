@@ -5,13 +5,12 @@ import type { DataSource, EntityManager, EntityTarget, ObjectLiteral, SelectQuer
 import { audit } from '../audit/audit';
 import { conflict, fieldError, notFound } from '../common/errors';
 import { translateDbError } from '../common/db-errors';
+import { UUID_RE } from '../common/fields';
 import { parseDto } from '../common/validate';
-import { ListQueryDto } from './list-query';
+import { parseListQuery, type FilterRule, type ListFilter, type ListQuery } from './list-query';
 
 /** Versions are PostgreSQL integers. */
 export const MAX_VERSION = 2_147_483_647;
-
-export const UUID_RE = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export interface Page<T> {
   items: T[];
@@ -41,11 +40,11 @@ export interface ResourceDef<E extends ObjectLiteral> {
   joins: (qb: SelectQueryBuilder<E>) => SelectQueryBuilder<E>;
   /** SQL expressions matched by ?q= (case-insensitive, substring). */
   search: string[];
-  /** Sort keys to entity property paths (alias.property: TypeORM pages joined queries by these). */
+  /** Sort keys to entity property paths (alias.property: TypeORM pages joined queries by these). Read into a Map. */
   sorts: Record<string, string>;
   defaultSort: string;
-  /** Filters by query parameter name; each adds a WHERE clause with the given value. */
-  filters?: Record<string, (qb: SelectQueryBuilder<E>, value: string) => void>;
+  /** Filters by query parameter name: the values each takes and the WHERE clause it adds. Read into a Map. */
+  filters?: Record<string, ListFilter<E>>;
   toJson: (e: E) => object;
   /** Turns a validated DTO into column values (codes to ids, defaults); may throw field errors. */
   toColumns: (dto: Record<string, unknown>, ctx: WriteContext) => Promise<Partial<E>>;
@@ -62,31 +61,42 @@ export function parseId(raw: unknown): string {
 }
 
 export class ResourceService<E extends ObjectLiteral> {
+  // Maps, never the definition's plain objects: the keys come from the request.
+  private readonly sorts: ReadonlyMap<string, string>;
+  private readonly filters: ReadonlyMap<string, ListFilter<E>>;
+  private readonly filterRules: ReadonlyMap<string, FilterRule>;
+
   constructor(
     readonly ds: DataSource,
     readonly def: ResourceDef<E>,
-  ) {}
+  ) {
+    this.sorts = new Map(Object.entries(def.sorts));
+    this.filters = new Map(Object.entries(def.filters ?? {}));
+    this.filterRules = new Map([...this.filters].map(([name, f]) => [name, f.rule]));
+    if (!this.sorts.has(def.defaultSort)) throw new Error(`${def.path}: the default sort ${def.defaultSort} is not one of its sorts`);
+  }
+
+  /** The list's query string, checked against this resource's sorts and filters (400 naming the parameter). */
+  parseQuery(req: Request): Promise<ListQuery> {
+    return parseListQuery(req, this.sorts, this.filterRules);
+  }
 
   private base(manager: EntityManager = this.ds.manager): SelectQueryBuilder<E> {
     return this.def.joins(manager.getRepository(this.def.entity).createQueryBuilder(this.def.alias));
   }
 
-  async list(query: ListQueryDto): Promise<Page<object>> {
+  async list(query: ListQuery): Promise<Page<object>> {
     const { def } = this;
     const page = query.page ?? 1;
     const pageSize = query.pageSize ?? 25;
-    const sortKey = query.sort ?? def.defaultSort;
-    const sortExpr = def.sorts[sortKey];
-    if (!sortExpr) throw fieldError('sort', `must be one of ${Object.keys(def.sorts).join(', ')}`);
+    const sortExpr = this.sorts.get(query.sort ?? def.defaultSort);
+    if (!sortExpr) throw fieldError('sort', `must be one of ${[...this.sorts.keys()].join(', ')}`);
     const qb = this.base();
     if (query.q?.trim()) {
       const q = `%${query.q.trim().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
       qb.andWhere(`(${def.search.map((expr) => `${expr} ILIKE :q`).join(' OR ')})`, { q });
     }
-    for (const [name, apply] of Object.entries(def.filters ?? {})) {
-      const value = (query as Record<string, unknown>)[name];
-      if (typeof value === 'string' && value !== '') apply(qb, value);
-    }
+    for (const [name, value] of query.filters) this.filters.get(name)?.apply(qb, value);
     qb.orderBy(sortExpr, query.order === 'desc' ? 'DESC' : 'ASC').addOrderBy(`${def.alias}.id`, 'ASC');
     qb.skip((page - 1) * pageSize).take(pageSize);
     const [rows, total] = await qb.getManyAndCount();
@@ -168,10 +178,6 @@ export class ResourceService<E extends ObjectLiteral> {
   }
 }
 
-async function listQuery(req: Request): Promise<ListQueryDto> {
-  return parseDto(ListQueryDto, { ...(req.query as object) });
-}
-
 /** List, detail, create, update and delete; who may call each is in the policy table (server/auth/policy.ts). */
 export function resourceRouter<E extends ObjectLiteral>(ds: DataSource, def: ResourceDef<E>): { router: Router; service: ResourceService<E> } {
   const service = new ResourceService(ds, def);
@@ -179,7 +185,7 @@ export function resourceRouter<E extends ObjectLiteral>(ds: DataSource, def: Res
   const r = secured(router);
   const path = `/${def.path}`;
   r.get(path, async (req, res) => {
-    res.json(await service.list(await listQuery(req)));
+    res.json(await service.list(await service.parseQuery(req)));
   });
   r.get(`${path}/:id`, async (req, res) => {
     res.json(await service.detail(parseId(req.params.id)));

@@ -1,7 +1,7 @@
 import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
-import { body, parseDto } from '../common/validate';
+import { body, parseQuery, refuseQuery } from '../common/validate';
 import { parseId } from '../registry/resource';
 import { SourcingPlanDto, WarningListDto } from './sourcing.dto';
 import { SourcingService } from './sourcing.service';
@@ -10,7 +10,8 @@ export function sourcingRouter(ds: DataSource): Router {
   const service = new SourcingService(ds);
   const router = Router();
   const r = secured(router);
-  r.get('/sourcing-plans', async (_req, res) => {
+  r.get('/sourcing-plans', async (req, res) => {
+    refuseQuery(req);
     res.json(await service.list());
   });
   r.get('/sourcing-plans/:id', async (req, res) => {
@@ -20,7 +21,7 @@ export function sourcingRouter(ds: DataSource): Router {
     res.status(201).json(await service.create(req.body as SourcingPlanDto, req.user!.id));
   });
   r.get('/warnings', async (req, res) => {
-    const q = await parseDto(WarningListDto, { ...(req.query as object) });
+    const q = await parseQuery(WarningListDto, req);
     res.json(await service.warnings(q.status));
   });
   r.post('/warnings/:id/acknowledge', async (req, res) => {

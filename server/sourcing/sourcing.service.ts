@@ -68,7 +68,6 @@ export class SourcingService {
       const stationIds = dto.stationIds ?? (await m.find(Station, { select: { id: true } })).map((s) => s.id);
       const found = await stationsByIds(m, stationIds);
       if (found.length !== new Set(stationIds).size) throw fieldError('stationIds', 'names a station that does not exist');
-      if (Number.isNaN(Date.parse(dto.startDate))) throw fieldError('startDate', 'must be a real date');
       const plan = await m.save(
         m.create(SourcingPlan, {
           slurryName: dto.slurryName.trim(),

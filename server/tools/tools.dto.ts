@@ -1,5 +1,6 @@
 import { Type } from 'class-transformer';
-import { IsDefined, IsIn, IsNumber, IsOptional, Max, Min, ValidateIf, ValidateNested } from 'class-validator';
+import { IsDefined, IsIn, IsNumber, Max, Min, ValidateIf, ValidateNested } from 'class-validator';
+import { Optional } from '../common/fields';
 import { FLOW_UNITS, LENGTH_UNITS } from '../../shared/units';
 
 const num = { allowNaN: false, allowInfinity: false };
@@ -16,14 +17,14 @@ export class FlowValueDto {
 
 export class ThreadMatchDto {
   @IsDefined({ message: 'is required: { value, unit }' }) @ValidateNested() @Type(() => LengthValueDto) majorDiameter: LengthValueDto;
-  @IsOptional() @IsNumber(num, { message: 'must be a number' }) @Min(1, { message: 'must be 1 or more' }) @Max(80, { message: 'must be at most 80' }) threadsPerInch?: number;
-  @IsOptional() @IsNumber(num, { message: 'must be a number' }) @Min(0.2, { message: 'must be at least 0.2 mm' }) @Max(20, { message: 'must be at most 20 mm' }) pitchMm?: number;
-  @IsOptional() @IsNumber(num, { message: 'must be a number' }) @Min(20, { message: 'must be at least 20 degrees' }) @Max(90, { message: 'must be at most 90 degrees' }) flankAngleDeg?: number;
-  @IsOptional() @IsIn(['tapered', 'parallel'], { message: 'must be tapered or parallel' }) taper?: 'tapered' | 'parallel';
+  @Optional() @IsNumber(num, { message: 'must be a number' }) @Min(1, { message: 'must be 1 or more' }) @Max(80, { message: 'must be at most 80' }) threadsPerInch?: number;
+  @Optional() @IsNumber(num, { message: 'must be a number' }) @Min(0.2, { message: 'must be at least 0.2 mm' }) @Max(20, { message: 'must be at most 20 mm' }) pitchMm?: number;
+  @Optional() @IsNumber(num, { message: 'must be a number' }) @Min(20, { message: 'must be at least 20 degrees' }) @Max(90, { message: 'must be at most 90 degrees' }) flankAngleDeg?: number;
+  @Optional() @IsIn(['tapered', 'parallel'], { message: 'must be tapered or parallel' }) taper?: 'tapered' | 'parallel';
 }
 
 export class FlowDto {
   @IsDefined({ message: 'is required: { value, unit }' }) @ValidateNested() @Type(() => FlowValueDto) flow: FlowValueDto;
   @IsNumber(num, { message: 'must be a number' }) @Min(0.5, { message: 'must be at least 0.5 mm' }) @Max(500, { message: 'must be at most 500 mm' }) feedBoreMm: number;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: 'must be a number' }) @Min(0.5, { message: 'must be at least 0.5 mm' }) @Max(500, { message: 'must be at most 500 mm' }) returnBoreMm?: number | null;
+  @Optional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: 'must be a number' }) @Min(0.5, { message: 'must be at least 0.5 mm' }) @Max(500, { message: 'must be at most 500 mm' }) returnBoreMm?: number | null;
 }

@@ -1,4 +1,5 @@
-import { IsBoolean, IsEmail, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsBoolean, IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
+import { Optional } from '../common/fields';
 import { ROLES, type Role } from '../../shared/roles';
 import { MAIL_KINDS } from '../mail/outbox';
 
@@ -20,15 +21,15 @@ export class CreateUserDto {
 }
 
 export class UpdateUserDto {
-  @IsOptional()
+  @Optional()
   @IsIn(ROLES, { message: `must be one of ${ROLES.join(', ')}` })
   role?: Role;
 
-  @IsOptional()
+  @Optional()
   @IsBoolean({ message: 'must be true or false' })
   active?: boolean;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'must be text' })
   @MinLength(1, { message: 'is required' })
   @MaxLength(120, { message: 'must be at most 120 characters' })
@@ -36,12 +37,16 @@ export class UpdateUserDto {
 }
 
 export class UpdateMeDto {
-  @IsOptional()
+  @Optional()
   @IsIn(['mm', 'in'], { message: 'must be mm or in' })
   lengthUnit?: 'mm' | 'in';
 
   /** Kinds of notice not wanted by e-mail. */
-  @IsOptional()
+  // IsIn with each: true also passes a single string that is one of the kinds ("lot-held"), which would
+  // then be stored letter by letter: the list itself is checked first.
+  @Optional()
+  @IsArray({ message: `must be a list of kinds among ${MAIL_KINDS.join(', ')}` })
+  @ArrayMaxSize(MAIL_KINDS.length * 2, { message: `must list at most ${MAIL_KINDS.length * 2} kinds` })
   @IsIn(MAIL_KINDS, { each: true, message: `must list kinds among ${MAIL_KINDS.join(', ')}` })
   mailOff?: string[];
 }

@@ -3,12 +3,11 @@ import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { toPublicUser } from '../auth/auth.service';
 import { fieldError } from '../common/errors';
-import { body } from '../common/validate';
+import { UUID_RE } from '../common/fields';
+import { body, refuseQuery } from '../common/validate';
 import { User } from '../entities';
 import { CreateUserDto, UpdateMeDto, UpdateUserDto } from './users.dto';
 import { UsersService } from './users.service';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export function usersRouter(ds: DataSource): Router {
   const service = new UsersService(ds);
@@ -23,7 +22,8 @@ export function usersRouter(ds: DataSource): Router {
     res.json({ user: await service.updateMe(req.user!.id, req.body as UpdateMeDto) });
   });
 
-  r.get('/users', async (_req, res) => {
+  r.get('/users', async (req, res) => {
+    refuseQuery(req);
     const items = await service.list();
     res.json({ items, total: items.length, page: 1, pageSize: items.length });
   });
@@ -32,7 +32,7 @@ export function usersRouter(ds: DataSource): Router {
   });
   r.patch('/users/:id', body(UpdateUserDto), async (req, res) => {
     const id = String(req.params.id);
-    if (!UUID.test(id)) throw fieldError('id', 'must be a user id');
+    if (!UUID_RE.test(id)) throw fieldError('id', 'must be a user id');
     res.json(await service.update(id, req.body as UpdateUserDto, req.user!.id));
   });
   return router;
