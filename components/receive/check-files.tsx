@@ -11,7 +11,7 @@ export function CheckFiles({ checkId }: { checkId: string }) {
       ownerId={checkId}
       canAdd={hasRole(DOCK_ROLES, session?.user.role)}
       title="Files for this lot"
-      hint="The delivery note, certificates and photos of the drum labels: PDF or photo, up to 10 MB each."
+      hint="The delivery note and photos of the drum labels: PDF or photo, up to 10 MB each. The certificate of analysis goes through Attach the certificate, so the lot rules see it."
     />
   );
 }

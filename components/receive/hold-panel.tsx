@@ -81,7 +81,8 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
             />
             <Button label="Release the lot" variant="secondary" busy={release.isPending} onPress={onRelease} testID={`${prefix}-release`} />
           </View>
-        ) : (
+        ) : record.heldByRules ? null : (
+          // A hold by the rules says who lifts it beside each reason (components/receive/lot-verdict.tsx).
           <Text style={type.small}>Released by an {rolesInWords(ENGINEER_ROLES).toLowerCase()}, with a comment.</Text>
         )}
         {formError ? (
