@@ -111,7 +111,10 @@ export function composeLotVerdict(args: { fit: FitForVerdict; acceptance: Accept
   const items: Array<{ blocker: Blocker; result?: AcceptanceResult; rank: number }> = [];
   const best = fit.candidates[0];
   if (fit.verdict === 'no-fit') {
-    items.push({ blocker: { source: 'fit', severity: 'hold', reason: best ? `Nothing on site fits: ${noFitClause(fit)}.` : `No tube and head fits: ${noFitClause(fit)}.`, release: 'engineer', releasedBy: ENGINEER_ROLES }, rank: rankOf('fit_hold') });
+    // The sentence says why across candidates; the reason gives the closest pairing's own words.
+    const fail = best?.rules.find((r) => r.outcome === 'fail');
+    const reason = best && fail ? `Closest pairing, dip tube ${best.dipTubePartNumber} with head ${best.connectorPartNumber}: ${lowerFirst(fail.message)}` : `No registered tube and head pairing threads into this drum's openings.`;
+    items.push({ blocker: { source: 'fit', severity: 'hold', reason, release: 'engineer', releasedBy: ENGINEER_ROLES }, rank: rankOf('fit_hold') });
   } else if (fit.verdict === 'caution' && best) {
     const c = best.rules.find((r) => r.outcome !== 'pass');
     items.push({ blocker: { source: 'fit', severity: 'caution', reason: c?.message ?? 'This pairing fits only with caution.' }, rank: rankOf('fit_caution') });

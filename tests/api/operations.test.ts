@@ -53,7 +53,7 @@ describe('dock checks', () => {
     expect(check.body).toMatchObject({ status: 'on-hold', decision: 'hold', heldByRules: true, heldByName: 'Noor Halvorsen' });
     expect(check.body.lotVerdict.sentence).toMatch(/^Hold: every G 2 tube on site is too long for this drum \(the shortest by \d+ mm\); an engineer must register a tube of 793 to 813 mm\.$/);
     expect(check.body.lotVerdict.blockers.map((b: { source: string }) => b.source)).toEqual(['fit', 'certificate', 'shelf-life']);
-    expect(check.body.holdReason).toMatch(/^Nothing on site fits/);
+    expect(check.body.holdReason).toMatch(/^Closest pairing, dip tube AFC-TR-G2-825 with head .*: the tube is too long and bottoms out: it is 7\.0 mm \(0\.28 in\) longer than the drum is deep/);
     const buyer = await notices(t.buyer);
     // The buyer hears of the hold and of the hardware it needs.
     expect(buyer.unread).toBe(before + 2);

@@ -56,7 +56,7 @@ describe('the lot verdict in plain words', () => {
     expect(v.decision).toBe('quarantine');
     expect(v.sentence).toBe('Quarantine: the temperature indicator shows the lot froze; an engineer must decide.');
     expect(v.blockers.map((b) => `${b.source}:${b.severity}`)).toEqual(['temperature:quarantine', 'shelf-life:hold', 'fit:hold']);
-    expect(holdReasonOf(v)).toMatch(/froze.*expired on 1 Nov 2026.*Nothing on site fits/s);
+    expect(holdReasonOf(v)).toMatch(/froze.*expired on 1 Nov 2026.*Closest pairing, dip tube T-830 with head HEAD-1: the tube is too long and bottoms out: it is 12\.0 mm \(0\.47 in\) longer than the drum is deep/s);
   });
 
   it('expired outranks a tripped indicator, which outranks hardware, which outranks a short life and a missing certificate', () => {
