@@ -99,7 +99,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
       <View style={styles.box} testID={`${prefix}-hold-status`}>
         <LotStatusChip status="released" />
         <Text style={type.body}>
-          Held ({record.holdReason}), then released by {record.releasedByName ?? 'an engineer'} on {formatWhen(record.releasedAt)}: {record.releaseComment}
+          Held: {record.holdReason} Released by {record.releasedByName ?? 'an engineer'} on {formatWhen(record.releasedAt)}: {record.releaseComment}
         </Text>
       </View>
     );
