@@ -9,12 +9,14 @@ interface ScreenProps {
   actions?: ReactNode;
   children: ReactNode;
   testID?: string;
+  /** A bar fixed to the bottom of the page (above the phone's navigation) holding the primary action. */
+  footer?: ReactNode;
 }
 
 /** The one page layout: a single column on a phone; a centred, wider column on a wide screen. */
-export function Screen({ title, subtitle, actions, children, testID }: ScreenProps) {
+export function Screen({ title, subtitle, actions, children, testID, footer }: ScreenProps) {
   const wide = useIsWide();
-  return (
+  const page = (
     <ScrollView style={styles.scroll} contentContainerStyle={[styles.content, wide && styles.contentWide]} testID={testID}>
       <View style={[styles.inner, { maxWidth: maxContentWidth }]}>
         <View style={[styles.header, wide && styles.headerWide]}>
@@ -30,6 +32,15 @@ export function Screen({ title, subtitle, actions, children, testID }: ScreenPro
       </View>
     </ScrollView>
   );
+  if (!footer) return page;
+  return (
+    <View style={styles.withFooter}>
+      {page}
+      <View style={[styles.footer, wide && styles.footerWide]} testID={testID ? `${testID}-footer` : undefined}>
+        {footer}
+      </View>
+    </View>
+  );
 }
 
 const styles = StyleSheet.create({
@@ -41,4 +52,7 @@ const styles = StyleSheet.create({
   headerWide: { flexDirection: 'row', alignItems: 'flex-end', justifyContent: 'space-between' },
   titles: { gap: space.xs, flexShrink: 1 },
   actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
+  withFooter: { flex: 1 },
+  footer: { backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.line, paddingHorizontal: space.lg, paddingVertical: space.sm, gap: space.xs },
+  footerWide: { paddingHorizontal: space.xxl, alignItems: 'flex-end' },
 });

@@ -42,7 +42,7 @@ export const type = {
 /** Below `wide` the app is one column with a bottom bar; at or above it, a side navigation. */
 export const breakpoints = { wide: 900 } as const;
 export const maxContentWidth = 1040;
-// 48 px: the dock clerk taps through gloves.
+/** Smallest tap target, px: 48 everywhere, since the dock and the stations are worked in chemical gloves. */
 export const minTouch = 48;
 /** Controls pressed in work gloves (the label scanner) are this tall at least: above the 48 px asked for gloves. */
 export const gloveTouch = 56;

@@ -257,12 +257,30 @@ const PAIRINGS: Array<{ tube: TubeRef; head: HeadRef; status: 'draft' | 'approve
 
 type SlurryRef = 'oxide' | 'tungsten' | 'ceria' | 'cuBarrier' | 'sti';
 
-const SLURRIES: Array<{ ref: SlurryRef; name: string; supplier: SupplierRef; drum: DrumRef; foams: boolean; shearSensitive: boolean; solidsWtPct: number }> = [
-  { ref: 'oxide', name: 'Mesa OxPlane 30 fumed silica', supplier: 'cobaltMesa', drum: 'naSteel', foams: false, shearSensitive: false, solidsWtPct: 12.5 },
-  { ref: 'tungsten', name: 'Mesa WPlane 18 tungsten', supplier: 'cobaltMesa', drum: 'naPlasticTwin', foams: false, shearSensitive: false, solidsWtPct: 3 },
-  { ref: 'ceria', name: 'Kumoyama CeriaFine 05', supplier: 'kumoyama', drum: 'jpPlastic', foams: false, shearSensitive: true, solidsWtPct: 1 },
-  { ref: 'cuBarrier', name: 'Hsinpu CuBar B7 barrier', supplier: 'hsinpu', drum: 'twSmall', foams: true, shearSensitive: false, solidsWtPct: 6 },
-  { ref: 'sti', name: 'Seoripul STI-Select 3', supplier: 'seoripul', drum: 'krSteel', foams: false, shearSensitive: false, solidsWtPct: 2.5 },
+// Receiving: shelf life and the life a lot must still have on arrival, storage range, and whether the dock needs
+// the certificate of analysis. The two certificate slurries give the "hold until attached" case; the oxide
+// slurry's 90-day minimum the "too close to expiry" case; every lot may trip or freeze its indicator.
+interface SlurryRow {
+  ref: SlurryRef;
+  name: string;
+  supplier: SupplierRef;
+  drum: DrumRef;
+  foams: boolean;
+  shearSensitive: boolean;
+  solidsWtPct: number;
+  shelfLifeDays: number;
+  minRemainingDays: number;
+  storageMinC: number;
+  storageMaxC: number;
+  certificateRequired: boolean;
+}
+
+const SLURRIES: SlurryRow[] = [
+  { ref: 'oxide', name: 'Mesa OxPlane 30 fumed silica', supplier: 'cobaltMesa', drum: 'naSteel', foams: false, shearSensitive: false, solidsWtPct: 12.5, shelfLifeDays: 365, minRemainingDays: 90, storageMinC: 5, storageMaxC: 35, certificateRequired: false },
+  { ref: 'tungsten', name: 'Mesa WPlane 18 tungsten', supplier: 'cobaltMesa', drum: 'naPlasticTwin', foams: false, shearSensitive: false, solidsWtPct: 3, shelfLifeDays: 180, minRemainingDays: 60, storageMinC: 5, storageMaxC: 25, certificateRequired: true },
+  { ref: 'ceria', name: 'Kumoyama CeriaFine 05', supplier: 'kumoyama', drum: 'jpPlastic', foams: false, shearSensitive: true, solidsWtPct: 1, shelfLifeDays: 270, minRemainingDays: 60, storageMinC: 5, storageMaxC: 30, certificateRequired: false },
+  { ref: 'cuBarrier', name: 'Hsinpu CuBar B7 barrier', supplier: 'hsinpu', drum: 'twSmall', foams: true, shearSensitive: false, solidsWtPct: 6, shelfLifeDays: 120, minRemainingDays: 30, storageMinC: 2, storageMaxC: 25, certificateRequired: false },
+  { ref: 'sti', name: 'Seoripul STI-Select 3', supplier: 'seoripul', drum: 'krSteel', foams: false, shearSensitive: false, solidsWtPct: 2.5, shelfLifeDays: 365, minRemainingDays: 120, storageMinC: 5, storageMaxC: 30, certificateRequired: true },
 ];
 
 // ---------------------------------------------------------------------------------------------------
@@ -376,6 +394,11 @@ export const DEMO_REGISTRY_SUMMARY = {
   dirtyTubeSet: 'Set C',
   /** At every station this set is online and clean. */
   onlineTubeSet: 'Set A',
+  /** Arrives in fittingDrum: 365-day shelf life, at least 90 days left on arrival (the expired and short-life cases). */
+  shelfLifeSlurry: 'Mesa OxPlane 30 fumed silica',
+  shelfLife: { days: 365, minRemainingDays: 90 },
+  /** Needs its certificate of analysis at the dock; arrives in twinBungDrum, which fits at twoOpeningStation. */
+  certificateSlurry: 'Mesa WPlane 18 tungsten',
   /** The collar key codes. */
   keyCodes: { oxide: 'LR-OCHRE', metal: 'LR-SLATE', ceria: 'LR-MOSS' },
 } as const;
@@ -514,6 +537,11 @@ export async function seedDemoRegistry(
         foams: s.foams,
         shearSensitive: s.shearSensitive,
         solidsWtPct: s.solidsWtPct,
+        shelfLifeDays: s.shelfLifeDays,
+        minRemainingDays: s.minRemainingDays,
+        storageMinC: s.storageMinC,
+        storageMaxC: s.storageMaxC,
+        certificateRequired: s.certificateRequired,
       }),
     );
   }

@@ -59,6 +59,8 @@ export interface AppOptions {
    * and stopped by the caller.
    */
   changes?: ChangeFeed | null;
+  /** The clock the dock's "today" is read from (the site's local date); tests pass a fixed one. */
+  clock?: () => Date;
 }
 
 /** The app factory: everything under /api, the web app at /. One process is stateless apart from the kept fit
@@ -120,10 +122,10 @@ export function createApp(options: AppOptions): Express {
   api.use(rotationRouter(ds));
   for (const def of RESOURCES) api.use(resourceRouter(ds, def).router);
   api.use(toolsRouter(ds));
-  api.use(receivingRouter(ds));
+  api.use(receivingRouter(ds, options.clock));
   api.use(sourcingRouter(ds));
   api.use(notificationsRouter(ds));
-  api.use(attachmentsRouter(ds, options.storage ?? null));
+  api.use(attachmentsRouter(ds, options.storage ?? null, options.clock));
   api.use(importsRouter(ds, options.storage ?? null, options.imports));
   api.use(exportsRouter(ds));
   api.use(auditRouter(ds));

@@ -162,6 +162,11 @@ export interface SlurryRecord extends Stamped {
   foams: boolean;
   shearSensitive: boolean;
   solidsWtPct: number;
+  shelfLifeDays: number | null;
+  minRemainingDays: number | null;
+  storageMinC: number | null;
+  storageMaxC: number | null;
+  certificateRequired: boolean;
 }
 
 export interface StationRecord extends Stamped {
@@ -199,6 +204,8 @@ export interface SettingsRecord {
   threadMatchToleranceMm: number;
   laminarLimit: number;
   maxReturnVelocityRatio: number;
+  /** IANA zone of the site: its local date is "today" for lot expiry. */
+  timeZone: string;
 }
 
 export interface FitRuleRecord {
@@ -213,6 +220,9 @@ export interface FitCandidateRecord {
   dipTubePartNumber: string;
   connectorId: string;
   connectorPartNumber: string;
+  /** Absent in checks stored before they were added. */
+  dipTubeThreadCode?: string;
+  dipTubeLengthMm?: number;
   pairingId: string | null;
   pairingStatus: PairingStatus | null;
   installedAtStation: boolean;

@@ -14,7 +14,8 @@ export interface CalendarDate {
   day: number;
 }
 
-function daysIn(year: number, month: number): number {
+/** Days in a month (1 to 12) of a year, leap years counted. */
+export function daysIn(year: number, month: number): number {
   const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
   return [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1]!;
 }
@@ -46,3 +47,61 @@ export function isDateOrTimestamp(text: unknown): text is string {
 
 /** The words a form and the API both use when a date is not one. */
 export const DATE_MESSAGE = 'must be a real date, YYYY-MM-DD';
+
+// Day arithmetic for the dock's lot rules. "Today" is the site's local date (the site's time zone in
+// site_settings), passed in by the caller, never read here.
+
+export type IsoDate = string;
+
+const DAY_MS = 86_400_000;
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+/** Days since 1970-01-01 for a valid calendar date; null for anything else (2026-02-30, '2026-2-3'). */
+export function dayNumber(date: string): number | null {
+  const d = parseCalendarDate(date);
+  return d ? Date.UTC(d.year, d.month - 1, d.day) / DAY_MS : null;
+}
+
+export const isIsoDate = (v: unknown): v is IsoDate => typeof v === 'string' && dayNumber(v) !== null;
+
+export function fromDayNumber(n: number): IsoDate {
+  return new Date(n * DAY_MS).toISOString().slice(0, 10);
+}
+
+export function addDays(date: IsoDate, days: number): IsoDate {
+  const n = dayNumber(date);
+  if (n === null) throw new RangeError(`not a calendar date: ${date}`);
+  return fromDayNumber(n + days);
+}
+
+/** Whole days from `from` to `to` (negative when `to` is earlier). */
+export function daysBetween(from: IsoDate, to: IsoDate): number {
+  const a = dayNumber(from);
+  const b = dayNumber(to);
+  if (a === null || b === null) throw new RangeError(`not a calendar date: ${a === null ? from : to}`);
+  return b - a;
+}
+
+/** "12 Nov 2026", the same on every device (no locale tables involved). */
+export function formatDay(date: IsoDate): string {
+  const d = parseCalendarDate(date);
+  return d ? `${d.day} ${MONTHS[d.month - 1]} ${d.year}` : date;
+}
+
+/** The calendar date at `now` in an IANA time zone ('Europe/Berlin', 'UTC'): the site's "today". */
+export function localDate(now: Date, timeZone: string): IsoDate {
+  const parts = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(now);
+  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
+  return `${get('year')}-${get('month')}-${get('day')}`;
+}
+
+/** Whether the runtime knows this IANA time zone name. */
+export function isTimeZone(name: unknown): name is string {
+  if (typeof name !== 'string' || !name.trim()) return false;
+  try {
+    new Intl.DateTimeFormat('en-CA', { timeZone: name });
+    return true;
+  } catch {
+    return false;
+  }
+}

@@ -123,6 +123,7 @@ function FileRow({ a, testID }: { a: AttachmentRecord; testID: string }) {
           {a.fileName}
         </Text>
         <Text style={type.small}>
+          {a.purpose === 'certificate' ? 'Certificate of analysis · ' : ''}
           {typeWord(a.contentType)} · {formatSize(a.sizeBytes)} · added by {a.uploadedByName ?? 'someone'}, {formatWhen(a.createdAt)}
         </Text>
         {error ? (

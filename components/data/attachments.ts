@@ -8,6 +8,8 @@ import { appendFile, upload, type PickedFile } from '../api/upload';
 /** The kinds of record a file can belong to (the server's ATTACHMENT_OWNERS). */
 export type AttachmentOwnerKind = 'drum-type' | 'dip-tube' | 'connector' | 'receiving-check' | 'import';
 
+export type AttachmentPurpose = 'file' | 'certificate';
+
 export interface AttachmentRecord {
   id: string;
   ownerKind: AttachmentOwnerKind;
@@ -16,6 +18,8 @@ export interface AttachmentRecord {
   /** What the server read from the bytes, not what the name says. */
   contentType: string;
   sizeBytes: number;
+  /** 'certificate': the lot's certificate of analysis, which the acceptance rule reads. */
+  purpose: AttachmentPurpose;
   uploadedByName: string | null;
   createdAt: string;
 }
@@ -33,17 +37,19 @@ export function useAttachmentsQuery(ownerKind: AttachmentOwnerKind, ownerId: str
   });
 }
 
-export function useAttachmentUploadMutation(ownerKind: AttachmentOwnerKind, ownerId: string) {
+/** Uploads a file to a record; `onSaved` runs after its list is refreshed (a certificate also changes its lot). */
+export function useAttachmentUploadMutation(ownerKind: AttachmentOwnerKind, ownerId: string, purpose: AttachmentPurpose = 'file', onSaved?: () => Promise<unknown> | void) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ file, onProgress }: { file: PickedFile; onProgress?: (fraction: number) => void }) => {
       const form = new FormData();
       form.append('ownerKind', ownerKind);
       form.append('ownerId', ownerId);
+      if (purpose !== 'file') form.append('purpose', purpose);
       appendFile(form, 'file', file);
       return upload<AttachmentRecord>('/attachments', form, { onProgress });
     },
-    onSuccess: () => qc.invalidateQueries({ queryKey: attachmentKeys.owner(ownerKind, ownerId) }),
+    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: attachmentKeys.owner(ownerKind, ownerId) }), onSaved?.()]),
   });
 }
 

@@ -1,11 +1,15 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { TemperatureIndicator } from '@/shared/acceptance/types';
 import type { FitCheckResult, Page } from '@/shared/api-types';
+import type { LotStatus } from '@/shared/dock/lot-status';
+import type { LotDecision, LotVerdict } from '@/shared/dock/verdict';
 import { api } from '../api/client';
+import { useAttachmentUploadMutation } from './attachments';
 import { notificationKeys } from './notifications';
 import { warningKeys } from './warnings';
 
 export type Verdict = FitCheckResult['verdict'];
-export type LotStatus = 'checked' | 'on-hold' | 'released';
+export type { LotStatus, LotDecision, LotVerdict, TemperatureIndicator };
 
 /** A drum described at the dock instead of picked from the registry. */
 export interface DrumDescription {
@@ -29,13 +33,21 @@ export interface ReceivingCheckRecord {
   drumDescription: DrumDescription | null;
   stationId: string | null;
   stationName: string | null;
+  productionDate: string | null;
+  expiryDate: string | null;
+  temperatureIndicator: TemperatureIndicator | null;
+  /** The hardware verdict alone. */
   verdict: Verdict;
+  /** The combined decision (hardware and lot acceptance) and its sentence; null for checks stored before it. */
+  decision: LotDecision;
+  lotVerdict: LotVerdict | null;
   result: FitCheckResult;
   checkedById: string;
   checkedByName: string | null;
   checkedAt: string;
   status: LotStatus;
   holdReason: string | null;
+  heldByRules: boolean;
   heldByName: string | null;
   heldAt: string | null;
   releasedByName: string | null;
@@ -44,7 +56,7 @@ export interface ReceivingCheckRecord {
 }
 
 /** A row of the history list: the stored result is cut down to its summary. */
-export type ReceivingCheckRow = Omit<ReceivingCheckRecord, 'result'> & { result: { summary: string } };
+export type ReceivingCheckRow = Omit<ReceivingCheckRecord, 'result' | 'lotVerdict'> & { result: { summary: string }; lotVerdict: Pick<LotVerdict, 'decision' | 'sentence'> | null };
 
 /** A piece of hardware that touched the lot: recorded when a set in one of its drums went online. */
 export interface LotChangeOut {
@@ -72,6 +84,9 @@ export interface ReceivingCheckInput {
   drumTypeId?: string;
   drum?: DrumDescription;
   stationId?: string;
+  productionDate?: string;
+  expiryDate?: string;
+  temperatureIndicator?: TemperatureIndicator;
 }
 
 export interface ReceivingListParams {
@@ -145,4 +160,12 @@ export function useReleaseLotMutation() {
       return qc.invalidateQueries({ queryKey: receivingKeys.all });
     },
   });
+}
+
+/** Attaches a lot's certificate of analysis; the server judges the lot again, which may lift its hold. */
+export function useCertificateUploadMutation(checkId: string) {
+  const qc = useQueryClient();
+  return useAttachmentUploadMutation('receiving-check', checkId, 'certificate', () =>
+    Promise.all([qc.invalidateQueries({ queryKey: receivingKeys.all }), qc.invalidateQueries({ queryKey: warningKeys.all })]),
+  );
 }

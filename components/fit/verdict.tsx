@@ -28,6 +28,9 @@ export const RULE_LABELS: Record<string, string> = {
   openings: 'Openings',
   approval: 'Approval',
   rinse: 'Rinse',
+  'shelf-life': 'Shelf life',
+  temperature: 'Temperature indicator',
+  certificate: 'Certificate of analysis',
 };
 
 /** The verdict, large enough to read at arm's length on a phone at the dock. */

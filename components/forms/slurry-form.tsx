@@ -21,6 +21,11 @@ export type SlurryDraft = {
   foams: YesNo | null;
   shearSensitive: YesNo | null;
   solidsWtPct: string;
+  shelfLifeDays: string;
+  minRemainingDays: string;
+  storageMinC: string;
+  storageMaxC: string;
+  certificateRequired: YesNo | null;
 };
 
 const LABELS: Record<string, string> = {
@@ -31,13 +36,20 @@ const LABELS: Record<string, string> = {
   foams: 'Foams',
   shearSensitive: 'Shear-sensitive',
   solidsWtPct: 'Solids',
+  shelfLifeDays: 'Shelf life',
+  minRemainingDays: 'Minimum remaining life',
+  storageMinC: 'Lowest storage temperature',
+  storageMaxC: 'Highest storage temperature',
+  certificateRequired: 'Certificate required',
 };
+
+const optionalNumber = (text: string): number | null => (text.trim() === '' ? null : Number(text.trim().replace(',', '.')));
 
 const yesNo = (b: boolean): YesNo => (b ? 'yes' : 'no');
 
 export const slurrySpec: FormSpec<SlurryRecord, SlurryDraft> = {
   noun: 'slurry',
-  empty: () => ({ name: '', supplierId: null, region: null, drumTypeId: null, foams: null, shearSensitive: null, solidsWtPct: '' }),
+  empty: () => ({ name: '', supplierId: null, region: null, drumTypeId: null, foams: null, shearSensitive: null, solidsWtPct: '', shelfLifeDays: '', minRemainingDays: '', storageMinC: '', storageMaxC: '', certificateRequired: 'no' }),
   fromRecord: (s) => ({
     name: s.name,
     supplierId: { id: s.supplierId, label: s.supplierName ?? 'Supplier' },
@@ -46,6 +58,11 @@ export const slurrySpec: FormSpec<SlurryRecord, SlurryDraft> = {
     foams: yesNo(s.foams),
     shearSensitive: yesNo(s.shearSensitive),
     solidsWtPct: numberText(s.solidsWtPct, 2),
+    shelfLifeDays: numberText(s.shelfLifeDays, 0),
+    minRemainingDays: numberText(s.minRemainingDays, 0),
+    storageMinC: numberText(s.storageMinC, 1),
+    storageMaxC: numberText(s.storageMaxC, 1),
+    certificateRequired: yesNo(s.certificateRequired),
   }),
   check: (d) => {
     const c = new Checks();
@@ -56,6 +73,15 @@ export const slurrySpec: FormSpec<SlurryRecord, SlurryDraft> = {
     c.choice('foams', 'Foams', d.foams);
     c.choice('shearSensitive', 'Shear-sensitive', d.shearSensitive);
     c.number('solidsWtPct', 'Solids', d.solidsWtPct, { min: 0, max: 100, unit: '%' });
+    // Receiving: each optional; the limits are the server's (server/registry/registry.dto.ts).
+    const shelf = d.shelfLifeDays.trim() ? c.number('shelfLifeDays', 'Shelf life', d.shelfLifeDays, { min: 1, max: 3650, unit: 'days' }) : null;
+    const left = d.minRemainingDays.trim() ? c.number('minRemainingDays', 'Minimum remaining life', d.minRemainingDays, { min: 0, max: 3650, unit: 'days' }) : null;
+    if (shelf !== null) c.rule('shelfLifeDays', Number.isInteger(shelf), 'Shelf life must be a whole number of days.');
+    if (left !== null) c.rule('minRemainingDays', Number.isInteger(left) && (shelf === null || left <= shelf), 'Minimum remaining life must be whole days, at most the shelf life.');
+    const lo = d.storageMinC.trim() ? c.number('storageMinC', 'Lowest storage temperature', d.storageMinC, { min: -50, max: 80, unit: '°C' }) : null;
+    const hi = d.storageMaxC.trim() ? c.number('storageMaxC', 'Highest storage temperature', d.storageMaxC, { min: -50, max: 80, unit: '°C' }) : null;
+    if (lo !== null && hi !== null) c.rule('storageMaxC', hi > lo, 'Highest storage temperature must be above the lowest.');
+    c.choice('certificateRequired', 'Certificate required', d.certificateRequired);
     return c.errors;
   },
   toBody: (d) => ({
@@ -66,6 +92,11 @@ export const slurrySpec: FormSpec<SlurryRecord, SlurryDraft> = {
     foams: d.foams === 'yes',
     shearSensitive: d.shearSensitive === 'yes',
     solidsWtPct: Number(d.solidsWtPct.trim().replace(',', '.')),
+    shelfLifeDays: optionalNumber(d.shelfLifeDays),
+    minRemainingDays: optionalNumber(d.minRemainingDays),
+    storageMinC: optionalNumber(d.storageMinC),
+    storageMaxC: optionalNumber(d.storageMaxC),
+    certificateRequired: d.certificateRequired === 'yes',
   }),
   labelOf: (path) => LABELS[path],
   describe: (key, d) => (key === 'region' ? optionLabel(REGION_OPTIONS, d.region) : undefined),
@@ -102,6 +133,13 @@ export function SlurryFormScreen({ id }: { id?: string }) {
         <ChoiceChips label="Foams when stirred" options={YES_NO_OPTIONS} value={draft.foams} onChange={(v) => set('foams', v)} error={field('foams').error} testID="form-foams" />
         <ChoiceChips label="Shear-sensitive" options={YES_NO_OPTIONS} value={draft.shearSensitive} onChange={(v) => set('shearSensitive', v)} error={field('shearSensitive').error} testID="form-shearSensitive" />
         <NumberField label="Solids" hint="Weight percent, 0 to 100." suffix="wt %" value={draft.solidsWtPct} onChangeText={(v) => set('solidsWtPct', v)} testID="form-solidsWtPct" {...field('solidsWtPct')} />
+      </FormSection>
+      <FormSection title="Receiving">
+        <NumberField label="Shelf life" hint="Days from production; leave empty if the label always gives an expiry date." suffix="days" inputMode="numeric" value={draft.shelfLifeDays} onChangeText={(v) => set('shelfLifeDays', v)} testID="form-shelfLifeDays" {...field('shelfLifeDays')} />
+        <NumberField label="Minimum remaining life on arrival" hint="A lot with fewer days left is held at the dock." suffix="days" inputMode="numeric" value={draft.minRemainingDays} onChangeText={(v) => set('minRemainingDays', v)} testID="form-minRemainingDays" {...field('minRemainingDays')} />
+        <NumberField label="Lowest storage temperature" suffix="°C" value={draft.storageMinC} onChangeText={(v) => set('storageMinC', v)} testID="form-storageMinC" {...field('storageMinC')} />
+        <NumberField label="Highest storage temperature" suffix="°C" value={draft.storageMaxC} onChangeText={(v) => set('storageMaxC', v)} testID="form-storageMaxC" {...field('storageMaxC')} />
+        <ChoiceChips label="Certificate of analysis required at the dock" options={YES_NO_OPTIONS} value={draft.certificateRequired} onChange={(v) => set('certificateRequired', v)} error={field('certificateRequired').error} testID="form-certificateRequired" />
       </FormSection>
     </FormFrame>
   );

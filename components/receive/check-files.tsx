@@ -1,7 +1,6 @@
+import { DOCK_ROLES, hasRole } from '@/shared/roles';
 import { AttachmentsPanel } from '../attachments/attachments-panel';
 import { useSession } from '../session';
-
-const DOCK_ROLES = ['clerk', 'engineer', 'admin'];
 
 /** The files kept with a dock check: the dock adds them, everyone reads them. */
 export function CheckFiles({ checkId }: { checkId: string }) {
@@ -10,9 +9,9 @@ export function CheckFiles({ checkId }: { checkId: string }) {
     <AttachmentsPanel
       ownerKind="receiving-check"
       ownerId={checkId}
-      canAdd={DOCK_ROLES.includes(session?.user.role ?? '')}
+      canAdd={hasRole(DOCK_ROLES, session?.user.role)}
       title="Files for this lot"
-      hint="The delivery note, certificates and photos of the drum labels: PDF or photo, up to 10 MB each."
+      hint="The delivery note and photos of the drum labels: PDF or photo, up to 10 MB each. The certificate of analysis goes through Attach the certificate, so the lot rules see it."
     />
   );
 }

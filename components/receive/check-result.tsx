@@ -1,14 +1,17 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { FitCandidateRecord, FitCheckResult } from '@/shared/api-types';
-import { RULE_LABELS, RuleList, VerdictBanner, VerdictChip } from '../fit/verdict';
+import { formatDay, TEMPERATURE_INDICATOR_LABELS } from '@/shared/acceptance';
+import { RULE_LABELS, RuleList, VerdictChip } from '../fit/verdict';
 import type { ReceivingCheckRecord } from '../data/receiving';
 import { useLengthUnit } from '../data/me';
 import { stationQueries } from '../data/stations';
 import { colors, fonts, space, type } from '../theme';
 import { Card } from '../ui/card';
+import { Disclosure } from '../ui/disclosure';
 import { HandlingCaution } from '../ui/handling-caution';
 import { DrumSection } from './drum-section';
+import { LotVerdictBanner } from './lot-verdict';
 import { Fact, FactGrid, formatWhen, SectionTitle } from './parts';
 
 /** What drum the lot came in: the registry's drum type, or what the clerk described at the dock. */
@@ -30,6 +33,9 @@ export function RecordFacts({ record, wide }: { record: ReceivingCheckRecord; wi
       <Fact label="Supplier" value={record.supplierName ?? 'Not recorded'} />
       <Fact label="Slurry" value={record.slurryName ?? 'Not recorded'} />
       <Fact label="Station" value={record.stationName ?? 'None chosen'} />
+      <Fact label="Produced" value={record.productionDate ? formatDay(record.productionDate) : 'Not recorded'} testID="record-production" />
+      <Fact label="Expires" value={record.expiryDate ? formatDay(record.expiryDate) : 'Not on the label'} testID="record-expiry" />
+      <Fact label="Temperature indicator" value={record.temperatureIndicator ? TEMPERATURE_INDICATOR_LABELS[record.temperatureIndicator] : 'Not recorded'} testID="record-indicator" />
       <Fact label="Checked by" value={`${record.checkedByName ?? '—'}, ${formatWhen(record.checkedAt)}`} testID="record-checked" />
     </FactGrid>
   );
@@ -122,6 +128,28 @@ function OtherCandidates({ result }: { result: FitCheckResult }) {
   );
 }
 
+/** The lot acceptance rules, each with its reason (the hardware rules are listed apart). */
+function AcceptanceRules({ record }: { record: ReceivingCheckRecord }) {
+  const acceptance = record.lotVerdict?.acceptance;
+  if (!acceptance) return null;
+  return (
+    <Card testID="check-acceptance">
+      <SectionTitle>The lot: each rule</SectionTitle>
+      <RuleList rules={acceptance.rules} testID="acceptance" />
+      {acceptance.notChecked.length ? (
+        <View style={styles.notChecked}>
+          <Text style={type.label}>Not checked</Text>
+          {acceptance.notChecked.map((n) => (
+            <Text key={n.rule} style={type.small}>
+              • {RULE_LABELS[n.rule] ?? n.rule}: {n.reason.replace(/^not checked: /, '')}
+            </Text>
+          ))}
+        </View>
+      ) : null}
+    </Card>
+  );
+}
+
 interface CheckResultProps {
   record: ReceivingCheckRecord;
   wide: boolean;
@@ -129,15 +157,17 @@ interface CheckResultProps {
   hold?: ReactNode;
   /** Placed after the facts (e.g. a link to the lot page). */
   after?: ReactNode;
-  /** The files kept with the check (delivery notes, label photos). */
+  /** The files kept with the check (delivery notes, label photos, the certificate). */
   files?: ReactNode;
 }
 
-/** A recorded check: the verdict at arm's length, what to use, the drum in section, and every rule's reason. */
+/**
+ * A recorded check: the verdict in one sentence first, what holds the lot and who lifts it, then the details
+ * (what to use, each rule, the drum in section, the record, files), collapsed on a phone.
+ */
 export function CheckResult({ record, wide, hold, after, files }: CheckResultProps) {
   const result = record.result;
   const best = result.candidates[0];
-  const banner = <VerdictBanner verdict={result.verdict} summary={result.summary} testID="verdict" />;
   const recorded = (
     <Card testID="check-record">
       <SectionTitle>Recorded</SectionTitle>
@@ -153,7 +183,7 @@ export function CheckResult({ record, wide, hold, after, files }: CheckResultPro
   );
   const why = best ? (
     <Card>
-      <SectionTitle>Why: each rule for {best.dipTubePartNumber}</SectionTitle>
+      <SectionTitle>The hardware: each rule for {best.dipTubePartNumber}</SectionTitle>
       <RuleList rules={best.rules} testID="rules" />
       <NotChecked candidate={best} />
     </Card>
@@ -167,34 +197,37 @@ export function CheckResult({ record, wide, hold, after, files }: CheckResultPro
   const caution = <HandlingCaution items={result.cautions?.length ? result.cautions : undefined} />;
 
   if (!wide) {
-    // On a phone: what to do first (verdict, hold, what to use, the drawing), then the record and the reasons.
     return (
       <View style={styles.column} testID="check-result">
-        {banner}
+        <LotVerdictBanner record={record} />
         {hold}
-        {use}
-        {drawing}
-        {recorded}
-        {files}
-        {why}
         {caution}
-        <OtherCandidates result={result} />
+        <Disclosure title="Details: each rule, the drum drawing, files" initiallyOpen={false} testID="check-details">
+          {use}
+          <AcceptanceRules record={record} />
+          {why}
+          {drawing}
+          {recorded}
+          {files}
+          <OtherCandidates result={result} />
+        </Disclosure>
       </View>
     );
   }
   return (
     <View style={[styles.wrap, styles.wrapWide]} testID="check-result">
       <View style={[styles.column, styles.half]}>
-        {banner}
+        <LotVerdictBanner record={record} />
         {hold}
-        {recorded}
         {use}
+        <AcceptanceRules record={record} />
         {why}
+        {recorded}
       </View>
       <View style={[styles.column, styles.half]}>
+        {caution}
         {drawing}
         {files}
-        {caution}
         <OtherCandidates result={result} />
       </View>
     </View>

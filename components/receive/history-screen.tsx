@@ -2,6 +2,8 @@ import { Link, useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { isCalendarDate } from '@/shared/dates';
+import { LOT_STATUS_LABELS, LOT_STATUSES } from '@/shared/dock/lot-status';
+import { DOCK_ROLES, hasRole } from '@/shared/roles';
 import { VerdictChip } from '../fit/verdict';
 import { useLengthUnit } from '../data/me';
 import { useReceivingChecksQuery, type LotStatus, type ReceivingCheckRow, type Verdict } from '../data/receiving';
@@ -26,12 +28,7 @@ const VERDICTS = [
   { value: 'caution', label: '! Caution' },
   { value: 'no-fit', label: '✕ No fit' },
 ] as const;
-const STATUSES = [
-  { value: 'all', label: 'All' },
-  { value: 'checked', label: 'Checked' },
-  { value: 'on-hold', label: 'On hold' },
-  { value: 'released', label: 'Released' },
-] as const;
+const STATUSES = [{ value: 'all' as const, label: 'All' }, ...LOT_STATUSES.map((value) => ({ value, label: LOT_STATUS_LABELS[value] }))];
 
 const dateProblem = (text: string): string | null => {
   if (!text.trim()) return null;
@@ -71,7 +68,7 @@ export function HistoryScreen() {
     setTo('');
     setPage(1);
   };
-  const canCheck = session ? ['clerk', 'engineer', 'admin'].includes(session.user.role) : false;
+  const canCheck = hasRole(DOCK_ROLES, session?.user.role);
 
   return (
     <Screen
@@ -163,9 +160,16 @@ function HistoryRow({ row, wide }: { row: ReceivingCheckRow; wide: boolean }) {
             <VerdictChip verdict={row.verdict} />
             <LotStatusChip status={row.status} />
           </View>
-          <Text style={[type.body, wide && styles.cDrum]} numberOfLines={2}>
-            {drum}
-          </Text>
+          <View style={[styles.drum, wide && styles.cDrum]}>
+            {row.lotVerdict ? (
+              <Text style={type.label} numberOfLines={3} testID={`history-row-${row.lotNumber}-sentence`}>
+                {row.lotVerdict.sentence}
+              </Text>
+            ) : null}
+            <Text style={type.small} numberOfLines={2}>
+              {drum}
+            </Text>
+          </View>
           <Text style={[type.small, wide && styles.cWhen]}>
             {formatWhen(row.checkedAt)} · {row.checkedByName ?? '—'}
           </Text>
@@ -189,6 +193,7 @@ const styles = StyleSheet.create({
   header: { backgroundColor: colors.surfaceSunk, borderBottomWidth: 1, borderBottomColor: colors.line },
   phoneHead: { gap: 2 },
   lot: { fontFamily: fonts.bold, fontSize: 18, color: colors.primary, textDecorationLine: 'underline' },
+  drum: { gap: 2 },
   chips: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
   cLot: { flex: 1.3, gap: 2 },
   cVerdict: { flex: 1.3 },

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
+import { DOCK_ROLES, ENGINEER_ROLES, hasRole, rolesInWords } from '@/shared/roles';
 import { ApiError } from '../api/client';
 import { useHoldLotMutation, useReleaseLotMutation, type ReceivingCheckRecord } from '../data/receiving';
 import { useSession } from '../session';
@@ -8,16 +9,14 @@ import { Button } from '../ui/button';
 import { TextField } from '../ui/text-field';
 import { formatWhen, LotStatusChip, SectionTitle } from './parts';
 
-const DOCK_ROLES = ['clerk', 'engineer', 'admin'];
-const RELEASE_ROLES = ['engineer', 'admin'];
-
 /**
- * A lot that does not fit (or fits only with caution) is put on hold with a reason; an engineer releases it.
+ * A held or quarantined lot says why and who may release it; an engineer releases it with a comment. A lot
+ * that fits only with caution may be held by hand with a reason.
  * `prefix` keeps the test ids of the dock (dock-hold…) and of the lot page (lot-hold…) apart.
  */
 export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; prefix: 'dock' | 'lot' }) {
   const { session } = useSession();
-  const role = session?.user.role ?? 'buyer';
+  const role = session?.user.role;
   const hold = useHoldLotMutation();
   const release = useReleaseLotMutation();
   const [reason, setReason] = useState('');
@@ -57,16 +56,19 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
       release.mutate({ id: record.id, comment: note }, options),
     );
 
-  if (record.status === 'on-hold') {
+  if (record.status === 'on-hold' || record.status === 'quarantined') {
+    const quarantined = record.status === 'quarantined';
+    const onlyCertificate = record.lotVerdict?.blockers.filter((b) => b.severity !== 'caution').every((b) => b.source === 'certificate') ?? false;
     return (
       <View style={[styles.box, styles.held]} testID={`${prefix}-hold-status`}>
-        <LotStatusChip status="on-hold" />
-        <Text style={[type.heading, { color: colors.noFit }]}>This lot is on hold: do not tap its drums.</Text>
-        <Text style={type.body}>Reason: {record.holdReason}</Text>
+        <LotStatusChip status={record.status} />
+        <Text style={[type.heading, { color: colors.noFit }]}>{quarantined ? 'This lot is in quarantine: keep its drums apart, unopened.' : 'This lot is on hold: do not tap its drums.'}</Text>
+        {record.heldByRules ? null : <Text style={type.body}>Reason: {record.holdReason}</Text>}
         <Text style={type.small}>
-          Held by {record.heldByName ?? 'someone'} on {formatWhen(record.heldAt)}. Engineers and buyers were told, and a hardware warning lists what to order.
+          {record.heldByRules ? 'Held by the rules when recorded' : `Held by ${record.heldByName ?? 'someone'}`} on {formatWhen(record.heldAt)}. Engineers and buyers were told, and a warning was opened.
         </Text>
-        {RELEASE_ROLES.includes(role) ? (
+        {record.heldByRules && onlyCertificate ? <Text style={type.body}>Attaching the certificate of analysis lifts this hold.</Text> : null}
+        {hasRole(ENGINEER_ROLES, role) ? (
           <View style={styles.form}>
             <TextField
               label="Release comment"
@@ -79,8 +81,9 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
             />
             <Button label="Release the lot" variant="secondary" busy={release.isPending} onPress={onRelease} testID={`${prefix}-release`} />
           </View>
-        ) : (
-          <Text style={type.small}>An engineer releases a held lot.</Text>
+        ) : record.heldByRules ? null : (
+          // A hold by the rules says who lifts it beside each reason (components/receive/lot-verdict.tsx).
+          <Text style={type.small}>Released by an {rolesInWords(ENGINEER_ROLES).toLowerCase()}, with a comment.</Text>
         )}
         {formError ? (
           <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
@@ -96,24 +99,23 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
       <View style={styles.box} testID={`${prefix}-hold-status`}>
         <LotStatusChip status="released" />
         <Text style={type.body}>
-          Held ({record.holdReason}), then released by {record.releasedByName ?? 'an engineer'} on {formatWhen(record.releasedAt)}: {record.releaseComment}
+          Held: {record.holdReason} Released by {record.releasedByName ?? 'an engineer'} on {formatWhen(record.releasedAt)}: {record.releaseComment}
         </Text>
       </View>
     );
   }
 
-  if (record.verdict === 'fits' || !DOCK_ROLES.includes(role)) return null;
+  if (record.decision !== 'caution' || !hasRole(DOCK_ROLES, role)) return null;
 
   return (
     <View style={[styles.box, styles.holdAsk]} testID={`${prefix}-hold-panel`}>
       <SectionTitle>Put this lot on hold</SectionTitle>
       <Text style={type.body}>
-        {record.verdict === 'no-fit' ? 'No hardware at this site fits these drums.' : 'These drums fit only with caution.'} Holding the lot keeps it off the stations, tells engineers and
-        buyers, and opens a hardware warning.
+        This lot is accepted only with caution. Holding it keeps it off the stations, tells engineers and buyers, and opens a warning.
       </Text>
       <TextField
         label="Reason for the hold"
-        placeholder="e.g. no dip tube reaches the bottom of this drum"
+        placeholder="e.g. the return port is too small for this flow"
         value={reason}
         onChangeText={setReason}
         error={reasonError}

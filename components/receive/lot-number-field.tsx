@@ -11,7 +11,7 @@ interface LotNumberFieldProps {
   onChangeText: (text: string) => void;
   /** The label last scanned for this lot (null: typed by hand, or changed since). */
   label: DrumLabel | null;
-  /** Every scan, and null when the typed lot number no longer matches the scanned batch. */
+  /** Every scan (its batch becomes the lot number), and null when the typed lot number no longer matches the scanned batch. */
   onLabel: (label: DrumLabel | null) => void;
   error?: string | null;
   testID: string;
@@ -44,10 +44,7 @@ export const LotNumberField = forwardRef<TextInput, LotNumberFieldProps>(functio
         </View>
         <ScanLabelButton
           testID={`${testID}-scan`}
-          onScanned={(scanned) => {
-            onLabel(scanned);
-            if (scanned.batch) onChangeText(scanned.batch);
-          }}
+          onScanned={onLabel}
           onCancel={() => setTimeout(() => input.current?.focus(), 0)}
         />
       </View>

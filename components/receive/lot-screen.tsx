@@ -5,6 +5,7 @@ import { colors, fonts, space, type } from '../theme';
 import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
+import { CertificateButton, needsCertificate, useRole } from './certificate-button';
 import { CheckFiles } from './check-files';
 import { CheckResult } from './check-result';
 import { HoldPanel } from './hold-panel';
@@ -14,6 +15,7 @@ import { formatWhen, LinkButton, SectionTitle, TextLink } from './parts';
 export function LotScreen({ id }: { id: string }) {
   const wide = useIsWide();
   const lot = useReceivingCheckQuery(id);
+  const role = useRole();
   const actions = <LinkButton href="/receive/history" label="All checks" testID="lot-history-link" />;
 
   if (lot.isPending) {
@@ -37,6 +39,7 @@ export function LotScreen({ id }: { id: string }) {
       subtitle={`${r.drumCount} drum${r.drumCount === 1 ? '' : 's'}, checked by ${r.checkedByName ?? '—'} on ${formatWhen(r.checkedAt)}`}
       actions={actions}
       testID="lot-screen"
+      footer={needsCertificate(r, role) ? <CertificateButton record={r} /> : undefined}
     >
       <CheckResult record={r} wide={wide} hold={<HoldPanel record={r} prefix="lot" />} files={<CheckFiles checkId={r.id} />} />
       <Card testID="lot-history">

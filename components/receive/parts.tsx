@@ -71,6 +71,7 @@ export function FactGrid({ children, wide }: { children: ReactNode; wide: boolea
 const STATUS_LOOK: Record<LotStatus, { word: string; mark: string; fg: string; bg: string }> = {
   checked: { word: 'Checked', mark: '•', fg: colors.inkMuted, bg: colors.surfaceSunk },
   'on-hold': { word: 'ON HOLD', mark: '‖', fg: colors.noFit, bg: colors.noFitSoft },
+  quarantined: { word: 'QUARANTINED', mark: '⊘', fg: colors.noFit, bg: colors.noFitSoft },
   released: { word: 'Released', mark: '↗', fg: colors.fits, bg: colors.fitsSoft },
 };
 
@@ -112,7 +113,7 @@ const styles = StyleSheet.create({
   linkPrimary: { backgroundColor: colors.primary },
   linkSecondary: { backgroundColor: colors.surface, borderColor: colors.primary },
   linkButtonText: { fontFamily: fonts.semibold, fontSize: 16, textAlign: 'center' },
-  textLink: { fontFamily: fonts.semibold, fontSize: 16, color: colors.primary, textDecorationLine: 'underline', minHeight: 24 },
+  textLink: { fontFamily: fonts.semibold, fontSize: 16, color: colors.primary, textDecorationLine: 'underline', minHeight: minTouch, display: 'flex' as never, alignItems: 'center' },
   fact: { gap: 2, minWidth: 140, flexShrink: 1 },
   factValue: { fontFamily: fonts.semibold },
   facts: { gap: space.md },

@@ -29,6 +29,10 @@ export function SlurryDetailScreen({ id }: { id: string }) {
                   { label: 'Solids', value: `${s.solidsWtPct} wt%` },
                   { label: 'Foams when stirred', value: s.foams ? 'Yes: recirculate by pump, not by a mechanical stirrer' : 'No' },
                   { label: 'Shear-sensitive', value: s.shearSensitive ? 'Yes: keep return velocities low' : 'No' },
+                  { label: 'Shelf life', value: s.shelfLifeDays !== null ? `${s.shelfLifeDays} days from production` : 'Not registered' },
+                  { label: 'Minimum life on arrival', value: s.minRemainingDays !== null ? `${s.minRemainingDays} days` : 'Not registered' },
+                  { label: 'Storage', value: s.storageMinC !== null && s.storageMaxC !== null ? `${s.storageMinC} to ${s.storageMaxC} °C` : 'Not registered' },
+                  { label: 'Certificate of analysis', value: s.certificateRequired ? 'Required at the dock: a lot without it is held' : 'Not required' },
                 ]}
               />
             </Section>

@@ -1,4 +1,5 @@
 import { useState, type ReactNode } from 'react';
+import { DOCK_ROLES, hasRole } from '@/shared/roles';
 import { StyleSheet, Text, View } from 'react-native';
 import { ApiError } from '../api/client';
 import {
@@ -23,7 +24,6 @@ import { useIsWide } from '../use-layout';
 import { SetStateChip } from './set-state';
 import { StandbyPanel } from './standby-panel';
 
-const FLOOR_ROLES = ['clerk', 'engineer', 'admin'];
 
 interface Message {
   tone: 'done' | 'refused';
@@ -59,7 +59,7 @@ export function StationBoardScreen({ id }: { id: string }) {
 
 function Board({ board, wide, actions }: { board: StationBoard; wide: boolean; actions: ReactNode }) {
   const { session } = useSession();
-  const canAct = session ? FLOOR_ROLES.includes(session.user.role) : false;
+  const canAct = hasRole(DOCK_ROLES, session?.user.role);
   const rinse = useRinseMutation();
   const standby = useStandbyMutation();
   const changeOut = useChangeOutMutation();

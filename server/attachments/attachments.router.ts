@@ -4,6 +4,7 @@ import type { DataSource } from 'typeorm';
 import { secured } from '../auth/policy';
 import { parseId } from '../registry/resource';
 import { attachmentDisposition, type Storage } from '../storage/storage';
+import { ReceivingService } from '../receiving/receiving.service';
 import { AttachmentsService } from './attachments.service';
 import { MAX_ATTACHMENT_BYTES } from './file-kind';
 import { singleFileUpload } from '../common/uploads';
@@ -12,14 +13,18 @@ import { refuseQuery } from '../common/validate';
 const LINK_SECONDS = 120;
 
 /** Files kept with records: the service checks the owner's policy, the store and the type. */
-export function attachmentsRouter(ds: DataSource, storage: Storage | null): Router {
+export function attachmentsRouter(ds: DataSource, storage: Storage | null, clock?: () => Date): Router {
   const service = new AttachmentsService(ds, storage);
   const router = Router();
+  const receiving = new ReceivingService(ds, clock);
   const r = secured(router);
   const upload = singleFileUpload({ fileSize: MAX_ATTACHMENT_BYTES, files: 1, fields: 10 });
 
   r.post('/attachments', upload, async (req, res) => {
-    res.status(201).json(await service.upload(req.user!, req.body, req.file));
+    // A lot's certificate is read by the acceptance rule: the lot is judged again, in the same transaction as
+    // the file's row, which may lift its hold.
+    const saved = await service.upload(req.user!, req.body, req.file, (tx, a) => (a.purpose === 'certificate' ? receiving.certificateAdded(tx, a.ownerId, req.user!.id) : Promise.resolve()));
+    res.status(201).json(saved);
   });
 
   r.get('/attachments', async (req, res) => {

@@ -4,7 +4,7 @@ import type { DataSource, EntityManager, EntityTarget, ObjectLiteral } from 'typ
 import type { Role } from '../../shared/roles';
 import { POLICY, type Access } from '../auth/policy';
 import { fieldError, forbidden, HttpError, notFound } from '../common/errors';
-import { Attachment, ATTACHMENT_OWNERS, Connector, fitFileName, DipTube, DrumType, ImportRecord, ReceivingCheck, type AttachmentOwner } from '../entities';
+import { Attachment, ATTACHMENT_OWNERS, ATTACHMENT_PURPOSES, Connector, fitFileName, DipTube, DrumType, ImportRecord, ReceivingCheck, type AttachmentOwner, type AttachmentPurpose } from '../entities';
 import { parseId } from '../registry/resource';
 import { storageNotConfigured, type Storage } from '../storage/storage';
 import { ATTACHMENT_TYPES, sniffType } from './file-kind';
@@ -34,6 +34,7 @@ export const attachmentJson = (a: Attachment) => ({
   fileName: a.fileName,
   contentType: a.contentType,
   sizeBytes: a.sizeBytes,
+  purpose: a.purpose,
   uploadedByName: a.uploadedBy?.displayName ?? null,
   createdAt: a.createdAt,
 });
@@ -43,6 +44,17 @@ function ownerKindOf(value: unknown, field = 'ownerKind'): AttachmentOwner {
   return value as AttachmentOwner;
 }
 
+/** 'certificate' marks a dock check's certificate of analysis; anything else is a plain file. */
+function purposeOf(value: unknown, ownerKind: AttachmentOwner): AttachmentPurpose {
+  if (value === undefined || value === '') return 'file';
+  if (typeof value !== 'string' || !(ATTACHMENT_PURPOSES as readonly string[]).includes(value)) throw fieldError('purpose', `must be one of ${ATTACHMENT_PURPOSES.join(', ')}`);
+  if (value === 'certificate' && ownerKind !== 'receiving-check') throw fieldError('purpose', 'a certificate of analysis belongs to a receiving check');
+  return value as AttachmentPurpose;
+}
+
+/** What else an upload writes in its transaction (a certificate makes its lot be judged again). */
+export type AfterUpload = (tx: EntityManager, attachment: Attachment) => Promise<void>;
+
 export interface NewFile {
   ownerKind: AttachmentOwner;
   ownerId: string;
@@ -50,6 +62,7 @@ export interface NewFile {
   contentType: string;
   bytes: Buffer;
   userId: string;
+  purpose?: AttachmentPurpose;
 }
 /** A file whose bytes are in the store and whose row is not yet written. */
 export interface PendingFile extends NewFile {
@@ -90,7 +103,7 @@ export class AttachmentsService {
 
   /** Step 2: its row, inside the caller's transaction, so it exists exactly when the caller's work commits. */
   record(tx: EntityManager, file: PendingFile): Promise<Attachment> {
-    return tx.save(tx.create(Attachment, { ownerKind: file.ownerKind, ownerId: file.ownerId, fileName: fitFileName(file.fileName), contentType: file.contentType, sizeBytes: file.bytes.length, storageKey: file.key, uploadedById: file.userId }));
+    return tx.save(tx.create(Attachment, { ownerKind: file.ownerKind, ownerId: file.ownerId, fileName: fitFileName(file.fileName), contentType: file.contentType, sizeBytes: file.bytes.length, storageKey: file.key, uploadedById: file.userId, purpose: file.purpose ?? 'file' }));
   }
 
   /** When the transaction failed: the object goes too. If this fails as well, `sweep` removes it later. */
@@ -116,11 +129,12 @@ export class AttachmentsService {
   }
 
   /** POST /api/attachments: a PDF or a photo for a record the person may change. */
-  async upload(user: { id: string; role: Role }, body: Record<string, unknown> | undefined, file: Express.Multer.File | undefined) {
+  async upload(user: { id: string; role: Role }, body: Record<string, unknown> | undefined, file: Express.Multer.File | undefined, after?: AfterUpload) {
     this.store(); // without a store, 503 before anything else
     const ownerKind = ownerKindOf(body?.ownerKind);
     const ownerId = parseId(body?.ownerId);
     this.assertMay(user.role, ownerKind, 'write');
+    const purpose = purposeOf(body?.purpose, ownerKind);
     const owner = OWNERS.get(ownerKind)!;
     if (!(await this.ds.getRepository(owner.entity).existsBy({ id: ownerId }))) throw fieldError('ownerId', `does not name an existing ${owner.label}`);
     if (!file) throw fieldError('file', 'is required: a PDF or a photo');
@@ -128,7 +142,10 @@ export class AttachmentsService {
     if (!type || !ATTACHMENT_TYPES.has(type)) {
       throw new HttpError(415, 'unsupported_type', `The file's content is ${type ?? 'not a recognised format'}; attach a PDF or a JPEG, PNG, WebP or HEIC photo.`, [{ field: 'file', messages: ['must be a PDF or a photo'] }]);
     }
-    const saved = await this.keepWith({ ownerKind, ownerId, fileName: file.originalname || 'upload', contentType: type, bytes: file.buffer, userId: user.id }, async (_tx, a) => a);
+    const saved = await this.keepWith({ ownerKind, ownerId, fileName: file.originalname || 'upload', contentType: type, bytes: file.buffer, userId: user.id, purpose }, async (tx, a) => {
+      await after?.(tx, a);
+      return a;
+    });
     return attachmentJson(saved);
   }
 

@@ -1,15 +1,15 @@
 import type { RequestHandler, Router } from 'express';
-import type { Role } from '../../shared/roles';
+import { ADMIN_ROLES, DOCK_ROLES, ENGINEER_ROLES, PLANNER_ROLES, type Role } from '../../shared/roles';
 import { requireRole } from './guards';
 
 /** public: no token; signed-in: any active user; a list: only those roles. */
 export type Access = 'public' | 'signed-in' | readonly Role[];
 
 const EVERYONE = 'signed-in' as const;
-const ENGINEERS: readonly Role[] = ['engineer', 'admin'];
-const DOCK: readonly Role[] = ['clerk', 'engineer', 'admin'];
-const PLANNERS: readonly Role[] = ['buyer', 'engineer', 'admin'];
-const ADMINS: readonly Role[] = ['admin'];
+const ENGINEERS = ENGINEER_ROLES;
+const DOCK = DOCK_ROLES;
+const PLANNERS = PLANNER_ROLES;
+const ADMINS = ADMIN_ROLES;
 
 /** Registry tables: everyone signed in reads; engineers and admins write. */
 const REGISTRY = ['suppliers', 'thread-specs', 'key-codes', 'drum-types', 'dip-tubes', 'connectors', 'pairings', 'slurries', 'stations', 'tube-sets'];

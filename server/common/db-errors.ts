@@ -16,6 +16,8 @@ const CONSTRAINT_FIELDS = new Map<string, string>(Object.entries({
   pairings_pair_key: 'connectorId',
   pairings_four_eyes: 'approver',
   slurries_name_key: 'name',
+  slurries_remaining_within_life: 'minRemainingDays',
+  slurries_storage_range: 'storageMaxC',
   stations_name_key: 'name',
   tube_sets_label_key: 'label',
   site_settings_clearance_window: 'tipClearanceMaxMm',

@@ -5,6 +5,9 @@ import { User } from './user';
 
 export const ATTACHMENT_OWNERS = ['drum-type', 'dip-tube', 'connector', 'receiving-check', 'import'] as const;
 export type AttachmentOwner = (typeof ATTACHMENT_OWNERS)[number];
+/** A file is a plain file, or the certificate of analysis of the lot it belongs to (the acceptance rule reads it). */
+export const ATTACHMENT_PURPOSES = ['file', 'certificate'] as const;
+export type AttachmentPurpose = (typeof ATTACHMENT_PURPOSES)[number];
 
 /** File names are kept up to 255 characters, cut by code point so a name never ends in half a UTF-16 pair. */
 export const FILE_NAME_LENGTH = 255;
@@ -18,6 +21,7 @@ export class Attachment extends Base {
   @Text('content_type', 100) contentType: string;
   @Column({ name: 'size_bytes', type: 'integer' }) sizeBytes: number;
   @Text('storage_key', 300) storageKey: string;
+  @Text('purpose', 12, { default: 'file' }) purpose: AttachmentPurpose;
   @Uuid('uploaded_by_id') uploadedById: string;
   @ManyToOne(() => User) @JoinColumn({ name: 'uploaded_by_id' }) uploadedBy?: User;
 }

@@ -1,5 +1,8 @@
 import { Column, Entity, JoinColumn, ManyToOne } from 'typeorm';
 import { LOT_NUMBER_MAX_LENGTH } from '../../shared/lot-number';
+import type { TemperatureIndicator } from '../../shared/acceptance/types';
+import type { LotStatus } from '../../shared/dock/lot-status';
+import type { LotDecision, LotVerdict } from '../../shared/dock/verdict';
 import { Base } from './base';
 import { NullableText, NullableUuid, Text, Uuid } from './columns';
 import { Connector, DipTube, DrumType, Slurry, Station, Supplier, TubeSet } from './registry';
@@ -24,7 +27,15 @@ export class ReceivingCheck extends Base {
   @Column({ name: 'result', type: 'jsonb' }) result: Record<string, unknown>;
   @Uuid('checked_by_id') checkedById: string;
   @ManyToOne(() => User) @JoinColumn({ name: 'checked_by_id' }) checkedBy?: User;
-  @Text('status', 10, { default: 'checked' }) status: 'checked' | 'on-hold' | 'released';
+  @Column({ name: 'production_date', type: 'date', nullable: true }) productionDate: string | null;
+  @Column({ name: 'expiry_date', type: 'date', nullable: true }) expiryDate: string | null;
+  @NullableText('temperature_indicator', 12) temperatureIndicator: TemperatureIndicator | null;
+  /** The combined decision (hardware and lot acceptance) and what it was made of. */
+  @Text('decision', 10, { default: 'accept' }) decision: LotDecision;
+  @Column({ name: 'acceptance', type: 'jsonb', nullable: true }) acceptance: LotVerdict | null;
+  /** The hold came from the rules (not typed by a person): a certificate attached later may lift it. */
+  @Column({ name: 'held_by_rules', type: 'boolean', default: false }) heldByRules: boolean;
+  @Text('status', 12, { default: 'checked' }) status: LotStatus;
   @NullableText('hold_reason', 2000) holdReason: string | null;
   @NullableUuid('held_by_id') heldById: string | null;
   @ManyToOne(() => User) @JoinColumn({ name: 'held_by_id' }) heldBy?: User | null;

@@ -139,6 +139,12 @@ export class Slurry extends Base {
   @Bool('foams') foams: boolean;
   @Bool('shear_sensitive') shearSensitive: boolean;
   @Float('solids_wt_pct') solidsWtPct: number;
+  // What the dock checks on arrival (shared/acceptance); null when not registered.
+  @Column({ name: 'shelf_life_days', type: 'integer', nullable: true }) shelfLifeDays: number | null;
+  @Column({ name: 'min_remaining_days', type: 'integer', nullable: true }) minRemainingDays: number | null;
+  @Column({ name: 'storage_min_c', type: 'real', nullable: true }) storageMinC: number | null;
+  @Column({ name: 'storage_max_c', type: 'real', nullable: true }) storageMaxC: number | null;
+  @Column({ name: 'certificate_required', type: 'boolean', default: false }) certificateRequired: boolean;
 }
 
 @Entity({ name: 'stations' })

@@ -13,4 +13,6 @@ export class SiteSettings extends Base {
   @Float('thread_match_tolerance_mm', { default: 0.6 }) threadMatchToleranceMm: number;
   @Float('laminar_limit', { default: 2300 }) laminarLimit: number;
   @Float('max_return_velocity_ratio', { default: 4 }) maxReturnVelocityRatio: number;
+  /** IANA zone of the site: its calendar date is the "today" lot expiry is judged on. */
+  @Column({ name: 'time_zone', type: 'varchar', length: 64, default: 'UTC' }) timeZone: string;
 }

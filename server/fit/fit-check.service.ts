@@ -25,6 +25,8 @@ export interface FitCandidate extends CandidateEvaluation {
   dipTubePartNumber: string;
   connectorId: string;
   connectorPartNumber: string;
+  dipTubeThreadCode: string;
+  dipTubeLengthMm: number;
   pairingId: string | null;
   pairingStatus: Pairing['status'] | null;
   installedAtStation: boolean;
@@ -220,6 +222,8 @@ export class FitCheckService {
       dipTubePartNumber: p.tube_part,
       connectorId: p.connector_id,
       connectorPartNumber: p.head_part,
+      dipTubeThreadCode: p.thread_code,
+      dipTubeLengthMm: p.length_mm,
       pairingId: p.pairing_id,
       pairingStatus: p.status,
       installedAtStation: !!stationRow && stationRow.connectorId === p.connector_id,

@@ -2,6 +2,8 @@ import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
 import { LOT_NUMBER_MAX_LENGTH, LOT_NUMBER_MESSAGES, LOT_NUMBER_PATTERN } from '../../shared/lot-number';
 import { IsCalendarDate, Optional, PageParam, PageSizeParam } from '../common/fields';
+import { TEMPERATURE_INDICATORS } from '../../shared/acceptance/types';
+import { LOT_STATUSES } from '../../shared/dock/lot-status';
 import { AdHocDrumDto } from '../fit/fit-check.dto';
 
 export class ReceivingCheckDto {
@@ -15,6 +17,10 @@ export class ReceivingCheckDto {
   @Optional() @IsUUID('all', { message: 'must be an id' }) drumTypeId?: string;
   @Optional() @ValidateNested() @Type(() => AdHocDrumDto) drum?: AdHocDrumDto;
   @Optional() @IsUUID('all', { message: 'must be an id' }) stationId?: string;
+  // The lot as its label says; the service also refuses dates that cannot be meant (shared/acceptance).
+  @Optional() @IsCalendarDate() productionDate?: string;
+  @Optional() @IsCalendarDate() expiryDate?: string;
+  @Optional() @IsIn(TEMPERATURE_INDICATORS, { message: `must be one of ${TEMPERATURE_INDICATORS.join(', ')}` }) temperatureIndicator?: (typeof TEMPERATURE_INDICATORS)[number];
 }
 
 export class HoldDto {
@@ -28,7 +34,7 @@ export class ReleaseDto {
 export class ReceivingListDto {
   @IsOptional() @IsString({ message: 'must be given once, as text' }) @MaxLength(60) q?: string;
   @IsOptional() @IsIn(['fits', 'caution', 'no-fit'], { message: 'must be fits, caution or no-fit' }) verdict?: string;
-  @IsOptional() @IsIn(['checked', 'on-hold', 'released'], { message: 'must be checked, on-hold or released' }) status?: string;
+  @IsOptional() @IsIn(LOT_STATUSES, { message: `must be one of ${LOT_STATUSES.join(', ')}` }) status?: string;
   @IsOptional() @IsCalendarDate() from?: string;
   @IsOptional() @IsCalendarDate() to?: string;
   @PageParam page?: number;

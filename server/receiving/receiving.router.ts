@@ -6,8 +6,8 @@ import { parseId } from '../registry/resource';
 import { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
 import { ReceivingService } from './receiving.service';
 
-export function receivingRouter(ds: DataSource): Router {
-  const service = new ReceivingService(ds);
+export function receivingRouter(ds: DataSource, clock?: () => Date): Router {
+  const service = new ReceivingService(ds, clock);
   const router = Router();
   const r = secured(router);
   r.get('/receiving-checks', async (req, res) => {
@@ -22,7 +22,7 @@ export function receivingRouter(ds: DataSource): Router {
   r.post('/receiving-checks/:id/hold', body(HoldDto), async (req, res) => {
     res.json(await service.hold(parseId(req.params.id), req.body as HoldDto, req.user!.id));
   });
-  // Releasing a held lot is an engineering decision.
+  // Releasing a held or quarantined lot is an engineering decision.
   r.post('/receiving-checks/:id/release', body(ReleaseDto), async (req, res) => {
     res.json(await service.release(parseId(req.params.id), req.body as ReleaseDto, req.user!.id));
   });

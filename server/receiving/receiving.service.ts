@@ -1,11 +1,14 @@
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
+import { lotDateProblems } from '../../shared/acceptance/rules';
+import { HELD_STATUSES } from '../../shared/dock/lot-status';
+import { holdReasonOf, type FitForVerdict, type LotVerdict } from '../../shared/dock/verdict';
 import { conflict, fieldError, notFound, ValidationFailed } from '../common/errors';
-import { ChangeOut, DrumType, HardwareWarning, ReceivingCheck, Slurry, Station, Supplier } from '../entities';
+import { ChangeOut, HardwareWarning, ReceivingCheck, Slurry, Station, Supplier } from '../entities';
 import { FitCheckService } from '../fit/fit-check.service';
-import { notifyRoles } from '../notifications/notifications.service';
 import { ensureExists } from '../registry/refs';
-import { needsForStation, orderLines, totalOrder, type StationNeed } from '../sourcing/hardware-needs';
 import { audit } from '../audit/audit';
+import { raiseHoldNotices } from './hold-effects';
+import { certificateAttached, decide, siteToday } from './lot-decision';
 import type { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
 
 const RELATIONS = { supplier: true, slurry: true, drumType: true, station: true, checkedBy: true, heldBy: true, releasedBy: true } as const;
@@ -25,13 +28,19 @@ export const receivingJson = (r: ReceivingCheck) => ({
   drumDescription: r.drumDescription,
   stationId: r.stationId,
   stationName: r.station?.name ?? null,
+  productionDate: r.productionDate,
+  expiryDate: r.expiryDate,
+  temperatureIndicator: r.temperatureIndicator,
   verdict: r.verdict,
+  decision: r.decision,
+  lotVerdict: r.acceptance,
   result: r.result,
   checkedById: r.checkedById,
   checkedByName: r.checkedBy?.displayName ?? null,
   checkedAt: r.createdAt,
   status: r.status,
   holdReason: r.holdReason,
+  heldByRules: r.heldByRules,
   heldByName: r.heldBy?.displayName ?? null,
   heldAt: r.heldAt,
   releasedByName: r.releasedBy?.displayName ?? null,
@@ -39,11 +48,20 @@ export const receivingJson = (r: ReceivingCheck) => ({
   releaseComment: r.releaseComment,
 });
 
-/** The dock: a lot's drums checked against the site's hardware, recorded, and held when they do not fit. */
+const HELD_AS = { hold: 'on-hold', quarantine: 'quarantined' } as const;
+
+/**
+ * The dock: a lot's drums checked against the site's hardware and the lot against its slurry's acceptance
+ * rules, in one verdict. A lot the verdict holds or quarantines is recorded so at once, with the rules'
+ * reasons and the same warning and notices a hold by hand raises.
+ */
 export class ReceivingService {
   private readonly fit: FitCheckService;
 
-  constructor(private readonly ds: DataSource) {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly clock: () => Date = () => new Date(),
+  ) {
     this.fit = new FitCheckService(ds);
   }
 
@@ -52,27 +70,45 @@ export class ReceivingService {
       throw new ValidationFailed([{ field: dto.drumTypeId ? 'drum' : 'drumTypeId', messages: ['pick a drum type or describe the drum, not both'] }]);
     }
     const m = this.ds.manager;
+    const today = await siteToday(m, this.clock());
+    const dates = { productionDate: dto.productionDate ?? null, expiryDate: dto.expiryDate ?? null };
+    const problems = lotDateProblems({ today, ...dates });
+    if (Object.keys(problems).length) throw new ValidationFailed(Object.entries(problems).map(([field, message]) => ({ field, messages: [message] })));
     if (dto.supplierId) await ensureExists(m, Supplier, dto.supplierId, 'supplierId', 'supplier');
     if (dto.stationId) await ensureExists(m, Station, dto.stationId, 'stationId', 'station');
     if (dto.slurryId) await ensureExists(m, Slurry, dto.slurryId, 'slurryId', 'slurry');
     // The same authoritative check the API offers, run with what the clerk entered.
     const result = await this.fit.check({ drumTypeId: dto.drumTypeId, drum: dto.drum, slurryId: dto.slurryId, stationId: dto.stationId });
-    const saved = await m.save(
-      m.create(ReceivingCheck, {
-        lotNumber: dto.lotNumber.trim(),
-        supplierId: dto.supplierId ?? null,
-        slurryId: dto.slurryId ?? null,
-        drumCount: dto.drumCount,
-        drumTypeId: dto.drumTypeId ?? null,
-        drumDescription: dto.drum ? { ...dto.drum } : null,
-        stationId: dto.stationId ?? null,
-        verdict: result.verdict,
-        result: result as unknown as Record<string, unknown>,
-        checkedById: userId,
-        status: 'checked',
-      }),
-    );
-    return this.detail(saved.id);
+    const id = await this.ds.transaction(async (tx) => {
+      const verdict = await decide(tx, { fit: result as FitForVerdict, slurryId: dto.slurryId ?? null, today, ...dates, temperatureIndicator: dto.temperatureIndicator ?? null, certificateAttached: false });
+      const held = verdict.decision === 'hold' || verdict.decision === 'quarantine';
+      const saved = await tx.save(
+        tx.create(ReceivingCheck, {
+          lotNumber: dto.lotNumber.trim(),
+          supplierId: dto.supplierId ?? null,
+          slurryId: dto.slurryId ?? null,
+          drumCount: dto.drumCount,
+          drumTypeId: dto.drumTypeId ?? null,
+          drumDescription: dto.drum ? { ...dto.drum } : null,
+          stationId: dto.stationId ?? null,
+          ...dates,
+          temperatureIndicator: dto.temperatureIndicator ?? null,
+          verdict: result.verdict,
+          result: result as unknown as Record<string, unknown>,
+          decision: verdict.decision,
+          acceptance: verdict,
+          checkedById: userId,
+          status: held ? HELD_AS[verdict.decision as 'hold' | 'quarantine'] : 'checked',
+          ...(held ? { holdReason: holdReasonOf(verdict).slice(0, 2000), heldById: userId, heldAt: this.clock(), heldByRules: true } : {}),
+        }),
+      );
+      if (held) {
+        await audit(tx, { userId, action: 'hold', entity: 'receiving-checks', entityId: saved.id, summary: `Lot ${saved.lotNumber} ${saved.status} by the rules: ${verdict.sentence}`, after: { status: saved.status, holdReason: saved.holdReason } });
+        await raiseHoldNotices(tx, this.fit, saved, verdict.sentence, userId);
+      }
+      return saved.id;
+    });
+    return this.detail(id);
   }
 
   async list(q: ReceivingListDto) {
@@ -93,8 +129,13 @@ export class ReceivingService {
     if (q.to) qb.andWhere("r.created_at < (:to::date + interval '1 day')", { to: q.to });
     qb.orderBy('r.createdAt', 'DESC').skip((page - 1) * pageSize).take(pageSize);
     const [rows, total] = await qb.getManyAndCount();
-    // The stored result is large; the history list needs only the verdict and summary.
-    return { items: rows.map((r) => ({ ...receivingJson(r), result: { summary: (r.result as { summary?: string }).summary ?? '' } })), total, page, pageSize };
+    // The stored result is large; the history list needs only the verdict, the summary and the sentence.
+    return {
+      items: rows.map((r) => ({ ...receivingJson(r), lotVerdict: r.acceptance ? { decision: r.acceptance.decision, sentence: r.acceptance.sentence } : null, result: { summary: (r.result as { summary?: string }).summary ?? '' } })),
+      total,
+      page,
+      pageSize,
+    };
   }
 
   async detail(id: string) {
@@ -123,72 +164,72 @@ export class ReceivingService {
     };
   }
 
-  /** Holding a lot tells engineers and buyers, and raises a hardware warning listing what to order. */
+  /** A hold by hand: for a lot the verdict did not hold but that fits only with caution, with a typed reason. */
   async hold(id: string, dto: HoldDto, userId: string) {
     await this.ds.transaction(async (m) => {
       const r = await m.findOne(ReceivingCheck, { where: { id }, lock: { mode: 'pessimistic_write' } });
       if (!r) throw notFound('Receiving check');
-      const drumType = r.drumTypeId ? await m.findOneBy(DrumType, { id: r.drumTypeId }) : null;
-      const slurryRow = r.slurryId ? await m.findOneBy(Slurry, { id: r.slurryId }) : null;
-      if (r.verdict === 'fits') throw fieldError('reason', 'a lot that fits is not held here; record the reason with the lot instead');
-      if (r.status === 'on-hold') throw conflict('This lot is already on hold.');
+      if (HELD_STATUSES.includes(r.status)) throw conflict(`This lot is already ${r.status === 'quarantined' ? 'in quarantine' : 'on hold'}.`);
+      if (r.decision === 'accept') throw fieldError('reason', 'a lot that passes every rule is not held here; record the reason with the lot instead');
       r.status = 'on-hold';
       r.holdReason = dto.reason.trim();
       r.heldById = userId;
-      r.heldAt = new Date();
+      r.heldAt = this.clock();
+      r.heldByRules = false;
       await m.save(r);
       await audit(m, { userId, action: 'hold', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} put on hold: ${r.holdReason}`, after: { status: r.status, holdReason: r.holdReason } });
-
-      const what = `Lot ${r.lotNumber} (${r.drumCount} drum${r.drumCount === 1 ? '' : 's'}${drumType ? `, ${drumType.name}` : ''})`;
-      let needs: StationNeed[] = [];
-      if (r.drumTypeId) {
-        const stations = r.stationId ? await m.find(Station, { where: { id: r.stationId } }) : await m.find(Station, { order: { name: 'ASC' } });
-        const slurry = slurryRow ? { name: slurryRow.name, foams: slurryRow.foams, shearSensitive: slurryRow.shearSensitive } : null;
-        for (const s of stations) needs.push(await needsForStation(m, this.fit, r.drumTypeId, s, slurry));
-        needs = needs.filter((n) => n.verdict !== 'fits' || n.order.length > 0);
-      }
-      await m.save(
-        m.create(HardwareWarning, {
-          source: 'lot',
-          receivingCheckId: r.id,
-          sourcingPlanId: null,
-          status: 'open',
-          summary: `${what} is on hold at the dock: ${r.verdict === 'no-fit' ? 'no fitting hardware' : 'fits only with caution'}. ${dto.reason.trim()}`,
-          needs: needs.length ? [{ stations: needs, order: totalOrder(needs) }] : [{ stations: [], order: [] }],
-        }),
-      );
-      await notifyRoles(
-        m,
-        ['engineer', 'buyer'],
-        { kind: 'lot-held', title: `${what} on hold`, body: `${what} was put on hold at the dock: ${dto.reason.trim()}`, link: `/receive/${r.id}` },
-        userId,
-      );
-      // Buyers also hear what the site lacks, with what to order.
-      if (needs.length) {
-        await notifyRoles(m, ['buyer'], {
-          kind: 'hardware-gap',
-          title: `Hardware needed for ${what}`,
-          body: `${what} is held because the site lacks fitting hardware. What to order:`,
-          link: `/sourcing/warnings`,
-          lines: orderLines(totalOrder(needs)),
-        }, userId);
-      }
+      await raiseHoldNotices(m, this.fit, r, r.holdReason, userId);
     });
     return this.detail(id);
   }
 
+  /** An engineer releases a held or quarantined lot, saying why (the route policy allows engineers only). */
   async release(id: string, dto: ReleaseDto, userId: string) {
     await this.ds.transaction(async (m) => {
       const r = await m.findOne(ReceivingCheck, { where: { id }, lock: { mode: 'pessimistic_write' } });
       if (!r) throw notFound('Receiving check');
-      if (r.status !== 'on-hold') throw conflict('Only a lot on hold can be released.');
+      if (!HELD_STATUSES.includes(r.status)) throw conflict('Only a lot on hold or in quarantine can be released.');
+      const before = r.status;
       r.status = 'released';
       r.releasedById = userId;
-      r.releasedAt = new Date();
+      r.releasedAt = this.clock();
       r.releaseComment = dto.comment.trim();
       await m.save(r);
-      await audit(m, { userId, action: 'release', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} released: ${r.releaseComment}`, before: { status: 'on-hold' }, after: { status: r.status } });
+      await audit(m, { userId, action: 'release', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} released: ${r.releaseComment}`, before: { status: before }, after: { status: r.status } });
     });
     return this.detail(id);
+  }
+
+  /**
+   * A certificate of analysis was attached: the lot is judged again (on the day it was checked) and a hold
+   * the rules made is lifted when nothing else holds it. A hold typed by a person stays for a person.
+   */
+  async certificateAdded(m: EntityManager, id: string, userId: string): Promise<void> {
+    const r = await m.findOne(ReceivingCheck, { where: { id }, lock: { mode: 'pessimistic_write' } });
+    if (!r || !r.acceptance) return;
+    const verdict: LotVerdict = await decide(m, {
+      fit: r.result as unknown as FitForVerdict,
+      slurryId: r.slurryId,
+      today: r.acceptance.today,
+      productionDate: r.productionDate,
+      expiryDate: r.expiryDate,
+      temperatureIndicator: r.temperatureIndicator,
+      certificateAttached: await certificateAttached(m, id),
+    });
+    r.acceptance = verdict;
+    r.decision = verdict.decision;
+    const lifted = r.status === 'on-hold' && r.heldByRules && verdict.decision !== 'hold' && verdict.decision !== 'quarantine';
+    if (lifted) {
+      r.status = 'released';
+      r.releasedById = userId;
+      r.releasedAt = this.clock();
+      r.releaseComment = 'The certificate of analysis was attached, which lifts the certificate hold; no other rule holds the lot.';
+    }
+    await m.save(r);
+    if (lifted) {
+      await audit(m, { userId, action: 'release', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} released: certificate of analysis attached`, before: { status: 'on-hold' }, after: { status: r.status } });
+      // The warning the hold opened was about the certificate alone: it is settled too.
+      await m.update(HardwareWarning, { receivingCheckId: r.id, status: 'open' }, { status: 'resolved', resolvedById: userId, resolvedAt: this.clock() });
+    }
   }
 }

@@ -367,11 +367,16 @@ export const slurryDef: ResourceDef<Slurry> = {
     foams: s.foams,
     shearSensitive: s.shearSensitive,
     solidsWtPct: s.solidsWtPct,
+    shelfLifeDays: s.shelfLifeDays,
+    minRemainingDays: s.minRemainingDays,
+    storageMinC: s.storageMinC,
+    storageMaxC: s.storageMaxC,
+    certificateRequired: s.certificateRequired,
   }),
   toColumns: async (dto, { manager }) => {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
     if (dto.drumTypeId !== undefined) await ensureExists(manager, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
-    return pick<Slurry>(dto, ['name', 'supplierId', 'region', 'drumTypeId', 'foams', 'shearSensitive', 'solidsWtPct']);
+    return pick<Slurry>(dto, ['name', 'supplierId', 'region', 'drumTypeId', 'foams', 'shearSensitive', 'solidsWtPct', 'shelfLifeDays', 'minRemainingDays', 'storageMinC', 'storageMaxC', 'certificateRequired']);
   },
 };
 

@@ -159,6 +159,12 @@ export class SlurryDto {
   @IsBoolean({ message: 'must be true or false' }) foams: boolean;
   @IsBoolean({ message: 'must be true or false' }) shearSensitive: boolean;
   @IsNumber(num, { message: NUMBER }) @Min(0, { message: 'must be 0 or more' }) @Max(100, { message: 'must be at most 100' }) solidsWtPct: number;
+  // Receiving (shared/acceptance): optional; null clears a value.
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsInt({ message: 'must be a whole number of days' }) @Min(1, { message: 'must be at least 1 day' }) @Max(3650, { message: 'must be at most 3650 days' }) shelfLifeDays?: number | null;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsInt({ message: 'must be a whole number of days' }) @Min(0, { message: 'must be 0 days or more' }) @Max(3650, { message: 'must be at most 3650 days' }) minRemainingDays?: number | null;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: NUMBER }) @Min(-50, { message: 'must be -50 °C or more' }) @Max(80, { message: 'must be at most 80 °C' }) storageMinC?: number | null;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: NUMBER }) @Min(-50, { message: 'must be -50 °C or more' }) @Max(80, { message: 'must be at most 80 °C' }) storageMaxC?: number | null;
+  @IsOptional() @IsBoolean({ message: 'must be true or false' }) certificateRequired?: boolean;
 }
 
 export class StationDto {
@@ -185,5 +191,7 @@ export class SettingsDto {
   @Optional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(10) threadMatchToleranceMm?: number;
   @Optional() @IsNumber(num, { message: NUMBER }) @Min(100) @Max(10000) laminarLimit?: number;
   @Optional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
+  /** IANA name, checked against the runtime's zone list in the service. */
+  @Optional() @IsString({ message: 'must be text' }) @MaxLength(64, { message: 'must be at most 64 characters' }) timeZone?: string;
   @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
 }

@@ -1,4 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import { isTimeZone } from '../../shared/dates';
 import { resolveSettings } from '../../shared/fit/rules';
 import type { FitSettings } from '../../shared/fit/types';
 import { conflict, fieldError } from '../common/errors';
@@ -9,7 +10,7 @@ import type { SettingsDto } from '../registry/registry.dto';
 export async function loadSettings(m: EntityManager): Promise<SiteSettings> {
   const [row] = await m.find(SiteSettings, { order: { createdAt: 'ASC' }, take: 1 });
   if (row) return row;
-  return m.save(m.create(SiteSettings, { siteName: 'Our site' }));
+  return m.save(m.create(SiteSettings, { siteName: 'Our site', timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC' }));
 }
 
 export function fitSettingsOf(row: SiteSettings): FitSettings {
@@ -31,6 +32,7 @@ export const settingsJson = (s: SiteSettings) => ({
   threadMatchToleranceMm: s.threadMatchToleranceMm,
   laminarLimit: s.laminarLimit,
   maxReturnVelocityRatio: s.maxReturnVelocityRatio,
+  timeZone: s.timeZone,
   updatedAt: s.updatedAt,
 });
 
@@ -40,6 +42,7 @@ export async function updateSettings(ds: DataSource, dto: SettingsDto, userId: s
     if (row.version !== dto.version) throw conflict('Someone else changed the site settings first; review them and save again.', { current: settingsJson(row) });
     const { version: _v, ...changes } = dto;
     Object.assign(row, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
+    if (dto.timeZone !== undefined && !isTimeZone(dto.timeZone)) throw fieldError('timeZone', 'must be a time zone name, like Europe/Berlin or America/Phoenix');
     if (row.tipClearanceMaxMm <= row.tipClearanceMinMm) throw fieldError('tipClearanceMaxMm', 'must be more than the minimum clearance');
     const before = settingsJson(await loadSettings(m));
     const saved = settingsJson(await m.save(row));

@@ -1,6 +1,8 @@
 // GS1 dates YYMMDD, as in AI (11) production date and (17) expiration date
 // (GS1 General Specifications §3.4 and §7.12) [mem: confirm against the current edition].
 
+import { daysIn } from '../dates';
+
 export type Gs1DateResult = { ok: true; iso: string } | { ok: false; error: string };
 
 /**
@@ -17,7 +19,6 @@ export function gs1Year(yy: number, today: Date): number {
   return century + yy;
 }
 
-const daysIn = (year: number, month: number) => new Date(Date.UTC(year, month, 0)).getUTCDate();
 
 /**
  * Reads YYMMDD into an ISO date (YYYY-MM-DD). Day 00 means the last day of the month (§3.4.7: a date

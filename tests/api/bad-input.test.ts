@@ -84,8 +84,9 @@ const TARGETS: Record<string, Target> = {
   'POST /slurries': {
     method: 'post',
     path: () => '/slurries',
-    body: () => ({ name: 'Corpus slurry', supplierId: id.supplier, region: 'NA', drumTypeId: id.drumType, foams: false, shearSensitive: false, solidsWtPct: 12 }),
-    fields: { name: 'text', supplierId: 'id', region: 'enum', drumTypeId: 'id', foams: 'bool', shearSensitive: 'bool', solidsWtPct: 'number' },
+    body: () => ({ name: 'Corpus slurry', supplierId: id.supplier, region: 'NA', drumTypeId: id.drumType, foams: false, shearSensitive: false, solidsWtPct: 12, shelfLifeDays: 365, storageMinC: 5 }),
+    fields: { name: 'text', supplierId: 'id', region: 'enum', drumTypeId: 'id', foams: 'bool', shearSensitive: 'bool', solidsWtPct: 'number', shelfLifeDays: 'int', minRemainingDays: 'int', certificateRequired: 'bool' },
+    optional: ['shelfLifeDays', 'minRemainingDays', 'certificateRequired'],
   },
   'POST /stations': {
     method: 'post',
@@ -98,7 +99,7 @@ const TARGETS: Record<string, Target> = {
   'POST /fit-checks': { method: 'post', path: () => '/fit-checks', body: () => ({ drumTypeId: id.drumType, tapping: 'one-opening', flowLpm: 20 }), fields: { drumTypeId: 'id', tapping: 'enum', flowLpm: 'number' }, optional: ['tapping', 'flowLpm'] },
   'POST /tools/flow': { method: 'post', path: () => '/tools/flow', body: () => ({ flow: { value: 20, unit: 'L/min' }, feedBoreMm: 19.05 }), fields: { 'flow.value': 'number', 'flow.unit': 'unit', feedBoreMm: 'number' } },
   'POST /tools/thread-match': { method: 'post', path: () => '/tools/thread-match', body: () => ({ majorDiameter: { value: 60, unit: 'mm' } }), fields: { 'majorDiameter.value': 'number', 'majorDiameter.unit': 'unit' } },
-  'POST /receiving-checks': { method: 'post', path: () => '/receiving-checks', body: () => ({ lotNumber: 'CORPUS-LOT', drumCount: 2, drumTypeId: id.drumType }), fields: { lotNumber: 'text', drumCount: 'int', drumTypeId: 'id' } },
+  'POST /receiving-checks': { method: 'post', path: () => '/receiving-checks', body: () => ({ lotNumber: 'CORPUS-LOT', drumCount: 2, drumTypeId: id.drumType, productionDate: '2026-01-05', temperatureIndicator: 'intact' }), fields: { lotNumber: 'text', drumCount: 'int', drumTypeId: 'id', productionDate: 'date', expiryDate: 'date', temperatureIndicator: 'enum' }, optional: ['productionDate', 'expiryDate', 'temperatureIndicator'] },
   'POST /receiving-checks/:id/hold': { method: 'post', path: () => `/receiving-checks/${id.check}/hold`, body: () => ({ reason: 'does not fit' }), fields: { reason: 'text' } },
   'POST /sourcing-plans': {
     method: 'post',

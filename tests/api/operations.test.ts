@@ -45,37 +45,54 @@ describe('dock checks', () => {
     expect(typeof res.body.checkedAt).toBe('string');
   });
 
-  it('a no-fit lot is put on hold with a reason: engineers and buyers are told, a warning lists what to order', async () => {
+  it('a no-fit lot is put on hold by the rules when recorded: engineers and buyers are told, a warning lists what to order', async () => {
     const before = (await notices(t.buyer)).unread;
     const check = await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ lotNumber: 'SE-0931', drumCount: 2, drumTypeId: ids.foreignDrum, slurryId: ids.foreignSlurry });
     expect(check.body.verdict).toBe('no-fit');
-    const noReason = await request(app).post(`/api/receiving-checks/${check.body.id}/hold`).set(bearer(t.clerk)).send({});
-    expect(noReason.status).toBe(400);
-    expect(noReason.body.error.details[0].field).toBe('reason');
-    const held = await request(app).post(`/api/receiving-checks/${check.body.id}/hold`).set(bearer(t.clerk)).send({ reason: 'No dip tube reaches this drum design' });
-    expect(held.status).toBe(200);
-    expect(held.body).toMatchObject({ status: 'on-hold', holdReason: 'No dip tube reaches this drum design', heldByName: 'Noor Halvorsen' });
+    // No typed reason: the verdict's own reasons, largest first (the hardware, then the slurry's missing certificate).
+    expect(check.body).toMatchObject({ status: 'on-hold', decision: 'hold', heldByRules: true, heldByName: 'Noor Halvorsen' });
+    expect(check.body.lotVerdict.sentence).toMatch(/^Hold: every G 2 tube on site is too long for this drum \(the shortest by \d+ mm\); an engineer must register a tube of 793 to 813 mm\.$/);
+    expect(check.body.lotVerdict.blockers.map((b: { source: string }) => b.source)).toEqual(['fit', 'certificate', 'shelf-life']);
+    expect(check.body.holdReason).toMatch(/^Closest pairing, dip tube AFC-TR-G2-825 with head .*: the tube is too long and bottoms out: it is 7\.0 mm \(0\.28 in\) longer than the drum is deep/);
     const buyer = await notices(t.buyer);
     // The buyer hears of the hold and of the hardware it needs.
     expect(buyer.unread).toBe(before + 2);
     expect(buyer.items.slice(0, 2).map((n: { kind: string }) => n.kind).sort()).toEqual(['hardware-gap', 'lot-held']);
     expect(buyer.items.find((n: { kind: string }) => n.kind === 'lot-held')).toMatchObject({ link: `/receive/${check.body.id}` });
     expect((await notices(t.engineer)).items[0].kind).toBe('lot-held');
-    // The clerk who held it is not notified of their own action.
+    // The clerk who recorded it is not notified of their own check.
     expect((await notices(t.clerk)).items.filter((n: { kind: string }) => n.kind === 'lot-held')).toHaveLength(0);
     const warnings = await request(app).get('/api/warnings?status=open').set(bearer(t.buyer));
     const w = warnings.body.items.find((x: { receivingCheckId: string }) => x.receivingCheckId === check.body.id);
     expect(w).toMatchObject({ source: 'lot', status: 'open', lotNumber: 'SE-0931' });
     expect(w.needs[0].order.length).toBeGreaterThan(0);
+    // A hold by hand still needs a reason, and a held lot is not held twice.
+    const noReason = await request(app).post(`/api/receiving-checks/${check.body.id}/hold`).set(bearer(t.clerk)).send({});
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.error.details[0].field).toBe('reason');
     const again = await request(app).post(`/api/receiving-checks/${check.body.id}/hold`).set(bearer(t.clerk)).send({ reason: 'twice' });
     expect(again.status).toBe(409);
+  });
+
+  it('a lot that fits with caution is recorded as checked and held by hand with a reason, which raises the same warning and notices', async () => {
+    const before = (await notices(t.engineer)).unread;
+    const cautionStation = await idOf('stations', 'name', demo.cautionStation);
+    const drum = await idOf('drum-types', 'partNumber', 'HPM-C20-B56');
+    const check = await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ lotNumber: 'CU-0402', drumCount: 1, drumTypeId: drum, stationId: cautionStation });
+    expect(check.body).toMatchObject({ verdict: 'caution', decision: 'caution', status: 'checked' });
+    const held = await request(app).post(`/api/receiving-checks/${check.body.id}/hold`).set(bearer(t.clerk)).send({ reason: 'Return port too small for this flow' });
+    expect(held.body).toMatchObject({ status: 'on-hold', holdReason: 'Return port too small for this flow', heldByRules: false });
+    expect((await notices(t.engineer)).unread).toBe(before + 1);
+    const warnings = await request(app).get('/api/warnings?status=open').set(bearer(t.buyer));
+    expect(warnings.body.items.some((x: { receivingCheckId: string }) => x.receivingCheckId === check.body.id)).toBe(true);
   });
 
   it('a fitting lot is not held; a clerk cannot release, an engineer can', async () => {
     const fits = await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ lotNumber: 'LR-24-1188', drumCount: 1, drumTypeId: ids.fittingDrum });
     const hold = await request(app).post(`/api/receiving-checks/${fits.body.id}/hold`).set(bearer(t.clerk)).send({ reason: 'just because' });
     expect(hold.status).toBe(400);
-    const held = (await request(app).get('/api/receiving-checks?status=on-hold').set(bearer(t.clerk))).body.items[0];
+    const held = (await request(app).get('/api/receiving-checks?q=SE-0931').set(bearer(t.clerk))).body.items[0];
+    expect(held.status).toBe('on-hold');
     expect((await request(app).post(`/api/receiving-checks/${held.id}/release`).set(bearer(t.clerk)).send({ comment: 'ok now' })).status).toBe(403);
     const released = await request(app).post(`/api/receiving-checks/${held.id}/release`).set(bearer(t.engineer)).send({ comment: 'Tubes cut to 800 mm arrived' });
     expect(released.body).toMatchObject({ status: 'released', releasedByName: 'Tomasz Ilunga' });

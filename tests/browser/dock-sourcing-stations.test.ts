@@ -53,10 +53,16 @@ async function recordFittingLot(page: Page, lot: string, drums: string) {
   await go(page, '/receive', 'dock-lot');
   await page.getByTestId('dock-lot').fill(lot);
   await page.getByTestId('dock-count').fill(drums);
+  await page.getByTestId('dock-indicator-intact').click();
   await pick(page, 'dock-drum', demo.fittingDrum);
   await pick(page, 'dock-station', demo.fittingStation, false);
   await page.getByTestId('dock-submit').click();
   await page.getByTestId('verdict-word').waitFor();
+}
+
+/** On a phone the details under the verdict start closed. */
+async function openDetails(page: Page, viewport: Viewport) {
+  if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
 }
 
 describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)', (viewport: Viewport) => {
@@ -84,10 +90,14 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     // Fitting lot: the drum type picked by search, checked against the station it is for.
     await page.getByTestId('dock-lot').fill(fitLot);
     await page.getByTestId('dock-count').fill('4');
+    await page.getByTestId('dock-indicator-intact').click();
     await pick(page, 'dock-drum', demo.fittingDrum);
     await pick(page, 'dock-station', demo.fittingStation, false);
     await page.getByTestId('dock-submit').click();
     await seen(page, 'verdict-word', 'FITS');
+    // The sentence first: what to use and where, in words.
+    await seen(page, 'lot-verdict-sentence', `Use dip tube ${demo.fittingTube} with head ${demo.fittingHead} at ${demo.fittingStation}.`);
+    await openDetails(page, viewport);
     await seen(page, 'check-use-tube', demo.fittingTube);
     await seen(page, 'check-use-head', demo.fittingHead);
     await seen(page, 'check-use-station', demo.fittingStation);
@@ -104,6 +114,7 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await page.getByTestId('dock-new').click();
     await page.getByTestId('dock-lot').fill(foreignLot);
     await page.getByTestId('dock-count').fill('2');
+    await page.getByTestId('dock-indicator-not-fitted').click();
     await page.getByTestId('dock-drum-mode-describe').click();
     // A caliper reading alone cannot tell G 2 from 2 in NPS: the answer says so and what to measure.
     await page.getByTestId('dock-opening-0-diameter').fill('59.6');
@@ -119,18 +130,16 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await page.getByTestId('dock-depth').fill('818');
     await page.getByTestId('dock-submit').click();
     await seen(page, 'verdict-word', 'NO FIT');
+    // Nothing fits: the check itself holds the lot, and says why across every tube, with no typed reason.
+    await seen(page, 'lot-verdict-sentence', /^Hold: every G 2 tube on site is too long for this drum \(the shortest by \d+ mm\); an engineer must register a tube of 793 to 813 mm\.$/);
+    await seen(page, 'dock-hold-status', /on hold/i);
+    await seen(page, 'lot-blocker-fit-who', /engineer or administrator/i);
+    expect(await page.getByTestId('dock-hold-panel').count()).toBe(0);
+    await harness.shot(page, 'dock-held', viewport);
+    await openDetails(page, viewport);
     await seen(page, 'drum-section-tip', /bottoms out/);
     await harness.shot(page, 'dock-no-fit', viewport);
     await shotOf(page, 'drum-section', 'dock-no-fit-drawing', viewport);
-    await page.getByTestId('dock-hold-panel').scrollIntoViewIfNeeded();
-
-    // Held with a reason (none given first: the field says so).
-    await page.getByTestId('dock-hold').click();
-    await page.getByTestId('dock-hold-reason-error').waitFor();
-    await page.getByTestId('dock-hold-reason').fill('No dip tube reaches the bottom of this drum');
-    await page.getByTestId('dock-hold').click();
-    await seen(page, 'dock-hold-status', /on hold/i);
-    await harness.shot(page, 'dock-held', viewport);
 
     // History: both lots, filtered by verdict, each linking to its lot page.
     await page.getByTestId('dock-history-link').click();

@@ -156,6 +156,8 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
     await page.getByTestId('home-clerk').waitFor();
     await page.goto(`${harness.baseUrl}/receive/${check.id}`);
+    // On a phone the files sit in the details under the verdict, closed at first.
+    if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
     await page.getByTestId('files-panel').waitFor();
     await seen(page, 'files-empty', /No files yet/);
     await shotOf(page, 'files-panel', 'files-empty', viewport);

@@ -1,0 +1,45 @@
+import type { EntityManager } from 'typeorm';
+import { DrumType, HardwareWarning, type ReceivingCheck, Slurry, Station } from '../entities';
+import type { FitCheckService } from '../fit/fit-check.service';
+import { notifyRoles } from '../notifications/notifications.service';
+import { needsForStation, orderLines, totalOrder, type StationNeed } from '../sourcing/hardware-needs';
+
+/** "Lot X (2 drums, 55 gal steel…)": how notices and warnings name a lot. */
+export async function lotWords(m: EntityManager, r: ReceivingCheck): Promise<string> {
+  const drumType = r.drumTypeId ? await m.findOneBy(DrumType, { id: r.drumTypeId }) : null;
+  return `Lot ${r.lotNumber} (${r.drumCount} drum${r.drumCount === 1 ? '' : 's'}${drumType ? `, ${drumType.name}` : ''})`;
+}
+
+/**
+ * What putting a lot on hold (or in quarantine) raises, by hand or by the rules alike: a hardware warning
+ * listing what to order (empty when the hardware fits), a notice to engineers and buyers, and for buyers
+ * the hardware the site lacks. In the caller's transaction.
+ */
+export async function raiseHoldNotices(m: EntityManager, fit: FitCheckService, r: ReceivingCheck, reason: string, userId: string): Promise<void> {
+  const what = await lotWords(m, r);
+  const slurryRow = r.slurryId ? await m.findOneBy(Slurry, { id: r.slurryId }) : null;
+  let needs: StationNeed[] = [];
+  if (r.drumTypeId) {
+    const stations = r.stationId ? await m.find(Station, { where: { id: r.stationId } }) : await m.find(Station, { order: { name: 'ASC' } });
+    const slurry = slurryRow ? { name: slurryRow.name, foams: slurryRow.foams, shearSensitive: slurryRow.shearSensitive } : null;
+    for (const s of stations) needs.push(await needsForStation(m, fit, r.drumTypeId, s, slurry));
+    needs = needs.filter((n) => n.verdict !== 'fits' || n.order.length > 0);
+  }
+  const state = r.status === 'quarantined' ? 'in quarantine' : 'on hold';
+  const hardware = r.verdict === 'no-fit' ? 'no fitting hardware' : r.verdict === 'caution' ? 'fits only with caution' : 'the hardware fits';
+  await m.save(
+    m.create(HardwareWarning, {
+      source: 'lot',
+      receivingCheckId: r.id,
+      sourcingPlanId: null,
+      status: 'open',
+      summary: `${what} is ${state} at the dock (${hardware}). ${reason}`.slice(0, 1000),
+      needs: needs.length ? [{ stations: needs, order: totalOrder(needs) }] : [{ stations: [], order: [] }],
+    }),
+  );
+  await notifyRoles(m, ['engineer', 'buyer'], { kind: 'lot-held', title: `${what} ${state}`, body: `${what} was put ${state} at the dock: ${reason}`.slice(0, 4000), link: `/receive/${r.id}` }, userId);
+  // Buyers also hear what the site lacks, with what to order.
+  if (needs.length) {
+    await notifyRoles(m, ['buyer'], { kind: 'hardware-gap', title: `Hardware needed for ${what}`, body: `${what} is held because the site lacks fitting hardware. What to order:`, link: `/sourcing/warnings`, lines: orderLines(totalOrder(needs)) }, userId);
+  }
+}

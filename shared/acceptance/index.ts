@@ -1,0 +1,3 @@
+export * from '../dates';
+export * from './types';
+export * from './rules';

@@ -1,0 +1,2 @@
+export * from './lot-status';
+export * from './verdict';
