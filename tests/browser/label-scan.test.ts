@@ -100,9 +100,16 @@ describe.each(VIEWPORTS)('scanning a drum label at $name width ($width px)', (vi
     expect(requests.some((u) => /\/label-scanner-[0-9a-f]+\.js$/.test(u))).toBe(true);
     expectOnlyOwnOrigin(requests);
 
+    // The label's dates fill the form's date fields, which the lot rules read.
+    expect(await page.getByTestId('dock-expiry').inputValue()).toBe('2027-05-31');
+    expect(await page.getByTestId('dock-production').inputValue()).toBe('2026-11-14');
+
     // The scanned lot is recorded like a typed one.
     await pickFittingDrum(page);
+    await page.getByTestId('dock-indicator-intact').click();
     await page.getByTestId('dock-submit').click();
+    await page.getByTestId('verdict-word').waitFor();
+    if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
     await seen(page, 'record-lot', lot);
   }, SLOW);
 
