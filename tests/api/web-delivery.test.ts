@@ -115,7 +115,7 @@ describe('the web build', () => {
   it('the hashed JavaScript bundle is compressed to under a third and kept a year', async () => {
     const res = await exchange(base, bundlePath, { headers: BR });
     expect(res.status).toBe(200);
-    expect(res.headers['content-type']).toMatch(/^text\/javascript/) // RFC 9239;
+    expect(res.headers['content-type']).toMatch(/^text\/javascript/); // RFC 9239
     expect(res.headers['content-encoding']).toBe('br');
     expect(res.headers['cache-control']).toBe(IMMUTABLE);
     expect(res.body.equals(fs.readFileSync(path.join(WEB_DIR, bundlePath)))).toBe(true);
@@ -153,7 +153,7 @@ describe('the web build', () => {
   it('the service worker is revalidated on every visit, precaches the shell with an index.html fallback, and leaves /api/ alone', async () => {
     const res = await exchange(base, `/${SERVICE_WORKER_FILE}`, { headers: BR });
     expect(res.status).toBe(200);
-    expect(res.headers['content-type']).toMatch(/^text\/javascript/) // RFC 9239;
+    expect(res.headers['content-type']).toMatch(/^text\/javascript/); // RFC 9239
     expect(res.headers['cache-control']).toBe('no-cache');
     expect(res.headers['content-encoding']).toBe('br');
     const sw = res.body.toString('utf8');
