@@ -1,5 +1,5 @@
 // The session survives reloads in the browser's localStorage. (A native build would use a secure store.)
-const KEY = 'bungwise.session';
+import { SESSION_STORAGE_KEY as KEY } from '@/shared/browser-storage';
 
 export function loadStored<T>(): T | null {
   try {

@@ -31,8 +31,10 @@ function fail(sentence) {
   throw new Stop(sentence);
 }
 
+// The launcher's own messages go to stderr: stdout is left to what it runs, so that the last line of
+// `npm run bench` is the benchmark's JSON even though the cluster is stopped after it.
 function log(message) {
-  console.log(`[bungwise] ${message}`);
+  console.error(`[bungwise] ${message}`);
 }
 
 function run(cmd, args, options = {}) {
@@ -195,14 +197,19 @@ function buildServer() {
 
 const webDir = path.resolve(root, env.BUNGWISE_WEB_EXPORT_DIR ?? path.join('dist', 'web'));
 
+// `expo export`, then scripts/web/finish-export (compiled with the server): icons, manifest, font preloads,
+// the service worker and the brotli/gzip twins. The hash covers the inputs of both halves.
 function exportWeb() {
   const hashFile = `${webDir}.source-hash`;
-  const sourceHash = hashFiles(['app', 'components', 'shared', 'assets', 'app.json', 'babel.config.js', 'package-lock.json', 'metro.config.js']);
+  const sourceHash = hashFiles(['app', 'components', 'shared', 'assets', 'scripts/web', 'app.json', 'babel.config.js', 'package-lock.json', 'metro.config.js']);
   const current = fs.existsSync(hashFile) ? fs.readFileSync(hashFile, 'utf8') : '';
   if (current === sourceHash && fs.existsSync(path.join(webDir, 'index.html'))) return;
   log('Exporting the web app (first time or sources changed)...');
   if (run(path.join(root, 'node_modules', '.bin', 'expo'), ['export', '--platform', 'web', '--output-dir', path.relative(root, webDir)], { env: { ...env, CI: '1', EXPO_NO_TELEMETRY: '1' } }) !== 0) {
     fail('The web export failed: see the Expo output above.');
+  }
+  if (run('node', [path.join(root, 'dist', 'server', 'scripts', 'web', 'finish-export.js'), webDir]) !== 0) {
+    fail('Finishing the web export (service worker, compression) failed: see the output above.');
   }
   fs.writeFileSync(hashFile, sourceHash);
 }

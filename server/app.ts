@@ -33,6 +33,7 @@ import { resourceRouter, ResourceService } from './registry/resource';
 import { settingsRouter } from './settings/settings.router';
 import { toolsRouter } from './tools/tools.router';
 import { usersRouter } from './users/users.router';
+import { compressAnswers, serveWeb } from './web/serve-web';
 
 export interface AppOptions {
   dataSource: DataSource;
@@ -75,6 +76,7 @@ export function createApp(options: AppOptions): Express {
   // Which proxies may tell the client's address and protocol (X-Forwarded-For, -Proto): loopback by default.
   app.set('trust proxy', options.trustProxy ?? 'loopback');
   app.use(securityHeaders(options.publicUrl));
+  app.use(compressAnswers());
   if (options.logRequests) app.use(morgan(':method :url :status :res[content-length] - :response-time ms'));
 
   const api = express.Router();
@@ -137,10 +139,7 @@ export function createApp(options: AppOptions): Express {
   app.locals.apiRouter = api;
 
   if (options.webDir && fs.existsSync(path.join(options.webDir, 'index.html'))) {
-    const webDir = options.webDir;
-    app.use(express.static(webDir, { index: 'index.html', extensions: ['html'] }));
-    // Client-side routes (/receive, /registry/...) load the single-page app.
-    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(webDir, 'index.html')));
+    serveWeb(app, options.webDir);
   }
 
   app.use(errorMiddleware);

@@ -14,7 +14,7 @@ export const VIEWPORTS = [
 ] as const;
 export type Viewport = (typeof VIEWPORTS)[number];
 
-const WEB_DIR = process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'dist', 'web');
+export const WEB_DIR = process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'dist', 'web');
 export const SHOTS_DIR = path.resolve(__dirname, '..', 'artifacts', 'screens');
 
 export interface HarnessOptions {
@@ -22,11 +22,17 @@ export interface HarnessOptions {
   bind?: string;
   /** The host the browser loads the app from (`baseUrl`). */
   host?: string;
+  /** Another copy of the export (a test that changes files, as a deploy would, works on its own copy). */
+  webDir?: string;
 }
 
 /** The exported web build served by the real app on a free port, over a freshly reset database. */
 export class BrowserHarness {
-  constructor(private readonly options: HarnessOptions = {}) {}
+  readonly webDir: string;
+
+  constructor(private readonly options: HarnessOptions = {}) {
+    this.webDir = options.webDir ?? WEB_DIR;
+  }
 
   ds!: DataSource;
   server!: Server;
@@ -48,11 +54,11 @@ export class BrowserHarness {
   }
 
   async start(): Promise<void> {
-    if (!fs.existsSync(path.join(WEB_DIR, 'index.html'))) throw new Error('dist/web is missing: run the browser tests through `npm test`, which exports the web app.');
+    if (!fs.existsSync(path.join(this.webDir, 'index.html'))) throw new Error('dist/web is missing: run the browser tests through `npm test`, which exports the web app.');
     this.ds = await openTestDataSource();
     await resetDatabase(this.ds);
     // Object storage (the local S3 stand-in `npm test` starts) for attachments and the files imports keep.
-    const app = makeTestApp(this.ds, { webDir: WEB_DIR, signInLimits: { perAccount: 1000, perAddress: 1000 }, storage: testStorage() });
+    const app = makeTestApp(this.ds, { webDir: this.webDir, signInLimits: { perAccount: 1000, perAddress: 1000 }, storage: testStorage() });
     const { bind = '127.0.0.1', host = '127.0.0.1' } = this.options;
     this.server = await new Promise<Server>((resolve) => {
       const s = app.listen(0, bind, () => resolve(s));
@@ -80,12 +86,17 @@ export class BrowserHarness {
   /** A fresh context per viewport; every console error or page error is collected and fails the test. */
   async page(viewport: Viewport): Promise<{ context: BrowserContext; page: Page }> {
     const context = await this.browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
-    const page = await context.newPage();
+    const page = this.watch(await context.newPage(), viewport);
+    return { context, page };
+  }
+
+  /** Collects the page's console errors and page errors (for a further page opened in a context). */
+  watch(page: Page, viewport: Viewport): Page {
     page.on('console', (msg) => {
       if (msg.type() === 'error') this.consoleErrors.push(`${viewport.name}: ${msg.text()}`);
     });
     page.on('pageerror', (err) => this.consoleErrors.push(`${viewport.name}: ${err.message}`));
-    return { context, page };
+    return page;
   }
 
   async shot(page: Page, name: string, viewport: Viewport): Promise<void> {
