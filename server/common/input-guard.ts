@@ -108,6 +108,12 @@ export const requestGuard: RequestHandler = (req, _res, next) => {
   next(problem ? new ValidationFailed([problem]) : undefined);
 };
 
+/** The path alone, for the web app's files and client routes (the static server answers malformed escapes in its own words). */
+export const pathGuard: RequestHandler = (req, _res, next) => {
+  const problem = pathProblem(req);
+  next(problem ? new ValidationFailed([problem]) : undefined);
+};
+
 /** After express.json: every string and key of the body, and how deep it goes. */
 export const bodyGuard: RequestHandler = (req, _res, next) => {
   const problem = req.body !== undefined ? bodyProblem(req.body) : null;

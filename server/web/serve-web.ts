@@ -3,6 +3,7 @@ import compression from 'compression';
 import type { Express, Request, RequestHandler, Response } from 'express';
 import expressStaticGzip from 'express-static-gzip';
 import { notFound } from '../common/errors';
+import { pathGuard } from '../common/input-guard';
 import { COMPRESS_THRESHOLD_BYTES, FILE_REQUEST, isHashedFile } from '../../shared/web-delivery';
 
 const IMMUTABLE = 'public, max-age=31536000, immutable';
@@ -42,6 +43,7 @@ export function serveWeb(app: Express, webDir: string): void {
       },
     },
   });
+  app.use(pathGuard);
   app.use(files);
   app.get('/{*splat}', (req, res, next) => {
     if (FILE_REQUEST.test(req.path)) {
