@@ -9,5 +9,6 @@ import { IndexTubeReach1764630000000 } from './1764630000000-index-tube-reach';
 import { CoverTubeReach1764633600000 } from './1764633600000-cover-tube-reach';
 import { ChangeNotify1764637200000 } from './1764637200000-change-notify';
 import { SignInCounters1764648000000 } from './1764648000000-sign-in-counters';
+import { UserTheme1764662400000 } from './1764662400000-user-theme';
 
-export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000, CreateImportsAttachmentsOutbox1764622800000, CreateAuditLog1764626400000, IndexTubeReach1764630000000, CoverTubeReach1764633600000, ChangeNotify1764637200000, SignInCounters1764648000000];
+export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000, CreateImportsAttachmentsOutbox1764622800000, CreateAuditLog1764626400000, IndexTubeReach1764630000000, CoverTubeReach1764633600000, ChangeNotify1764637200000, SignInCounters1764648000000, UserTheme1764662400000];

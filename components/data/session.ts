@@ -1,5 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import type { Role } from '@/shared/roles';
+import type { ThemeChoice } from '@/shared/themes';
 import { api } from '../api/client';
 
 export interface SessionUser {
@@ -10,6 +11,8 @@ export interface SessionUser {
   lengthUnit?: 'mm' | 'in';
   /** Kinds of notice this person does not want by e-mail (they still appear under Notices). */
   mailOff?: string[];
+  /** The colour theme chosen on the account; it follows the person to every device they sign in on. */
+  theme?: ThemeChoice;
 }
 
 export interface SignInResult {

@@ -3,6 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { useMarkAllNoticesReadMutation, useMarkNoticeReadMutation, useNotificationsQuery, type NoticeRecord } from '../data/notifications';
 import { formatWhen } from '../receive/parts';
 import { Screen } from '../screen';
+import { AppearanceCard } from '../settings/appearance-card';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
@@ -41,7 +42,7 @@ export function NoticesScreen() {
           {readAll.error.message}
         </Text>
       ) : null}
-      {/* On a wide screen the e-mail choices sit beside the notices; on a phone, after them. */}
+      {/* On a wide screen the person's settings (e-mail, colours) sit beside the notices; on a phone, after them. */}
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={[styles.main, wide && styles.mainWide]}>
           {list.isPending ? (
@@ -58,8 +59,9 @@ export function NoticesScreen() {
             </View>
           )}
         </View>
-        <View style={wide ? styles.side : undefined}>
+        <View style={[styles.settings, wide && styles.side]}>
           <MailPreferencesCard />
+          <AppearanceCard />
         </View>
       </View>
     </Screen>
@@ -106,6 +108,7 @@ const styles = StyleSheet.create({
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   main: { gap: space.md },
   mainWide: { flex: 2, minWidth: 0 },
+  settings: { gap: space.lg },
   side: { flex: 1, minWidth: 280 },
   list: { gap: space.md },
   unread: { borderLeftWidth: 5, borderLeftColor: colors.primary, borderRadius: radius.lg },

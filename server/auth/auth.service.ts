@@ -12,6 +12,7 @@ export interface PublicUser {
   active: boolean;
   lengthUnit: 'mm' | 'in';
   mailOff: string[];
+  theme: User['theme'];
 }
 
 export const toPublicUser = (u: User): PublicUser => ({
@@ -22,6 +23,7 @@ export const toPublicUser = (u: User): PublicUser => ({
   active: u.active,
   lengthUnit: u.lengthUnit,
   mailOff: u.mailOff ?? [],
+  theme: u.theme ?? 'system',
 });
 
 // One message whatever was wrong, so the answer never tells whether an account exists.

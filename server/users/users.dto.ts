@@ -1,5 +1,6 @@
 import { IsBoolean, IsEmail, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import { ROLES, type Role } from '../../shared/roles';
+import { THEME_CHOICES, type ThemeChoice } from '../../shared/themes';
 import { MAIL_KINDS } from '../mail/outbox';
 
 export class CreateUserDto {
@@ -44,4 +45,8 @@ export class UpdateMeDto {
   @IsOptional()
   @IsIn(MAIL_KINDS, { each: true, message: `must list kinds among ${MAIL_KINDS.join(', ')}` })
   mailOff?: string[];
+
+  @IsOptional()
+  @IsIn(THEME_CHOICES, { message: `must be one of ${THEME_CHOICES.join(', ')}` })
+  theme?: ThemeChoice;
 }

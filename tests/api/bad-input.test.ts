@@ -108,7 +108,7 @@ const TARGETS: Record<string, Target> = {
   },
   'POST /users': { method: 'post', path: () => '/users', body: () => ({ email: 'corpus@bungwise.example', name: 'Corpus', role: 'clerk', temporaryPassword: 'long-enough-password' }), fields: { email: 'email', name: 'text', role: 'enum', temporaryPassword: 'text' } },
   'PATCH /settings': { method: 'patch', path: () => '/settings', body: () => ({ version: Number(id.settingsVersion), tipClearanceMinMm: 5 }), fields: { version: 'int', tipClearanceMinMm: 'number' }, optional: ['tipClearanceMinMm'] },
-  'PATCH /me': { method: 'patch', path: () => '/me', body: () => ({ lengthUnit: 'in' }), fields: { lengthUnit: 'enum' }, optional: ['lengthUnit'] },
+  'PATCH /me': { method: 'patch', path: () => '/me', body: () => ({ lengthUnit: 'in', theme: 'dark' }), fields: { lengthUnit: 'enum', theme: 'enum' }, optional: ['lengthUnit', 'theme'] },
   'POST /tube-sets/:id/standby': { method: 'post', path: () => `/tube-sets/${id.tubeSet}/standby`, body: () => ({ version: 1 }), fields: { version: 'int' } },
   'POST /tube-sets/:id/rinse': { method: 'post', path: () => `/tube-sets/${id.tubeSet}/rinse`, body: () => ({ note: 'x' }), fields: { note: 'text' }, optional: ['note'] },
   'POST /pairings/:id/reject': { method: 'post', path: () => `/pairings/${id.draft}/reject`, body: () => ({ comment: 'needs work' }), fields: { comment: 'text' } },
