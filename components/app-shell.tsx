@@ -22,17 +22,17 @@ export function AppShell({ children }: { children: ReactNode }) {
   const more = items.filter((i) => !primary.includes(i));
   const who = (
     <View style={styles.who}>
-      <Text style={[type.label, wide && { color: colors.onPrimary }]} testID="current-user">
+      <Text style={[type.label, wide && { color: colors.onNav }]} testID="current-user">
         {session.user.name}
       </Text>
-      <Text style={[type.small, wide && { color: '#D7E7EA' }]} testID="current-role">
+      <Text style={[type.small, wide && { color: colors.onNavMuted }]} testID="current-role">
         {ROLE_LABELS[session.user.role]}
       </Text>
     </View>
   );
   const signOut = (
     <Pressable accessibilityRole="button" onPress={end} testID="sign-out" style={[styles.signOut, wide && styles.signOutWide]}>
-      <Text style={[styles.signOutText, wide && { color: colors.onPrimary }]}>Sign out</Text>
+      <Text style={[styles.signOutText, wide && { color: colors.onNav }]}>Sign out</Text>
     </Pressable>
   );
 
@@ -109,11 +109,11 @@ export function AppShell({ children }: { children: ReactNode }) {
 
 const styles = StyleSheet.create({
   wideRoot: { flex: 1, flexDirection: 'row', backgroundColor: colors.paper },
-  side: { width: 240, backgroundColor: colors.primary, padding: space.lg, gap: space.xl },
+  side: { width: 240, backgroundColor: colors.nav, padding: space.lg, gap: space.xl },
   sideItems: { gap: space.xs, flex: 1 },
   sideLink: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.md, paddingVertical: space.sm, borderRadius: radius.md, display: 'flex' as never },
   sideLinkActive: { backgroundColor: colors.surface },
-  sideText: { fontFamily: fonts.semibold, fontSize: 16, color: colors.onPrimary, textAlign: 'left', width: '100%' },
+  sideText: { fontFamily: fonts.semibold, fontSize: 16, color: colors.onNav, textAlign: 'left', width: '100%' },
   sideTextActive: { color: colors.primary },
   sideFoot: { gap: space.sm },
   main: { flex: 1 },
@@ -132,7 +132,7 @@ const styles = StyleSheet.create({
   topRight: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexShrink: 1 },
   who: { alignItems: 'flex-end', flexShrink: 1 },
   signOut: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.sm, borderRadius: radius.md },
-  signOutWide: { borderWidth: 1, borderColor: '#9CC3CA', alignItems: 'center' },
+  signOutWide: { borderWidth: 1, borderColor: colors.navLine, alignItems: 'center' },
   signOutText: { fontFamily: fonts.semibold, fontSize: 15, color: colors.primary },
   menu: { backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.line, paddingVertical: space.xs },
   menuLink: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.lg, display: 'flex' as never },

@@ -3,6 +3,7 @@ import { createContext, useCallback, useContext, useEffect, useMemo, useState, t
 import { setApiToken, setUnauthorizedHandler } from './api/client';
 import { meRequest, type SessionUser } from './data/session';
 import { loadStored, saveStored } from './session-storage';
+import { setDeviceTheme } from './theme-web';
 
 interface Session {
   token: string;
@@ -58,6 +59,12 @@ export function SessionProvider({ children }: { children: ReactNode }) {
     }
     setReady(true);
   }, [updateUser]);
+
+  // The account's colour theme follows the person to each device they sign in on, and stays after sign-out.
+  const theme = session?.user.theme;
+  useEffect(() => {
+    if (theme) setDeviceTheme(theme);
+  }, [theme]);
 
   useEffect(() => {
     setUnauthorizedHandler(end);

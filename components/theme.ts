@@ -1,25 +1,10 @@
-// The one theme file: colours, spacing, type and breakpoints. Colour pairs used for text meet 4.5:1.
-export const colors = {
-  paper: '#F4F5F1',
-  surface: '#FFFFFF',
-  surfaceSunk: '#ECEEE8',
-  ink: '#1A2230',
-  inkMuted: '#4F5B69',
-  line: '#CDD2C8',
-  primary: '#0B5563',
-  primaryPressed: '#083F4A',
-  onPrimary: '#FFFFFF',
-  focus: '#1E6FD9',
-  danger: '#A3222B',
-  dangerSoft: '#FBEAEA',
-  // Verdicts: always shown with a word and a shape as well as the colour.
-  fits: '#17663A',
-  fitsSoft: '#E6F3EA',
-  caution: '#8F5300',
-  cautionSoft: '#FCF1DF',
-  noFit: '#A3222B',
-  noFitSoft: '#FBEAEA',
-} as const;
+// The one theme file: colours, spacing, type and breakpoints. Colour pairs used for text meet 4.5:1 in every
+// palette (tests/unit/theme-contrast.test.ts).
+import { colors } from './theme-colors';
+
+/** Colour names for styles; the values live in palettes.ts (on the web they are `var(--bw-…)`, see there). */
+export { colors };
+export { palettes, type ColorName, type Palette } from './palettes';
 
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
 

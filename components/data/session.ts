@@ -1,5 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import type { Role } from '@/shared/roles';
+import type { ThemeChoice } from '@/shared/themes';
 import { api } from '../api/client';
 
 export interface SessionUser {
@@ -12,6 +13,8 @@ export interface SessionUser {
   mailOff?: string[];
   /** An account made or reset by an administrator: the password change comes before anything else. */
   mustChangePassword?: boolean;
+  /** The colour theme chosen on the account; it follows the person to every device they sign in on. */
+  theme?: ThemeChoice;
 }
 
 export interface SignInResult {

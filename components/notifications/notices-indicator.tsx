@@ -34,7 +34,7 @@ export function NoticesIndicator({ inverse = false, compact = false }: { inverse
     );
   }
 
-  const fg = inverse && !active ? colors.onPrimary : colors.primary;
+  const fg = inverse && !active ? colors.onNav : colors.primary;
   return (
     <Link
       href="/notices"

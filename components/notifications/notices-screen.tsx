@@ -3,6 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { useMarkAllNoticesReadMutation, useMarkNoticeReadMutation, useNotificationsQuery, type NoticeRecord } from '../data/notifications';
 import { formatWhen } from '../receive/parts';
 import { Screen } from '../screen';
+import { AppearanceCard } from '../settings/appearance-card';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
@@ -42,7 +43,7 @@ export function NoticesScreen() {
           {readAll.error.message}
         </Text>
       ) : null}
-      {/* On a wide screen the person's settings (e-mail choices, password) sit beside the notices; on a phone, after them. */}
+      {/* On a wide screen the person's settings (e-mail choices, password, colours) sit beside the notices; on a phone, after them. */}
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={[styles.main, wide && styles.mainWide]}>
           {list.isPending ? (
@@ -62,6 +63,7 @@ export function NoticesScreen() {
         <View style={[styles.settings, wide && styles.side]}>
           <MailPreferencesCard />
           <PasswordCard />
+          <AppearanceCard />
         </View>
       </View>
     </Screen>

@@ -235,7 +235,7 @@ const styles = StyleSheet.create({
   arrow: { fontFamily: fonts.semibold, fontSize: 12, color: colors.inkMuted },
   sortButton: { minHeight: minTouch, flexDirection: 'row', alignItems: 'center', gap: space.xs, paddingHorizontal: space.xs, borderRadius: radius.sm },
   sortButtonRight: { justifyContent: 'flex-end' },
-  sortHover: { backgroundColor: colors.line },
+  sortHover: { backgroundColor: colors.surfaceHover },
   focusRing: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: -3 } as object,
   right: { textAlign: 'right' },
   // Long e-mail addresses and part numbers wrap inside their column instead of running into the next.

@@ -4,7 +4,7 @@ import { colors, fonts } from '../theme';
 
 /** The Bungwise mark: a drum head seen from above, with its two bungs. */
 export function Logo({ inverse = false }: { inverse?: boolean }) {
-  const ink = inverse ? colors.onPrimary : colors.primary;
+  const ink = inverse ? colors.onNav : colors.primary;
   return (
     <View style={styles.row} accessibilityRole="header" aria-label="Bungwise">
       <Svg width={30} height={30} viewBox="0 0 30 30" aria-hidden>

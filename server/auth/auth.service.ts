@@ -14,6 +14,7 @@ export interface PublicUser {
   mailOff: string[];
   /** The client sends this person to the password change first; the server refuses everything else meanwhile. */
   mustChangePassword: boolean;
+  theme: User['theme'];
 }
 
 export const toPublicUser = (u: User): PublicUser => ({
@@ -25,6 +26,7 @@ export const toPublicUser = (u: User): PublicUser => ({
   lengthUnit: u.lengthUnit,
   mailOff: u.mailOff ?? [],
   mustChangePassword: u.mustChangePassword,
+  theme: u.theme ?? 'system',
 });
 
 // One message whatever was wrong, so the answer never tells whether an account exists.

@@ -1,5 +1,6 @@
 import { Column, Entity, JoinColumn, ManyToOne } from 'typeorm';
 import { ROLES, type Role } from '../../shared/roles';
+import type { ThemeChoice } from '../../shared/themes';
 import { Base } from './base';
 
 @Entity({ name: 'users' })
@@ -36,6 +37,10 @@ export class User extends Base {
   /** Kinds of notice this person does not want by e-mail (they still see them in the app). */
   @Column({ name: 'mail_off', type: 'varchar', length: 20, array: true, default: () => "'{}'" })
   mailOff: string[];
+
+  /** The colour theme this person chose (shared/themes.ts); 'system' follows each device's settings. */
+  @Column({ type: 'varchar', length: 8, default: 'system' })
+  theme: ThemeChoice;
 }
 
 /** An e-mailed reset link: only the SHA-256 of its token is kept; used once, or never after `expiresAt`. */

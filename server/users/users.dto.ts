@@ -1,6 +1,7 @@
 import { ArrayMaxSize, IsArray, IsBoolean, IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
 import { Optional } from '../common/fields';
 import { ROLES, type Role } from '../../shared/roles';
+import { THEME_CHOICES, type ThemeChoice } from '../../shared/themes';
 import { MAIL_KINDS } from '../mail/outbox';
 
 export class CreateUserDto {
@@ -49,4 +50,8 @@ export class UpdateMeDto {
   @ArrayMaxSize(MAIL_KINDS.length * 2, { message: `must list at most ${MAIL_KINDS.length * 2} kinds` })
   @IsIn(MAIL_KINDS, { each: true, message: `must list kinds among ${MAIL_KINDS.join(', ')}` })
   mailOff?: string[];
+
+  @Optional()
+  @IsIn(THEME_CHOICES, { message: `must be one of ${THEME_CHOICES.join(', ')}` })
+  theme?: ThemeChoice;
 }

@@ -54,12 +54,13 @@ export class UsersService {
     });
   }
 
-  /** The signed-in person's own preferences: length unit and which kinds of mail they want. */
+  /** The signed-in person's own preferences: length unit, which kinds of mail they want, colour theme. */
   async updateMe(id: string, dto: UpdateMeDto): Promise<PublicUser> {
     const repo = this.ds.getRepository(User);
     const user = await repo.findOneByOrFail({ id });
     if (dto.lengthUnit) user.lengthUnit = dto.lengthUnit;
     if (dto.mailOff) user.mailOff = [...new Set(dto.mailOff)];
+    if (dto.theme) user.theme = dto.theme;
     return toPublicUser(await repo.save(user));
   }
 }

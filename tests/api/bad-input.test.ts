@@ -112,7 +112,7 @@ const TARGETS: Record<string, Target> = {
   'POST /me/password': { method: 'post', path: () => '/me/password', body: () => ({ currentPassword: 'bungwise-demo', newPassword: 'long-enough-password' }), fields: { currentPassword: 'text', newPassword: 'text' } },
   'POST /auth/forgot-password': { method: 'post', path: () => '/auth/forgot-password', body: () => ({ email: 'admin@bungwise.example' }), fields: { email: 'email' } },
   'POST /auth/reset-password': { method: 'post', path: () => '/auth/reset-password', body: () => ({ token: 'A'.repeat(43), newPassword: 'long-enough-password' }), fields: { token: 'text', newPassword: 'text' } },
-  'PATCH /me': { method: 'patch', path: () => '/me', body: () => ({ lengthUnit: 'in' }), fields: { lengthUnit: 'enum' }, optional: ['lengthUnit'] },
+  'PATCH /me': { method: 'patch', path: () => '/me', body: () => ({ lengthUnit: 'in', theme: 'dark' }), fields: { lengthUnit: 'enum', theme: 'enum' }, optional: ['lengthUnit', 'theme'] },
   'POST /tube-sets/:id/standby': { method: 'post', path: () => `/tube-sets/${id.tubeSet}/standby`, body: () => ({ version: 1 }), fields: { version: 'int' } },
   'POST /tube-sets/:id/rinse': { method: 'post', path: () => `/tube-sets/${id.tubeSet}/rinse`, body: () => ({ note: 'x' }), fields: { note: 'text' }, optional: ['note'] },
   'POST /pairings/:id/reject': { method: 'post', path: () => `/pairings/${id.draft}/reject`, body: () => ({ comment: 'needs work' }), fields: { comment: 'text' } },

@@ -90,3 +90,27 @@ describe('people, managed by admins', () => {
     expect(missing.status).toBe(404);
   });
 });
+
+describe('a person\'s own colour theme', () => {
+  it("starts at 'system', is kept on the account by PATCH /me, and comes back at sign-in", async () => {
+    const buyer = await tokenFor(app, 'buyer@bungwise.example');
+    expect((await request(app).get('/api/me').set(bearer(buyer))).body.user.theme).toBe('system');
+    const res = await request(app).patch('/api/me').set(bearer(buyer)).send({ theme: 'contrast' });
+    expect(res.status).toBe(200);
+    expect(res.body.user.theme).toBe('contrast');
+    // Another preference leaves it alone.
+    await request(app).patch('/api/me').set(bearer(buyer)).send({ lengthUnit: 'in' });
+    expect((await request(app).get('/api/me').set(bearer(buyer))).body.user.theme).toBe('contrast');
+    const again = await request(app).post('/api/auth/sign-in').send({ email: 'buyer@bungwise.example', password: 'bungwise-demo' });
+    expect(again.body.user.theme).toBe('contrast');
+    await request(app).patch('/api/me').set(bearer(buyer)).send({ theme: 'system', lengthUnit: 'mm' });
+  });
+
+  it('refuses a theme it does not know, naming the field, and changes nothing', async () => {
+    const clerk = await tokenFor(app, 'clerk@bungwise.example');
+    const bad = await request(app).patch('/api/me').set(bearer(clerk)).send({ theme: 'neon' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.details[0]).toEqual({ field: 'theme', messages: ['must be one of system, light, dark, contrast'] });
+    expect((await request(app).get('/api/me').set(bearer(clerk))).body.user.theme).toBe('system');
+  });
+});

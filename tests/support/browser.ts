@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
-import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { makeTestApp } from './app';
 import { openTestDataSource, resetDatabase } from './db';
@@ -83,9 +83,12 @@ export class BrowserHarness {
     await this.ds?.destroy();
   }
 
-  /** A fresh context per viewport; every console error or page error is collected and fails the test. */
-  async page(viewport: Viewport): Promise<{ context: BrowserContext; page: Page }> {
-    const context = await this.browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+  /**
+   * A fresh context per viewport; every console error or page error is collected and fails the test. `options`
+   * adds context settings such as the device's colour scheme (`colorScheme`, `contrast`, `forcedColors`).
+   */
+  async page(viewport: Viewport, options: BrowserContextOptions = {}): Promise<{ context: BrowserContext; page: Page }> {
+    const context = await this.browser.newContext({ ...options, viewport: { width: viewport.width, height: viewport.height } });
     const page = this.watch(await context.newPage(), viewport);
     return { context, page };
   }
