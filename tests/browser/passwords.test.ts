@@ -159,6 +159,8 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
     await page.getByTestId(`user-reset-${email}-done`).scrollIntoViewIfNeeded();
     await harness.shot(page, 'people-reset-shown', viewport);
     await page.getByTestId(`user-reset-${email}-hide`).click();
+    // Hidden once "Done" is pressed: the element leaves the page (waited for, not read at once after the click).
+    await page.getByTestId(`user-reset-${email}-password`).waitFor({ state: 'detached' });
     expect(await page.getByTestId(`user-reset-${email}-password`).count()).toBe(0);
     await seen(page, `user-row-${email}`, 'on a temporary password');
 

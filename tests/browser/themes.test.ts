@@ -101,6 +101,9 @@ const DEVICE: Array<[ThemeName, BrowserContextOptions]> = [
   ['contrast', { colorScheme: 'light', contrast: 'more' }],
 ];
 
+// Each case opens five pages and runs axe on each: on a loaded two-core machine that passes 30 s.
+const SLOW = 120_000;
+
 describe.each(VIEWPORTS)('themes at $name width ($width px)', (viewport: Viewport) => {
   it.each(DEVICE)('follows the device to the %s palette: sign-in, dock, registry and lot pages pass colour contrast', async (theme, options) => {
     const p = palettes[theme];
@@ -125,8 +128,11 @@ describe.each(VIEWPORTS)('themes at $name width ($width px)', (viewport: Viewpor
     await harness.shot(page, `theme-${theme}-registry`, viewport);
 
     // The drawing takes its colours from the same properties: the slurry is surfaceSunk, the walls ink.
-    await go(page, `/receive/${lots.fits}`, 'drum-section');
+    await go(page, `/receive/${lots.fits}`, 'verdict-word');
     await seen(page, 'verdict-word', 'FITS');
+    // On a phone the details (with the drawing) start folded away.
+    if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
+    await page.getByTestId('drum-section').first().waitFor();
     const drawing = await page.getByTestId('drum-section').locator('svg rect').first().evaluate((el) => getComputedStyle(el).fill);
     expect(drawing).toBe(rgb(p.surfaceSunk));
     const wall = await page.getByTestId('drum-section').locator('svg rect').nth(1).evaluate((el) => getComputedStyle(el).stroke);
@@ -139,7 +145,7 @@ describe.each(VIEWPORTS)('themes at $name width ($width px)', (viewport: Viewpor
     await seen(page, 'verdict-word', 'NO FIT');
     await expectNoContrastViolations(page, `${theme} lot that does not fit`);
     await shotOf(page, 'verdict-word', `theme-${theme}-lot-no-fit`, viewport);
-  });
+  }, SLOW);
 
   it('takes the high contrast palette when the device forces its colours', async () => {
     const { page } = await open(viewport, { forcedColors: 'active' });
@@ -147,7 +153,7 @@ describe.each(VIEWPORTS)('themes at $name width ($width px)', (viewport: Viewpor
     const doc = await documentColours(page);
     expect(doc.ink.toUpperCase()).toBe(palettes.contrast.ink);
     expect(doc.bar).toBe(palettes.contrast.nav);
-  });
+  }, SLOW);
 
   it("keeps the person's choice over the device's: Light while the device is dark, after a reload, after sign-out, on another device", async () => {
     const { page } = await open(viewport, { colorScheme: 'dark' });
@@ -189,5 +195,5 @@ describe.each(VIEWPORTS)('themes at $name width ($width px)', (viewport: Viewpor
     await other.page.getByTestId('appearance-theme-system').click();
     await seen(other.page, 'appearance-status', 'Saved.');
     expect((await expectPalette(other.page, palettes.dark)).attribute).toBeNull();
-  });
+  }, SLOW);
 });
