@@ -1,16 +1,12 @@
+import { NOTICE_KIND_WORDS, NOTICE_KINDS, type NoticeKind } from '@/shared/notice-kinds';
 import { useMutation } from '@tanstack/react-query';
 import { api } from '../api/client';
 import { useSession } from '../session';
 import type { SessionUser } from './session';
 
-/** The kinds of notice that can also come by e-mail (the server's MAIL_KINDS), in the words of the settings. */
-export const MAIL_KINDS = [
-  { kind: 'lot-held', label: 'A lot is put on hold at the dock' },
-  { kind: 'hardware-gap', label: 'A plan or held lot needs hardware' },
-  { kind: 'pairing-review', label: 'A pairing awaits my review' },
-  { kind: 'pairing-decision', label: 'My pairing is approved or rejected' },
-] as const;
-export type MailKind = (typeof MAIL_KINDS)[number]['kind'];
+/** The kinds of notice that can also come by e-mail, in the words of the settings. */
+export const MAIL_KINDS = NOTICE_KINDS.map((kind) => ({ kind, label: NOTICE_KIND_WORDS[kind].setting }));
+export type MailKind = NoticeKind;
 
 /**
  * The signed-in person's e-mail choices, kept on their account (PATCH /me {mailOff}). Each change is sent at

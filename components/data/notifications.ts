@@ -1,9 +1,10 @@
+import type { NoticeKind } from '@/shared/notice-kinds';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../api/client';
 
 export interface NoticeRecord {
   id: string;
-  kind: 'lot-held' | 'hardware-gap' | 'pairing-review' | 'pairing-decision';
+  kind: NoticeKind;
   title: string;
   body: string;
   /** An app path, e.g. /receive/<id>. */

@@ -1,3 +1,4 @@
+import { NOTICE_KIND_WORDS } from '@/shared/notice-kinds';
 import { useRouter } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { useMarkAllNoticesReadMutation, useMarkNoticeReadMutation, useNotificationsQuery, type NoticeRecord } from '../data/notifications';
@@ -11,13 +12,6 @@ import { EmptyState, ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
 import { PasswordCard } from '../auth/password-card';
 import { MailPreferencesCard } from './mail-preferences-card';
-
-const KIND_WORDS: Record<NoticeRecord['kind'], string> = {
-  'lot-held': 'Lot on hold',
-  'hardware-gap': 'Hardware needed',
-  'pairing-review': 'Pairing to review',
-  'pairing-decision': 'Pairing decided',
-};
 
 /** Unread first, then newest first. */
 export function sortNotices(items: NoticeRecord[]): NoticeRecord[] {
@@ -82,7 +76,7 @@ function NoticeRow({ n }: { n: NoticeRecord }) {
     <View role="listitem">
       <Card style={unread ? styles.unread : undefined} testID={`notice-${n.id}`}>
         <View style={styles.head}>
-          <Text style={[styles.kind, unread && styles.kindUnread]}>{unread ? `● New · ${KIND_WORDS[n.kind]}` : KIND_WORDS[n.kind]}</Text>
+          <Text style={[styles.kind, unread && styles.kindUnread]}>{unread ? `● New · ${NOTICE_KIND_WORDS[n.kind].tag}` : NOTICE_KIND_WORDS[n.kind].tag}</Text>
           <Text style={type.small}>{formatWhen(n.createdAt)}</Text>
         </View>
         <Text style={[type.heading, !unread && { fontFamily: fonts.regular }]} testID={`notice-${n.id}-title`}>

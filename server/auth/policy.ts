@@ -52,6 +52,7 @@ export const POLICY: Readonly<Record<string, Access>> = {
   'POST /api/tools/flow': EVERYONE,
   'GET /api/tools/packaging-codes/:code': EVERYONE,
   'GET /api/tools/drum-types/:id/checks': EVERYONE,
+  'GET /api/dock-snapshot': DOCK,
   'GET /api/receiving-checks': EVERYONE,
   'GET /api/receiving-checks/:id': EVERYONE,
   'POST /api/receiving-checks': DOCK,

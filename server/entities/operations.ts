@@ -1,3 +1,4 @@
+import type { NoticeKind } from '../../shared/notice-kinds';
 import { Column, Entity, JoinColumn, ManyToOne } from 'typeorm';
 import { LOT_NUMBER_MAX_LENGTH } from '../../shared/lot-number';
 import type { TemperatureIndicator } from '../../shared/acceptance/types';
@@ -13,6 +14,10 @@ export type Verdict = 'fits' | 'caution' | 'no-fit';
 @Entity({ name: 'receiving_checks' })
 export class ReceivingCheck extends Base {
   @Text('lot_number', LOT_NUMBER_MAX_LENGTH) lotNumber: string;
+  /** A phone's key for a check it made offline (unique: a replay records nothing new). */
+  @Column({ name: 'client_key', type: 'uuid', nullable: true }) clientKey: string | null;
+  /** What the phone decided offline, for checks sent later: { decision, verdict, sentence, revision, madeAt }. */
+  @Column({ name: 'provisional', type: 'jsonb', nullable: true }) provisional: Record<string, unknown> | null;
   @NullableUuid('supplier_id') supplierId: string | null;
   @ManyToOne(() => Supplier) @JoinColumn({ name: 'supplier_id' }) supplier?: Supplier | null;
   @NullableUuid('slurry_id') slurryId: string | null;
@@ -49,7 +54,7 @@ export class ReceivingCheck extends Base {
 @Entity({ name: 'notifications' })
 export class Notification extends Base {
   @Uuid('user_id') userId: string;
-  @Text('kind', 20) kind: 'lot-held' | 'hardware-gap' | 'pairing-review' | 'pairing-decision';
+  @Text('kind', 20) kind: NoticeKind;
   @Text('title', 200) title: string;
   @Text('body', 4000) body: string;
   @NullableText('link', 300) link: string | null;

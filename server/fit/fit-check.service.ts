@@ -1,67 +1,26 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import { drumVerdict, evaluateCandidate, handlingCautions } from '../../shared/fit';
-import type { CandidateEvaluation, ConnectorInput, DrumInput, FitSettings, SlurryInput, StationInput, TubeInput, TubeSetInput, Verdict } from '../../shared/fit/types';
-import { describeThread, resolveSettings } from '../../shared/fit/rules';
+import type { DrumInput, FitSettings, StationInput } from '../../shared/fit/types';
+import { resolveSettings } from '../../shared/fit/rules';
+import { judgeDrum, POOL_LIMIT, TUBES_IN_WINDOW, TUBES_NEAR_MISS, type JudgedDrum, type PoolRow } from '../../shared/fit/search';
 import { fieldError, ValidationFailed } from '../common/errors';
 import { parseDto } from '../common/validate';
-import { Pairing, Slurry, Station, TubeSet } from '../entities';
+import { Slurry, Station, TubeSet } from '../entities';
 import { resolveKey, resolveThread } from '../registry/refs';
 import { loadSettings } from '../settings/settings.service';
 import { preparedQuery } from '../db/prepared';
 import type { Kept } from '../db/change-feed';
 import { FitCheckDto } from './fit-check.dto';
 
-const SEVERITY: Record<Verdict, number> = { fits: 0, caution: 1, 'no-fit': 2 };
-const STATUS_RANK: Record<Pairing['status'], number> = { approved: 0, draft: 1, retired: 2 };
-/** Candidates considered per check: enough for any real drum position, bounded for a large registry. */
-const POOL_LIMIT = 60;
-const ANSWER_LIMIT = 20;
-/** Tubes per thread taken from inside the reach window, and either side of it. */
-const TUBES_IN_WINDOW = 20;
-const TUBES_NEAR_MISS = 3;
+const isoOrNull = (d: Date | string | null): string | null => (d === null ? null : d instanceof Date ? d.toISOString() : d);
 
-export interface FitCandidate extends CandidateEvaluation {
-  dipTubeId: string;
-  dipTubePartNumber: string;
-  connectorId: string;
-  connectorPartNumber: string;
-  dipTubeThreadCode: string;
-  dipTubeLengthMm: number;
-  pairingId: string | null;
-  pairingStatus: Pairing['status'] | null;
-  installedAtStation: boolean;
-}
+/** A candidate row as the SQL reads it (the columns `judgeDrum` takes). */
+type CandidateRow = PoolRow;
 
-interface ResolvedDrum {
-  id: string | null;
-  name: string | null;
-  partNumber: string | null;
-  input: DrumInput;
+interface ResolvedDrum extends JudgedDrum {
   threadSpecIds: string[];
 }
 
-/** One candidate pairing as a flat row: read with plain SQL, since hydrating entities dominated the cost. */
-interface CandidateRow {
-  pairing_id: string;
-  status: Pairing['status'];
-  dip_tube_id: string;
-  tube_part: string;
-  thread_code: string;
-  length_mm: number;
-  tube_key: string | null;
-  channels: TubeInput['channels'];
-  connector_id: string;
-  head_part: string;
-  head_key: string | null;
-  feed_bore_mm: number;
-  feed_nominal: string;
-  return_bore_mm: number | null;
-  return_nominal: string | null;
-  return_path: ConnectorInput['returnPath'];
-  suited_to: ConnectorInput['suitedTo'];
-}
-
-const CANDIDATE_SQL = `
+export const CANDIDATE_SQL = `
   SELECT p.id AS pairing_id, p.status, t.id AS dip_tube_id, t.part_number AS tube_part, th.code AS thread_code, t.length_mm,
          tk.code AS tube_key, t.channels, c.id AS connector_id, c.part_number AS head_part, ck.code AS head_key,
          c.feed_bore_mm, c.feed_nominal, c.return_bore_mm, c.return_nominal, c.return_path, c.suited_to
@@ -129,27 +88,6 @@ interface AdHocDrum {
 }
 type DrumRef = { id: string } | AdHocDrum;
 
-const tubeInput = (p: CandidateRow): TubeInput => ({
-  id: p.dip_tube_id,
-  partNumber: p.tube_part,
-  threadCode: p.thread_code,
-  lengthMm: p.length_mm,
-  keyCode: p.tube_key,
-  channels: p.channels,
-});
-
-const connectorInput = (p: CandidateRow): ConnectorInput => ({
-  id: p.connector_id,
-  partNumber: p.head_part,
-  keyCode: p.head_key,
-  feedBoreMm: p.feed_bore_mm,
-  feedNominal: p.feed_nominal,
-  returnBoreMm: p.return_bore_mm,
-  returnNominal: p.return_nominal,
-  returnPath: p.return_path,
-  suitedTo: p.suited_to,
-});
-
 /** "Which tube and connector pairs fit this drum, and why": the server's authoritative answer. */
 export class FitCheckService {
   constructor(
@@ -212,67 +150,17 @@ export class FitCheckService {
     m: EntityManager,
     ctx: { drum: DrumRef; station: StationInput | null; stationRow: Station | null; slurry: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null; tubeSet: TubeSet | null; fieldForDrum: string },
   ) {
-    const { station, stationRow, slurry, tubeSet } = ctx;
-    const { drum, settings, pool } = await this.snapshot(m, ctx.drum, stationRow?.connectorId ?? null, ctx.fieldForDrum);
-    const slurryInput: SlurryInput | null = slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null;
-    const tubeSetInput: TubeSetInput | null = tubeSet ? { lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null;
-
-    const candidates: FitCandidate[] = pool.map((p) => ({
-      dipTubeId: p.dip_tube_id,
-      dipTubePartNumber: p.tube_part,
-      connectorId: p.connector_id,
-      connectorPartNumber: p.head_part,
-      dipTubeThreadCode: p.thread_code,
-      dipTubeLengthMm: p.length_mm,
-      pairingId: p.pairing_id,
-      pairingStatus: p.status,
-      installedAtStation: !!stationRow && stationRow.connectorId === p.connector_id,
-      ...evaluateCandidate({
-        drum: drum.input,
-        tube: tubeInput(p),
-        connector: connectorInput(p),
-        station,
-        slurry: slurryInput,
-        pairing: { status: p.status },
-        tubeSet: tubeSet && tubeSet.dipTubeId === p.dip_tube_id ? tubeSetInput : null,
-        settings,
-      }),
-    }));
-    candidates.sort(
-      (a, b) =>
-        SEVERITY[a.verdict] - SEVERITY[b.verdict] ||
-        Number(b.installedAtStation) - Number(a.installedAtStation) ||
-        STATUS_RANK[a.pairingStatus ?? 'retired'] - STATUS_RANK[b.pairingStatus ?? 'retired'] ||
-        a.dipTubePartNumber.localeCompare(b.dipTubePartNumber),
-    );
-    const verdict = drumVerdict(candidates);
-    const best = candidates[0];
-    return {
-      verdict,
-      summary: this.summary(verdict, drum, best, candidates.length),
-      drum: { id: drum.id, name: drum.name, partNumber: drum.partNumber, ...drum.input },
-      station: stationRow ? { id: stationRow.id, name: stationRow.name, ...station } : station,
-      slurry: slurry ? { ...slurry, ...slurryInput } : null,
-      tubeSet: tubeSet ? { id: tubeSet.id, label: tubeSet.label, dipTubeId: tubeSet.dipTubeId, lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null,
+    const { drum, settings, pool } = await this.snapshot(m, ctx.drum, ctx.stationRow?.connectorId ?? null, ctx.fieldForDrum);
+    const t = ctx.tubeSet;
+    return judgeDrum({
+      drum,
+      pool,
+      station: ctx.station,
+      stationRow: ctx.stationRow,
+      slurry: ctx.slurry,
+      tubeSet: t ? { id: t.id, label: t.label, dipTubeId: t.dipTubeId, lastRinsedAt: isoOrNull(t.lastRinsedAt), lastUsedAt: isoOrNull(t.lastUsedAt) } : null,
       settings,
-      candidates: candidates.slice(0, ANSWER_LIMIT).map(({ handling: _h, ...c }) => c),
-      candidateCount: candidates.length,
-      // Handling and pressure cautions go with every answer that involves hardware at a drum.
-      cautions: handlingCautions({ handlesSlurry: true, pressurised: !!station }),
-    };
-  }
-
-  private summary(verdict: Verdict, drum: ResolvedDrum, best: FitCandidate | undefined, count: number): string {
-    const what = drum.name ? `${drum.name} (${drum.partNumber})` : 'This drum';
-    if (!best) {
-      const threads = drum.input.openings.map((o) => describeThread(o.threadCode)).join(', ');
-      return `${what}: no registered tube and head pairing threads into its openings (${threads}). Order hardware for this drum design before it is tapped.`;
-    }
-    const pair = `tube ${best.dipTubePartNumber} with head ${best.connectorPartNumber}`;
-    if (verdict === 'fits') return `${what} fits: use ${pair} (approved pairing).`;
-    const firstProblem = best.rules.find((r) => r.outcome !== 'pass');
-    if (verdict === 'caution') return `${what}: caution with ${pair}. ${firstProblem?.message ?? ''}`.trim();
-    return `${what} does not fit any of the ${count} pairing(s) checked. Closest: ${pair}. ${firstProblem?.message ?? ''}`.trim();
+    });
   }
 
   /** The drum and its openings in one statement (this runs on every dock check). */

@@ -1,15 +1,11 @@
 import type { EntityManager } from 'typeorm';
+import { NOTICE_KIND_WORDS, NOTICE_KINDS, type NoticeKind } from '../../shared/notice-kinds';
 import { OutboxMessage, type User } from '../entities';
 
-export const MAIL_KINDS = ['lot-held', 'hardware-gap', 'pairing-review', 'pairing-decision'] as const;
-export type MailKind = (typeof MAIL_KINDS)[number];
+export const MAIL_KINDS = NOTICE_KINDS;
+export type MailKind = NoticeKind;
 
-export const MAIL_KIND_LABELS: Record<MailKind, string> = {
-  'lot-held': 'A lot was put on hold at the dock',
-  'hardware-gap': 'A sourcing plan or held lot needs hardware',
-  'pairing-review': 'A pairing awaits your review',
-  'pairing-decision': 'Your pairing was approved or rejected',
-};
+export const MAIL_KIND_LABELS: Record<MailKind, string> = Object.fromEntries(NOTICE_KINDS.map((k) => [k, NOTICE_KIND_WORDS[k].mail])) as Record<MailKind, string>;
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 

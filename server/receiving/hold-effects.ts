@@ -1,7 +1,8 @@
 import type { EntityManager } from 'typeorm';
 import { DrumType, HardwareWarning, type ReceivingCheck, Slurry, Station } from '../entities';
 import type { FitCheckService } from '../fit/fit-check.service';
-import { notifyRoles } from '../notifications/notifications.service';
+import { notifyRoles, notifyUser } from '../notifications/notifications.service';
+import type { LotDecision, LotVerdict } from '../../shared/dock/verdict';
 import { needsForStation, orderLines, totalOrder, type StationNeed } from '../sourcing/hardware-needs';
 
 /** "Lot X (2 drums, 55 gal steel…)": how notices and warnings name a lot. */
@@ -42,4 +43,28 @@ export async function raiseHoldNotices(m: EntityManager, fit: FitCheckService, r
   if (needs.length) {
     await notifyRoles(m, ['buyer'], { kind: 'hardware-gap', title: `Hardware needed for ${what}`, body: `${what} is held because the site lacks fitting hardware. What to order:`, link: `/sourcing/warnings`, lines: orderLines(totalOrder(needs)) }, userId);
   }
+}
+
+const DECISION_WORDS = { accept: 'accept', caution: 'caution', hold: 'hold', quarantine: 'quarantine' } as const;
+
+/**
+ * A check made offline was judged otherwise by the server (the registry changed since the phone kept it, or
+ * the phone's clock or copy was off): the clerk who made it and the engineers hear both verdicts.
+ */
+export async function noticeVerdictDiffers(
+  m: EntityManager,
+  r: ReceivingCheck,
+  phone: { decision: LotDecision; verdict: string; sentence: string; madeAt: string },
+  server: LotVerdict,
+  userId: string,
+): Promise<void> {
+  const what = await lotWords(m, r);
+  const notice = {
+    kind: 'verdict-differs' as const,
+    title: `${what}: the server's verdict differs from the phone's`,
+    body: `Worked out on the phone with no network (${phone.madeAt}): ${DECISION_WORDS[phone.decision]}. ${phone.sentence} Recorded by the server: ${DECISION_WORDS[server.decision]}. ${server.sentence} The server's verdict is the one recorded; check the lot before its drums go further.`.slice(0, 4000),
+    link: `/receive/${r.id}`,
+  };
+  await notifyUser(m, userId, notice);
+  await notifyRoles(m, ['engineer'], notice, userId);
 }

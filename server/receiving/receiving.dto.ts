@@ -1,12 +1,25 @@
 import { Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
+import { IsIn, IsInt, IsISO8601, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
 import { LOT_NUMBER_MAX_LENGTH, LOT_NUMBER_MESSAGES, LOT_NUMBER_PATTERN } from '../../shared/lot-number';
 import { IsCalendarDate, Optional, PageParam, PageSizeParam } from '../common/fields';
 import { TEMPERATURE_INDICATORS } from '../../shared/acceptance/types';
 import { LOT_STATUSES } from '../../shared/dock/lot-status';
+import { LOT_DECISIONS } from '../../shared/dock/verdict';
 import { AdHocDrumDto } from '../fit/fit-check.dto';
 
+/** What the phone decided for a check it made with no network (compared with the server's decision). */
+export class ProvisionalDto {
+  @IsIn(LOT_DECISIONS, { message: `must be one of ${LOT_DECISIONS.join(', ')}` }) decision: (typeof LOT_DECISIONS)[number];
+  @IsIn(['fits', 'caution', 'no-fit'], { message: 'must be fits, caution or no-fit' }) verdict: 'fits' | 'caution' | 'no-fit';
+  @IsString({ message: 'must be text' }) @MaxLength(2000, { message: 'must be at most 2000 characters' }) sentence: string;
+  @IsString({ message: 'must be text' }) @MaxLength(40, { message: 'must be at most 40 characters' }) revision: string;
+  @IsISO8601({ strict: true }, { message: 'must be a date and time' }) madeAt: string;
+}
+
 export class ReceivingCheckDto {
+  /** The phone's key for this check: sending the same key again records nothing new. */
+  @Optional() @IsUUID('all', { message: 'must be an id' }) clientKey?: string;
+  @Optional() @ValidateNested() @Type(() => ProvisionalDto) provisional?: ProvisionalDto;
   @IsString({ message: 'must be text' }) @MinLength(1, { message: LOT_NUMBER_MESSAGES.required })
   @MaxLength(LOT_NUMBER_MAX_LENGTH, { message: LOT_NUMBER_MESSAGES.tooLong })
   @Matches(LOT_NUMBER_PATTERN, { message: LOT_NUMBER_MESSAGES.characters })

@@ -5,11 +5,23 @@ import { body, parseQuery } from '../common/validate';
 import { parseId } from '../registry/resource';
 import { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
 import { ReceivingService } from './receiving.service';
+import { buildDockSnapshot } from './dock-snapshot';
 
 export function receivingRouter(ds: DataSource, clock?: () => Date): Router {
   const service = new ReceivingService(ds, clock);
   const router = Router();
   const r = secured(router);
+  // What a phone keeps to judge a lot offline; its revision is the ETag, so an unchanged registry costs a 304.
+  r.get('/dock-snapshot', async (req, res) => {
+    const snapshot = await buildDockSnapshot(ds, clock ? clock() : new Date());
+    const etag = `"${snapshot.revision}"`;
+    res.set('ETag', etag).set('Cache-Control', 'private, no-cache');
+    if (req.get('If-None-Match') === etag) {
+      res.status(304).end();
+      return;
+    }
+    res.json(snapshot);
+  });
   r.get('/receiving-checks', async (req, res) => {
     res.json(await service.list(await parseQuery(ReceivingListDto, req)));
   });
@@ -17,7 +29,8 @@ export function receivingRouter(ds: DataSource, clock?: () => Date): Router {
     res.json(await service.detail(parseId(req.params.id)));
   });
   r.post('/receiving-checks', body(ReceivingCheckDto), async (req, res) => {
-    res.status(201).json(await service.create(req.body as ReceivingCheckDto, req.user!.id));
+    const { check, replayed } = await service.create(req.body as ReceivingCheckDto, req.user!.id);
+    res.status(replayed ? 200 : 201).json(check);
   });
   r.post('/receiving-checks/:id/hold', body(HoldDto), async (req, res) => {
     res.json(await service.hold(parseId(req.params.id), req.body as HoldDto, req.user!.id));

@@ -1,4 +1,4 @@
-import type { DataSource, EntityManager } from 'typeorm';
+import { QueryFailedError, type DataSource, type EntityManager } from 'typeorm';
 import { lotDateProblems } from '../../shared/acceptance/rules';
 import { HELD_STATUSES } from '../../shared/dock/lot-status';
 import { holdReasonOf, type FitForVerdict, type LotVerdict } from '../../shared/dock/verdict';
@@ -7,7 +7,7 @@ import { ChangeOut, HardwareWarning, ReceivingCheck, Slurry, Station, Supplier }
 import { FitCheckService } from '../fit/fit-check.service';
 import { ensureExists } from '../registry/refs';
 import { audit } from '../audit/audit';
-import { raiseHoldNotices } from './hold-effects';
+import { noticeVerdictDiffers, raiseHoldNotices } from './hold-effects';
 import { certificateAttached, decide, siteToday } from './lot-decision';
 import type { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
 
@@ -34,6 +34,7 @@ export const receivingJson = (r: ReceivingCheck) => ({
   verdict: r.verdict,
   decision: r.decision,
   lotVerdict: r.acceptance,
+  provisional: r.provisional,
   result: r.result,
   checkedById: r.checkedById,
   checkedByName: r.checkedBy?.displayName ?? null,
@@ -47,6 +48,8 @@ export const receivingJson = (r: ReceivingCheck) => ({
   releasedAt: r.releasedAt,
   releaseComment: r.releaseComment,
 });
+
+const isClientKeyClash = (err: unknown) => err instanceof QueryFailedError && (err.driverError as { constraint?: string }).constraint === 'receiving_checks_client_key';
 
 const HELD_AS = { hold: 'on-hold', quarantine: 'quarantined' } as const;
 
@@ -65,7 +68,32 @@ export class ReceivingService {
     this.fit = new FitCheckService(ds);
   }
 
-  async create(dto: ReceivingCheckDto, userId: string) {
+  /**
+   * A dock check. With a `clientKey` (a phone's key, sent again when the network comes back) the same key
+   * records once: a replay answers the check already recorded, `replayed` set.
+   */
+  async create(dto: ReceivingCheckDto, userId: string): Promise<{ check: Awaited<ReturnType<ReceivingService['detail']>>; replayed: boolean }> {
+    if (dto.clientKey) {
+      const earlier = await this.byClientKey(dto.clientKey, userId);
+      if (earlier) return { check: await this.detail(earlier), replayed: true };
+    }
+    try {
+      return { check: await this.record(dto, userId), replayed: false };
+    } catch (err) {
+      // Two sends of one key at once: the unique index lets one through, the other answers it.
+      const earlier = dto.clientKey && isClientKeyClash(err) ? await this.byClientKey(dto.clientKey, userId) : null;
+      if (earlier) return { check: await this.detail(earlier), replayed: true };
+      throw err;
+    }
+  }
+
+  private async byClientKey(clientKey: string, userId: string): Promise<string | null> {
+    const row = await this.ds.getRepository(ReceivingCheck).findOne({ where: { clientKey }, select: { id: true, checkedById: true } });
+    if (row && row.checkedById !== userId) throw fieldError('clientKey', 'belongs to a check recorded by someone else');
+    return row?.id ?? null;
+  }
+
+  private async record(dto: ReceivingCheckDto, userId: string) {
     if (!dto.drumTypeId === !dto.drum) {
       throw new ValidationFailed([{ field: dto.drumTypeId ? 'drum' : 'drumTypeId', messages: ['pick a drum type or describe the drum, not both'] }]);
     }
@@ -84,6 +112,8 @@ export class ReceivingService {
       const held = verdict.decision === 'hold' || verdict.decision === 'quarantine';
       const saved = await tx.save(
         tx.create(ReceivingCheck, {
+          clientKey: dto.clientKey ?? null,
+          provisional: dto.provisional ? { ...dto.provisional } : null,
           lotNumber: dto.lotNumber.trim(),
           supplierId: dto.supplierId ?? null,
           slurryId: dto.slurryId ?? null,
@@ -105,6 +135,9 @@ export class ReceivingService {
       if (held) {
         await audit(tx, { userId, action: 'hold', entity: 'receiving-checks', entityId: saved.id, summary: `Lot ${saved.lotNumber} ${saved.status} by the rules: ${verdict.sentence}`, after: { status: saved.status, holdReason: saved.holdReason } });
         await raiseHoldNotices(tx, this.fit, saved, verdict.sentence, userId);
+      }
+      if (dto.provisional && (dto.provisional.decision !== verdict.decision || dto.provisional.verdict !== result.verdict)) {
+        await noticeVerdictDiffers(tx, saved, dto.provisional, verdict, userId);
       }
       return saved.id;
     });
