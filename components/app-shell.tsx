@@ -4,6 +4,8 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { ROLE_LABELS } from '@/shared/roles';
 import { isActive, navFor } from './navigation';
 import { NoticesIndicator } from './notifications/notices-indicator';
+import { NetworkStrip } from './offline/network-strip';
+import { useDockSnapshot } from './data/dock-snapshot';
 import { useSession } from './session';
 import { colors, fonts, minTouch, radius, space, type } from './theme';
 import { Logo } from './ui/logo';
@@ -15,6 +17,8 @@ export function AppShell({ children }: { children: ReactNode }) {
   const pathname = usePathname();
   const { session, end } = useSession();
   const [menuOpen, setMenuOpen] = useState(false);
+  // Kept on the device from the first visit, so the dock can judge a lot when the network is gone.
+  useDockSnapshot();
   if (!session) return null;
   const items = navFor(session.user.role);
   // On a phone: up to four primary items in the bottom bar, the rest behind "More".
@@ -57,7 +61,10 @@ export function AppShell({ children }: { children: ReactNode }) {
             {signOut}
           </View>
         </View>
-        <View style={styles.main}>{children}</View>
+        <View style={styles.main}>
+          <NetworkStrip />
+          {children}
+        </View>
       </View>
     );
   }
@@ -72,6 +79,7 @@ export function AppShell({ children }: { children: ReactNode }) {
           {signOut}
         </View>
       </View>
+      <NetworkStrip />
       <View style={styles.main}>{children}</View>
       {menuOpen ? (
         <View style={styles.menu} testID="nav-more-menu">

@@ -1,4 +1,5 @@
 // The typed API client: every screen's data goes through here (via the query modules in components/data).
+import { isOnline, reportUnreachable } from '../offline/network';
 export interface ApiErrorBody {
   code: string;
   message: string;
@@ -50,20 +51,37 @@ export function setUnauthorizedHandler(handler: (() => void) | null): void {
 
 const base = process.env.EXPO_PUBLIC_API_URL ?? '';
 
-export async function api<T>(path: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+/** How long a request may take before the network counts as gone (a dock's Wi-Fi can hang rather than fail). */
+export const REQUEST_TIMEOUT_MS = 15_000;
+
+export const OFFLINE_WRITE_MESSAGE = 'There is no network, so this change was not sent. Only dock checks are kept on this phone and sent later; try again when the network is back.';
+
+/** No answer from the server (no network, or it timed out): the one kind of failure worth trying again later. */
+export const isNetworkError = (err: unknown): boolean => err instanceof ApiError && (err.code === 'network' || err.code === 'offline');
+
+export async function api<T>(path: string, init: { method?: string; body?: unknown; queued?: boolean; timeoutMs?: number } = {}): Promise<T> {
+  const method = init.method ?? 'GET';
+  // Offline, a write other than a queued dock check is refused at once, in words, instead of hanging.
+  if (method !== 'GET' && !init.queued && !isOnline()) throw new ApiError(0, 'offline', OFFLINE_WRITE_MESSAGE, null);
   let res: Response;
+  const abort = new AbortController();
+  const timer = setTimeout(() => abort.abort(), init.timeoutMs ?? REQUEST_TIMEOUT_MS);
   try {
     res = await fetch(`${base}/api${path}`, {
-      method: init.method ?? 'GET',
+      method,
       headers: {
         Accept: 'application/json',
         ...(init.body !== undefined ? { 'Content-Type': 'application/json' } : {}),
         ...(token ? { Authorization: `Bearer ${token}` } : {}),
       },
       body: init.body !== undefined ? JSON.stringify(init.body) : undefined,
+      signal: abort.signal,
     });
   } catch {
+    reportUnreachable(base);
     throw new ApiError(0, 'network', 'The server could not be reached. Check the connection and try again.', null);
+  } finally {
+    clearTimeout(timer);
   }
   const text = await res.text();
   const data = text ? safeJson(text) : null;

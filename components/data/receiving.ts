@@ -87,6 +87,8 @@ export interface ReceivingCheckInput {
   productionDate?: string;
   expiryDate?: string;
   temperatureIndicator?: TemperatureIndicator;
+  /** The phone's key for this check: a second send of it records nothing new. */
+  clientKey?: string;
 }
 
 export interface ReceivingListParams {

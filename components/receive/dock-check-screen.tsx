@@ -14,6 +14,8 @@ import { DockResult, RESULT_ID } from './dock-result';
 import { LinkButton } from './parts';
 import { revealNativeId } from './reveal';
 import { useDockForm } from './use-dock-form';
+import { ProvisionalResult } from './provisional-result';
+import { WaitingChecks } from './waiting-checks';
 
 /**
  * The dock check: a lot's drums checked against the site's hardware and the lot against its slurry's
@@ -23,12 +25,12 @@ export function DockCheckScreen() {
   const wide = useIsWide();
   const { session } = useSession();
   const form = useDockForm();
-  const shown = !!form.recordId;
+  const shown = !!form.recordId || !!form.provisional;
 
   // The verdict replaces the form: bring its top into view (the form was scrolled to its submit button).
   useEffect(() => {
     if (shown) revealNativeId(RESULT_ID);
-  }, [shown, form.recordId]);
+  }, [shown, form.recordId, form.provisional]);
 
   if (session && !hasRole(DOCK_ROLES, session.user.role)) {
     return (
@@ -41,6 +43,7 @@ export function DockCheckScreen() {
     );
   }
   if (form.recordId) return <DockResult recordId={form.recordId} onAgain={form.startAgain} />;
+  if (form.provisional) return <ProvisionalResult shown={form.provisional} onAgain={form.startAgain} />;
 
   const footer = (
     <View style={styles.submit}>
@@ -62,6 +65,7 @@ export function DockCheckScreen() {
       footer={footer}
     >
       <HandlingCaution />
+      <WaitingChecks />
       {wide ? (
         <View style={styles.columns}>
           <View style={styles.col}>

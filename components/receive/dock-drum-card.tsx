@@ -1,7 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { DrumTypeRecord, StationRecord } from '@/shared/api-types';
-import { drumTypeQueries } from '../data/drum-types';
-import { stationQueries } from '../data/stations';
+import { keptDrumTypes, keptStations } from './dock-sources';
 import { space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
@@ -28,7 +27,7 @@ export function DockDrumCard({ form }: { form: DockForm }) {
         <RecordPicker<DrumTypeRecord>
           label="Drum type"
           hint="Search by name, part number or supplier."
-          source={drumTypeQueries}
+          source={keptDrumTypes}
           toOption={(d) => ({ id: d.id, label: d.name, detail: `${d.partNumber} · ${d.supplierName ?? ''} · ${d.openings.map((o) => o.threadCode).join(' + ')}` })}
           value={draft.drumType}
           onChange={(p) => set('drumType', p)}
@@ -74,7 +73,7 @@ export function DockStationCard({ form }: { form: DockForm }) {
       <RecordPicker<StationRecord>
         label="Station the lot is for"
         hint="Adds the station's tapping, agitation, installed head and ready tube set to the check."
-        source={stationQueries}
+        source={keptStations}
         toOption={(s) => ({ id: s.id, label: s.name, detail: `${s.bay} · head ${s.connectorPartNumber ?? 'none'}` })}
         value={form.draft.station}
         onChange={(p) => form.set('station', p)}

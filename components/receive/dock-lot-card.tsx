@@ -1,8 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { TEMPERATURE_INDICATOR_LABELS, TEMPERATURE_INDICATORS } from '@/shared/acceptance/types';
 import { REGION_LABELS, type SlurryRecord, type SupplierRecord } from '@/shared/api-types';
-import { slurryQueries } from '../data/slurries';
-import { supplierQueries } from '../data/suppliers';
+import { keptSlurries, keptSuppliers } from './dock-sources';
 import { space } from '../theme';
 import { Card } from '../ui/card';
 import { ChoiceChips } from '../ui/choice-chips';
@@ -26,7 +25,7 @@ export function DockLotCard({ form }: { form: DockForm }) {
       <RecordPicker<SlurryRecord>
         label="Slurry"
         hint="Its shelf life, storage range and certificate are checked; foaming and shear-sensitive slurries against the station."
-        source={slurryQueries}
+        source={keptSlurries}
         toOption={(s) => ({ id: s.id, label: s.name, detail: s.supplierName ?? undefined })}
         value={draft.slurry}
         onChange={(picked, rec) => {
@@ -41,7 +40,7 @@ export function DockLotCard({ form }: { form: DockForm }) {
       />
       <RecordPicker<SupplierRecord>
         label="Supplier"
-        source={supplierQueries}
+        source={keptSuppliers}
         toOption={(s) => ({ id: s.id, label: `${s.name} (${REGION_LABELS[s.region]})` })}
         value={draft.supplier}
         onChange={(p) => set('supplier', p)}

@@ -3,7 +3,11 @@ import type { TextInput } from 'react-native';
 import { localDate, lotDateProblems, type TemperatureIndicator } from '@/shared/acceptance';
 import type { DrumLabel } from '@/shared/gs1';
 import { lotNumberProblem } from '@/shared/lot-number';
-import { ApiError } from '../api/client';
+import { provisionalCheck, SnapshotGap, type ProvisionalCheck } from '@/shared/dock/snapshot';
+import { ApiError, isNetworkError } from '../api/client';
+import { useDockSnapshot } from '../data/dock-snapshot';
+import { useQueueDockCheck } from '../data/dock-queue';
+import { isOnline } from '../offline/network';
 import { useLengthUnit } from '../data/me';
 import { useReceivingCheckCreateMutation, type ReceivingCheckInput } from '../data/receiving';
 import { useSettingsQuery } from '../data/settings';
@@ -66,6 +70,33 @@ const SERVER_FIELDS: Record<string, [string, string]> = {
   temperatureIndicator: ['indicator', 'Temperature indicator'],
 };
 
+/** The server's (or the kept registry's) field messages, placed beside the dock form's fields. */
+function placeFieldMessages(f: Record<string, string>, whole = false): DockErrors {
+  const next: DockErrors = {};
+  for (const [path, message] of Object.entries(f)) {
+    const mapped = SERVER_FIELDS[path];
+    const opening = /^drum\.openings\.(\d+)\./.exec(path);
+    if (mapped && !next[mapped[0]]) next[mapped[0]] = whole ? message : `${mapped[1]} ${message}.`;
+    else if (opening) next[`opening${opening[1]}`] = whole ? message : `This opening ${message}.`;
+  }
+  return next;
+}
+
+/** A check worked out on this phone with no network, shown as provisional while it waits to be sent. */
+export interface ProvisionalShown {
+  check: ProvisionalCheck;
+  body: ReceivingCheckInput;
+  clientKey: string;
+  /** When the server last confirmed the kept registry. */
+  registryAsOf: string;
+}
+
+const newKey = (): string =>
+  typeof crypto !== 'undefined' && 'randomUUID' in crypto
+    ? crypto.randomUUID()
+    : // crypto.randomUUID exists only in secure contexts (not on a plain-http intranet address): RFC 4122 v4 from getRandomValues.
+      '10000000-1000-4000-8000-100000000000'.replace(/[018]/g, (c) => (Number(c) ^ (crypto.getRandomValues(new Uint8Array(1))[0] & (15 >> (Number(c) / 4)))).toString(16));
+
 function check(d: DockDraft, today: string): { body: ReceivingCheckInput | null; problems: DockErrors } {
   const problems: DockErrors = {};
   const n = parseNumber(d.count);
@@ -113,6 +144,9 @@ export function useDockForm() {
   const { unit } = useLengthUnit();
   const settings = useSettingsQuery();
   const create = useReceivingCheckCreateMutation();
+  const queue = useQueueDockCheck();
+  const kept = useDockSnapshot();
+  const [provisional, setProvisional] = useState<ProvisionalShown | null>(null);
   const [draft, setDraft] = useState<DockDraft>(() => emptyDraft(unit));
   const [errors, setErrors] = useState<DockErrors>({});
   const [formError, setFormError] = useState<string | null>(null);
@@ -142,25 +176,48 @@ export function useDockForm() {
       setFormError('Some fields need attention; see the messages beside them.');
       return;
     }
-    create.mutate(body, {
-      onSuccess: (saved) => setRecordId(saved.id),
-      onError: (err) => {
-        const f = err instanceof ApiError ? err.fieldMessages() : {};
-        const next: DockErrors = {};
-        for (const [path, message] of Object.entries(f)) {
-          const mapped = SERVER_FIELDS[path];
-          const opening = /^drum\.openings\.(\d+)\./.exec(path);
-          if (mapped && !next[mapped[0]]) next[mapped[0]] = `${mapped[1]} ${message}.`;
-          else if (opening) next[`opening${opening[1]}`] = `This opening ${message}.`;
-        }
-        setErrors(next);
-        setFormError(Object.values(next).some(Boolean) ? 'The check was refused; see the messages beside the fields.' : err.message);
+    const clientKey = newKey();
+    const sendLater = () => {
+      const registry = kept.data;
+      if (!registry) {
+        setFormError('There is no network, and this phone has no copy of the registry yet to judge the lot with. Open the dock check once with the network on; then it works without.');
+        return;
+      }
+      try {
+        const now = new Date();
+        const worked = provisionalCheck(registry.snapshot, body, now);
+        const said = { decision: worked.lotVerdict.decision, verdict: worked.result.verdict, sentence: worked.lotVerdict.sentence, revision: registry.snapshot.revision, madeAt: now.toISOString() };
+        queue.mutate({ body: { ...body, clientKey, provisional: said }, queuedAt: now.toISOString() });
+        setProvisional({ check: worked, body, clientKey, registryAsOf: registry.fetchedAt });
+      } catch (err) {
+        if (!(err instanceof SnapshotGap)) throw err;
+        setErrors(placeFieldMessages({ [err.field]: err.message }, true));
+        setFormError(err.message);
+      }
+    };
+    if (!isOnline()) {
+      sendLater();
+      return;
+    }
+    create.mutate(
+      { ...body, clientKey },
+      {
+        onSuccess: (saved) => setRecordId(saved.id),
+        onError: (err) => {
+          // No answer: judged here and sent later under the same key (if the first send did arrive, the server
+          // answers it again instead of recording twice).
+          if (isNetworkError(err)) return sendLater();
+          const next = placeFieldMessages(err instanceof ApiError ? err.fieldMessages() : {});
+          setErrors(next);
+          setFormError(Object.values(next).some(Boolean) ? 'The check was refused; see the messages beside the fields.' : err.message);
+        },
       },
-    });
+    );
   };
 
   const startAgain = () => {
     setRecordId(undefined);
+    setProvisional(null);
     setDraft(emptyDraft(unit));
     setErrors({});
     setFormError(null);
@@ -168,7 +225,7 @@ export function useDockForm() {
     setTimeout(() => lotRef.current?.focus(), 0);
   };
 
-  return { draft, set, applyLabel, errors, formError, submit, saving: create.isPending, recordId, startAgain, lotRef };
+  return { draft, set, applyLabel, errors, formError, submit, saving: create.isPending, recordId, provisional, startAgain, lotRef };
 }
 
 export type DockForm = ReturnType<typeof useDockForm>;

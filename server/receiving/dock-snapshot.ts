@@ -24,7 +24,7 @@ export async function buildDockSnapshot(ds: DataSource, now: Date): Promise<Dock
       await m.find(DrumType, { relations: { supplier: true, openings: { threadSpec: true, keyCode: true } } }),
       await m.find(Station, { relations: { connector: true } }),
       await m.find(TubeSet, { where: { state: 'ready' } }),
-      await m.find(Slurry, { relations: { supplier: true } }),
+      await m.find(Slurry, { relations: { supplier: true, drumType: true } }),
       await m.find(Supplier),
       await m.find(ThreadSpec),
       (await m.query(`SELECT t.id, th.code AS "threadCode", t.length_mm AS "lengthMm" FROM dip_tubes t JOIN thread_specs th ON th.id = t.thread_spec_id ORDER BY t.id`)) as DockSnapshot['tubes'],
@@ -64,7 +64,7 @@ export async function buildDockSnapshot(ds: DataSource, now: Date): Promise<Dock
         })
         .sort((a, b) => byText(a.id, b.id)),
       slurries: slurries
-        .map((s) => ({ id: s.id, name: s.name, supplierName: s.supplier?.name ?? null, foams: s.foams, shearSensitive: s.shearSensitive, acceptance: slurryAcceptance(s) }))
+        .map((s) => ({ id: s.id, name: s.name, supplierId: s.supplierId, supplierName: s.supplier?.name ?? null, region: s.region, drumTypeId: s.drumTypeId, drumTypeName: s.drumType?.name ?? null, foams: s.foams, shearSensitive: s.shearSensitive, acceptance: slurryAcceptance(s) }))
         .sort((a, b) => byText(a.id, b.id)),
       suppliers: suppliers.map((s) => ({ id: s.id, name: s.name, region: s.region })).sort((a, b) => byText(a.id, b.id)),
     };

@@ -32,7 +32,12 @@ export interface SnapshotStation {
 export interface SnapshotSlurry {
   id: string;
   name: string;
+  supplierId: string;
   supplierName: string | null;
+  region: Region;
+  /** The drum type it usually arrives in (the dock form fills it in). */
+  drumTypeId: string | null;
+  drumTypeName: string | null;
   foams: boolean;
   shearSensitive: boolean;
   acceptance: SlurryAcceptance;
@@ -105,7 +110,7 @@ export function provisionalCheck(snap: DockSnapshot, q: DockQuestion, now: Date)
   const drum = drumOf(snap, q);
   const settings = snap.settings;
   if (drum.input.insideDepthMm <= settings.tipClearanceMaxMm) {
-    throw new SnapshotGap(q.drum ? 'drum.insideDepthMm' : 'drumTypeId', `inside depth must be more than the site's largest tip clearance (${settings.tipClearanceMaxMm} mm)`);
+    throw new SnapshotGap(q.drum ? 'drum.insideDepthMm' : 'drumTypeId', `The inside depth must be more than the site's largest tip clearance (${settings.tipClearanceMaxMm} mm).`);
   }
   const station = q.stationId ? snap.stations.find((s) => s.id === q.stationId) : undefined;
   if (q.stationId && !station) throw new SnapshotGap('stationId', 'This station is not in the registry kept on this phone.');

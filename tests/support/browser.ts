@@ -126,10 +126,10 @@ export async function signInAs(page: Page, baseUrl: string, email: string, passw
 export const textOf = async (page: Page, testID: string) => (await page.getByTestId(testID).first().textContent()) ?? '';
 
 /** Waits until the element's text matches: the page updates after the request a click started. */
-export async function seen(page: Page, testID: string, pattern: RegExp | string): Promise<void> {
+export async function seen(page: Page, testID: string, pattern: RegExp | string, timeout = 10_000): Promise<void> {
   const re = typeof pattern === 'string' ? new RegExp(pattern.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')) : pattern;
   try {
-    await page.getByTestId(testID).filter({ hasText: re }).first().waitFor({ timeout: 10_000 });
+    await page.getByTestId(testID).filter({ hasText: re }).first().waitFor({ timeout });
   } catch {
     throw new Error(`${testID} never showed ${re}; it shows "${await textOf(page, testID).catch(() => '(nothing)')}"`);
   }
