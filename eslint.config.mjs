@@ -22,6 +22,13 @@ export default tseslint.config(
   {
     files: ['app/**/*.{ts,tsx}', 'components/**/*.{ts,tsx}'],
     ...reactHooks.configs.flat.recommended,
+    rules: {
+      ...reactHooks.configs.flat.recommended.rules,
+      // Both are advice for the React Compiler, which this app does not use: the effects flagged set state from
+      // storage, a service worker or a changed prop on purpose, and TanStack Table's hook is only "incompatible" with it.
+      'react-hooks/set-state-in-effect': 'off',
+      'react-hooks/incompatible-library': 'off',
+    },
   },
   {
     // Metro's and Babel's configuration files are CommonJS, read with require().

@@ -22,7 +22,6 @@ const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
 const env = { ...process.env };
 const pgPort = Number(env.BUNGWISE_PG_PORT ?? 54329);
 const appPort = Number(env.PORT ?? 8080);
-const demo = env.BUNGWISE_DEMO !== '0';
 let dataDir = path.resolve(root, env.BUNGWISE_DATA_DIR ?? '.data');
 
 /** A start-up failure the user can fix: one sentence, no stack trace. */
