@@ -4,13 +4,6 @@ import { OutboxMessage, type User } from '../entities';
 export const MAIL_KINDS = ['lot-held', 'hardware-gap', 'pairing-review', 'pairing-decision'] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 
-export const MAIL_KIND_LABELS: Record<MailKind, string> = {
-  'lot-held': 'A lot was put on hold at the dock',
-  'hardware-gap': 'A sourcing plan or held lot needs hardware',
-  'pairing-review': 'A pairing awaits your review',
-  'pairing-decision': 'Your pairing was approved or rejected',
-};
-
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
 export function publicUrl(path: string | null | undefined): string {
