@@ -299,6 +299,10 @@ function ensureSecret(name) {
 async function main() {
   ensureDependencies();
   checkDiskSpace();
+  // Lint first (ESLint, then Prettier's check), so that a problem ends the run before PostgreSQL or the export start.
+  if (mode === 'test' && run('npm', ['run', '--silent', 'lint']) !== 0) {
+    fail('Lint found the problems above: `npx eslint --fix .` and `npx prettier --write .` fix most of them (DEVELOPERS.md, "Lint and format").');
+  }
 
   if (mode === 'start' && !(await portFree(appPort))) {
     fail(`Port ${appPort} is taken by another program: stop it or set PORT to a free port.`);
