@@ -6,8 +6,10 @@ import { fonts } from './theme';
 // export step also preloads these files from index.html, so the swap rarely shows on a first visit.
 const file = (uri: number): FontSource => ({ uri, display: FontDisplay.SWAP });
 
+/* eslint-disable @typescript-eslint/no-require-imports -- Metro gives an asset's module id only through require() */
 export const FONT_FILES: Record<string, FontSource> = {
   [fonts.regular]: file(require('@fontsource/source-sans-3/files/source-sans-3-latin-400-normal.woff2')),
   [fonts.semibold]: file(require('@fontsource/source-sans-3/files/source-sans-3-latin-600-normal.woff2')),
   [fonts.bold]: file(require('@fontsource/source-sans-3/files/source-sans-3-latin-700-normal.woff2')),
 };
+/* eslint-enable @typescript-eslint/no-require-imports */

@@ -4,7 +4,6 @@ import { colors } from './theme-colors';
 
 /** Colour names for styles; the values live in palettes.ts (on the web they are `var(--bw-…)`, see there). */
 export { colors };
-export { palettes, type ColorName, type Palette } from './palettes';
 
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
 

@@ -22,7 +22,6 @@ const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
 const env = { ...process.env };
 const pgPort = Number(env.BUNGWISE_PG_PORT ?? 54329);
 const appPort = Number(env.PORT ?? 8080);
-const demo = env.BUNGWISE_DEMO !== '0';
 let dataDir = path.resolve(root, env.BUNGWISE_DATA_DIR ?? '.data');
 
 /** A start-up failure the user can fix: one sentence, no stack trace. */
@@ -300,6 +299,10 @@ function ensureSecret(name) {
 async function main() {
   ensureDependencies();
   checkDiskSpace();
+  // Lint first (ESLint, then Prettier's check), so that a problem ends the run before PostgreSQL or the export start.
+  if (mode === 'test' && run('npm', ['run', '--silent', 'lint']) !== 0) {
+    fail('Lint found the problems above: `npx eslint --fix .` and `npx prettier --write .` fix most of them (DEVELOPERS.md, "Lint and format").');
+  }
 
   if (mode === 'start' && !(await portFree(appPort))) {
     fail(`Port ${appPort} is taken by another program: stop it or set PORT to a free port.`);

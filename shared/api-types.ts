@@ -1,5 +1,4 @@
 // The JSON shapes the registry API answers with, shared by the server's serialisers and the client.
-import type { Role } from './roles';
 
 export type Region = 'NA' | 'EU' | 'JP' | 'TW' | 'KR' | 'CN' | 'SG' | 'other';
 export const REGION_LABELS: Record<Region, string> = {
@@ -242,13 +241,6 @@ export interface FitCheckResult {
   candidates: FitCandidateRecord[];
   candidateCount: number;
   cautions: Array<{ topic: string; message: string }>;
-}
-
-export interface UserSummary {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
 }
 
 /** One thing to order: registered parts by part number, an approval, or a specification to buy to. */

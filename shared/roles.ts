@@ -9,10 +9,6 @@ export const ROLE_LABELS: Record<Role, string> = {
   admin: 'Administrator',
 };
 
-export function isRole(value: unknown): value is Role {
-  return typeof value === 'string' && (ROLES as readonly string[]).includes(value);
-}
-
 // Role groups: the one home for "who may", read by the route policy (server/auth/policy.ts) and by the
 // screens that decide what to offer. A screen never writes its own list of roles.
 /** Engineers and administrators: registry changes, releasing a held or quarantined lot. */

@@ -1,4 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
+import { useCallback } from 'react';
 import type { ThemeChoice } from '@/shared/themes';
 import { formatLength, fromMm, toMm, type LengthUnit } from '@/shared/units';
 import { api } from '../api/client';
@@ -10,6 +11,8 @@ import type { SessionUser } from './session';
 export function useLengthUnit() {
   const { session, updateUser } = useSession();
   const unit: LengthUnit = session?.user.lengthUnit ?? 'mm';
+  // Changes only with the unit, so that lists may build their columns once per unit.
+  const show = useCallback((mm: number | null | undefined, digits?: number) => (mm == null ? '—' : formatLength(mm, unit, digits)), [unit]);
   const change = useMutation({
     mutationFn: (next: LengthUnit) => api<{ user: SessionUser }>('/me', { method: 'PATCH', body: { lengthUnit: next } }),
     onSuccess: ({ user }) => updateUser(user),
@@ -18,7 +21,7 @@ export function useLengthUnit() {
     unit,
     setUnit: (next: LengthUnit) => change.mutate(next),
     /** A stored mm value shown in the user's unit, e.g. "851 mm" or "33.504 in". */
-    show: (mm: number | null | undefined, digits?: number) => (mm == null ? '—' : formatLength(mm, unit, digits)),
+    show,
     /** A value typed in the user's unit, to mm for the API. */
     toMm: (value: number) => toMm(value, unit),
     fromMm: (mm: number) => fromMm(mm, unit),

@@ -27,7 +27,3 @@ export function usePairingActionMutation(action: PairingAction) {
     },
   });
 }
-
-export const usePairingApproveMutation = () => usePairingActionMutation('approve');
-export const usePairingRejectMutation = () => usePairingActionMutation('reject');
-export const usePairingRetireMutation = () => usePairingActionMutation('retire');

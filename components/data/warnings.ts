@@ -1,7 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page } from '@/shared/api-types';
+import type { OrderLine, Page, StationNeed } from '@/shared/api-types';
 import { api } from '../api/client';
-import type { OrderLine, StationImpact } from './sourcing';
 
 export type WarningStatus = 'open' | 'acknowledged' | 'resolved';
 
@@ -16,7 +15,7 @@ export interface HardwareWarningRecord {
   planSlurryName: string | null;
   status: WarningStatus;
   summary: string;
-  needs: Array<{ stations: StationImpact[]; order: OrderLine[] }>;
+  needs: Array<{ stations: StationNeed[]; order: OrderLine[] }>;
   acknowledgedByName: string | null;
   acknowledgedAt: string | null;
   resolvedByName: string | null;

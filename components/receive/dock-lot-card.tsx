@@ -16,11 +16,11 @@ const INDICATOR_OPTIONS = TEMPERATURE_INDICATORS.map((value) => ({ value, label:
 
 /** The lot as its label says (typed, or scanned: number and dates): number, drums, slurry and supplier. */
 export function DockLotCard({ form }: { form: DockForm }) {
-  const { draft, set, errors } = form;
+  const { draft, set, errors, lotRef, applyLabel } = form;
   return (
     <Card>
       <SectionTitle>The lot</SectionTitle>
-      <LotNumberField ref={form.lotRef} value={draft.lot} onChangeText={(v) => set('lot', v)} label={draft.label} onLabel={form.applyLabel} error={errors.lotNumber} testID="dock-lot" />
+      <LotNumberField ref={lotRef} value={draft.lot} onChangeText={(v) => set('lot', v)} label={draft.label} onLabel={applyLabel} error={errors.lotNumber} testID="dock-lot" />
       <NumberField label="Drums in this lot" value={draft.count} onChangeText={(v) => set('count', v)} inputMode="numeric" suffix="drums" error={errors.drumCount} testID="dock-count" />
       <RecordPicker<SlurryRecord>
         label="Slurry"

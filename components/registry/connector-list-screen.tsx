@@ -8,7 +8,7 @@ import { RegistryListScreen } from './registry-list-screen';
 const col = createColumnHelper<ConnectorRecord>();
 
 export function ConnectorListScreen() {
-  const { show, unit } = useLengthUnit();
+  const { show } = useLengthUnit();
   const columns = useMemo(
     () => [
       col.accessor('partNumber', { id: 'partNumber', header: 'Part number', enableSorting: true, meta: { primary: true, flex: 1.8 } }),
@@ -24,8 +24,7 @@ export function ConnectorListScreen() {
       col.accessor('keyCode', { id: 'keyCode', header: 'Key', meta: { flex: 1.1 } }),
       col.accessor('supplierName', { id: 'supplierName', header: 'Supplier', meta: { flex: 1.5, hideOnPhone: true } }),
     ],
-    // `show` is a new function each render but only changes with the unit.
-    [unit],
+    [show],
   );
   return (
     <RegistryListScreen<ConnectorRecord>

@@ -8,7 +8,7 @@ import { RegistryListScreen } from './registry-list-screen';
 const col = createColumnHelper<DipTubeRecord>();
 
 export function DipTubeListScreen() {
-  const { show, unit } = useLengthUnit();
+  const { show } = useLengthUnit();
   const columns = useMemo(
     () => [
       col.accessor('partNumber', { id: 'partNumber', header: 'Part number', enableSorting: true, meta: { primary: true, flex: 1.8 } }),
@@ -20,8 +20,7 @@ export function DipTubeListScreen() {
       col.accessor('material', { id: 'material', header: 'Material', meta: { flex: 0.9, hideOnPhone: true } }),
       col.accessor('supplierName', { id: 'supplierName', header: 'Supplier', meta: { flex: 1.6, hideOnPhone: true } }),
     ],
-    // `show` is a new function each render but only changes with the unit.
-    [unit],
+    [show],
   );
   return (
     <RegistryListScreen<DipTubeRecord>

@@ -8,7 +8,7 @@ import { RegistryListScreen } from './registry-list-screen';
 const col = createColumnHelper<DrumTypeRecord>();
 
 export function DrumTypeListScreen() {
-  const { show, unit } = useLengthUnit();
+  const { show } = useLengthUnit();
   const columns = useMemo(
     () => [
       col.accessor('name', { id: 'name', header: 'Name', enableSorting: true, meta: { primary: true, flex: 2.6 } }),
@@ -18,8 +18,7 @@ export function DrumTypeListScreen() {
       col.accessor('insideDepthMm', { id: 'insideDepthMm', header: 'Inside depth', enableSorting: true, cell: (c) => show(c.getValue()), meta: { align: 'right', flex: 1.2 } }),
       col.accessor((d) => openingThreads(d.openings), { id: 'openings', header: 'Bung threads', meta: { flex: 1.5 } }),
     ],
-    // `show` is a new function each render but only changes with the unit.
-    [unit],
+    [show],
   );
   return (
     <RegistryListScreen<DrumTypeRecord>

@@ -28,7 +28,7 @@ interface RegistryListScreenProps<T extends { id: string }> {
   /** What the search matches, as a placeholder: "Part number or material". */
   searchHint: string;
   useList: (params: ListParams) => UseQueryResult<Page<T>>;
-  columns: ColumnDef<T, any>[];
+  columns: ColumnDef<T, unknown>[];
   defaultSort: TableSort;
   filters: readonly FilterKind[];
   /** The row's test id suffix: its part number or name. */

@@ -16,6 +16,7 @@ export interface LabelScannerProps {
 
 export function LabelScanner({ onScanned, onCancel, testID }: LabelScannerProps) {
   const scan = useLabelScan(onScanned);
+  const { attachVideo } = scan;
   const fileInput = useRef<HTMLInputElement | null>(null);
   const cancel = () => {
     scan.stop();
@@ -44,7 +45,7 @@ export function LabelScanner({ onScanned, onCancel, testID }: LabelScannerProps)
         ) : null}
         {scan.phase === 'live' ? (
           <View style={styles.preview} testID={`${testID}-preview`}>
-            <video ref={scan.attachVideo} muted playsInline autoPlay aria-label="Camera preview" data-testid={`${testID}-video`} style={videoStyle} />
+            <video ref={attachVideo} muted playsInline autoPlay aria-label="Camera preview" data-testid={`${testID}-video`} style={videoStyle} />
             <View style={styles.frame} pointerEvents="none" />
           </View>
         ) : null}

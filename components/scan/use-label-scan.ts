@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { parseDrumLabel, type DrumLabel } from '@/shared/gs1';
 import { cameraErrorSentence, liveCameraUnavailable, openRearCamera, stopCamera } from './camera';
 import { openCodeReader, type CodeReader, type FrameSource } from './code-reader';
@@ -60,7 +60,9 @@ export function useLabelScan(onFound: Found): LabelScan {
   const video = useRef<HTMLVideoElement | null>(null);
   const done = useRef(false);
   const found = useRef(onFound);
-  found.current = onFound;
+  useLayoutEffect(() => {
+    found.current = onFound;
+  });
 
   const stop = useCallback(() => {
     done.current = true;

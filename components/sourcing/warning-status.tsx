@@ -7,8 +7,6 @@ const LOOK: Record<WarningStatus, { label: string; tone: 'noFit' | 'caution' | '
   resolved: { label: '✓ Resolved', tone: 'fits' },
 };
 
-export const WARNING_STATUS_WORDS: Record<WarningStatus, string> = { open: 'Open', acknowledged: 'Acknowledged', resolved: 'Resolved' };
-
 /** A warning's status: word, mark and colour. */
 export function WarningStatusChip({ status, testID }: { status: WarningStatus; testID?: string }) {
   const look = LOOK[status];

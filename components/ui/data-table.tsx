@@ -7,6 +7,7 @@ import { Button } from './button';
 import { ChoiceChips } from './choice-chips';
 
 declare module '@tanstack/react-table' {
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars -- the type parameters must be TanStack's own for the declarations to merge
   interface ColumnMeta<TData extends RowData, TValue> {
     /** Relative width of the column on a wide screen (default 1). */
     flex?: number;
@@ -28,8 +29,8 @@ interface DataTableProps<T> {
   /** What the table lists, for assistive technology: "Dip tubes". */
   label: string;
   data: T[];
-  // TanStack's column value type is per column; `any` here is what its own helpers produce.
-  columns: ColumnDef<T, any>[];
+  // TanStack's column value type is per column: the table takes columns of any value type.
+  columns: ColumnDef<T, unknown>[];
   sort: TableSort;
   onSortChange: (sort: TableSort) => void;
   /** Stable row id (the record id). */

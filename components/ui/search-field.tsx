@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { colors, fonts, minTouch, radius, space, type } from '../theme';
 
@@ -19,7 +19,9 @@ export function SearchField({ label, value, onSearch, placeholder, delayMs = 300
   const [focused, setFocused] = useState(false);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const latest = useRef(onSearch);
-  latest.current = onSearch;
+  useLayoutEffect(() => {
+    latest.current = onSearch;
+  });
 
   // Follow a change made elsewhere (a "Clear the search" button), but not the echo of our own commit,
   // which is trimmed: the space just typed between two words must stay.

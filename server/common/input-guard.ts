@@ -7,7 +7,9 @@ import { HttpError, ValidationFailed, type FieldProblem } from './errors';
 // later is covered; the routes' own DTOs then check what each value means.
 
 /** C0 control characters and DEL; a body's text may still hold tab, line feed and carriage return. */
+// eslint-disable-next-line no-control-regex -- control characters are what these two look for
 const URL_CONTROL = /[\u0000-\u001f\u007f]/;
+// eslint-disable-next-line no-control-regex
 const BODY_CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
 /** Half of a UTF-16 pair without the other half: not a character, and stored as U+FFFD without a word. */
 const LONE_SURROGATE = /[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;

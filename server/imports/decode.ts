@@ -99,12 +99,14 @@ function checked(bytes: Buffer, codec: string | null, label: string, known?: str
     throw uncertain(`Read as ${label}, the text does not convert back to the same bytes, so that is not the file's encoding.`);
   }
   // Western text has its accented letters inside Latin words; a run of them is double-byte text read one byte at a time.
+  // eslint-disable-next-line no-control-regex -- the class is everything outside ASCII, NUL included in its range
   const run = label === 'Windows-1252' ? /[^\x00-\x7f]{4,}/.exec(text) : null;
   if (run) throw uncertain(`Read as ${label}, line ${lineOf(text, run.index)} holds "${run[0].slice(0, 12)}", which is not Western text: the file is in another encoding.`);
   return { text, encoding: label };
 }
 
 /** What a wrong reading leaves in text: NUL, C1 controls, replacement marks and unpaired UTF-16 halves. */
+// eslint-disable-next-line no-control-regex -- NUL is one of the marks of a wrong reading
 const NOT_TEXT = /[\u0000\u0080-\u009f\ufffd]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
 
 /** The bytes the detector reads: a small file whole; of a large one, the lines that hold non-ASCII bytes. */

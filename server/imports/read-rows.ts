@@ -49,7 +49,7 @@ export async function parseRows(kind: ImportKind, text: string, delimiter: ',' |
   const errors: RowError[] = [];
   const rows: Array<{ line: number; values: Record<string, unknown> }> = [];
   let header: string[] | null = null;
-  let map: Array<{ spec: ColumnSpec; index: number; unit: 'mm' | 'in' | null }> = [];
+  const map: Array<{ spec: ColumnSpec; index: number; unit: 'mm' | 'in' | null }> = [];
   let unitIndex = -1;
   let ignoredColumns: string[] = [];
   let line = 0;

@@ -1,11 +1,9 @@
 import type { EntityManager } from 'typeorm';
-import { NOTICE_KIND_WORDS, NOTICE_KINDS, type NoticeKind } from '../../shared/notice-kinds';
+import { NOTICE_KINDS, type NoticeKind } from '../../shared/notice-kinds';
 import { OutboxMessage, type User } from '../entities';
 
 export const MAIL_KINDS = NOTICE_KINDS;
 export type MailKind = NoticeKind;
-
-export const MAIL_KIND_LABELS: Record<MailKind, string> = Object.fromEntries(NOTICE_KINDS.map((k) => [k, NOTICE_KIND_WORDS[k].mail])) as Record<MailKind, string>;
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 

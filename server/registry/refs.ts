@@ -1,5 +1,4 @@
 import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
-import { In } from 'typeorm';
 import { fieldError } from '../common/errors';
 import { KeyCode, ThreadSpec } from '../entities';
 
@@ -37,11 +36,6 @@ export async function ensureExists<T extends ObjectLiteral>(m: EntityManager, en
   const row = typeof id === 'string' ? await m.findOneBy(entity, { id } as never) : null;
   if (!row) throw fieldError(field, `does not name an existing ${label}`);
   return row;
-}
-
-export async function threadCodesByIds(m: EntityManager, ids: string[]): Promise<Map<string, string>> {
-  const rows = ids.length ? await m.findBy(ThreadSpec, { id: In(ids) }) : [];
-  return new Map(rows.map((r) => [r.id, r.code]));
 }
 
 /** Copies the keys present in `dto` (a partial update carries only what changed). */

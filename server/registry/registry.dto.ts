@@ -56,10 +56,6 @@ const NullableCode = (target: object, key: string) => {
   Code(target, key);
 };
 
-export class VersionDto {
-  @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
-}
-
 export class SupplierDto {
   @Name() name: string;
   @OneOf(REGIONS) region: string;
@@ -136,10 +132,6 @@ export class ConnectorDto {
 export class PairingDto {
   @Id dipTubeId: string;
   @Id connectorId: string;
-  @Notes notes?: string | null;
-}
-
-export class PairingUpdateDto {
   @Notes notes?: string | null;
 }
 

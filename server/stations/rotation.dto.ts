@@ -13,7 +13,3 @@ export class StandbyDto {
   @Optional() @IsString({ message: 'must be text' }) @MaxLength(60) drumSerial?: string;
   @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
 }
-
-export class VersionedDto {
-  @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
-}

@@ -13,5 +13,3 @@ export const LOT_STATUS_LABELS: Record<LotStatus, string> = {
 
 /** Statuses that keep a lot off the stations until an engineer (or the missing certificate) releases it. */
 export const HELD_STATUSES: readonly LotStatus[] = ['on-hold', 'quarantined'];
-
-export const isLotStatus = (v: unknown): v is LotStatus => typeof v === 'string' && (LOT_STATUSES as readonly string[]).includes(v);

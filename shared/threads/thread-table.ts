@@ -116,15 +116,9 @@ export const THREAD_TABLE: readonly Readonly<ThreadSpecRow>[] = Object.freeze(
   [...NPT_ROWS, ...NPS_ROWS, ...G_ROWS, ...BUTTRESS_ROWS].map((row) => Object.freeze(row)),
 );
 
-export const THREAD_CODES: readonly string[] = THREAD_TABLE.map((row) => row.code);
-
 export function findThreadSpec(
   code: string,
   table: readonly ThreadSpecRow[] = THREAD_TABLE,
 ): ThreadSpecRow | undefined {
   return table.find((row) => row.code === code);
-}
-
-export function isThreadCode(code: unknown, table: readonly ThreadSpecRow[] = THREAD_TABLE): code is string {
-  return typeof code === 'string' && table.some((row) => row.code === code);
 }

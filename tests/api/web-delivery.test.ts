@@ -32,7 +32,7 @@ interface Answer {
 
 let ds: DataSource;
 let feed: ChangeFeed;
-let servers: http.Server[] = [];
+const servers: http.Server[] = [];
 
 async function listen(app: Express): Promise<string> {
   const server = await new Promise<http.Server>((resolve) => {

@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import type { BrowserContext, Page } from 'playwright-core';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, seen, signInAs, textOf, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, seen, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
 
 // Spec-sheet imports (a file with a bad row, then a clean one), files kept with a lot at the dock, and the
 // e-mail choices on the notices screen. Part and lot numbers differ per viewport: both runs share one database.
