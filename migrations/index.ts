@@ -14,4 +14,18 @@ import { LotAcceptance1764655200000 } from './1764655200000-lot-acceptance';
 import { UserTheme1764662400000 } from './1764662400000-user-theme';
 import { OfflineDockChecks1764666000000 } from './1764666000000-offline-dock-checks';
 
-export const MIGRATIONS = [CreateUsers1764612000000, CreateRegistry1764615600000, CreateOperations1764619200000, CreateImportsAttachmentsOutbox1764622800000, CreateAuditLog1764626400000, IndexTubeReach1764630000000, CoverTubeReach1764633600000, ChangeNotify1764637200000, PasswordResets1764644400000, SignInCounters1764648000000, LotAcceptance1764655200000, UserTheme1764662400000, OfflineDockChecks1764666000000];
+export const MIGRATIONS = [
+  CreateUsers1764612000000,
+  CreateRegistry1764615600000,
+  CreateOperations1764619200000,
+  CreateImportsAttachmentsOutbox1764622800000,
+  CreateAuditLog1764626400000,
+  IndexTubeReach1764630000000,
+  CoverTubeReach1764633600000,
+  ChangeNotify1764637200000,
+  PasswordResets1764644400000,
+  SignInCounters1764648000000,
+  LotAcceptance1764655200000,
+  UserTheme1764662400000,
+  OfflineDockChecks1764666000000,
+];

@@ -66,9 +66,13 @@ export function exportBarePage(): string {
   fs.writeFileSync(path.join(dir, 'package.json'), JSON.stringify({ name: 'bare', private: true, main: 'expo-router/entry' }));
   fs.writeFileSync(path.join(dir, 'app.json'), JSON.stringify({ expo: { name: 'bare', slug: 'bare', web: { bundler: 'metro', output: 'single' }, plugins: ['expo-router'] } }));
   fs.writeFileSync(path.join(dir, 'babel.config.js'), "module.exports = (api) => { api.cache(true); return { presets: ['babel-preset-expo'] }; };\n");
-  fs.writeFileSync(path.join(dir, 'app', 'index.tsx'), "import { Text } from 'react-native';\nexport default function Index() { return <Text testID=\"bare-text\">Hello</Text>; }\n");
+  fs.writeFileSync(path.join(dir, 'app', 'index.tsx'), 'import { Text } from \'react-native\';\nexport default function Index() { return <Text testID="bare-text">Hello</Text>; }\n');
   fs.symlinkSync(path.join(root, 'node_modules'), path.join(dir, 'node_modules'));
-  const out = spawnSync(path.join(root, 'node_modules', '.bin', 'expo'), ['export', '--platform', 'web', '--output-dir', 'web'], { cwd: dir, env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1' }, encoding: 'utf8' });
+  const out = spawnSync(path.join(root, 'node_modules', '.bin', 'expo'), ['export', '--platform', 'web', '--output-dir', 'web'], {
+    cwd: dir,
+    env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1' },
+    encoding: 'utf8',
+  });
   if (out.status !== 0) throw new Error(`bare export failed: ${out.stderr.slice(-500)}`);
   // Compressed ahead of time like the app's export, so both travel the same way.
   precompress(path.join(dir, 'web'));
@@ -127,7 +131,14 @@ async function visit(context: BrowserContext, target: PageTarget): Promise<PageL
   });
   await page.goto(target.url, { waitUntil: 'load', timeout: 120_000 });
   // A function, not text, here: the app's CSP (script-src 'self') refuses the eval Playwright needs for text.
-  await page.waitForFunction(() => { const g = globalThis as unknown as PageGlobals; return g.__shownAt !== undefined && g.performance.getEntriesByType('navigation')[0].loadEventEnd > 0; }, undefined, { timeout: 120_000, polling: 100 });
+  await page.waitForFunction(
+    () => {
+      const g = globalThis as unknown as PageGlobals;
+      return g.__shownAt !== undefined && g.performance.getEntriesByType('navigation')[0].loadEventEnd > 0;
+    },
+    undefined,
+    { timeout: 120_000, polling: 100 },
+  );
   const times = await page.evaluate(() => {
     const g = globalThis as unknown as PageGlobals;
     return { shownMs: g.__shownAt as number, loadMs: g.performance.getEntriesByType('navigation')[0].loadEventEnd };

@@ -56,7 +56,10 @@ async function loadRegistry(db: Client): Promise<void> {
     );
   }
   const hash = await hashPassword('bench-password-1');
-  await db.query(`INSERT INTO users (email, display_name, role, password_hash, version) VALUES ('bench.engineer@bungwise.example','Bench Engineer','engineer',$1,1), ('bench.reviewer@bungwise.example','Bench Reviewer','engineer',$1,1), ('bench.clerk@bungwise.example','Bench Clerk','clerk',$1,1)`, [hash]);
+  await db.query(
+    `INSERT INTO users (email, display_name, role, password_hash, version) VALUES ('bench.engineer@bungwise.example','Bench Engineer','engineer',$1,1), ('bench.reviewer@bungwise.example','Bench Reviewer','engineer',$1,1), ('bench.clerk@bungwise.example','Bench Clerk','clerk',$1,1)`,
+    [hash],
+  );
   await db.query(`INSERT INTO site_settings (site_name, version) VALUES ('Bench site', 1)`);
   await db.query(`INSERT INTO key_codes (code, label, version) SELECT 'BK-' || g, 'Bench key ' || g, 1 FROM generate_series(1, 6) g`);
   const regions = `(ARRAY['NA','EU','JP','TW','KR','CN','SG','other'])[1 + g % 8]`;
@@ -94,7 +97,11 @@ async function loadRegistry(db: Client): Promise<void> {
   await db.query('COMMIT');
   // As after any bulk load: statistics and the visibility map (index-only scans), so autovacuum does not start mid-measurement.
   await db.query('VACUUM ANALYZE');
-  const counts = (await db.query(`SELECT (SELECT count(*) FROM drum_types) AS d, (SELECT count(*) FROM dip_tubes) AS t, (SELECT count(*) FROM connectors) AS c, (SELECT count(*) FROM pairings) AS p, (SELECT count(*) FROM suppliers) AS s`)).rows[0];
+  const counts = (
+    await db.query(
+      `SELECT (SELECT count(*) FROM drum_types) AS d, (SELECT count(*) FROM dip_tubes) AS t, (SELECT count(*) FROM connectors) AS c, (SELECT count(*) FROM pairings) AS p, (SELECT count(*) FROM suppliers) AS s`,
+    )
+  ).rows[0];
   log(`registry loaded in ${((Date.now() - t0) / 1000).toFixed(1)} s: ${counts.d} drum types, ${counts.t} tubes, ${counts.c} connectors, ${counts.p} pairings, ${counts.s} suppliers`);
 }
 
@@ -144,11 +151,7 @@ async function webFigures(base: string, signIn: unknown): Promise<void> {
   const bareServer = await serveExport(bareDir);
   let loads;
   try {
-    loads = await measurePageLoads(
-      { url: `${base}/receive`, dir: webDir, testId: 'dock-screen', session: signIn },
-      { url: `${bareServer.url}/`, dir: bareDir, testId: 'bare-text' },
-      log,
-    );
+    loads = await measurePageLoads({ url: `${base}/receive`, dir: webDir, testId: 'dock-screen', session: signIn }, { url: `${bareServer.url}/`, dir: bareDir, testId: 'bare-text' }, log);
   } finally {
     await bareServer.close();
   }
@@ -159,7 +162,15 @@ async function webFigures(base: string, signIn: unknown): Promise<void> {
   add('warm load /receive, dock screen shown', loads.warm.shownMs, 'ms', loads.cold.shownMs, 'cold load shown ms', '<= 0.5 x floor', loads.warm.shownMs <= 0.5 * loads.cold.shownMs);
   add('warm load /receive, load event', loads.warm.loadMs, 'ms', loads.cold.loadMs, 'cold load event ms', '<= 0.5 x floor', loads.warm.loadMs <= 0.5 * loads.cold.loadMs);
   add('cold load /receive, bytes on the wire', loads.cold.wireBytes / 1024, 'KB', loads.bare.wireBytes / 1024, 'bare page KB', 'report', true);
-  add('first route JS gzipped (/receive)', loads.cold.jsGzipBytes / 1024, 'KB', loads.bare.jsGzipBytes / 1024, 'bare page JS KB', '<= 1.6 x floor', loads.cold.jsGzipBytes <= 1.6 * loads.bare.jsGzipBytes);
+  add(
+    'first route JS gzipped (/receive)',
+    loads.cold.jsGzipBytes / 1024,
+    'KB',
+    loads.bare.jsGzipBytes / 1024,
+    'bare page JS KB',
+    '<= 1.6 x floor',
+    loads.cold.jsGzipBytes <= 1.6 * loads.bare.jsGzipBytes,
+  );
   const allJs = await gzipSizeOfJs(path.join(webDir, '_expo'));
   add('all web JS gzipped (every chunk)', allJs / 1024, 'KB', (await gzipSizeOfJs(path.join(bareDir, '_expo'))) / 1024, 'bare page KB', 'report', true);
 }
@@ -174,8 +185,20 @@ async function main(): Promise<void> {
   const server = await startServer(port);
   const base = `http://127.0.0.1:${port}`;
   try {
-    const signIn = (await (await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: 'bench.clerk@bungwise.example', password: 'bench-password-1' }) })).json()) as { token: string };
-    const engineer = (await (await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: 'bench.engineer@bungwise.example', password: 'bench-password-1' }) })).json()) as { token: string };
+    const signIn = (await (
+      await fetch(`${base}/api/auth/sign-in`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json' },
+        body: JSON.stringify({ email: 'bench.clerk@bungwise.example', password: 'bench-password-1' }),
+      })
+    ).json()) as { token: string };
+    const engineer = (await (
+      await fetch(`${base}/api/auth/sign-in`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json' },
+        body: JSON.stringify({ email: 'bench.engineer@bungwise.example', password: 'bench-password-1' }),
+      })
+    ).json()) as { token: string };
     const auth = { Authorization: `Bearer ${signIn.token}`, 'Content-Type': 'application/json' };
     const drumIds: string[] = (await db.query(`SELECT id FROM drum_types ORDER BY random() LIMIT 500`)).rows.map((r) => r.id);
 
@@ -196,7 +219,8 @@ async function main(): Promise<void> {
     };
     log('fit-check, first ask for each drum type, under 20 connections for 10 s...');
     const cold = await fitLoad(coldIds, { duration: 10 }, true);
-    if (cold.non2xx || cold.errors || cold.requests.total > coldIds.length) throw new Error(`the first-ask pass is not valid: ${cold.requests.total} asks of ${coldIds.length} drum types, ${cold.non2xx} non-2xx, ${cold.errors} errors`);
+    if (cold.non2xx || cold.errors || cold.requests.total > coldIds.length)
+      throw new Error(`the first-ask pass is not valid: ${cold.requests.total} asks of ${coldIds.length} drum types, ${cold.non2xx} non-2xx, ${cold.errors} errors`);
     // Each server process keeps its own answers: ask for each drum type twice per process.
     log(`fit-check warm-up: each of ${drumIds.length} drum types ${2 * serverProcesses} times...`);
     await fitLoad(drumIds, { amount: drumIds.length * 2 * serverProcesses });
@@ -204,7 +228,11 @@ async function main(): Promise<void> {
     const fit = await fitLoad(drumIds, { duration: 10 });
     log('health floor under 20 connections for 10 s...');
     const health = await cannon({ url: `${base}/api/health` });
-    for (const [name, r] of [['fit-check (first ask)', cold], ['fit-check', fit]] as const) if (r.non2xx || r.errors) log(`${name}: ${r.non2xx} non-2xx, ${r.errors} errors`);
+    for (const [name, r] of [
+      ['fit-check (first ask)', cold],
+      ['fit-check', fit],
+    ] as const)
+      if (r.non2xx || r.errors) log(`${name}: ${r.non2xx} non-2xx, ${r.errors} errors`);
     add('fit-check throughput', fit.requests.average, 'req/s', health.requests.average, 'GET /api/health req/s', '>= 0.5 of floor', fit.requests.average >= 0.5 * health.requests.average);
     add('fit-check p50 latency', fit.latency.p50, 'ms', health.latency.p50, 'health p50 ms', 'report', true);
     add('fit-check p99 latency', fit.latency.p99, 'ms', health.latency.p99, 'health p99 ms', '< 30 ms', fit.latency.p99 < 30);
@@ -263,7 +291,15 @@ async function main(): Promise<void> {
     const copySeconds = (performance.now() - c0) / 1000;
     if (copy.status !== 0) throw new Error(`COPY failed: ${copy.stderr}`);
     fs.rmSync(file, { force: true });
-    add('CSV import', SIZES.importRows / importSeconds, 'rows/s', SIZES.importRows / copySeconds, 'COPY rows/s', '>= 0.25 of floor', SIZES.importRows / importSeconds >= 0.25 * (SIZES.importRows / copySeconds));
+    add(
+      'CSV import',
+      SIZES.importRows / importSeconds,
+      'rows/s',
+      SIZES.importRows / copySeconds,
+      'COPY rows/s',
+      '>= 0.25 of floor',
+      SIZES.importRows / importSeconds >= 0.25 * (SIZES.importRows / copySeconds),
+    );
 
     // 5. Page loads and the JavaScript the first route loads.
     await webFigures(base, signIn);
@@ -276,7 +312,9 @@ async function main(): Promise<void> {
   console.log('');
   console.log(`${pad('figure', 42)}${pad('value', 16)}${pad('floor', 34)}${pad('ratio', 8)}target`);
   for (const r of rows) {
-    console.log(`${pad(r.figure, 42)}${pad(`${r.value} ${r.unit}`, 16)}${pad(`${r.floor} (${r.floorLabel})`, 34)}${pad(String(r.ratio), 8)}${r.target}${r.target === 'report' ? '' : r.met ? '  met' : '  MISSED'}`);
+    console.log(
+      `${pad(r.figure, 42)}${pad(`${r.value} ${r.unit}`, 16)}${pad(`${r.floor} (${r.floorLabel})`, 34)}${pad(String(r.ratio), 8)}${r.target}${r.target === 'report' ? '' : r.met ? '  met' : '  MISSED'}`,
+    );
   }
   console.log(JSON.stringify({ sizes: SIZES, figures: rows }));
 }

@@ -153,17 +153,12 @@ async function startCluster(bin) {
       runQuiet('chown', ['-R', 'postgres:postgres', pgdata]);
       runQuiet('chown', ['postgres:postgres', pwfile]);
     }
-    const init = asPostgres(path.join(bin, 'initdb'), [
-      '-D', pgdata, '-U', 'bungwise', `--pwfile=${pwfile}`, '--auth-host=scram-sha-256', '--auth-local=scram-sha-256', '-E', 'UTF8', '--no-locale',
-    ]);
+    const init = asPostgres(path.join(bin, 'initdb'), ['-D', pgdata, '-U', 'bungwise', `--pwfile=${pwfile}`, '--auth-host=scram-sha-256', '--auth-local=scram-sha-256', '-E', 'UTF8', '--no-locale']);
     fs.rmSync(pwfile, { force: true });
     if (init.status !== 0) {
       fail(`Could not create the PostgreSQL cluster (${(init.stderr || init.stdout || '').trim().split('\n').pop()}): remove ${pgdata} and try again.`);
     }
-    fs.appendFileSync(
-      path.join(pgdata, 'postgresql.conf'),
-      `\n# Bungwise private cluster\nlisten_addresses = '127.0.0.1'\nunix_socket_directories = '${pgdata}'\nfsync = on\n`,
-    );
+    fs.appendFileSync(path.join(pgdata, 'postgresql.conf'), `\n# Bungwise private cluster\nlisten_addresses = '127.0.0.1'\nunix_socket_directories = '${pgdata}'\nfsync = on\n`);
   }
 
   const status = asPostgres(path.join(bin, 'pg_ctl'), ['status', '-D', pgdata]);
@@ -248,7 +243,11 @@ async function startDevServices(extraEnv) {
       ? { s3: await freePort(), smtp: await freePort(), web: await freePort() }
       : { s3: Number(env.BUNGWISE_S3_PORT ?? 54330), smtp: Number(env.BUNGWISE_SMTP_PORT ?? 54331), web: Number(env.BUNGWISE_MAIL_WEB_PORT ?? 54332) };
   if (mode === 'start') {
-    for (const [name, port] of [['BUNGWISE_S3_PORT', ports.s3], ['BUNGWISE_SMTP_PORT', ports.smtp], ['BUNGWISE_MAIL_WEB_PORT', ports.web]]) {
+    for (const [name, port] of [
+      ['BUNGWISE_S3_PORT', ports.s3],
+      ['BUNGWISE_SMTP_PORT', ports.smtp],
+      ['BUNGWISE_MAIL_WEB_PORT', ports.web],
+    ]) {
       if (!(await portFree(port))) fail(`Port ${port} is taken by another program: stop it or set ${name} to a free port.`);
     }
   }
@@ -260,7 +259,15 @@ async function startDevServices(extraEnv) {
   }
   const child = spawn('node', [path.join(root, 'dist', 'server', 'server', 'dev-services.js')], {
     cwd: root,
-    env: { ...env, ...extraEnv, BUNGWISE_S3_PORT: String(ports.s3), BUNGWISE_SMTP_PORT: String(ports.smtp), BUNGWISE_MAIL_WEB_PORT: String(ports.web), BUNGWISE_S3_DIR: s3Dir, S3_BUCKET: env.S3_BUCKET ?? 'bungwise' },
+    env: {
+      ...env,
+      ...extraEnv,
+      BUNGWISE_S3_PORT: String(ports.s3),
+      BUNGWISE_SMTP_PORT: String(ports.smtp),
+      BUNGWISE_MAIL_WEB_PORT: String(ports.web),
+      BUNGWISE_S3_DIR: s3Dir,
+      S3_BUCKET: env.S3_BUCKET ?? 'bungwise',
+    },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
   const ready = await new Promise((resolve) => {

@@ -28,21 +28,7 @@
 //   (cleaning) came off a drum after its last rinse, so it is dirty and fails the rinse rule.
 
 import type { EntityManager } from 'typeorm';
-import {
-  Connector,
-  DipTube,
-  DrumOpening,
-  DrumType,
-  KeyCode,
-  Pairing,
-  PairingReview,
-  Slurry,
-  Station,
-  Supplier,
-  ThreadSpec,
-  TubeSet,
-  type Region,
-} from '../server/entities/registry';
+import { Connector, DipTube, DrumOpening, DrumType, KeyCode, Pairing, PairingReview, Slurry, Station, Supplier, ThreadSpec, TubeSet, type Region } from '../server/entities/registry';
 
 /** The scenario's "now": every date below is a fixed offset from it, so the data is deterministic. */
 export const DEMO_NOW = new Date('2026-11-20T06:00:00Z');
@@ -59,10 +45,22 @@ type SupplierRef = 'cobaltMesa' | 'auenfeld' | 'kumoyama' | 'hsinpu' | 'seoripul
 
 const SUPPLIERS: Array<{ ref: SupplierRef; name: string; region: Region; contactEmail: string | null; notes: string }> = [
   { ref: 'cobaltMesa', name: 'Cobalt Mesa Abrasives', region: 'NA', contactEmail: 'orders@cobaltmesa.example', notes: 'Oxide and tungsten slurries; ships in lined steel or HDPE 55 gal drums.' },
-  { ref: 'auenfeld', name: 'Auenfeld Fasswerk', region: 'EU', contactEmail: 'service@auenfeld.example', notes: 'Lined steel drum maker; the G-2 dip tubes were bought for its drums. No slurry currently on contract.' },
+  {
+    ref: 'auenfeld',
+    name: 'Auenfeld Fasswerk',
+    region: 'EU',
+    contactEmail: 'service@auenfeld.example',
+    notes: 'Lined steel drum maker; the G-2 dip tubes were bought for its drums. No slurry currently on contract.',
+  },
   { ref: 'kumoyama', name: 'Kumoyama Fine Chemical', region: 'JP', contactEmail: 'export@kumoyama.example', notes: 'Ceria slurries in 200 L HDPE drums with buttress bungs.' },
   { ref: 'hsinpu', name: 'Hsinpu Polishing Materials', region: 'TW', contactEmail: 'cs@hsinpu.example', notes: 'Copper barrier slurry in 20 L containers.' },
-  { ref: 'seoripul', name: 'Seoripul Surface Chemistry', region: 'KR', contactEmail: 'global@seoripul.example', notes: 'Second-source STI slurry under qualification; drums arrive without site key collars.' },
+  {
+    ref: 'seoripul',
+    name: 'Seoripul Surface Chemistry',
+    region: 'KR',
+    contactEmail: 'global@seoripul.example',
+    notes: 'Second-source STI slurry under qualification; drums arrive without site key collars.',
+  },
   { ref: 'ridgeback', name: 'Ridgeback Fluid Hardware', region: 'NA', contactEmail: 'quotes@ridgeback.example', notes: 'Dip tubes and dispense heads for NPS and buttress bungs.' },
   { ref: 'aarvik', name: 'Aarvik Fluid Components', region: 'EU', contactEmail: 'sales@aarvik.example', notes: 'Dip tubes and dispense heads for G-thread bungs.' },
 ];
@@ -73,9 +71,9 @@ const SUPPLIERS: Array<{ ref: SupplierRef; name: string; region: Region; contact
 type KeyRef = 'oxide' | 'metal' | 'ceria';
 
 const KEY_CODES: Array<{ ref: KeyRef; code: string; label: string; marking: string }> = [
-  { ref: 'oxide', code: 'LR-OCHRE', label: 'Oxide and STI silica line', marking: 'ochre collar, single lug at 12 o\'clock' },
-  { ref: 'metal', code: 'LR-SLATE', label: 'Metal line (tungsten, copper barrier)', marking: 'slate-grey collar, twin lugs at 4 and 8 o\'clock' },
-  { ref: 'ceria', code: 'LR-MOSS', label: 'Ceria line', marking: 'moss-green collar, wide lug at 3 o\'clock' },
+  { ref: 'oxide', code: 'LR-OCHRE', label: 'Oxide and STI silica line', marking: "ochre collar, single lug at 12 o'clock" },
+  { ref: 'metal', code: 'LR-SLATE', label: 'Metal line (tungsten, copper barrier)', marking: "slate-grey collar, twin lugs at 4 and 8 o'clock" },
+  { ref: 'ceria', code: 'LR-MOSS', label: 'Ceria line', marking: "moss-green collar, wide lug at 3 o'clock" },
 ];
 
 // ---------------------------------------------------------------------------------------------------
@@ -101,9 +99,17 @@ interface DrumRow {
 const DRUMS: DrumRow[] = [
   {
     // 55 US gal steel drum: inside about 33.5 in (851 mm), 2 in + 3/4 in straight pipe thread bungs.
-    ref: 'naSteel', supplier: 'cobaltMesa', region: 'NA', name: '55 gal lined steel tight head, 2 in + 3/4 in NPS',
-    partNumber: 'CMA-D208-SL', nominalCapacityL: 208, material: 'steel', unPackagingCode: '1A1',
-    outsideHeightMm: 880, insideDepthMm: 851, outsideDiameterMm: 585,
+    ref: 'naSteel',
+    supplier: 'cobaltMesa',
+    region: 'NA',
+    name: '55 gal lined steel tight head, 2 in + 3/4 in NPS',
+    partNumber: 'CMA-D208-SL',
+    nominalCapacityL: 208,
+    material: 'steel',
+    unPackagingCode: '1A1',
+    outsideHeightMm: 880,
+    insideDepthMm: 851,
+    outsideDiameterMm: 585,
     openings: [
       { label: 'large bung', thread: 'NPS-2', boreMm: 50, key: 'oxide', position: 'large' },
       { label: 'small bung', thread: 'NPS-3/4', boreMm: 19, key: null, position: 'small' },
@@ -111,9 +117,17 @@ const DRUMS: DrumRow[] = [
   },
   {
     // European steel drum, G 2 and G 3/4 closures to ISO 228-1.
-    ref: 'euSteel', supplier: 'auenfeld', region: 'EU', name: '216.5 L lined steel tight head, G 2 + G 3/4',
-    partNumber: 'AFW-216-G2G34', nominalCapacityL: 216.5, material: 'steel', unPackagingCode: '1A1',
-    outsideHeightMm: 874, insideDepthMm: 845, outsideDiameterMm: 584,
+    ref: 'euSteel',
+    supplier: 'auenfeld',
+    region: 'EU',
+    name: '216.5 L lined steel tight head, G 2 + G 3/4',
+    partNumber: 'AFW-216-G2G34',
+    nominalCapacityL: 216.5,
+    material: 'steel',
+    unPackagingCode: '1A1',
+    outsideHeightMm: 874,
+    insideDepthMm: 845,
+    outsideDiameterMm: 584,
     openings: [
       { label: 'G 2 bung', thread: 'G-2', boreMm: 52, key: 'metal', position: 'large' },
       { label: 'G 3/4 bung', thread: 'G-3/4', boreMm: 19, key: null, position: 'small' },
@@ -121,9 +135,17 @@ const DRUMS: DrumRow[] = [
   },
   {
     // HDPE drum with buttress bungs; the head goes in the 56x4 bung, the stirrer in the 70x6 bung.
-    ref: 'jpPlastic', supplier: 'kumoyama', region: 'JP', name: '200 L HDPE tight head, 56x4 + 70x6 buttress',
-    partNumber: 'KFC-P200-B5670', nominalCapacityL: 200, material: 'plastic', unPackagingCode: '1H1',
-    outsideHeightMm: 935, insideDepthMm: 880, outsideDiameterMm: 581,
+    ref: 'jpPlastic',
+    supplier: 'kumoyama',
+    region: 'JP',
+    name: '200 L HDPE tight head, 56x4 + 70x6 buttress',
+    partNumber: 'KFC-P200-B5670',
+    nominalCapacityL: 200,
+    material: 'plastic',
+    unPackagingCode: '1H1',
+    outsideHeightMm: 935,
+    insideDepthMm: 880,
+    outsideDiameterMm: 581,
     openings: [
       { label: '56x4 bung', thread: 'BT-56x4', boreMm: 48, key: 'ceria', position: 'large' },
       { label: '70x6 bung', thread: 'BT-70x6', boreMm: 60, key: null, position: 'small' },
@@ -131,16 +153,32 @@ const DRUMS: DrumRow[] = [
   },
   {
     // Small round HDPE container with a single centre bung.
-    ref: 'twSmall', supplier: 'hsinpu', region: 'TW', name: '20 L HDPE tight head, single 56x4 buttress',
-    partNumber: 'HPM-C20-B56', nominalCapacityL: 20, material: 'plastic', unPackagingCode: '1H1',
-    outsideHeightMm: 400, insideDepthMm: 380, outsideDiameterMm: 290,
+    ref: 'twSmall',
+    supplier: 'hsinpu',
+    region: 'TW',
+    name: '20 L HDPE tight head, single 56x4 buttress',
+    partNumber: 'HPM-C20-B56',
+    nominalCapacityL: 20,
+    material: 'plastic',
+    unPackagingCode: '1H1',
+    outsideHeightMm: 400,
+    insideDepthMm: 380,
+    outsideDiameterMm: 290,
     openings: [{ label: 'centre bung', thread: 'BT-56x4', boreMm: 48, key: 'metal', position: 'center' }],
   },
   {
     // 55 gal HDPE drum with two 2 in bungs: the only NPS-2 drum that two-opening tapping can use.
-    ref: 'naPlasticTwin', supplier: 'cobaltMesa', region: 'NA', name: '55 gal HDPE tight head, twin 2 in NPS',
-    partNumber: 'CMA-D208-PT', nominalCapacityL: 208, material: 'plastic', unPackagingCode: '1H1',
-    outsideHeightMm: 915, insideDepthMm: 870, outsideDiameterMm: 584,
+    ref: 'naPlasticTwin',
+    supplier: 'cobaltMesa',
+    region: 'NA',
+    name: '55 gal HDPE tight head, twin 2 in NPS',
+    partNumber: 'CMA-D208-PT',
+    nominalCapacityL: 208,
+    material: 'plastic',
+    unPackagingCode: '1H1',
+    outsideHeightMm: 915,
+    insideDepthMm: 870,
+    outsideDiameterMm: 584,
     openings: [
       { label: 'bung A', thread: 'NPS-2', boreMm: 50, key: 'metal', position: 'large' },
       { label: 'bung B', thread: 'NPS-2', boreMm: 50, key: 'metal', position: 'large' },
@@ -148,9 +186,17 @@ const DRUMS: DrumRow[] = [
   },
   {
     // Same G 2 + G 3/4 bungs as the European drum but shallower, and no key collars.
-    ref: 'krSteel', supplier: 'seoripul', region: 'KR', name: '200 L steel tight head, G 2 + G 3/4',
-    partNumber: 'SSC-D200-G2', nominalCapacityL: 200, material: 'steel', unPackagingCode: '1A1',
-    outsideHeightMm: 850, insideDepthMm: 818, outsideDiameterMm: 571,
+    ref: 'krSteel',
+    supplier: 'seoripul',
+    region: 'KR',
+    name: '200 L steel tight head, G 2 + G 3/4',
+    partNumber: 'SSC-D200-G2',
+    nominalCapacityL: 200,
+    material: 'steel',
+    unPackagingCode: '1A1',
+    outsideHeightMm: 850,
+    insideDepthMm: 818,
+    outsideDiameterMm: 571,
     openings: [
       { label: 'G 2 bung', thread: 'G-2', boreMm: 52, key: null, position: 'large' },
       { label: 'G 3/4 bung', thread: 'G-3/4', boreMm: 19, key: null, position: 'small' },
@@ -220,36 +266,174 @@ interface HeadRow {
 
 const HEADS: HeadRow[] = [
   // Equal 3/4 + 3/4 in ports: return no faster than feed; fine in one opening.
-  { ref: 'combinedOxide', partNumber: 'RFH-DH-C1919-OX', supplier: 'ridgeback', key: 'oxide', feedBoreMm: 0.75 * IN, feedNominal: '3/4 in', returnBoreMm: 0.75 * IN, returnNominal: '3/4 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PTFE, FFKM seals' },
+  {
+    ref: 'combinedOxide',
+    partNumber: 'RFH-DH-C1919-OX',
+    supplier: 'ridgeback',
+    key: 'oxide',
+    feedBoreMm: 0.75 * IN,
+    feedNominal: '3/4 in',
+    returnBoreMm: 0.75 * IN,
+    returnNominal: '3/4 in',
+    returnPath: 'open',
+    suitedTo: 'both',
+    wettedMaterials: 'PFA, PTFE, FFKM seals',
+  },
   // Feed 3/4 in with a separate 1/2 in return, built for two-opening tapping: (19.05/12.7)^2 = 2.25.
-  { ref: 'split', partNumber: 'RFH-DH-S1913-CE', supplier: 'ridgeback', key: 'ceria', feedBoreMm: 0.75 * IN, feedNominal: '3/4 in', returnBoreMm: 0.5 * IN, returnNominal: '1/2 in', returnPath: 'restricted', suitedTo: 'two-opening', wettedMaterials: 'PFA, PTFE, FFKM seals' },
+  {
+    ref: 'split',
+    partNumber: 'RFH-DH-S1913-CE',
+    supplier: 'ridgeback',
+    key: 'ceria',
+    feedBoreMm: 0.75 * IN,
+    feedNominal: '3/4 in',
+    returnBoreMm: 0.5 * IN,
+    returnNominal: '1/2 in',
+    returnPath: 'restricted',
+    suitedTo: 'two-opening',
+    wettedMaterials: 'PFA, PTFE, FFKM seals',
+  },
   // Feed only; the return goes back through the drum's second bung.
-  { ref: 'feedOnlyMetal', partNumber: 'RFH-DH-F19-MT', supplier: 'ridgeback', key: 'metal', feedBoreMm: 0.75 * IN, feedNominal: '3/4 in', returnBoreMm: null, returnNominal: null, returnPath: 'none', suitedTo: 'two-opening', wettedMaterials: 'PFA, PTFE, EPDM seals' },
-  { ref: 'combinedEu', partNumber: 'AFC-KH-1919-MT', supplier: 'aarvik', key: 'metal', feedBoreMm: 0.75 * IN, feedNominal: '3/4 in', returnBoreMm: 0.75 * IN, returnNominal: '3/4 in', returnPath: 'open', suitedTo: 'one-opening', wettedMaterials: 'PVDF, PTFE, FFKM seals' },
-  { ref: 'combinedCeria', partNumber: 'RFH-DH-C1919-CE', supplier: 'ridgeback', key: 'ceria', feedBoreMm: 0.75 * IN, feedNominal: '3/4 in', returnBoreMm: 0.75 * IN, returnNominal: '3/4 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PTFE, FFKM seals' },
+  {
+    ref: 'feedOnlyMetal',
+    partNumber: 'RFH-DH-F19-MT',
+    supplier: 'ridgeback',
+    key: 'metal',
+    feedBoreMm: 0.75 * IN,
+    feedNominal: '3/4 in',
+    returnBoreMm: null,
+    returnNominal: null,
+    returnPath: 'none',
+    suitedTo: 'two-opening',
+    wettedMaterials: 'PFA, PTFE, EPDM seals',
+  },
+  {
+    ref: 'combinedEu',
+    partNumber: 'AFC-KH-1919-MT',
+    supplier: 'aarvik',
+    key: 'metal',
+    feedBoreMm: 0.75 * IN,
+    feedNominal: '3/4 in',
+    returnBoreMm: 0.75 * IN,
+    returnNominal: '3/4 in',
+    returnPath: 'open',
+    suitedTo: 'one-opening',
+    wettedMaterials: 'PVDF, PTFE, FFKM seals',
+  },
+  {
+    ref: 'combinedCeria',
+    partNumber: 'RFH-DH-C1919-CE',
+    supplier: 'ridgeback',
+    key: 'ceria',
+    feedBoreMm: 0.75 * IN,
+    feedNominal: '3/4 in',
+    returnBoreMm: 0.75 * IN,
+    returnNominal: '3/4 in',
+    returnPath: 'open',
+    suitedTo: 'both',
+    wettedMaterials: 'PFA, PTFE, FFKM seals',
+  },
   // 3/4 in feed, 5/8 in return, open: (19.05/15.875)^2 = 1.44, a caution in one opening. Unkeyed.
-  { ref: 'reducedReturn', partNumber: 'AFC-KH-1916', supplier: 'aarvik', key: null, feedBoreMm: 0.75 * IN, feedNominal: '3/4 in', returnBoreMm: 0.625 * IN, returnNominal: '5/8 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PVDF, FFKM seals' },
-  { ref: 'combinedUnkeyed', partNumber: 'RFH-DH-C1919-U', supplier: 'ridgeback', key: null, feedBoreMm: 0.75 * IN, feedNominal: '3/4 in', returnBoreMm: 0.75 * IN, returnNominal: '3/4 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PTFE, FFKM seals' },
+  {
+    ref: 'reducedReturn',
+    partNumber: 'AFC-KH-1916',
+    supplier: 'aarvik',
+    key: null,
+    feedBoreMm: 0.75 * IN,
+    feedNominal: '3/4 in',
+    returnBoreMm: 0.625 * IN,
+    returnNominal: '5/8 in',
+    returnPath: 'open',
+    suitedTo: 'both',
+    wettedMaterials: 'PFA, PVDF, FFKM seals',
+  },
+  {
+    ref: 'combinedUnkeyed',
+    partNumber: 'RFH-DH-C1919-U',
+    supplier: 'ridgeback',
+    key: null,
+    feedBoreMm: 0.75 * IN,
+    feedNominal: '3/4 in',
+    returnBoreMm: 0.75 * IN,
+    returnNominal: '3/4 in',
+    returnPath: 'open',
+    suitedTo: 'both',
+    wettedMaterials: 'PFA, PTFE, FFKM seals',
+  },
   // Legacy head, 3/8 in return worn to 9.4 mm: (19.05/9.4)^2 = 4.1, above the site limit of 4.
-  { ref: 'legacyNarrow', partNumber: 'RFH-DH-C1909-OX', supplier: 'ridgeback', key: 'oxide', feedBoreMm: 0.75 * IN, feedNominal: '3/4 in', returnBoreMm: 9.4, returnNominal: '3/8 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PTFE, Viton seals' },
+  {
+    ref: 'legacyNarrow',
+    partNumber: 'RFH-DH-C1909-OX',
+    supplier: 'ridgeback',
+    key: 'oxide',
+    feedBoreMm: 0.75 * IN,
+    feedNominal: '3/4 in',
+    returnBoreMm: 9.4,
+    returnNominal: '3/8 in',
+    returnPath: 'open',
+    suitedTo: 'both',
+    wettedMaterials: 'PFA, PTFE, Viton seals',
+  },
 ];
 
 // ---------------------------------------------------------------------------------------------------
 // Pairings (tube + head). Approved ones are authored by the first engineer and approved by the second.
 
 const PAIRINGS: Array<{ tube: TubeRef; head: HeadRef; status: 'draft' | 'approved' | 'retired'; approvedDaysAgo: number | null; notes: string; review: string | null }> = [
-  { tube: 'n836', head: 'combinedOxide', status: 'approved', approvedDaysAgo: 210, notes: 'Standard oxide pairing for the 55 gal steel drum.', review: 'Seal stack and keying checked on a filled drum; no weeping at the bung.' },
-  { tube: 'n841', head: 'combinedOxide', status: 'approved', approvedDaysAgo: 180, notes: 'Alternate PVDF tube for the 55 gal steel drum.', review: 'Tip clearance 10 mm confirmed with a dipstick on three drums.' },
-  { tube: 'n855', head: 'feedOnlyMetal', status: 'approved', approvedDaysAgo: 150, notes: 'Tungsten line, twin-bung HDPE drum; return through bung B.', review: 'Return line and vent on bung B checked; feed only head confirmed.' },
+  {
+    tube: 'n836',
+    head: 'combinedOxide',
+    status: 'approved',
+    approvedDaysAgo: 210,
+    notes: 'Standard oxide pairing for the 55 gal steel drum.',
+    review: 'Seal stack and keying checked on a filled drum; no weeping at the bung.',
+  },
+  {
+    tube: 'n841',
+    head: 'combinedOxide',
+    status: 'approved',
+    approvedDaysAgo: 180,
+    notes: 'Alternate PVDF tube for the 55 gal steel drum.',
+    review: 'Tip clearance 10 mm confirmed with a dipstick on three drums.',
+  },
+  {
+    tube: 'n855',
+    head: 'feedOnlyMetal',
+    status: 'approved',
+    approvedDaysAgo: 150,
+    notes: 'Tungsten line, twin-bung HDPE drum; return through bung B.',
+    review: 'Return line and vent on bung B checked; feed only head confirmed.',
+  },
   { tube: 'b56x865', head: 'combinedCeria', status: 'approved', approvedDaysAgo: 140, notes: 'Ceria 200 L HDPE drum, 56x4 bung.', review: 'Buttress engagement checked; collar lug seats fully.' },
-  { tube: 'b56x865', head: 'split', status: 'approved', approvedDaysAgo: 120, notes: 'For two-opening tapping only: the 1/2 in return is not meant to carry the recirculation.', review: 'Approved for two-opening tapping; do not use where the head carries the return.' },
+  {
+    tube: 'b56x865',
+    head: 'split',
+    status: 'approved',
+    approvedDaysAgo: 120,
+    notes: 'For two-opening tapping only: the 1/2 in return is not meant to carry the recirculation.',
+    review: 'Approved for two-opening tapping; do not use where the head carries the return.',
+  },
   { tube: 'g830', head: 'combinedEu', status: 'approved', approvedDaysAgo: 400, notes: 'Bought for the European 216.5 L drum.', review: 'G 2 thread engagement and collar checked.' },
-  { tube: 'b56x368', head: 'reducedReturn', status: 'approved', approvedDaysAgo: 90, notes: 'Copper barrier 20 L container; the 5/8 in return raises return velocity, keep flow low.', review: 'Accepted with the reduced return; flow limited to 8 L/min at the station.' },
+  {
+    tube: 'b56x368',
+    head: 'reducedReturn',
+    status: 'approved',
+    approvedDaysAgo: 90,
+    notes: 'Copper barrier 20 L container; the 5/8 in return raises return velocity, keep flow low.',
+    review: 'Accepted with the reduced return; flow limited to 8 L/min at the station.',
+  },
   { tube: 'b56x372', head: 'reducedReturn', status: 'approved', approvedDaysAgo: 60, notes: 'Unkeyed spare tube for the 20 L container.', review: 'Spare tube accepted; keying collar on order.' },
   { tube: 'g825', head: 'combinedUnkeyed', status: 'approved', approvedDaysAgo: 365, notes: 'Unkeyed G 2 spare.', review: 'Spare set accepted for G 2 drums.' },
   { tube: 'b70x862', head: 'combinedUnkeyed', status: 'draft', approvedDaysAgo: null, notes: 'Proposed: draw from the 70x6 bung when the 56x4 bung carries a stirrer.', review: null },
   { tube: 'n790', head: 'combinedOxide', status: 'draft', approvedDaysAgo: null, notes: 'Found in stores; length to be checked against current drums before approval.', review: null },
-  { tube: 'n836', head: 'legacyNarrow', status: 'retired', approvedDaysAgo: 900, notes: 'Retired: the worn 3/8 in return sprayed slurry back into the drum.', review: 'Retired after return velocity above the site limit; heads quarantined.' },
+  {
+    tube: 'n836',
+    head: 'legacyNarrow',
+    status: 'retired',
+    approvedDaysAgo: 900,
+    notes: 'Retired: the worn 3/8 in return sprayed slurry back into the drum.',
+    review: 'Retired after return velocity above the site limit; heads quarantined.',
+  },
 ];
 
 // ---------------------------------------------------------------------------------------------------
@@ -276,11 +460,76 @@ interface SlurryRow {
 }
 
 const SLURRIES: SlurryRow[] = [
-  { ref: 'oxide', name: 'Mesa OxPlane 30 fumed silica', supplier: 'cobaltMesa', drum: 'naSteel', foams: false, shearSensitive: false, solidsWtPct: 12.5, shelfLifeDays: 365, minRemainingDays: 90, storageMinC: 5, storageMaxC: 35, certificateRequired: false },
-  { ref: 'tungsten', name: 'Mesa WPlane 18 tungsten', supplier: 'cobaltMesa', drum: 'naPlasticTwin', foams: false, shearSensitive: false, solidsWtPct: 3, shelfLifeDays: 180, minRemainingDays: 60, storageMinC: 5, storageMaxC: 25, certificateRequired: true },
-  { ref: 'ceria', name: 'Kumoyama CeriaFine 05', supplier: 'kumoyama', drum: 'jpPlastic', foams: false, shearSensitive: true, solidsWtPct: 1, shelfLifeDays: 270, minRemainingDays: 60, storageMinC: 5, storageMaxC: 30, certificateRequired: false },
-  { ref: 'cuBarrier', name: 'Hsinpu CuBar B7 barrier', supplier: 'hsinpu', drum: 'twSmall', foams: true, shearSensitive: false, solidsWtPct: 6, shelfLifeDays: 120, minRemainingDays: 30, storageMinC: 2, storageMaxC: 25, certificateRequired: false },
-  { ref: 'sti', name: 'Seoripul STI-Select 3', supplier: 'seoripul', drum: 'krSteel', foams: false, shearSensitive: false, solidsWtPct: 2.5, shelfLifeDays: 365, minRemainingDays: 120, storageMinC: 5, storageMaxC: 30, certificateRequired: true },
+  {
+    ref: 'oxide',
+    name: 'Mesa OxPlane 30 fumed silica',
+    supplier: 'cobaltMesa',
+    drum: 'naSteel',
+    foams: false,
+    shearSensitive: false,
+    solidsWtPct: 12.5,
+    shelfLifeDays: 365,
+    minRemainingDays: 90,
+    storageMinC: 5,
+    storageMaxC: 35,
+    certificateRequired: false,
+  },
+  {
+    ref: 'tungsten',
+    name: 'Mesa WPlane 18 tungsten',
+    supplier: 'cobaltMesa',
+    drum: 'naPlasticTwin',
+    foams: false,
+    shearSensitive: false,
+    solidsWtPct: 3,
+    shelfLifeDays: 180,
+    minRemainingDays: 60,
+    storageMinC: 5,
+    storageMaxC: 25,
+    certificateRequired: true,
+  },
+  {
+    ref: 'ceria',
+    name: 'Kumoyama CeriaFine 05',
+    supplier: 'kumoyama',
+    drum: 'jpPlastic',
+    foams: false,
+    shearSensitive: true,
+    solidsWtPct: 1,
+    shelfLifeDays: 270,
+    minRemainingDays: 60,
+    storageMinC: 5,
+    storageMaxC: 30,
+    certificateRequired: false,
+  },
+  {
+    ref: 'cuBarrier',
+    name: 'Hsinpu CuBar B7 barrier',
+    supplier: 'hsinpu',
+    drum: 'twSmall',
+    foams: true,
+    shearSensitive: false,
+    solidsWtPct: 6,
+    shelfLifeDays: 120,
+    minRemainingDays: 30,
+    storageMinC: 2,
+    storageMaxC: 25,
+    certificateRequired: false,
+  },
+  {
+    ref: 'sti',
+    name: 'Seoripul STI-Select 3',
+    supplier: 'seoripul',
+    drum: 'krSteel',
+    foams: false,
+    shearSensitive: false,
+    solidsWtPct: 2.5,
+    shelfLifeDays: 365,
+    minRemainingDays: 120,
+    storageMinC: 5,
+    storageMaxC: 30,
+    certificateRequired: true,
+  },
 ];
 
 // ---------------------------------------------------------------------------------------------------
@@ -303,7 +552,13 @@ interface StationRow {
 
 const STATIONS: StationRow[] = [
   {
-    name: 'Oxide CMP feed A', bay: 'Subfab bay 2 west', tapping: 'one-opening', agitation: 'pump', head: 'combinedOxide', flowLpm: 20, usualDrum: 'naSteel',
+    name: 'Oxide CMP feed A',
+    bay: 'Subfab bay 2 west',
+    tapping: 'one-opening',
+    agitation: 'pump',
+    head: 'combinedOxide',
+    flowLpm: 20,
+    usualDrum: 'naSteel',
     sets: [
       { label: 'Set A', tube: 'n836', state: 'online', usedHoursAgo: 50, rinsedHoursAgo: 47, rinsedBy: 'clerk' },
       { label: 'Set B', tube: 'n836', state: 'standby', usedHoursAgo: 122, rinsedHoursAgo: 118, rinsedBy: 'clerk' },
@@ -311,7 +566,13 @@ const STATIONS: StationRow[] = [
     ],
   },
   {
-    name: 'Tungsten CMP feed B', bay: 'Subfab bay 3 east', tapping: 'two-opening', agitation: 'pump', head: 'feedOnlyMetal', flowLpm: 18, usualDrum: 'naPlasticTwin',
+    name: 'Tungsten CMP feed B',
+    bay: 'Subfab bay 3 east',
+    tapping: 'two-opening',
+    agitation: 'pump',
+    head: 'feedOnlyMetal',
+    flowLpm: 18,
+    usualDrum: 'naPlasticTwin',
     sets: [
       { label: 'Set A', tube: 'n855', state: 'online', usedHoursAgo: 30, rinsedHoursAgo: 27, rinsedBy: 'clerk' },
       { label: 'Set B', tube: 'n855', state: 'standby', usedHoursAgo: 100, rinsedHoursAgo: 96, rinsedBy: 'engineer' },
@@ -319,7 +580,13 @@ const STATIONS: StationRow[] = [
     ],
   },
   {
-    name: 'Ceria STI feed C', bay: 'Subfab bay 3 west', tapping: 'one-opening', agitation: 'mechanical', head: 'split', flowLpm: 12, usualDrum: 'jpPlastic',
+    name: 'Ceria STI feed C',
+    bay: 'Subfab bay 3 west',
+    tapping: 'one-opening',
+    agitation: 'mechanical',
+    head: 'split',
+    flowLpm: 12,
+    usualDrum: 'jpPlastic',
     sets: [
       { label: 'Set A', tube: 'b56x865', state: 'online', usedHoursAgo: 70, rinsedHoursAgo: 66, rinsedBy: 'engineer' },
       { label: 'Set B', tube: 'b56x865', state: 'standby', usedHoursAgo: 150, rinsedHoursAgo: 146, rinsedBy: 'clerk' },
@@ -327,7 +594,13 @@ const STATIONS: StationRow[] = [
     ],
   },
   {
-    name: 'Cu barrier feed D', bay: 'Subfab bay 4', tapping: 'one-opening', agitation: 'pump', head: 'reducedReturn', flowLpm: 8, usualDrum: 'twSmall',
+    name: 'Cu barrier feed D',
+    bay: 'Subfab bay 4',
+    tapping: 'one-opening',
+    agitation: 'pump',
+    head: 'reducedReturn',
+    flowLpm: 8,
+    usualDrum: 'twSmall',
     sets: [
       { label: 'Set A', tube: 'b56x368', state: 'online', usedHoursAgo: 20, rinsedHoursAgo: 18, rinsedBy: 'clerk' },
       { label: 'Set B', tube: 'b56x372', state: 'standby', usedHoursAgo: 44, rinsedHoursAgo: 42, rinsedBy: 'clerk' },
@@ -406,10 +679,7 @@ export const DEMO_REGISTRY_SUMMARY = {
 // ---------------------------------------------------------------------------------------------------
 
 /** Inserts the demo registry. Thread specs must already be loaded; runs inside the caller's transaction. */
-export async function seedDemoRegistry(
-  m: EntityManager,
-  people: { engineerId: string; engineer2Id: string; clerkId: string },
-): Promise<void> {
+export async function seedDemoRegistry(m: EntityManager, people: { engineerId: string; engineer2Id: string; clerkId: string }): Promise<void> {
   const threadIds = new Map<string, string>();
   const thread = async (code: string): Promise<string> => {
     let id = threadIds.get(code);

@@ -47,7 +47,10 @@ const app = createApp({
   logRequests: process.env.BUNGWISE_LOG_REQUESTS !== '0',
   publicUrl: process.env.BUNGWISE_PUBLIC_URL,
   trustProxy: trustProxyFromEnv(),
-  allowedOrigins: (process.env.BUNGWISE_ALLOWED_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
+  allowedOrigins: (process.env.BUNGWISE_ALLOWED_ORIGINS ?? '')
+    .split(',')
+    .map((o) => o.trim())
+    .filter(Boolean),
 });
 
 // One server process: run directly (BUNGWISE_WORKERS=1), or as a worker of the primary in server/index.ts.

@@ -233,8 +233,14 @@ export interface FitCandidateRecord {
 export interface FitCheckResult {
   verdict: 'fits' | 'caution' | 'no-fit';
   summary: string;
-  drum: { id: string | null; name: string | null; partNumber: string | null; insideDepthMm: number; openings: Array<{ label?: string; threadCode: string | null; keyCode: string | null; boreMm?: number | null }> };
-  station: ({ id?: string; name?: string; tapping: string; agitation: string; flowLpm?: number }) | null;
+  drum: {
+    id: string | null;
+    name: string | null;
+    partNumber: string | null;
+    insideDepthMm: number;
+    openings: Array<{ label?: string; threadCode: string | null; keyCode: string | null; boreMm?: number | null }>;
+  };
+  station: { id?: string; name?: string; tapping: string; agitation: string; flowLpm?: number } | null;
   slurry: { id: string; name: string; foams: boolean; shearSensitive: boolean } | null;
   tubeSet: { id: string; label: string; dipTubeId: string; lastRinsedAt: string | null; lastUsedAt: string | null } | null;
   settings: { tipClearanceMinMm: number; tipClearanceMaxMm: number; threadMatchToleranceMm: number; laminarLimit: number; maxReturnVelocityRatio: number };

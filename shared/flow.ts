@@ -52,11 +52,7 @@ export function reynoldsNumber(velocityMs: number, diameterM: number, nu: number
   return (velocityMs * diameterM) / nu;
 }
 
-export function flowRegime(
-  reynolds: number,
-  laminarLimit: number = DEFAULT_LAMINAR_LIMIT,
-  turbulentFrom: number = DEFAULT_TURBULENT_FROM,
-): FlowRegime {
+export function flowRegime(reynolds: number, laminarLimit: number = DEFAULT_LAMINAR_LIMIT, turbulentFrom: number = DEFAULT_TURBULENT_FROM): FlowRegime {
   requirePositive('laminarLimit', laminarLimit);
   if (turbulentFrom < laminarLimit) {
     throw new RangeError(`turbulentFrom (${turbulentFrom}) must not be below laminarLimit (${laminarLimit})`);
@@ -129,8 +125,7 @@ function portFlow(flowM3s: number, boreMm: number, nu: number, mu: number, lamin
     shearRatePerS: wallShearRate(velocityMs, d),
     reynolds,
     regime,
-    laminarPressureDropPaPerM:
-      regime === 'laminar' ? laminarPressureDrop({ mu, lengthM: 1, velocityMs, diameterM: d }) : null,
+    laminarPressureDropPaPerM: regime === 'laminar' ? laminarPressureDrop({ mu, lengthM: 1, velocityMs, diameterM: d }) : null,
   };
 }
 

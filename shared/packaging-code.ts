@@ -83,7 +83,12 @@ function materialLabelOf(letter: string): string | undefined {
 
 /** Takes the code out of what a person may type: '1a1', 'UN 1A1/Y1.4/150/...', ' 31HA1 '. */
 function normalise(raw: string): string {
-  return raw.trim().toUpperCase().replace(/^UN\s*/, '').split('/')[0]!.trim();
+  return raw
+    .trim()
+    .toUpperCase()
+    .replace(/^UN\s*/, '')
+    .split('/')[0]!
+    .trim();
 }
 
 export function parsePackagingCode(raw: string): PackagingCodeResult {
@@ -96,9 +101,7 @@ export function parsePackagingCode(raw: string): PackagingCodeResult {
 
   const single = /^(\d)([A-Z]{1,2})(\d)?$/.exec(code);
   if (!single) {
-    return fail(
-      `"${code}" is not a packaging code: expected a kind numeral, a material letter and usually a category numeral, like 1A1 or 31HA1.`,
-    );
+    return fail(`"${code}" is not a packaging code: expected a kind numeral, a material letter and usually a category numeral, like 1A1 or 31HA1.`);
   }
   const kind = single[1]!;
   const material = single[2]!;
@@ -170,16 +173,7 @@ function parseIbc(code: string, type: string, material: string, category: string
   return ok(code, 'ibc', type, kindLabel, material, materialLabel, category, category === null ? null : `category ${category}`);
 }
 
-function ok(
-  code: string,
-  group: PackagingGroup,
-  kind: string,
-  kindLabel: string,
-  material: string,
-  materialLabel: string,
-  category: string | null,
-  categoryLabel: string | null,
-): ParsedPackagingCode {
+function ok(code: string, group: PackagingGroup, kind: string, kindLabel: string, material: string, materialLabel: string, category: string | null, categoryLabel: string | null): ParsedPackagingCode {
   const what = group === 'single' ? `${materialLabel} ${kindLabel}` : `${kindLabel}, ${materialLabel}`;
   const explanation = `${code}: ${what}${categoryLabel ? `, ${categoryLabel}` : ''}.`;
   return { ok: true, code, group, kind, kindLabel, material, materialLabel, category, categoryLabel, explanation };
@@ -212,11 +206,7 @@ const HEAD_WORDS: Record<DrumHead, string> = {
 };
 
 /** Checks that the declared UN code agrees with what the drum record says the drum is. */
-export function checkDrumPackagingCode(input: {
-  code: string;
-  material: DrumMaterial;
-  head: DrumHead;
-}): PackagingFinding[] {
+export function checkDrumPackagingCode(input: { code: string; material: DrumMaterial; head: DrumHead }): PackagingFinding[] {
   const parsed = parsePackagingCode(input.code);
   if (!parsed.ok) return [{ check: 'code', outcome: 'fail', message: parsed.error }];
 

@@ -14,9 +14,26 @@ export const RESET_LINK_MINUTES = 30;
 // A short list of passwords that appear at the top of every leaked-password list, plus this product's own
 // name: long enough to pass the length rule, still guessed first.
 const COMMON = new Set([
-  'password1234', 'password12345', '123456789012', '1234567890123', 'qwertyuiop12', 'qwerty123456', 'iloveyou1234',
-  'administrator', 'letmein12345', 'welcome12345', 'changeme1234', 'passw0rd1234', 'aaaaaaaaaaaa', '111111111111',
-  'abc123456789', 'football1234', 'monkey123456', 'bungwise1234', 'bungwisebungwise', 'password123!',
+  'password1234',
+  'password12345',
+  '123456789012',
+  '1234567890123',
+  'qwertyuiop12',
+  'qwerty123456',
+  'iloveyou1234',
+  'administrator',
+  'letmein12345',
+  'welcome12345',
+  'changeme1234',
+  'passw0rd1234',
+  'aaaaaaaaaaaa',
+  '111111111111',
+  'abc123456789',
+  'football1234',
+  'monkey123456',
+  'bungwise1234',
+  'bungwisebungwise',
+  'password123!',
 ]);
 
 /** Returns a reason when the password is not acceptable (worded to follow the field's name), or null. */

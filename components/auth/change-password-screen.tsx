@@ -76,7 +76,11 @@ export function ChangePasswordScreen() {
 
   if (forced) {
     return (
-      <AuthFrame title="Choose your own password" lead={`Your account has a temporary password from an administrator. Choose one only you know before you go on. ${OTHERS_END}`} testID="password-screen">
+      <AuthFrame
+        title="Choose your own password"
+        lead={`Your account has a temporary password from an administrator. Choose one only you know before you go on. ${OTHERS_END}`}
+        testID="password-screen"
+      >
         {fields}
         <Button label="Sign out" variant="secondary" onPress={end} testID="password-sign-out" />
       </AuthFrame>

@@ -32,7 +32,11 @@ export function ForgotPasswordScreen() {
     );
   }
   return (
-    <AuthFrame title="Forgot your password?" lead={`Enter your work e-mail. We send it a link to choose a new password; the link works once, for ${RESET_LINK_MINUTES} minutes.`} testID="forgot-screen">
+    <AuthFrame
+      title="Forgot your password?"
+      lead={`Enter your work e-mail. We send it a link to choose a new password; the link works once, for ${RESET_LINK_MINUTES} minutes.`}
+      testID="forgot-screen"
+    >
       <TextField
         label="Work e-mail"
         value={email}

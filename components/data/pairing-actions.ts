@@ -15,8 +15,7 @@ export type PairingAction = 'approve' | 'reject' | 'retire';
 export function usePairingActionMutation(action: PairingAction) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, comment }: { id: string; comment?: string }) =>
-      api<PairingRecord>(`/pairings/${id}/${action}`, { method: 'POST', body: comment?.trim() ? { comment: comment.trim() } : {} }),
+    mutationFn: ({ id, comment }: { id: string; comment?: string }) => api<PairingRecord>(`/pairings/${id}/${action}`, { method: 'POST', body: comment?.trim() ? { comment: comment.trim() } : {} }),
     onSuccess: (pairing) => {
       qc.setQueryData(pairingQueries.keys.detail(pairing.id), pairing);
       qc.invalidateQueries({ queryKey: pairingQueries.keys.all });

@@ -24,4 +24,3 @@ export function useForgotPasswordMutation() {
 export function useResetPasswordMutation() {
   return useMutation({ mutationFn: (v: { token: string; newPassword: string }) => api<{ message: string }>('/auth/reset-password', { method: 'POST', body: v }) });
 }
-

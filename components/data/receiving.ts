@@ -144,11 +144,7 @@ export function useHoldLotMutation() {
     mutationFn: ({ id, reason }: { id: string; reason: string }) => api<ReceivingCheckDetail>(`/receiving-checks/${id}/hold`, { method: 'POST', body: { reason } }),
     onSuccess: (saved) => {
       qc.setQueryData(receivingKeys.detail(saved.id), saved);
-      return Promise.all([
-        qc.invalidateQueries({ queryKey: receivingKeys.all }),
-        qc.invalidateQueries({ queryKey: warningKeys.all }),
-        qc.invalidateQueries({ queryKey: notificationKeys.all }),
-      ]);
+      return Promise.all([qc.invalidateQueries({ queryKey: receivingKeys.all }), qc.invalidateQueries({ queryKey: warningKeys.all }), qc.invalidateQueries({ queryKey: notificationKeys.all })]);
     },
   });
 }

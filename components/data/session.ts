@@ -22,8 +22,7 @@ export interface SignInResult {
   user: SessionUser;
 }
 
-export const signInRequest = (email: string, password: string) =>
-  api<SignInResult>('/auth/sign-in', { method: 'POST', body: { email, password } });
+export const signInRequest = (email: string, password: string) => api<SignInResult>('/auth/sign-in', { method: 'POST', body: { email, password } });
 
 export const meRequest = () => api<{ user: SessionUser }>('/me');
 

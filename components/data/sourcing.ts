@@ -67,11 +67,7 @@ export function useSourcingPlanCreateMutation() {
     mutationFn: (body: SourcingPlanInput) => api<SourcingPlanDetail>('/sourcing-plans', { method: 'POST', body }),
     onSuccess: (saved) => {
       qc.setQueryData(sourcingKeys.detail(saved.id), saved);
-      return Promise.all([
-        qc.invalidateQueries({ queryKey: sourcingKeys.list() }),
-        qc.invalidateQueries({ queryKey: warningKeys.all }),
-        qc.invalidateQueries({ queryKey: notificationKeys.all }),
-      ]);
+      return Promise.all([qc.invalidateQueries({ queryKey: sourcingKeys.list() }), qc.invalidateQueries({ queryKey: warningKeys.all }), qc.invalidateQueries({ queryKey: notificationKeys.all })]);
     },
   });
 }

@@ -44,7 +44,17 @@ export interface BoardRinse {
 }
 
 export interface StationBoard {
-  station: { id: string; version: number; name: string; bay: string; tapping: 'two-opening' | 'one-opening'; agitation: 'pump' | 'mechanical'; flowLpm: number; connectorId: string | null; connectorPartNumber: string | null };
+  station: {
+    id: string;
+    version: number;
+    name: string;
+    bay: string;
+    tapping: 'two-opening' | 'one-opening';
+    agitation: 'pump' | 'mechanical';
+    flowLpm: number;
+    connectorId: string | null;
+    connectorPartNumber: string | null;
+  };
   tubeSets: BoardTubeSet[];
   changeOuts: BoardChangeOut[];
   rinses: BoardRinse[];

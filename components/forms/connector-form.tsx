@@ -123,9 +123,24 @@ export function ConnectorFormScreen({ id }: { id?: string }) {
       cancelTo={id ? `/registry/connectors/${id}` : '/registry/connectors'}
     >
       <FormSection title="Part">
-        <TextField label="Part number" value={draft.partNumber} onChangeText={(v) => set('partNumber', v)} autoCapitalize="characters" autoCorrect={false} testID="form-partNumber" {...field('partNumber')} />
+        <TextField
+          label="Part number"
+          value={draft.partNumber}
+          onChangeText={(v) => set('partNumber', v)}
+          autoCapitalize="characters"
+          autoCorrect={false}
+          testID="form-partNumber"
+          {...field('partNumber')}
+        />
         <SupplierPicker value={draft.supplierId} onChange={(p) => set('supplierId', p)} testID="form-supplierId" {...field('supplierId')} />
-        <TextField label="Wetted materials" hint="Everything the slurry touches, e.g. PFA, PTFE, FFKM seals." value={draft.wettedMaterials} onChangeText={(v) => set('wettedMaterials', v)} testID="form-wettedMaterials" {...field('wettedMaterials')} />
+        <TextField
+          label="Wetted materials"
+          hint="Everything the slurry touches, e.g. PFA, PTFE, FFKM seals."
+          value={draft.wettedMaterials}
+          onChangeText={(v) => set('wettedMaterials', v)}
+          testID="form-wettedMaterials"
+          {...field('wettedMaterials')}
+        />
       </FormSection>
       <FormSection title="Keying and tapping">
         <KeyCodePicker hint="The collar key on the head, if the site keys this line." value={draft.keyCode} onChange={(p) => set('keyCode', p)} testID="form-keyCode" {...field('keyCode')} />
@@ -137,7 +152,14 @@ export function ConnectorFormScreen({ id }: { id?: string }) {
             <LengthField label="Feed port bore" value={draft.feedBoreMm} onChange={(v) => set('feedBoreMm', v)} testID="form-feedBoreMm" {...field('feedBoreMm')} />
           </FieldCell>
           <FieldCell>
-            <TextField label="Feed port size" hint="As marked, e.g. 3/4 in." value={draft.feedNominal} onChangeText={(v) => set('feedNominal', v)} testID="form-feedNominal" {...field('feedNominal')} />
+            <TextField
+              label="Feed port size"
+              hint="As marked, e.g. 3/4 in."
+              value={draft.feedNominal}
+              onChangeText={(v) => set('feedNominal', v)}
+              testID="form-feedNominal"
+              {...field('feedNominal')}
+            />
           </FieldCell>
         </FieldRow>
         <ChoiceChips label="Return path" options={RETURN_PATH_OPTIONS} value={draft.returnPath} onChange={setReturnPath} error={field('returnPath').error} testID="form-returnPath" />
@@ -147,7 +169,14 @@ export function ConnectorFormScreen({ id }: { id?: string }) {
               <LengthField label="Return port bore" value={draft.returnBoreMm} onChange={(v) => set('returnBoreMm', v)} testID="form-returnBoreMm" {...field('returnBoreMm')} />
             </FieldCell>
             <FieldCell>
-              <TextField label="Return port size" hint="As marked, e.g. 1/2 in." value={draft.returnNominal} onChangeText={(v) => set('returnNominal', v)} testID="form-returnNominal" {...field('returnNominal')} />
+              <TextField
+                label="Return port size"
+                hint="As marked, e.g. 1/2 in."
+                value={draft.returnNominal}
+                onChangeText={(v) => set('returnNominal', v)}
+                testID="form-returnNominal"
+                {...field('returnNominal')}
+              />
             </FieldCell>
           </FieldRow>
         ) : draft.returnPath === 'none' ? (

@@ -103,7 +103,15 @@ export function DipTubeFormScreen({ id }: { id?: string }) {
       cancelTo={id ? `/registry/dip-tubes/${id}` : '/registry/dip-tubes'}
     >
       <FormSection title="Part">
-        <TextField label="Part number" value={draft.partNumber} onChangeText={(v) => set('partNumber', v)} autoCapitalize="characters" autoCorrect={false} testID="form-partNumber" {...field('partNumber')} />
+        <TextField
+          label="Part number"
+          value={draft.partNumber}
+          onChangeText={(v) => set('partNumber', v)}
+          autoCapitalize="characters"
+          autoCorrect={false}
+          testID="form-partNumber"
+          {...field('partNumber')}
+        />
         <SupplierPicker value={draft.supplierId} onChange={(p) => set('supplierId', p)} testID="form-supplierId" {...field('supplierId')} />
         <TextField label="Material" hint="The wetted material, e.g. PFA or PVDF." value={draft.material} onChangeText={(v) => set('material', v)} testID="form-material" {...field('material')} />
       </FormSection>

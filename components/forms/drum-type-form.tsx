@@ -169,7 +169,12 @@ function OpeningsEditor({ form }: { form: RecordForm<DrumTypeRecord, DrumTypeDra
     const next = draft.openings.map((o, j) => (j === i ? { ...o, [key]: value } : o));
     set('openings', next, `openings.${i}.${key}`);
   };
-  const remove = (i: number) => set('openings', draft.openings.filter((_, j) => j !== i), 'openings');
+  const remove = (i: number) =>
+    set(
+      'openings',
+      draft.openings.filter((_, j) => j !== i),
+      'openings',
+    );
   const add = () => {
     set('openings', [...draft.openings, emptyOpening(unit)], 'openings');
   };
@@ -184,14 +189,35 @@ function OpeningsEditor({ form }: { form: RecordForm<DrumTypeRecord, DrumTypeDra
               <Text role="heading" aria-level={3} style={type.label}>
                 Opening {i + 1}
               </Text>
-              <Button label="Remove" variant="quiet" accessibilityLabel={`Remove opening ${i + 1}`} disabled={draft.openings.length <= 1} onPress={() => remove(i)} testID={`form-openings-${i}-remove`} />
+              <Button
+                label="Remove"
+                variant="quiet"
+                accessibilityLabel={`Remove opening ${i + 1}`}
+                disabled={draft.openings.length <= 1}
+                onPress={() => remove(i)}
+                testID={`form-openings-${i}-remove`}
+              />
             </View>
             <FieldRow>
               <FieldCell>
-                <TextField label="Label" hint="As marked or as people say it, e.g. large bung." value={o.label} onChangeText={(v) => change(i, 'label', v)} testID={`form-openings-${i}-label`} {...field(`${p}.label`)} />
+                <TextField
+                  label="Label"
+                  hint="As marked or as people say it, e.g. large bung."
+                  value={o.label}
+                  onChangeText={(v) => change(i, 'label', v)}
+                  testID={`form-openings-${i}-label`}
+                  {...field(`${p}.label`)}
+                />
               </FieldCell>
               <FieldCell>
-                <LengthField label="Bore" hint="Inside diameter of the opening." value={o.boreMm} onChange={(v) => change(i, 'boreMm', v)} testID={`form-openings-${i}-boreMm`} {...field(`${p}.boreMm`)} />
+                <LengthField
+                  label="Bore"
+                  hint="Inside diameter of the opening."
+                  value={o.boreMm}
+                  onChange={(v) => change(i, 'boreMm', v)}
+                  testID={`form-openings-${i}-boreMm`}
+                  {...field(`${p}.boreMm`)}
+                />
               </FieldCell>
             </FieldRow>
             <FieldRow>
@@ -202,7 +228,14 @@ function OpeningsEditor({ form }: { form: RecordForm<DrumTypeRecord, DrumTypeDra
                 <KeyCodePicker value={o.keyCode} onChange={(v) => change(i, 'keyCode', v)} testID={`form-openings-${i}-keyCode`} {...field(`${p}.keyCode`)} />
               </FieldCell>
             </FieldRow>
-            <ChoiceChips label="Position" options={POSITION_OPTIONS} value={o.position} onChange={(v) => change(i, 'position', v)} error={field(`${p}.position`).error} testID={`form-openings-${i}-position`} />
+            <ChoiceChips
+              label="Position"
+              options={POSITION_OPTIONS}
+              value={o.position}
+              onChange={(v) => change(i, 'position', v)}
+              error={field(`${p}.position`).error}
+              testID={`form-openings-${i}-position`}
+            />
           </View>
         );
       })}
@@ -234,7 +267,15 @@ export function DrumTypeFormScreen({ id }: { id?: string }) {
       cancelTo={id ? `/registry/drum-types/${id}` : '/registry/drum-types'}
     >
       <FormSection title="Drum">
-        <TextField label="Part number" value={draft.partNumber} onChangeText={(v) => set('partNumber', v)} autoCapitalize="characters" autoCorrect={false} testID="form-partNumber" {...field('partNumber')} />
+        <TextField
+          label="Part number"
+          value={draft.partNumber}
+          onChangeText={(v) => set('partNumber', v)}
+          autoCapitalize="characters"
+          autoCorrect={false}
+          testID="form-partNumber"
+          {...field('partNumber')}
+        />
         <TextField label="Name" hint="What people call it, e.g. 55 gal lined steel tight head." value={draft.name} onChangeText={(v) => set('name', v)} testID="form-name" {...field('name')} />
         <SupplierPicker
           value={draft.supplierId}
@@ -266,18 +307,46 @@ export function DrumTypeFormScreen({ id }: { id?: string }) {
             ! {w.message}
           </Text>
         ))}
-        <NumberField label="Nominal capacity" suffix="L" value={draft.nominalCapacityL} onChangeText={(v) => set('nominalCapacityL', v)} testID="form-nominalCapacityL" {...field('nominalCapacityL')} />
+        <NumberField
+          label="Nominal capacity"
+          suffix="L"
+          value={draft.nominalCapacityL}
+          onChangeText={(v) => set('nominalCapacityL', v)}
+          testID="form-nominalCapacityL"
+          {...field('nominalCapacityL')}
+        />
       </FormSection>
       <FormSection title="Size" full>
         <FieldRow>
           <FieldCell>
-            <LengthField label="Outside height" hint="Overall, bottom chime to top chime." value={draft.outsideHeightMm} onChange={(v) => set('outsideHeightMm', v)} testID="form-outsideHeightMm" {...field('outsideHeightMm')} />
+            <LengthField
+              label="Outside height"
+              hint="Overall, bottom chime to top chime."
+              value={draft.outsideHeightMm}
+              onChange={(v) => set('outsideHeightMm', v)}
+              testID="form-outsideHeightMm"
+              {...field('outsideHeightMm')}
+            />
           </FieldCell>
           <FieldCell>
-            <LengthField label="Inside depth" hint="Bung seat to inside bottom." value={draft.insideDepthMm} onChange={(v) => set('insideDepthMm', v)} testID="form-insideDepthMm" {...field('insideDepthMm')} />
+            <LengthField
+              label="Inside depth"
+              hint="Bung seat to inside bottom."
+              value={draft.insideDepthMm}
+              onChange={(v) => set('insideDepthMm', v)}
+              testID="form-insideDepthMm"
+              {...field('insideDepthMm')}
+            />
           </FieldCell>
           <FieldCell>
-            <LengthField label="Outside diameter" hint="Across the rolling hoops." value={draft.outsideDiameterMm} onChange={(v) => set('outsideDiameterMm', v)} testID="form-outsideDiameterMm" {...field('outsideDiameterMm')} />
+            <LengthField
+              label="Outside diameter"
+              hint="Across the rolling hoops."
+              value={draft.outsideDiameterMm}
+              onChange={(v) => set('outsideDiameterMm', v)}
+              testID="form-outsideDiameterMm"
+              {...field('outsideDiameterMm')}
+            />
           </FieldCell>
         </FieldRow>
       </FormSection>

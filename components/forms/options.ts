@@ -59,5 +59,5 @@ export const YES_NO_OPTIONS: Options<'yes' | 'no'> = [
 
 /** The label of a value in an option list, or the value itself. */
 export function optionLabel<T extends string>(options: Options<T>, value: T | null | undefined): string {
-  return options.find((o) => o.value === value)?.label ?? (value ?? 'none');
+  return options.find((o) => o.value === value)?.label ?? value ?? 'none';
 }

@@ -76,7 +76,8 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
     if (mode === 'create' && !draft.dipTubeId && initialDipTubeId && tubeDetail.data?.id === initialDipTubeId) set('dipTubeId', { id: tubeDetail.data.id, label: dipTubeLabel(tubeDetail.data) });
   }, [mode, draft.dipTubeId, initialDipTubeId, tubeDetail.data, set]);
   useEffect(() => {
-    if (mode === 'create' && !draft.connectorId && initialConnectorId && connectorDetail.data?.id === initialConnectorId) set('connectorId', { id: connectorDetail.data.id, label: connectorLabel(connectorDetail.data) });
+    if (mode === 'create' && !draft.connectorId && initialConnectorId && connectorDetail.data?.id === initialConnectorId)
+      set('connectorId', { id: connectorDetail.data.id, label: connectorLabel(connectorDetail.data) });
   }, [mode, draft.connectorId, initialConnectorId, connectorDetail.data, set]);
 
   const title = mode === 'create' ? 'New pairing' : `Edit pairing ${form.base?.dipTubePartNumber ?? ''} + ${form.base?.connectorPartNumber ?? ''}`;
@@ -84,7 +85,11 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
     <FormFrame
       form={form}
       title={title}
-      subtitle={mode === 'create' ? 'A dip tube and the connector it is used with. It starts as a draft; another engineer approves it.' : 'Only the notes change; to pair other parts, retire this pairing and create a new one.'}
+      subtitle={
+        mode === 'create'
+          ? 'A dip tube and the connector it is used with. It starts as a draft; another engineer approves it.'
+          : 'Only the notes change; to pair other parts, retire this pairing and create a new one.'
+      }
       testID="pairing-form"
       cancelTo={id ? `/registry/pairings/${id}` : '/registry/pairings'}
       aside={<FitPreview tube={tube} connector={connector} status={form.base?.status ?? 'draft'} />}

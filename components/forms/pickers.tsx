@@ -28,15 +28,7 @@ export const SupplierPicker = forwardRef<RecordPickerHandle, PickerProps<Supplie
 
 /** Thread specs are referred to by code (NPS-2, G-2, BT-56x4). */
 export const ThreadPicker = forwardRef<RecordPickerHandle, PickerProps<ThreadSpecRecord>>(function ThreadPicker({ label = 'Thread', ...rest }, ref) {
-  return (
-    <RecordPicker
-      ref={ref}
-      label={label}
-      source={threadSpecQueries}
-      toOption={(t) => ({ id: t.code, label: t.code, detail: `${t.nominalLabel} · ${t.form} · ${t.standard}` })}
-      {...rest}
-    />
-  );
+  return <RecordPicker ref={ref} label={label} source={threadSpecQueries} toOption={(t) => ({ id: t.code, label: t.code, detail: `${t.nominalLabel} · ${t.form} · ${t.standard}` })} {...rest} />;
 });
 
 /** Key codes are referred to by code; "No key" is a valid choice. */

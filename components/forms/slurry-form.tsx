@@ -49,7 +49,20 @@ const yesNo = (b: boolean): YesNo => (b ? 'yes' : 'no');
 
 export const slurrySpec: FormSpec<SlurryRecord, SlurryDraft> = {
   noun: 'slurry',
-  empty: () => ({ name: '', supplierId: null, region: null, drumTypeId: null, foams: null, shearSensitive: null, solidsWtPct: '', shelfLifeDays: '', minRemainingDays: '', storageMinC: '', storageMaxC: '', certificateRequired: 'no' }),
+  empty: () => ({
+    name: '',
+    supplierId: null,
+    region: null,
+    drumTypeId: null,
+    foams: null,
+    shearSensitive: null,
+    solidsWtPct: '',
+    shelfLifeDays: '',
+    minRemainingDays: '',
+    storageMinC: '',
+    storageMaxC: '',
+    certificateRequired: 'no',
+  }),
   fromRecord: (s) => ({
     name: s.name,
     supplierId: { id: s.supplierId, label: s.supplierName ?? 'Supplier' },
@@ -131,15 +144,55 @@ export function SlurryFormScreen({ id }: { id?: string }) {
       <FormSection title="Handling">
         <DrumTypePicker hint="The drum type it is delivered in." value={draft.drumTypeId} onChange={(p) => set('drumTypeId', p)} testID="form-drumTypeId" {...field('drumTypeId')} />
         <ChoiceChips label="Foams when stirred" options={YES_NO_OPTIONS} value={draft.foams} onChange={(v) => set('foams', v)} error={field('foams').error} testID="form-foams" />
-        <ChoiceChips label="Shear-sensitive" options={YES_NO_OPTIONS} value={draft.shearSensitive} onChange={(v) => set('shearSensitive', v)} error={field('shearSensitive').error} testID="form-shearSensitive" />
-        <NumberField label="Solids" hint="Weight percent, 0 to 100." suffix="wt %" value={draft.solidsWtPct} onChangeText={(v) => set('solidsWtPct', v)} testID="form-solidsWtPct" {...field('solidsWtPct')} />
+        <ChoiceChips
+          label="Shear-sensitive"
+          options={YES_NO_OPTIONS}
+          value={draft.shearSensitive}
+          onChange={(v) => set('shearSensitive', v)}
+          error={field('shearSensitive').error}
+          testID="form-shearSensitive"
+        />
+        <NumberField
+          label="Solids"
+          hint="Weight percent, 0 to 100."
+          suffix="wt %"
+          value={draft.solidsWtPct}
+          onChangeText={(v) => set('solidsWtPct', v)}
+          testID="form-solidsWtPct"
+          {...field('solidsWtPct')}
+        />
       </FormSection>
       <FormSection title="Receiving">
-        <NumberField label="Shelf life" hint="Days from production; leave empty if the label always gives an expiry date." suffix="days" inputMode="numeric" value={draft.shelfLifeDays} onChangeText={(v) => set('shelfLifeDays', v)} testID="form-shelfLifeDays" {...field('shelfLifeDays')} />
-        <NumberField label="Minimum remaining life on arrival" hint="A lot with fewer days left is held at the dock." suffix="days" inputMode="numeric" value={draft.minRemainingDays} onChangeText={(v) => set('minRemainingDays', v)} testID="form-minRemainingDays" {...field('minRemainingDays')} />
+        <NumberField
+          label="Shelf life"
+          hint="Days from production; leave empty if the label always gives an expiry date."
+          suffix="days"
+          inputMode="numeric"
+          value={draft.shelfLifeDays}
+          onChangeText={(v) => set('shelfLifeDays', v)}
+          testID="form-shelfLifeDays"
+          {...field('shelfLifeDays')}
+        />
+        <NumberField
+          label="Minimum remaining life on arrival"
+          hint="A lot with fewer days left is held at the dock."
+          suffix="days"
+          inputMode="numeric"
+          value={draft.minRemainingDays}
+          onChangeText={(v) => set('minRemainingDays', v)}
+          testID="form-minRemainingDays"
+          {...field('minRemainingDays')}
+        />
         <NumberField label="Lowest storage temperature" suffix="°C" value={draft.storageMinC} onChangeText={(v) => set('storageMinC', v)} testID="form-storageMinC" {...field('storageMinC')} />
         <NumberField label="Highest storage temperature" suffix="°C" value={draft.storageMaxC} onChangeText={(v) => set('storageMaxC', v)} testID="form-storageMaxC" {...field('storageMaxC')} />
-        <ChoiceChips label="Certificate of analysis required at the dock" options={YES_NO_OPTIONS} value={draft.certificateRequired} onChange={(v) => set('certificateRequired', v)} error={field('certificateRequired').error} testID="form-certificateRequired" />
+        <ChoiceChips
+          label="Certificate of analysis required at the dock"
+          options={YES_NO_OPTIONS}
+          value={draft.certificateRequired}
+          onChange={(v) => set('certificateRequired', v)}
+          error={field('certificateRequired').error}
+          testID="form-certificateRequired"
+        />
       </FormSection>
     </FormFrame>
   );

@@ -86,7 +86,14 @@ export function StationFormScreen({ id }: { id?: string }) {
       <FormSection title="Tapping and head">
         <ChoiceChips label="Tapping" options={TAPPING_OPTIONS} value={draft.tapping} onChange={(v) => set('tapping', v)} error={field('tapping').error} testID="form-tapping" />
         <ChoiceChips label="Agitation" options={AGITATION_OPTIONS} value={draft.agitation} onChange={(v) => set('agitation', v)} error={field('agitation').error} testID="form-agitation" />
-        <ConnectorPicker label="Installed connector" noneLabel="No connector installed" value={draft.connectorId} onChange={(p) => set('connectorId', p)} testID="form-connectorId" {...field('connectorId')} />
+        <ConnectorPicker
+          label="Installed connector"
+          noneLabel="No connector installed"
+          value={draft.connectorId}
+          onChange={(p) => set('connectorId', p)}
+          testID="form-connectorId"
+          {...field('connectorId')}
+        />
       </FormSection>
     </FormFrame>
   );

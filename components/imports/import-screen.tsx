@@ -31,8 +31,8 @@ export function ImportScreen() {
         <Card testID="import-not-allowed">
           <SectionTitle>Engineers import spec sheets</SectionTitle>
           <Text style={type.body}>
-            Bringing a supplier's sheet into the registry changes the parts every fit check relies on, so engineers and administrators do it. Ask an engineer to import the
-            sheet; every table in the registry stays open to you to read.
+            Bringing a supplier's sheet into the registry changes the parts every fit check relies on, so engineers and administrators do it. Ask an engineer to import the sheet; every table in the
+            registry stays open to you to read.
           </Text>
           <View style={styles.row}>
             <LinkButton href="/registry/drum-types" label="Go to the registry" testID="import-not-allowed-registry" />

@@ -45,7 +45,11 @@ export function NoticesScreen() {
           ) : list.isError ? (
             <ErrorState error={list.error} onRetry={() => list.refetch()} />
           ) : list.data.items.length === 0 ? (
-            <EmptyState title="No notices" next="You are told here when a lot is held at the dock, a plan needs hardware, or a pairing needs your review." action={{ label: 'Go home', onPress: () => router.push('/') }} />
+            <EmptyState
+              title="No notices"
+              next="You are told here when a lot is held at the dock, a plan needs hardware, or a pairing needs your review."
+              action={{ label: 'Go home', onPress: () => router.push('/') }}
+            />
           ) : (
             <View role="list" aria-label="Notices" style={styles.list} testID="notices-list">
               {sortNotices(list.data.items).map((n) => (

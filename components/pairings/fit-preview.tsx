@@ -40,8 +40,7 @@ export function FitPreview({ tube, connector, status }: FitPreviewProps) {
 
   const flowValue = parseNumber(flow);
   const flowError = flowValue !== null && (Number.isNaN(flowValue) || flowValue <= 0) ? 'Flow must be a number more than 0 L/min, or left empty.' : null;
-  const station: StationInput | null =
-    tapping === 'none' ? null : { tapping, agitation, ...(flowValue !== null && !flowError ? { flowLpm: flowValue } : {}) };
+  const station: StationInput | null = tapping === 'none' ? null : { tapping, agitation, ...(flowValue !== null && !flowError ? { flowLpm: flowValue } : {}) };
 
   // Cheap enough to run on every render: a handful of comparisons and one flow computation.
   const result = (() => {
@@ -75,7 +74,9 @@ export function FitPreview({ tube, connector, status }: FitPreviewProps) {
     );
   } else if (result?.ok) {
     const missing = result.notChecked.map((n) => RULE_LABELS[n.rule] ?? n.rule);
-    const context = station ? `, ${station.tapping} tapping with ${station.agitation === 'pump' ? 'pump recirculation' : 'a mechanical stirrer'}${station.flowLpm ? ` at ${station.flowLpm} L/min` : ''}` : ', no station';
+    const context = station
+      ? `, ${station.tapping} tapping with ${station.agitation === 'pump' ? 'pump recirculation' : 'a mechanical stirrer'}${station.flowLpm ? ` at ${station.flowLpm} L/min` : ''}`
+      : ', no station';
     const summary = drum ? `In drum ${drum.partNumber}${context}.` : 'Tube and head only: pick a drum type to check thread, reach and openings.';
     body = (
       <View style={styles.result}>

@@ -76,9 +76,7 @@ export function PairingDetailScreen({ id }: { id: string }) {
   }
   const p = query.data;
   const actions =
-    canEdit && p.status !== 'retired' ? (
-      <Button label="Edit notes" variant="secondary" onPress={() => router.push(`/registry/pairings/edit/${p.id}` as never)} testID="pairing-edit" />
-    ) : null;
+    canEdit && p.status !== 'retired' ? <Button label="Edit notes" variant="secondary" onPress={() => router.push(`/registry/pairings/edit/${p.id}` as never)} testID="pairing-edit" /> : null;
   const title = `${p.dipTubePartNumber ?? 'Dip tube'} + ${p.connectorPartNumber ?? 'connector'}`;
   return (
     <Screen title={title} subtitle="Pairing of a dip tube and the connector it is used with." actions={actions} testID="pairing-detail">
@@ -108,5 +106,15 @@ const styles = StyleSheet.create({
   main: { flex: 3, gap: space.lg, minWidth: 0 },
   side: { flex: 2, gap: space.lg, minWidth: 0 },
   fact: { gap: 2 },
-  link: { fontFamily: fonts.semibold, fontSize: 17, color: colors.primary, textDecorationLine: 'underline', minHeight: minTouch, paddingVertical: space.sm, display: 'flex' as never, alignItems: 'center', alignSelf: 'flex-start' },
+  link: {
+    fontFamily: fonts.semibold,
+    fontSize: 17,
+    color: colors.primary,
+    textDecorationLine: 'underline',
+    minHeight: minTouch,
+    paddingVertical: space.sm,
+    display: 'flex' as never,
+    alignItems: 'center',
+    alignSelf: 'flex-start',
+  },
 });

@@ -35,7 +35,13 @@ export function CertificateButton({ record, variant = 'primary' }: { record: Rec
   const problem = upload.error?.message ?? pickError;
   return (
     <View style={styles.wrap}>
-      <Button label={fraction !== null ? `Sending the certificate… ${Math.round(fraction * 100)}%` : 'Attach the certificate'} variant={variant} busy={upload.isPending} onPress={choose} testID="certificate-attach" />
+      <Button
+        label={fraction !== null ? `Sending the certificate… ${Math.round(fraction * 100)}%` : 'Attach the certificate'}
+        variant={variant}
+        busy={upload.isPending}
+        onPress={choose}
+        testID="certificate-attach"
+      />
       {problem ? (
         <Text role="alert" style={styles.error} testID="certificate-error">
           The certificate was not attached: {problem}

@@ -49,7 +49,12 @@ export function DockDrumCard({ form }: { form: DockForm }) {
             />
           ))}
           {draft.openings.length < 3 ? (
-            <Button label="Add another bung" variant="secondary" onPress={() => set('openings', (list) => [...list, newOpening(list.length === 1 ? 'small bung' : 'centre bung')])} testID="dock-add-opening" />
+            <Button
+              label="Add another bung"
+              variant="secondary"
+              onPress={() => set('openings', (list) => [...list, newOpening(list.length === 1 ? 'small bung' : 'centre bung')])}
+              testID="dock-add-opening"
+            />
           ) : null}
           <LengthField
             label="Inside depth"

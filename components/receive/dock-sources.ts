@@ -17,7 +17,11 @@ interface Source<T> {
 function matches(words: string, q: string | undefined): boolean {
   if (!q?.trim()) return true;
   const hay = words.toLowerCase();
-  return q.toLowerCase().split(/\s+/).filter(Boolean).every((w) => hay.includes(w));
+  return q
+    .toLowerCase()
+    .split(/\s+/)
+    .filter(Boolean)
+    .every((w) => hay.includes(w));
 }
 
 function keptSource<T extends { id: string }>(name: string, remote: Source<T>, pick: (s: DockSnapshot) => T[], words: (r: T) => string): Source<T> {
@@ -43,7 +47,27 @@ function keptSource<T extends { id: string }>(name: string, remote: Source<T>, p
 }
 
 // The snapshot's records carry what the pickers show; the rest of each record is not needed to pick it.
-export const keptDrumTypes = keptSource<DrumTypeRecord>('drum-types', drumTypeQueries, (s) => s.drumTypes as unknown as DrumTypeRecord[], (d) => `${d.name} ${d.partNumber} ${d.supplierName ?? ''}`);
-export const keptStations = keptSource<StationRecord>('stations', stationQueries, (s) => s.stations as unknown as StationRecord[], (d) => `${d.name} ${d.bay}`);
-export const keptSlurries = keptSource<SlurryRecord>('slurries', slurryQueries, (s) => s.slurries as unknown as SlurryRecord[], (d) => `${d.name} ${d.supplierName ?? ''}`);
-export const keptSuppliers = keptSource<SupplierRecord>('suppliers', supplierQueries, (s) => s.suppliers as unknown as SupplierRecord[], (d) => d.name);
+export const keptDrumTypes = keptSource<DrumTypeRecord>(
+  'drum-types',
+  drumTypeQueries,
+  (s) => s.drumTypes as unknown as DrumTypeRecord[],
+  (d) => `${d.name} ${d.partNumber} ${d.supplierName ?? ''}`,
+);
+export const keptStations = keptSource<StationRecord>(
+  'stations',
+  stationQueries,
+  (s) => s.stations as unknown as StationRecord[],
+  (d) => `${d.name} ${d.bay}`,
+);
+export const keptSlurries = keptSource<SlurryRecord>(
+  'slurries',
+  slurryQueries,
+  (s) => s.slurries as unknown as SlurryRecord[],
+  (d) => `${d.name} ${d.supplierName ?? ''}`,
+);
+export const keptSuppliers = keptSource<SupplierRecord>(
+  'suppliers',
+  supplierQueries,
+  (s) => s.suppliers as unknown as SupplierRecord[],
+  (d) => d.name,
+);

@@ -195,18 +195,14 @@ export function DrumSection({ result, testID = 'drum-section' }: { result: FitCh
                 ))}
                 {tube ? (
                   <G>
-                    <Rect
-                      x={dTubeX - 10}
-                      y={dTop - 6}
-                      width={20}
-                      height={(tipOffDetail ? dTop + 16 : tube.gapMm <= 0 ? dBottom : dy(tipMm)) - (dTop - 6)}
-                      fill={colors.primary}
-                    />
-                    {tipOffDetail ? (
-                      <Path d={`M ${dTubeX - 12} ${dTop + 30} L ${dTubeX} ${dTop + 18} L ${dTubeX + 12} ${dTop + 30}`} stroke={tipColour} strokeWidth={2.5} fill="none" />
-                    ) : null}
+                    <Rect x={dTubeX - 10} y={dTop - 6} width={20} height={(tipOffDetail ? dTop + 16 : tube.gapMm <= 0 ? dBottom : dy(tipMm)) - (dTop - 6)} fill={colors.primary} />
+                    {tipOffDetail ? <Path d={`M ${dTubeX - 12} ${dTop + 30} L ${dTubeX} ${dTop + 18} L ${dTubeX + 12} ${dTop + 30}`} stroke={tipColour} strokeWidth={2.5} fill="none" /> : null}
                     {tube.gapMm <= 0 ? (
-                      <Path d={`M ${dTubeX - 12} ${dBottom - 12} L ${dTubeX + 12} ${dBottom + 12} M ${dTubeX + 12} ${dBottom - 12} L ${dTubeX - 12} ${dBottom + 12}`} stroke={colors.noFit} strokeWidth={3} />
+                      <Path
+                        d={`M ${dTubeX - 12} ${dBottom - 12} L ${dTubeX + 12} ${dBottom + 12} M ${dTubeX + 12} ${dBottom - 12} L ${dTubeX - 12} ${dBottom + 12}`}
+                        stroke={colors.noFit}
+                        strokeWidth={3}
+                      />
                     ) : null}
                     {/* Leader from the tip to its label. */}
                     {!tipOffDetail && tube.gapMm > 0 ? (
@@ -215,13 +211,7 @@ export function DrumSection({ result, testID = 'drum-section' }: { result: FitCh
                         <Line x1={dTubeX - 28} x2={dTubeX - 16} y1={dy(tipMm)} y2={dy(tipMm)} stroke={tipColour} strokeWidth={1.5} />
                       </G>
                     ) : null}
-                    <SvgText
-                      x={dTubeX + 16}
-                      y={tipOffDetail ? dTop + 28 : tube.gapMm <= 0 ? dBottom - 18 : dy(tipMm) + 4}
-                      fontSize={13}
-                      fontFamily={fonts.bold}
-                      fill={tipColour}
-                    >
+                    <SvgText x={dTubeX + 16} y={tipOffDetail ? dTop + 28 : tube.gapMm <= 0 ? dBottom - 18 : dy(tipMm) + 4} fontSize={13} fontFamily={fonts.bold} fill={tipColour}>
                       {tube.gapMm <= 0 ? '✕ bottoms out' : `${place === 'inside' ? '✓' : '✕'} tip ${lengthText(tube.gapMm, unit)}`}
                     </SvgText>
                   </G>

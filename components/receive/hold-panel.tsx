@@ -52,9 +52,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
       hold.mutate({ id: record.id, reason: note }, options),
     );
   const onRelease = () =>
-    submitNote(comment, 'comment', 'Say why the lot may be used now (at least 3 characters).', setCommentError, (note, options) =>
-      release.mutate({ id: record.id, comment: note }, options),
-    );
+    submitNote(comment, 'comment', 'Say why the lot may be used now (at least 3 characters).', setCommentError, (note, options) => release.mutate({ id: record.id, comment: note }, options));
 
   if (record.status === 'on-hold' || record.status === 'quarantined') {
     const quarantined = record.status === 'quarantined';
@@ -65,7 +63,8 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
         <Text style={[type.heading, { color: colors.noFit }]}>{quarantined ? 'This lot is in quarantine: keep its drums apart, unopened.' : 'This lot is on hold: do not tap its drums.'}</Text>
         {record.heldByRules ? null : <Text style={type.body}>Reason: {record.holdReason}</Text>}
         <Text style={type.small}>
-          {record.heldByRules ? 'Held by the rules when recorded' : `Held by ${record.heldByName ?? 'someone'}`} on {formatWhen(record.heldAt)}. Engineers and buyers were told, and a warning was opened.
+          {record.heldByRules ? 'Held by the rules when recorded' : `Held by ${record.heldByName ?? 'someone'}`} on {formatWhen(record.heldAt)}. Engineers and buyers were told, and a warning was
+          opened.
         </Text>
         {record.heldByRules && onlyCertificate ? <Text style={type.body}>Attaching the certificate of analysis lifts this hold.</Text> : null}
         {hasRole(ENGINEER_ROLES, role) ? (
@@ -110,9 +109,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
   return (
     <View style={[styles.box, styles.holdAsk]} testID={`${prefix}-hold-panel`}>
       <SectionTitle>Put this lot on hold</SectionTitle>
-      <Text style={type.body}>
-        This lot is accepted only with caution. Holding it keeps it off the stations, tells engineers and buyers, and opens a warning.
-      </Text>
+      <Text style={type.body}>This lot is accepted only with caution. Holding it keeps it off the stations, tells engineers and buyers, and opens a warning.</Text>
       <TextField
         label="Reason for the hold"
         placeholder="e.g. the return port is too small for this flow"

@@ -42,11 +42,7 @@ export const LotNumberField = forwardRef<TextInput, LotNumberFieldProps>(functio
             testID={testID}
           />
         </View>
-        <ScanLabelButton
-          testID={`${testID}-scan`}
-          onScanned={onLabel}
-          onCancel={() => setTimeout(() => input.current?.focus(), 0)}
-        />
+        <ScanLabelButton testID={`${testID}-scan`} onScanned={onLabel} onCancel={() => setTimeout(() => input.current?.focus(), 0)} />
       </View>
       {label ? <ScannedLabel label={label} testID={`${testID}-label`} /> : null}
     </View>

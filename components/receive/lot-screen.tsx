@@ -46,9 +46,7 @@ export function LotScreen({ id }: { id: string }) {
         <SectionTitle>Hardware that touched this lot</SectionTitle>
         {r.changeOuts.length === 0 ? (
           <View style={styles.empty} testID="lot-history-empty">
-            <Text style={type.body}>
-              No hardware has touched this lot yet. A tube set is recorded here when it goes into one of the lot's drums at a station and that drum goes online.
-            </Text>
+            <Text style={type.body}>No hardware has touched this lot yet. A tube set is recorded here when it goes into one of the lot's drums at a station and that drum goes online.</Text>
             <TextLink href="/stations">Go to the stations</TextLink>
           </View>
         ) : (
@@ -69,8 +67,7 @@ function ChangeOutRow({ c, n, wide }: { c: LotChangeOut; n: number; wide: boolea
       <Text style={[styles.n, wide && styles.nWide]}>{n}</Text>
       <View style={styles.body}>
         <Text style={type.label}>
-          {formatWhen(c.at)}: drum {c.drumSerial ?? '(serial not recorded)'} went online at{' '}
-          <TextLink href={`/stations/${c.stationId}`}>{c.stationName ?? 'a station'}</TextLink>
+          {formatWhen(c.at)}: drum {c.drumSerial ?? '(serial not recorded)'} went online at <TextLink href={`/stations/${c.stationId}`}>{c.stationName ?? 'a station'}</TextLink>
         </Text>
         <Text style={type.body}>
           Tube set {c.tubeSetLabel ?? '—'} (dip tube {c.dipTubePartNumber ?? '—'}) with head {c.connectorPartNumber ?? 'none recorded'}

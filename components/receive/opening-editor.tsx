@@ -114,7 +114,16 @@ export function OpeningEditor({ index, value, onChange, onRemove, error, testID 
         error={problems.diameter}
         testID={`${testID}-diameter`}
       />
-      <NumberField label="Threads per inch" hint="Thread gauge count; leave empty if not measured." value={tpi} onChangeText={setTpi} suffix="TPI" placeholder="e.g. 11" error={problems.tpi} testID={`${testID}-tpi`} />
+      <NumberField
+        label="Threads per inch"
+        hint="Thread gauge count; leave empty if not measured."
+        value={tpi}
+        onChangeText={setTpi}
+        suffix="TPI"
+        placeholder="e.g. 11"
+        error={problems.tpi}
+        testID={`${testID}-tpi`}
+      />
       <ChoiceChips label="Flank angle" options={FLANKS} value={flank} onChange={setFlank} testID={`${testID}-flank`} />
       <ChoiceChips label="Taper (diameter at two points)" options={TAPERS} value={taper} onChange={setTaper} testID={`${testID}-taper`} />
       <Button label="Identify thread" variant="secondary" busy={match.isPending} onPress={identify} testID={`${testID}-identify`} />

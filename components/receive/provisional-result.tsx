@@ -74,7 +74,9 @@ export function ProvisionalResult({ shown, onAgain }: { shown: ProvisionalShown;
       <View style={styles.mark} role="note" testID="provisional-mark">
         <Text style={styles.markTitle}>Provisional: worked out on this phone</Text>
         <Text style={type.body} testID="provisional-registry">
-          From the registry as of {formatWhen(shown.registryAsOf)}. {sent ? 'Sent: the server has recorded the lot; its verdict is the one that counts.' : 'Waiting to be sent; the server judges it again and tells you if its verdict differs.'} Act on a hold or quarantine now; do not tap a drum on a provisional accept if the station's hardware changed since.
+          From the registry as of {formatWhen(shown.registryAsOf)}.{' '}
+          {sent ? 'Sent: the server has recorded the lot; its verdict is the one that counts.' : 'Waiting to be sent; the server judges it again and tells you if its verdict differs.'} Act on a hold
+          or quarantine now; do not tap a drum on a provisional accept if the station's hardware changed since.
         </Text>
       </View>
       <WaitingChecks />

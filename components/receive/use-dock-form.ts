@@ -159,9 +159,7 @@ export function useDockForm() {
 
   const applyLabel = useCallback((label: DrumLabel | null) => {
     setDraft((d) =>
-      label
-        ? { ...d, label, lot: label.batch ?? d.lot, productionDate: label.productionDate ?? d.productionDate, expiryDate: label.expiryDate ?? d.expiryDate }
-        : { ...d, label: null },
+      label ? { ...d, label, lot: label.batch ?? d.lot, productionDate: label.productionDate ?? d.productionDate, expiryDate: label.expiryDate ?? d.expiryDate } : { ...d, label: null },
     );
   }, []);
 

@@ -61,7 +61,11 @@ export function DrumTypeDetailScreen({ id }: { id: string }) {
           right={
             <>
               <DrumTypeChecks id={id} unPackagingCode={d.unPackagingCode} />
-              <Section title="Pairings for its threads" note="Tube and connector pairings whose tube threads into one of these bungs; the dock check decides whether they reach and lock." testID="drum-pairings">
+              <Section
+                title="Pairings for its threads"
+                note="Tube and connector pairings whose tube threads into one of these bungs; the dock check decides whether they reach and lock."
+                testID="drum-pairings"
+              >
                 <RelationList
                   empty="No pairing has a tube with one of these threads yet."
                   items={(d.pairings ?? []).map((p) => ({

@@ -71,7 +71,13 @@ export function RegistryListScreen<T extends { id: string }>(props: RegistryList
       body = (
         <EmptyState
           title={`No ${noun.many} ${what}`}
-          next={state.q && Object.values(state.filters).some(Boolean) ? 'Clear the search and the filters to see them all.' : state.q ? 'Clear the search to see them all, or try a shorter part of the number.' : 'Clear the filters to see them all.'}
+          next={
+            state.q && Object.values(state.filters).some(Boolean)
+              ? 'Clear the search and the filters to see them all.'
+              : state.q
+                ? 'Clear the search to see them all, or try a shorter part of the number.'
+                : 'Clear the filters to see them all.'
+          }
           action={{ label: state.q ? 'Clear the search' : 'Clear the filters', onPress: state.clearAll }}
         />
       );

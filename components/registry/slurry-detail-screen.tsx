@@ -6,14 +6,7 @@ import { regionLabel } from './labels';
 export function SlurryDetailScreen({ id }: { id: string }) {
   const query = slurryQueries.useDetail(id);
   return (
-    <DetailScreen<SlurryRecord>
-      resource="slurries"
-      id={id}
-      kind="Slurry"
-      query={query}
-      title={(s) => s.name}
-      subtitle={(s) => `${s.supplierName ?? 'unknown supplier'} · ${regionLabel(s.region)}`}
-    >
+    <DetailScreen<SlurryRecord> resource="slurries" id={id} kind="Slurry" query={query} title={(s) => s.name} subtitle={(s) => `${s.supplierName ?? 'unknown supplier'} · ${regionLabel(s.region)}`}>
       {(s) => (
         <DetailColumns
           left={

@@ -11,14 +11,7 @@ const count = (n: number | undefined, one: string, many: string) => (n === undef
 export function SupplierDetailScreen({ id }: { id: string }) {
   const query = supplierQueries.useDetail(id);
   return (
-    <DetailScreen<SupplierDetail>
-      resource="suppliers"
-      id={id}
-      kind="Supplier"
-      query={query}
-      title={(s) => s.name}
-      subtitle={(s) => regionLabel(s.region)}
-    >
+    <DetailScreen<SupplierDetail> resource="suppliers" id={id} kind="Supplier" query={query} title={(s) => s.name} subtitle={(s) => regionLabel(s.region)}>
       {(s) => {
         const narrow = (path: string) => `/registry/${path}?supplierId=${s.id}`;
         return (

@@ -30,10 +30,7 @@ export function useListState(defaultSort: TableSort) {
     return out;
   });
 
-  const query: ListParams = useMemo(
-    () => ({ q: q || undefined, sort: sort.key, order: sort.order, page, pageSize: DEFAULT_PAGE_SIZE, ...filters }),
-    [q, sort, page, filters],
-  );
+  const query: ListParams = useMemo(() => ({ q: q || undefined, sort: sort.key, order: sort.order, page, pageSize: DEFAULT_PAGE_SIZE, ...filters }), [q, sort, page, filters]);
   const narrowed = !!q || Object.values(filters).some(Boolean);
 
   return {

@@ -81,17 +81,7 @@ export function LabelScanner({ onScanned, onCancel, testID }: LabelScannerProps)
           <Button label="Cancel and type the lot number" variant="secondary" large onPress={cancel} testID={`${testID}-cancel`} />
         </View>
         {/* The photo fallback: the phone's camera app (capture) or its gallery, read by the same decoder. */}
-        <input
-          ref={fileInput}
-          type="file"
-          accept="image/*"
-          capture="environment"
-          onChange={onFile}
-          data-testid={`${testID}-photo-input`}
-          aria-hidden
-          tabIndex={-1}
-          style={{ display: 'none' }}
-        />
+        <input ref={fileInput} type="file" accept="image/*" capture="environment" onChange={onFile} data-testid={`${testID}-photo-input`} aria-hidden tabIndex={-1} style={{ display: 'none' }} />
         {scan.engine ? (
           <Text style={type.small} testID={`${testID}-engine`}>
             {scan.engine === 'browser' ? 'Read by the browser’s barcode detector.' : 'Read by the app’s own barcode decoder.'}

@@ -21,9 +21,7 @@ export function PlansScreen() {
   const open = useWarningsQuery('open');
   const canPlan = session ? PLANNERS.includes(session.user.role) : false;
   const openCount = open.data?.total;
-  const actions = (
-    <LinkButton href="/sourcing/warnings" label={openCount ? `Hardware warnings (${openCount} open)` : 'Hardware warnings'} testID="sourcing-warnings-link" />
-  );
+  const actions = <LinkButton href="/sourcing/warnings" label={openCount ? `Hardware warnings (${openCount} open)` : 'Hardware warnings'} testID="sourcing-warnings-link" />;
 
   const list = (
     <View style={styles.column}>

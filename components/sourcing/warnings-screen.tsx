@@ -44,11 +44,7 @@ export function WarningsScreen() {
       ) : list.data.items.length === 0 ? (
         <EmptyState
           title={filter === 'all' ? 'No hardware warnings' : `No ${filter} warnings`}
-          next={
-            filter === 'all'
-              ? 'A warning opens when a sourcing plan or a held lot needs hardware the site lacks.'
-              : 'Show all warnings to see the others.'
-          }
+          next={filter === 'all' ? 'A warning opens when a sourcing plan or a held lot needs hardware the site lacks.' : 'Show all warnings to see the others.'}
           action={filter === 'all' ? undefined : { label: 'Show all warnings', onPress: () => setFilter('all') }}
         />
       ) : (

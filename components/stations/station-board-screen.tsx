@@ -2,15 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { DOCK_ROLES, hasRole } from '@/shared/roles';
 import { StyleSheet, Text, View } from 'react-native';
 import { ApiError } from '../api/client';
-import {
-  useChangeOutMutation,
-  useRinseMutation,
-  useStandbyMutation,
-  useStationBoardQuery,
-  type BoardTubeSet,
-  type StandbyInput,
-  type StationBoard,
-} from '../data/station-board';
+import { useChangeOutMutation, useRinseMutation, useStandbyMutation, useStationBoardQuery, type BoardTubeSet, type StandbyInput, type StationBoard } from '../data/station-board';
 import { formatWhen, LinkButton, SectionTitle, TextLink } from '../receive/parts';
 import { Screen } from '../screen';
 import { useSession } from '../session';
@@ -23,7 +15,6 @@ import { TextField } from '../ui/text-field';
 import { useIsWide } from '../use-layout';
 import { SetStateChip } from './set-state';
 import { StandbyPanel } from './standby-panel';
-
 
 interface Message {
   tone: 'done' | 'refused';
@@ -162,7 +153,11 @@ function Board({ board, wide, actions }: { board: StationBoard; wide: boolean; a
             : 'No set is in a standby drum yet: put a clean and ready set into the next drum before changing out.'}
         </Text>
         {message?.where === CHANGE_OUT ? <RotationMessage message={message} /> : null}
-        {canAct ? <Button label="Change out" busy={changeOut.isPending} onPress={doChangeOut} testID="change-out" /> : <Text style={type.small}>Clerks, engineers and administrators move the sets.</Text>}
+        {canAct ? (
+          <Button label="Change out" busy={changeOut.isPending} onPress={doChangeOut} testID="change-out" />
+        ) : (
+          <Text style={type.small}>Clerks, engineers and administrators move the sets.</Text>
+        )}
       </Card>
       {sets}
       <View style={[styles.logs, wide && styles.logsWide]}>

@@ -85,15 +85,7 @@ export function FlowPlot({ flow, unit, feedBoreMm, returnBoreMm, testID }: FlowP
               <SvgText x={PAD.left + plotW / 2} y={HEIGHT - 8} fontSize={13} fontFamily={fonts.semibold} fill={colors.ink} textAnchor="middle">
                 {`Flow (${unit})`}
               </SvgText>
-              <SvgText
-                x={14}
-                y={PAD.top + plotH / 2}
-                fontSize={13}
-                fontFamily={fonts.semibold}
-                fill={colors.ink}
-                textAnchor="middle"
-                transform={`rotate(-90 14 ${PAD.top + plotH / 2})`}
-              >
+              <SvgText x={14} y={PAD.top + plotH / 2} fontSize={13} fontFamily={fonts.semibold} fill={colors.ink} textAnchor="middle" transform={`rotate(-90 14 ${PAD.top + plotH / 2})`}>
                 Velocity (m/s)
               </SvgText>
               {returnBoreMm != null ? <Polyline points={series(feedBoreMm)} fill="none" stroke={colors.inkMuted} strokeWidth={2} strokeDasharray="6 5" /> : null}

@@ -57,7 +57,17 @@ export function FlowScreen() {
       </Text>
       <TextField label="Flow" value={flow} onChangeText={setFlow} inputMode="decimal" placeholder="e.g. 20" error={errors.flow} onSubmitEditing={submit} testID="flow-value" />
       <ChoiceChips label="Flow unit" options={FLOW_UNITS.map((u) => ({ value: u, label: FLOW_LABELS[u] }))} value={unit} onChange={setUnit} testID="flow-unit" />
-      <TextField label="Feed bore, mm" hint="3/4 in is 19.05 mm." value={feed} onChangeText={setFeed} inputMode="decimal" placeholder="e.g. 19.05" error={errors.feed} onSubmitEditing={submit} testID="flow-feed-bore" />
+      <TextField
+        label="Feed bore, mm"
+        hint="3/4 in is 19.05 mm."
+        value={feed}
+        onChangeText={setFeed}
+        inputMode="decimal"
+        placeholder="e.g. 19.05"
+        error={errors.feed}
+        onSubmitEditing={submit}
+        testID="flow-feed-bore"
+      />
       <TextField
         label="Return bore, mm (optional)"
         hint="Leave empty for a feed-only head. 1/2 in is 12.7 mm."
@@ -82,14 +92,23 @@ export function FlowScreen() {
     result = (
       <Card>
         <Text style={type.label}>Nothing calculated yet</Text>
-        <Text style={type.body}>
-          Enter the station's flow and the head's bores. A narrower return runs faster than the feed at the same flow, which can spray and shear slurry back in the drum.
-        </Text>
+        <Text style={type.body}>Enter the station's flow and the head's bores. A narrower return runs faster than the feed at the same flow, which can spray and shear slurry back in the drum.</Text>
       </Card>
     );
   }
 
-  return <ToolPage title={"Flow and shear"} subtitle={"How fast slurry moves through a dispense head's ports, and how hard it is sheared at the wall."} testID={"tools-flow"} form={form} result={result} answer={calc.data} formFlex={4} resultFlex={7} />;
+  return (
+    <ToolPage
+      title={'Flow and shear'}
+      subtitle={"How fast slurry moves through a dispense head's ports, and how hard it is sheared at the wall."}
+      testID={'tools-flow'}
+      form={form}
+      result={result}
+      answer={calc.data}
+      formFlex={4}
+      resultFlex={7}
+    />
+  );
 }
 
 function FlowResult({ answer, input }: { answer: FlowAnswer; input: FlowInput }) {
@@ -129,8 +148,8 @@ function FlowResult({ answer, input }: { answer: FlowAnswer; input: FlowInput })
         <FlowPlot flow={input.flow.value} unit={input.flow.unit} feedBoreMm={input.feedBoreMm} returnBoreMm={input.returnBoreMm ?? null} testID="flow-plot" />
       </Card>
       <Text style={type.small}>
-        Water at 20 °C. Laminar below a Reynolds number of {answer.laminarLimit} (the site's setting), turbulent above {DEFAULT_TURBULENT_FROM}. The wall shear rate 8v/D is exact
-        only for laminar flow; in turbulent flow read it as an indication.
+        Water at 20 °C. Laminar below a Reynolds number of {answer.laminarLimit} (the site's setting), turbulent above {DEFAULT_TURBULENT_FROM}. The wall shear rate 8v/D is exact only for laminar
+        flow; in turbulent flow read it as an indication.
       </Text>
     </View>
   );

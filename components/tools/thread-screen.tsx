@@ -140,12 +140,28 @@ export function ThreadScreen() {
     );
   }
 
-  return <ToolPage title={"Thread identifier"} subtitle={"Name a thread from a caliper reading and a gauge, before a dip tube is forced into the wrong bung."} testID={"tools-thread"} form={form} result={result} answer={match.data} formFlex={5} resultFlex={6} />;
+  return (
+    <ToolPage
+      title={'Thread identifier'}
+      subtitle={'Name a thread from a caliper reading and a gauge, before a dip tube is forced into the wrong bung.'}
+      testID={'tools-thread'}
+      form={form}
+      result={result}
+      answer={match.data}
+      formFlex={5}
+      resultFlex={6}
+    />
+  );
 }
 
 function ThreadResult({ answer }: { answer: ThreadIdentification }) {
   const { matches, ambiguous, advice } = answer;
-  const look = matches.length === 0 ? { fg: colors.noFit, bg: colors.noFitSoft, mark: '✕' } : ambiguous ? { fg: colors.caution, bg: colors.cautionSoft, mark: '!' } : { fg: colors.fits, bg: colors.fitsSoft, mark: '✓' };
+  const look =
+    matches.length === 0
+      ? { fg: colors.noFit, bg: colors.noFitSoft, mark: '✕' }
+      : ambiguous
+        ? { fg: colors.caution, bg: colors.cautionSoft, mark: '!' }
+        : { fg: colors.fits, bg: colors.fitsSoft, mark: '✓' };
   const headline = matches.length === 0 ? 'No thread fits' : ambiguous ? `Ambiguous: ${matches.length} threads fit` : `Identified: ${matches[0]!.nominalLabel}`;
   return (
     <View style={styles.result} testID="thread-result">

@@ -21,7 +21,10 @@ const PREVIOUS_KEYS = new Set(['ArrowLeft', 'ArrowUp']);
  */
 export function ChoiceChips<T extends string>({ label, options, value, onChange, error, testID }: ChoiceChipsProps<T>) {
   const refs = useRef<Array<View | null>>([]);
-  const tabStop = Math.max(0, options.findIndex((o) => o.value === value));
+  const tabStop = Math.max(
+    0,
+    options.findIndex((o) => o.value === value),
+  );
   const onKeyDown = (index: number) => (e: { nativeEvent: { key: string }; preventDefault: () => void }) => {
     const { key } = e.nativeEvent;
     if (key === ' ') {

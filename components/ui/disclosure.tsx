@@ -20,7 +20,17 @@ export function Disclosure({ title, initiallyOpen, children, testID }: { title: 
 
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
-  head: { minHeight: minTouch, flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingHorizontal: space.md, borderRadius: radius.md, borderWidth: 1.5, borderColor: colors.line, backgroundColor: colors.surface },
+  head: {
+    minHeight: minTouch,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.sm,
+    paddingHorizontal: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1.5,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   mark: { fontFamily: fonts.bold, fontSize: 18, color: colors.primary, width: 18 },
   title: { fontFamily: fonts.semibold, fontSize: 17, color: colors.primary, flex: 1 },
   body: { gap: space.lg },

@@ -120,12 +120,14 @@ export const NumberField = forwardRef<TextInput, NumberFieldProps>(function Numb
                   testID={testID ? `${testID}-unit-${u}` : undefined}
                   onPress={() => onLengthUnitChange(u)}
                   // Space selects a radio too (react-native-web only maps Enter for non-buttons).
-                  {...({ onKeyDown: (e: { key?: string; nativeEvent?: { key?: string }; preventDefault?: () => void }) => {
-                    if ((e.nativeEvent?.key ?? e.key) === ' ') {
-                      e.preventDefault?.();
-                      onLengthUnitChange(u);
-                    }
-                  } } as object)}
+                  {...({
+                    onKeyDown: (e: { key?: string; nativeEvent?: { key?: string }; preventDefault?: () => void }) => {
+                      if ((e.nativeEvent?.key ?? e.key) === ' ') {
+                        e.preventDefault?.();
+                        onLengthUnitChange(u);
+                      }
+                    },
+                  } as object)}
                   style={({ focused: f }: { pressed: boolean; focused?: boolean }) => [styles.unit, on && styles.unitOn, f && styles.focusRing]}
                 >
                   <Text style={[styles.unitText, on && styles.unitTextOn]}>{u}</Text>

@@ -24,14 +24,7 @@ export function UploadProgress({ fileName, fraction, working, testID }: UploadPr
           {words}
         </Text>
       </View>
-      <View
-        role="progressbar"
-        aria-label={`Upload of ${fileName}`}
-        aria-valuemin={0}
-        aria-valuemax={100}
-        aria-valuenow={percent}
-        style={styles.track}
-      >
+      <View role="progressbar" aria-label={`Upload of ${fileName}`} aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent} style={styles.track}>
         <View style={[styles.fill, { width: `${percent}%` }]} />
       </View>
     </View>

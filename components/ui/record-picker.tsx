@@ -162,30 +162,30 @@ function RecordPickerInner<T>(
             {hasChoice ? <Button label="Keep" variant="quiet" accessibilityLabel={`Keep the current ${label.toLowerCase()}`} onPress={keep} testID={`${testID}-keep`} /> : null}
           </View>
           {listing ? (
-          <View role="group" aria-label={`${label} matches`} style={styles.options}>
-            {noneLabel !== undefined ? <OptionRow label={noneLabel} detail="None" onPress={() => choose(null)} testID={`${testID}-none`} /> : null}
-            {items.map((r) => {
-              const o = toOption(r);
-              return <OptionRow key={o.id} label={o.label} detail={o.detail} selected={value?.id === o.id} onPress={() => choose(r)} testID={`${testID}-option-${o.id}`} />;
-            })}
-            {list.isPending ? (
-              <View style={styles.note}>
-                <ActivityIndicator color={colors.primary} />
-                <Text style={type.small}>Searching…</Text>
-              </View>
-            ) : list.isError ? (
-              <View style={styles.note}>
-                <Text style={[type.small, { color: colors.danger }]}>Could not search: {list.error.message}</Text>
-                <Button label="Try again" variant="quiet" onPress={() => list.refetch()} />
-              </View>
-            ) : items.length === 0 ? (
-              <Text style={[type.small, styles.note]}>{q.trim() ? `Nothing matches "${q.trim()}". Try part of the name or code.` : 'Nothing to choose from yet.'}</Text>
-            ) : list.data && list.data.total > items.length ? (
-              <Text style={[type.small, styles.note]}>
-                Showing {items.length} of {list.data.total}; type to narrow the list.
-              </Text>
-            ) : null}
-          </View>
+            <View role="group" aria-label={`${label} matches`} style={styles.options}>
+              {noneLabel !== undefined ? <OptionRow label={noneLabel} detail="None" onPress={() => choose(null)} testID={`${testID}-none`} /> : null}
+              {items.map((r) => {
+                const o = toOption(r);
+                return <OptionRow key={o.id} label={o.label} detail={o.detail} selected={value?.id === o.id} onPress={() => choose(r)} testID={`${testID}-option-${o.id}`} />;
+              })}
+              {list.isPending ? (
+                <View style={styles.note}>
+                  <ActivityIndicator color={colors.primary} />
+                  <Text style={type.small}>Searching…</Text>
+                </View>
+              ) : list.isError ? (
+                <View style={styles.note}>
+                  <Text style={[type.small, { color: colors.danger }]}>Could not search: {list.error.message}</Text>
+                  <Button label="Try again" variant="quiet" onPress={() => list.refetch()} />
+                </View>
+              ) : items.length === 0 ? (
+                <Text style={[type.small, styles.note]}>{q.trim() ? `Nothing matches "${q.trim()}". Try part of the name or code.` : 'Nothing to choose from yet.'}</Text>
+              ) : list.data && list.data.total > items.length ? (
+                <Text style={[type.small, styles.note]}>
+                  Showing {items.length} of {list.data.total}; type to narrow the list.
+                </Text>
+              ) : null}
+            </View>
           ) : null}
         </View>
       )}

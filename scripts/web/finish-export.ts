@@ -27,7 +27,10 @@ function copyIcons(webDir: string): Map<string, string> {
   const to = path.join(webDir, ICONS_DIR);
   fs.mkdirSync(to, { recursive: true });
   const urls = new Map<string, string>();
-  for (const name of fs.readdirSync(from).filter((n) => n.endsWith('.png')).sort()) {
+  for (const name of fs
+    .readdirSync(from)
+    .filter((n) => n.endsWith('.png'))
+    .sort()) {
     const bytes = fs.readFileSync(path.join(from, name));
     const hashed = `${path.basename(name, '.png')}.${createHash('sha256').update(bytes).digest('hex').slice(0, 12)}.png`;
     fs.writeFileSync(path.join(to, hashed), bytes);
@@ -101,9 +104,7 @@ async function writeServiceWorker(webDir: string): Promise<{ count: number; size
     navigateFallback: '/index.html',
     navigateFallbackDenylist: [/^\/api\//],
     // Hashed names are their own revision: the cached copy is fetched once and never again.
-    manifestTransforms: [
-      async (entries) => ({ manifest: entries.map((e) => (isHashedFile(`/${e.url}`) ? { ...e, revision: null } : e)), warnings: [] }),
-    ],
+    manifestTransforms: [async (entries) => ({ manifest: entries.map((e) => (isHashedFile(`/${e.url}`) ? { ...e, revision: null } : e)), warnings: [] })],
     maximumFileSizeToCacheInBytes: 16 * 2 ** 20,
     inlineWorkboxRuntime: true,
     skipWaiting: false,

@@ -19,9 +19,7 @@ export function markSvg(art: Art, size: number): string {
   const at = (v: number) => 50 + (v - 50) * art.scale;
   const bg = art.background ? `<rect width="100" height="100" rx="${art.corner}" fill="${art.background}"/>` : '';
   const hole = art.background ?? colors.primary;
-  const caps = art.detail
-    ? `<circle cx="${at(35.6)}" cy="${at(39.5)}" r="${3.6 * art.scale}" fill="${hole}"/><circle cx="${at(65.7)}" cy="${at(60.5)}" r="${2 * art.scale}" fill="${hole}"/>`
-    : '';
+  const caps = art.detail ? `<circle cx="${at(35.6)}" cy="${at(39.5)}" r="${3.6 * art.scale}" fill="${hole}"/><circle cx="${at(65.7)}" cy="${at(60.5)}" r="${2 * art.scale}" fill="${hole}"/>` : '';
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${size}" height="${size}" viewBox="0 0 100 100">${bg}
 <circle cx="50" cy="50" r="${r}" stroke="${art.ink}" stroke-width="${6.5 * art.scale}" fill="none"/>
 <circle cx="${at(35.6)}" cy="${at(39.5)}" r="${8.4 * art.scale}" fill="${art.ink}"/>

@@ -13,7 +13,10 @@ import { ATTACHMENT_TYPES, sniffType } from './file-kind';
  * Each kind of record files are kept with, and the routes whose access its files follow: reading a file needs
  * what reading the record needs, attaching one what changing it needs (an import's file: what importing needs).
  */
-const OWNERS: ReadonlyMap<AttachmentOwner, { entity: EntityTarget<ObjectLiteral>; label: string; read: string; write: string }> = new Map<AttachmentOwner, { entity: EntityTarget<ObjectLiteral>; label: string; read: string; write: string }>([
+const OWNERS: ReadonlyMap<AttachmentOwner, { entity: EntityTarget<ObjectLiteral>; label: string; read: string; write: string }> = new Map<
+  AttachmentOwner,
+  { entity: EntityTarget<ObjectLiteral>; label: string; read: string; write: string }
+>([
   ['drum-type', { entity: DrumType, label: 'drum type', read: 'GET /api/drum-types/:id', write: 'PATCH /api/drum-types/:id' }],
   ['dip-tube', { entity: DipTube, label: 'dip tube', read: 'GET /api/dip-tubes/:id', write: 'PATCH /api/dip-tubes/:id' }],
   ['connector', { entity: Connector, label: 'connector', read: 'GET /api/connectors/:id', write: 'PATCH /api/connectors/:id' }],
@@ -103,7 +106,18 @@ export class AttachmentsService {
 
   /** Step 2: its row, inside the caller's transaction, so it exists exactly when the caller's work commits. */
   record(tx: EntityManager, file: PendingFile): Promise<Attachment> {
-    return tx.save(tx.create(Attachment, { ownerKind: file.ownerKind, ownerId: file.ownerId, fileName: fitFileName(file.fileName), contentType: file.contentType, sizeBytes: file.bytes.length, storageKey: file.key, uploadedById: file.userId, purpose: file.purpose ?? 'file' }));
+    return tx.save(
+      tx.create(Attachment, {
+        ownerKind: file.ownerKind,
+        ownerId: file.ownerId,
+        fileName: fitFileName(file.fileName),
+        contentType: file.contentType,
+        sizeBytes: file.bytes.length,
+        storageKey: file.key,
+        uploadedById: file.userId,
+        purpose: file.purpose ?? 'file',
+      }),
+    );
   }
 
   /** When the transaction failed: the object goes too. If this fails as well, `sweep` removes it later. */
@@ -140,7 +154,9 @@ export class AttachmentsService {
     if (!file) throw fieldError('file', 'is required: a PDF or a photo');
     const type = await sniffType(file.buffer);
     if (!type || !ATTACHMENT_TYPES.has(type)) {
-      throw new HttpError(415, 'unsupported_type', `The file's content is ${type ?? 'not a recognised format'}; attach a PDF or a JPEG, PNG, WebP or HEIC photo.`, [{ field: 'file', messages: ['must be a PDF or a photo'] }]);
+      throw new HttpError(415, 'unsupported_type', `The file's content is ${type ?? 'not a recognised format'}; attach a PDF or a JPEG, PNG, WebP or HEIC photo.`, [
+        { field: 'file', messages: ['must be a PDF or a photo'] },
+      ]);
     }
     const saved = await this.keepWith({ ownerKind, ownerId, fileName: file.originalname || 'upload', contentType: type, bytes: file.buffer, userId: user.id, purpose }, async (tx, a) => {
       await after?.(tx, a);

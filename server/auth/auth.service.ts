@@ -41,12 +41,7 @@ export class AuthService {
   ) {}
 
   async signIn(email: string, password: string): Promise<{ token: string; user: PublicUser }> {
-    const user = await this.ds
-      .getRepository(User)
-      .createQueryBuilder('u')
-      .addSelect('u.passwordHash')
-      .where('u.email = :email', { email: email.trim().toLowerCase() })
-      .getOne();
+    const user = await this.ds.getRepository(User).createQueryBuilder('u').addSelect('u.passwordHash').where('u.email = :email', { email: email.trim().toLowerCase() }).getOne();
     const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
     if (!user || !ok || !user.active) throw unauthorized(WRONG);
     return { token: sessionToken(user, this.secret), user: toPublicUser(user) };

@@ -9,8 +9,7 @@ import { POLICY } from './policy';
  */
 export const OPEN_DURING_PASSWORD_CHANGE: readonly string[] = ['GET /api/me', 'POST /api/me/password'];
 
-export const passwordChangeRequired = () =>
-  new HttpError(403, 'password_change_required', 'Choose a new password first: this account has a temporary one. Nothing else is open until then.');
+export const passwordChangeRequired = () => new HttpError(403, 'password_change_required', 'Choose a new password first: this account has a temporary one. Nothing else is open until then.');
 
 /** After the token check: everything else answers 403 `password_change_required` until the password is changed. */
 export function passwordChangeGate(): RequestHandler {

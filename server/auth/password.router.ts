@@ -52,7 +52,11 @@ function limiter(ds: DataSource, prefix: string, limit: number, windowMs: number
     if (r && r.consumedPoints > (onlyFailures ? limit - 1 : limit)) return next(refuse(res, r));
     next();
   };
-  const failed = (req: Request) => store.penalty(key(req)).then(() => undefined, () => undefined);
+  const failed = (req: Request) =>
+    store.penalty(key(req)).then(
+      () => undefined,
+      () => undefined,
+    );
   return { check, failed };
 }
 

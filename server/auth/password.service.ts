@@ -14,7 +14,9 @@ export class WrongCurrentPassword extends ValidationFailed {}
 const WRONG_CURRENT = 'is not right; check it and try again';
 
 const linkInvalid = () =>
-  new HttpError(400, 'reset_link_invalid', 'This reset link has been used or has expired. Ask for a new one from the sign-in screen.', [{ field: 'token', messages: ['has been used or has expired'] }]);
+  new HttpError(400, 'reset_link_invalid', 'This reset link has been used or has expired. Ask for a new one from the sign-in screen.', [
+    { field: 'token', messages: ['has been used or has expired'] },
+  ]);
 
 /** The new password against the shared rule, as a field problem, or nothing. */
 function ruleProblems(field: string, password: string): FieldProblem[] {
@@ -57,7 +59,14 @@ export class PasswordService {
     const hash = await hashPassword(newPassword);
     return this.ds.transaction(async (m) => {
       const saved = await this.setPassword(m, userId, hash, false);
-      await audit(m, { userId, action: 'password-change', entity: 'users', entityId: userId, summary: `Password changed by ${saved.email}; their other sessions ended`, after: { sessionEpoch: saved.sessionEpoch } });
+      await audit(m, {
+        userId,
+        action: 'password-change',
+        entity: 'users',
+        entityId: userId,
+        summary: `Password changed by ${saved.email}; their other sessions ended`,
+        after: { sessionEpoch: saved.sessionEpoch },
+      });
       return { token: sessionToken(saved, this.secret), user: toPublicUser(saved) };
     });
   }
@@ -70,7 +79,14 @@ export class PasswordService {
     const hash = await hashPassword(temporary);
     return this.ds.transaction(async (m) => {
       const saved = await this.setPassword(m, targetId, hash, true);
-      await audit(m, { userId: actingUserId, action: 'password-reset', entity: 'users', entityId: targetId, summary: `Password reset by an administrator for ${saved.email}; temporary password issued, all sessions ended`, after: { mustChangePassword: true, sessionEpoch: saved.sessionEpoch } });
+      await audit(m, {
+        userId: actingUserId,
+        action: 'password-reset',
+        entity: 'users',
+        entityId: targetId,
+        summary: `Password reset by an administrator for ${saved.email}; temporary password issued, all sessions ended`,
+        after: { mustChangePassword: true, sessionEpoch: saved.sessionEpoch },
+      });
       return { user: toPublicUser(saved), temporaryPassword: temporary };
     });
   }
@@ -113,7 +129,14 @@ export class PasswordService {
       const userId = spent[0]?.user_id;
       if (!userId) throw linkInvalid();
       const saved = await this.setPassword(m, userId, hash, false);
-      await audit(m, { userId, action: 'password-reset', entity: 'users', entityId: userId, summary: `Password reset through an e-mailed link by ${saved.email}; all sessions ended`, after: { sessionEpoch: saved.sessionEpoch } });
+      await audit(m, {
+        userId,
+        action: 'password-reset',
+        entity: 'users',
+        entityId: userId,
+        summary: `Password reset through an e-mailed link by ${saved.email}; all sessions ended`,
+        after: { sessionEpoch: saved.sessionEpoch },
+      });
     });
   }
 }

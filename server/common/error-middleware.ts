@@ -9,10 +9,31 @@ import { isConnectionError } from '../db/connection-errors';
 const READ_ERRORS = new Map<string, { status: number; code: string; message: string; field: string; says: string }>([
   ['entity.parse.failed', { status: 400, code: 'malformed_json', message: 'The request body is not valid JSON.', field: 'body', says: 'must be valid JSON' }],
   ['entity.too.large', { status: 413, code: 'too_large', message: 'The request body is too large.', field: 'body', says: 'is too large' }],
-  ['encoding.unsupported', { status: 415, code: 'unsupported_encoding', message: 'The body is compressed in a way this server does not read; send it uncompressed, or as gzip, deflate or br.', field: 'Content-Encoding', says: 'must be gzip, deflate, br or none' }],
-  ['charset.unsupported', { status: 415, code: 'unsupported_charset', message: 'The body is in a character set this server does not read; send it as UTF-8.', field: 'Content-Type', says: 'must name the UTF-8 character set, or none' }],
+  [
+    'encoding.unsupported',
+    {
+      status: 415,
+      code: 'unsupported_encoding',
+      message: 'The body is compressed in a way this server does not read; send it uncompressed, or as gzip, deflate or br.',
+      field: 'Content-Encoding',
+      says: 'must be gzip, deflate, br or none',
+    },
+  ],
+  [
+    'charset.unsupported',
+    {
+      status: 415,
+      code: 'unsupported_charset',
+      message: 'The body is in a character set this server does not read; send it as UTF-8.',
+      field: 'Content-Type',
+      says: 'must name the UTF-8 character set, or none',
+    },
+  ],
   ['request.aborted', { status: 400, code: 'incomplete_body', message: 'The request body was cut off before it ended; send it again.', field: 'body', says: 'was cut off' }],
-  ['request.size.invalid', { status: 400, code: 'incomplete_body', message: 'The request body is not as long as its Content-Length says; send it again.', field: 'body', says: 'does not match its Content-Length' }],
+  [
+    'request.size.invalid',
+    { status: 400, code: 'incomplete_body', message: 'The request body is not as long as its Content-Length says; send it again.', field: 'body', says: 'does not match its Content-Length' },
+  ],
 ]);
 
 type ErrorBody = { status: number; code: string; message: string; details: unknown };
@@ -26,7 +47,12 @@ function requestError(err: { status?: unknown; statusCode?: unknown; type?: unkn
   if (err instanceof URIError) return { status: 400, code: 'bad_path', message: 'The address holds a malformed %-escape.', details: [{ field: 'path', messages: ['holds a malformed %-escape'] }] };
   if (err.expose === false) return null;
   // A broken gzip, deflate or br stream lands here (zlib's error, passed on as a 400).
-  return { status, code: 'unreadable_request', message: 'The request could not be read: its body is damaged or cut off. Send it again.', details: [{ field: 'body', messages: ['could not be read'] }] };
+  return {
+    status,
+    code: 'unreadable_request',
+    message: 'The request could not be read: its body is damaged or cut off. Send it again.',
+    details: [{ field: 'body', messages: ['could not be read'] }],
+  };
 }
 
 /**
@@ -39,7 +65,12 @@ function dataError(err: unknown): ErrorBody | null {
   const code = (err.driverError as { code?: string } | undefined)?.code ?? '';
   if (!code.startsWith('22')) return null;
   console.warn('[bungwise] a value reached the database unchecked:', err.message);
-  return { status: 400, code: 'invalid_value', message: 'A value in the request is out of range or not of the kind its field takes.', details: [{ field: 'request', messages: ['holds a value out of range or of the wrong kind'] }] };
+  return {
+    status: 400,
+    code: 'invalid_value',
+    message: 'A value in the request is out of range or not of the kind its field takes.',
+    details: [{ field: 'request', messages: ['holds a value out of range or of the wrong kind'] }],
+  };
 }
 
 /** The one place that formats errors: `{ error: { code, message, details } }`; a 500 never leaks a stack. */

@@ -44,4 +44,7 @@ export const IsCalendarDate = () => ValidateBy({ name: 'isCalendarDate', validat
 
 /** A date, or a date and time in ISO 8601, that exists. */
 export const IsDateOrTimestamp = () =>
-  ValidateBy({ name: 'isDateOrTimestamp', validator: { validate: (v) => isDateOrTimestamp(v), defaultMessage: () => 'must be a real date (YYYY-MM-DD) or date and time (YYYY-MM-DDTHH:MM, with an optional offset)' } });
+  ValidateBy({
+    name: 'isDateOrTimestamp',
+    validator: { validate: (v) => isDateOrTimestamp(v), defaultMessage: () => 'must be a real date (YYYY-MM-DD) or date and time (YYYY-MM-DDTHH:MM, with an optional offset)' },
+  });

@@ -97,7 +97,9 @@ function encodingProblem(req: Request): HttpError | null {
   // A body of length 0 (what a browser sends with a bare POST) is no body.
   const hasBody = req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length']) > 0;
   if (hasBody && !req.is(['json', 'multipart'])) {
-    return new HttpError(415, 'unsupported_type', 'Send the body as JSON (Content-Type: application/json), or a file as multipart/form-data.', [{ field: 'Content-Type', messages: ['must be application/json or multipart/form-data'] }]);
+    return new HttpError(415, 'unsupported_type', 'Send the body as JSON (Content-Type: application/json), or a file as multipart/form-data.', [
+      { field: 'Content-Type', messages: ['must be application/json or multipart/form-data'] },
+    ]);
   }
   return null;
 }

@@ -17,7 +17,11 @@ export function singleFileUpload(limits: multer.Options['limits'], field = 'file
     read(req, res, (err?: unknown) => {
       if (err instanceof MulterError) return next(err);
       if (err) {
-        return next(new HttpError(400, 'bad_upload', 'The upload could not be read: it is cut off or not well-formed multipart/form-data. Choose the file and send it again.', [{ field, messages: ['could not be read'] }]));
+        return next(
+          new HttpError(400, 'bad_upload', 'The upload could not be read: it is cut off or not well-formed multipart/form-data. Choose the file and send it again.', [
+            { field, messages: ['could not be read'] },
+          ]),
+        );
       }
       const problem = bodyProblem(req.body ?? null) ?? (req.file ? bodyProblem(req.file.originalname, `${field}.name`) : null);
       next(problem ? new ValidationFailed([problem]) : undefined);

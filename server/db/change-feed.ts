@@ -124,7 +124,14 @@ export class ChangeFeed {
 
   private async connect(): Promise<void> {
     if (this.stopped) return;
-    const client = new Client({ connectionString: this.databaseUrl, application_name: SERVER_APPLICATION_NAME, connectionTimeoutMillis: 3000, keepAlive: true, keepAliveInitialDelayMillis: 10_000, query_timeout: 3000 });
+    const client = new Client({
+      connectionString: this.databaseUrl,
+      application_name: SERVER_APPLICATION_NAME,
+      connectionTimeoutMillis: 3000,
+      keepAlive: true,
+      keepAliveInitialDelayMillis: 10_000,
+      query_timeout: 3000,
+    });
     client.on('notification', (msg) => {
       for (const s of this.kept.get(msg.channel as ChangeChannel) ?? []) s.invalidate();
     });

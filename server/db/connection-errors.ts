@@ -7,5 +7,7 @@ export function isConnectionError(err: unknown): boolean {
   const code = e.code ?? e.driverError?.code;
   if (code && CONNECTION_CODES.has(code)) return true;
   const message = e.message ?? '';
-  return /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect|Client has encountered a connection error|Connection terminated unexpectedly|DataSource is not initialized|CannotExecuteNotConnected|Cannot use a pool after calling end/i.test(message);
+  return /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect|Client has encountered a connection error|Connection terminated unexpectedly|DataSource is not initialized|CannotExecuteNotConnected|Cannot use a pool after calling end/i.test(
+    message,
+  );
 }

@@ -8,4 +8,29 @@ export * from './files-and-mail';
 export * from './operations';
 export * from './registry';
 export { PasswordReset, SiteSettings, User };
-export const ENTITIES = [User, SiteSettings, Supplier, ThreadSpec, KeyCode, DrumType, DrumOpening, DipTube, Connector, Pairing, PairingReview, Slurry, Station, TubeSet, ReceivingCheck, Notification, SourcingPlan, HardwareWarning, RinseLog, ChangeOut, Attachment, ImportRecord, OutboxMessage, PasswordReset];
+export const ENTITIES = [
+  User,
+  SiteSettings,
+  Supplier,
+  ThreadSpec,
+  KeyCode,
+  DrumType,
+  DrumOpening,
+  DipTube,
+  Connector,
+  Pairing,
+  PairingReview,
+  Slurry,
+  Station,
+  TubeSet,
+  ReceivingCheck,
+  Notification,
+  SourcingPlan,
+  HardwareWarning,
+  RinseLog,
+  ChangeOut,
+  Attachment,
+  ImportRecord,
+  OutboxMessage,
+  PasswordReset,
+];

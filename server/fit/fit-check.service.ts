@@ -107,7 +107,10 @@ export class FitCheckService {
    */
   async answer(body: unknown): Promise<{ json: Buffer; cache: 'hit' | 'miss' | 'bypass'; stored: boolean }> {
     const dto = await this.parse(body);
-    const key = this.answers && dto.drumTypeId && !dto.stationId && !dto.tubeSetId ? JSON.stringify([dto.drumTypeId.toLowerCase(), dto.slurryId?.toLowerCase() ?? null, dto.tapping ?? null, dto.agitation ?? null, dto.flowLpm ?? null]) : null;
+    const key =
+      this.answers && dto.drumTypeId && !dto.stationId && !dto.tubeSetId
+        ? JSON.stringify([dto.drumTypeId.toLowerCase(), dto.slurryId?.toLowerCase() ?? null, dto.tapping ?? null, dto.agitation ?? null, dto.flowLpm ?? null])
+        : null;
     const encode = (answer: unknown) => Buffer.from(JSON.stringify(answer));
     if (!key || !this.answers) return { json: encode(await this.compute(dto)), cache: 'bypass', stored: false };
     const kept = this.answers.get(key);
@@ -136,7 +139,14 @@ export class FitCheckService {
     if (dto.slurryId && !slurry) throw fieldError('slurryId', 'does not name an existing slurry');
     const { station, stationRow } = await this.station(m, dto);
     const tubeSet = await this.nextTubeSet(m, dto, stationRow);
-    return this.run(m, { drum, station, stationRow, slurry: slurry ? { id: slurry.id, name: slurry.name, foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null, tubeSet, fieldForDrum: dto.drum ? 'drum.insideDepthMm' : 'drumTypeId' });
+    return this.run(m, {
+      drum,
+      station,
+      stationRow,
+      slurry: slurry ? { id: slurry.id, name: slurry.name, foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null,
+      tubeSet,
+      fieldForDrum: dto.drum ? 'drum.insideDepthMm' : 'drumTypeId',
+    });
   }
 
   /** The same check for callers inside the server (dock records, sourcing plans), by ids and slurry properties. */
@@ -148,7 +158,14 @@ export class FitCheckService {
 
   private async run(
     m: EntityManager,
-    ctx: { drum: DrumRef; station: StationInput | null; stationRow: Station | null; slurry: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null; tubeSet: TubeSet | null; fieldForDrum: string },
+    ctx: {
+      drum: DrumRef;
+      station: StationInput | null;
+      stationRow: Station | null;
+      slurry: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null;
+      tubeSet: TubeSet | null;
+      fieldForDrum: string;
+    },
   ) {
     const { drum, settings, pool } = await this.snapshot(m, ctx.drum, ctx.stationRow?.connectorId ?? null, ctx.fieldForDrum);
     const t = ctx.tubeSet;
@@ -165,7 +182,16 @@ export class FitCheckService {
 
   /** The drum and its openings in one statement (this runs on every dock check). */
   async loadDrum(m: EntityManager, id: string): Promise<ResolvedDrum> {
-    const rows: Array<{ name: string; part_number: string; inside_depth_mm: number; label: string | null; thread_spec_id: string | null; thread_code: string | null; key_code: string | null; bore_mm: number | null }> = await m.query(
+    const rows: Array<{
+      name: string;
+      part_number: string;
+      inside_depth_mm: number;
+      label: string | null;
+      thread_spec_id: string | null;
+      thread_code: string | null;
+      key_code: string | null;
+      bore_mm: number | null;
+    }> = await m.query(
       `SELECT d.name, d.part_number, d.inside_depth_mm, o.label, o.thread_spec_id, th.code AS thread_code, k.code AS key_code, o.bore_mm
        FROM drum_types d
        LEFT JOIN drum_openings o ON o.drum_type_id = d.id
@@ -240,13 +266,7 @@ export class FitCheckService {
   private async snapshot(m: EntityManager, ref: DrumRef, installedConnectorId: string | null, fieldForDrum: string): Promise<{ drum: ResolvedDrum; settings: FitSettings; pool: CandidateRow[] }> {
     const drumTypeId = 'id' in ref ? ref.id : null;
     const adHoc = 'input' in ref ? ref : null;
-    const [row] = await preparedQuery<SnapshotRow>(
-      this.ds,
-      'fit-snapshot',
-      SNAPSHOT_SQL,
-      [drumTypeId, adHoc?.input.insideDepthMm ?? null, adHoc?.threadSpecIds ?? [], installedConnectorId],
-      m,
-    );
+    const [row] = await preparedQuery<SnapshotRow>(this.ds, 'fit-snapshot', SNAPSHOT_SQL, [drumTypeId, adHoc?.input.insideDepthMm ?? null, adHoc?.threadSpecIds ?? [], installedConnectorId], m);
     if (!row.settings) {
       await loadSettings(m); // a new site: create its settings row with the defaults, then read again
       return this.snapshot(m, ref, installedConnectorId, fieldForDrum);

@@ -114,7 +114,7 @@ function evidence(bytes: Buffer): Buffer {
   if (bytes.length <= EVIDENCE_BYTES) return bytes;
   const lines: Buffer[] = [];
   let size = 0;
-  for (let start = 0; start < bytes.length && size < EVIDENCE_BYTES; ) {
+  for (let start = 0; start < bytes.length && size < EVIDENCE_BYTES;) {
     const nl = bytes.indexOf(0x0a, start);
     const end = nl < 0 ? bytes.length : nl + 1;
     const line = bytes.subarray(start, end);

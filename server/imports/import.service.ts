@@ -30,7 +30,6 @@ interface PlannedRow {
 
 const MAX_ERRORS = 500;
 
-
 /** Supplier spec sheets: parsed as a stream, planned row by row, written in one transaction or not at all. */
 export class ImportService {
   constructor(
@@ -64,13 +63,39 @@ export class ImportService {
     const id = randomUUID();
     const outcome: ImportRecord['outcome'] = args.dryRun ? 'dry-run' : counts.rejected ? 'refused' : 'committed';
     const record = (tx: EntityManager, attachmentId: string | null) =>
-      tx.save(tx.create(ImportRecord, { id, kind: args.kind, fileName: fitFileName(args.fileName), dryRun: args.dryRun, outcome, encoding, delimiter, counts, errors: errors.slice(0, MAX_ERRORS), attachmentId, byId: args.userId }));
+      tx.save(
+        tx.create(ImportRecord, {
+          id,
+          kind: args.kind,
+          fileName: fitFileName(args.fileName),
+          dryRun: args.dryRun,
+          outcome,
+          encoding,
+          delimiter,
+          counts,
+          errors: errors.slice(0, MAX_ERRORS),
+          attachmentId,
+          byId: args.userId,
+        }),
+      );
     // The rows, the import's record, its audit line and the kept file's row: one transaction, all or nothing.
     const writeAll = async (tx: EntityManager, attachmentId: string | null) => {
-      if (outcome === 'committed') await this.write(tx, args.kind, planned.filter((r) => r.action !== 'unchanged'));
+      if (outcome === 'committed')
+        await this.write(
+          tx,
+          args.kind,
+          planned.filter((r) => r.action !== 'unchanged'),
+        );
       await record(tx, attachmentId);
       if (outcome === 'committed') {
-        await audit(tx, { userId: args.userId, action: 'import', entity: args.kind, entityId: id, summary: `Imported ${args.fileName}: ${counts.new} new, ${counts.changed} changed, ${counts.unchanged} unchanged`, after: { counts } });
+        await audit(tx, {
+          userId: args.userId,
+          action: 'import',
+          entity: args.kind,
+          entityId: id,
+          summary: `Imported ${args.fileName}: ${counts.new} new, ${counts.changed} changed, ${counts.unchanged} unchanged`,
+          after: { counts },
+        });
       }
       return attachmentId;
     };
@@ -162,7 +187,10 @@ export class ImportService {
         const drumSame = DRUM_FIELDS.every((f) => same(g.values[f], (prev as unknown as Record<string, unknown>)[f]));
         const sig = (o: Record<string, unknown>) => [o.label, o.threadSpecId, o.boreMm, o.keyCodeId ?? null, o.position].join('|');
         const a = g.openings.map(sig).sort().join(';');
-        const b = (prev.openings ?? []).map((o) => sig(o as unknown as Record<string, unknown>)).sort().join(';');
+        const b = (prev.openings ?? [])
+          .map((o) => sig(o as unknown as Record<string, unknown>))
+          .sort()
+          .join(';');
         action = drumSame && a === b ? 'unchanged' : 'changed';
       }
       out.push({ line: g.line, key, action, supplierId: g.values.supplierId as string, partNumber: String(g.values.partNumber), values: g.values, openings: g.openings });
@@ -214,7 +242,20 @@ export class ImportService {
 
   async history(limit = 50) {
     const rows = await this.ds.getRepository(ImportRecord).find({ relations: { by: true }, order: { createdAt: 'DESC' }, take: limit });
-    return rows.map((r) => ({ id: r.id, kind: r.kind, fileName: r.fileName, dryRun: r.dryRun, outcome: r.outcome, encoding: r.encoding, delimiter: r.delimiter, counts: r.counts, errors: r.errors.slice(0, 50), attachmentId: r.attachmentId, byName: r.by?.displayName ?? null, at: r.createdAt }));
+    return rows.map((r) => ({
+      id: r.id,
+      kind: r.kind,
+      fileName: r.fileName,
+      dryRun: r.dryRun,
+      outcome: r.outcome,
+      encoding: r.encoding,
+      delimiter: r.delimiter,
+      counts: r.counts,
+      errors: r.errors.slice(0, 50),
+      attachmentId: r.attachmentId,
+      byName: r.by?.displayName ?? null,
+      at: r.createdAt,
+    }));
   }
 }
 
@@ -245,6 +286,3 @@ function same(a: unknown, b: unknown): boolean {
   if (typeof a === 'number' || typeof b === 'number') return Math.abs(Number(a) - Number(b)) < 1e-9;
   return String(a) === String(b);
 }
-
-
-

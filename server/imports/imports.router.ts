@@ -50,7 +50,20 @@ export function importsRouter(ds: DataSource, storage: Storage | null, options: 
   r.get('/imports/:id', async (req, res) => {
     const r = await ds.getRepository(ImportRecord).findOne({ where: { id: parseId(req.params.id) }, relations: { by: true } });
     if (!r) throw notFound('Import');
-    res.json({ id: r.id, kind: r.kind, fileName: r.fileName, dryRun: r.dryRun, outcome: r.outcome, encoding: r.encoding, delimiter: r.delimiter, counts: r.counts, errors: r.errors, attachmentId: r.attachmentId, byName: r.by?.displayName ?? null, at: r.createdAt });
+    res.json({
+      id: r.id,
+      kind: r.kind,
+      fileName: r.fileName,
+      dryRun: r.dryRun,
+      outcome: r.outcome,
+      encoding: r.encoding,
+      delimiter: r.delimiter,
+      counts: r.counts,
+      errors: r.errors,
+      attachmentId: r.attachmentId,
+      byName: r.by?.displayName ?? null,
+      at: r.createdAt,
+    });
   });
 
   return router;

@@ -18,7 +18,11 @@ export interface RowError {
   reason: string;
 }
 
-const DTO = new Map<ImportKind, new () => object>([['dip-tubes', DipTubeDto], ['connectors', ConnectorDto], ['drum-types', DrumTypeDto]]);
+const DTO = new Map<ImportKind, new () => object>([
+  ['dip-tubes', DipTubeDto],
+  ['connectors', ConnectorDto],
+  ['drum-types', DrumTypeDto],
+]);
 
 function firstProblem(errors: ValidationError[]): { field: string; message: string } | null {
   for (const e of errors) {
@@ -86,7 +90,11 @@ export async function parseRows(kind: ImportKind, text: string, delimiter: ',' |
       continue;
     }
     if (cells.length > header.length) {
-      errors.push({ line, column: header[header.length - 1] ?? '', reason: `has ${cells.length} cells for ${header.length} columns${delimiter === ',' ? ': a decimal comma in a comma-separated file? Use a point, or save as semicolon-separated' : ''}` });
+      errors.push({
+        line,
+        column: header[header.length - 1] ?? '',
+        reason: `has ${cells.length} cells for ${header.length} columns${delimiter === ',' ? ': a decimal comma in a comma-separated file? Use a point, or save as semicolon-separated' : ''}`,
+      });
       continue;
     }
     const values: Record<string, unknown> = {};
@@ -141,13 +149,21 @@ function resolveRow(kind: ImportKind, values: Record<string, unknown>, line: num
   const threadField = kind === 'drum-types' ? 'openingThread' : 'threadCode';
   if (threadField in values) {
     if (!refs.threads.has(String(values[threadField]))) {
-      errors.push({ line, column: col(threadField), reason: `"${values[threadField]}" is not a known thread code; nearest: ${nearestCodes(String(values[threadField]), refs.threadCodes).join(', ')}` });
+      errors.push({
+        line,
+        column: col(threadField),
+        reason: `"${values[threadField]}" is not a known thread code; nearest: ${nearestCodes(String(values[threadField]), refs.threadCodes).join(', ')}`,
+      });
       return false;
     }
   }
   const keyField = kind === 'drum-types' ? 'openingKey' : 'keyCode';
   if (values[keyField] != null && !refs.keys.has(String(values[keyField]))) {
-    errors.push({ line, column: col(keyField), reason: `"${values[keyField]}" is not a known key code${refs.keyCodes.length ? `; nearest: ${nearestCodes(String(values[keyField]), refs.keyCodes).join(', ')}` : ''}` });
+    errors.push({
+      line,
+      column: col(keyField),
+      reason: `"${values[keyField]}" is not a known key code${refs.keyCodes.length ? `; nearest: ${nearestCodes(String(values[keyField]), refs.keyCodes).join(', ')}` : ''}`,
+    });
     return false;
   }
   const dto =

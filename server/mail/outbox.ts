@@ -41,14 +41,32 @@ ${lines.length ? `<ul>${lines.map((l) => `<li>${escapeHtml(l)}</li>`).join('')}<
 <p><a href="${escapeHtml(link)}" style="color:#0B5563;font-weight:bold">${escapeHtml(label)}</a></p>
 <p style="color:#4F5B69;font-size:13px">${escapeHtml(letter.footer)}</p>
 </body></html>`;
-  await m.save(m.create(OutboxMessage, { kind: letter.kind, toUserId: user.id, toEmail: user.email, subject: `[Bungwise] ${letter.title}`, textBody: text, htmlBody: html, status: 'pending', attempts: 0, lastError: null, nextAttemptAt: new Date(), sentAt: null }));
+  await m.save(
+    m.create(OutboxMessage, {
+      kind: letter.kind,
+      toUserId: user.id,
+      toEmail: user.email,
+      subject: `[Bungwise] ${letter.title}`,
+      textBody: text,
+      htmlBody: html,
+      status: 'pending',
+      attempts: 0,
+      lastError: null,
+      nextAttemptAt: new Date(),
+      sentAt: null,
+    }),
+  );
 }
 
 /**
  * Queues one e-mail in the caller's transaction: written with the event, sent later by the sender, so
  * a relay that is down loses nothing. Skipped when the person turned this kind of mail off.
  */
-export async function enqueueMail(m: EntityManager, user: Pick<User, 'id' | 'email' | 'displayName' | 'mailOff'>, notice: { kind: MailKind; title: string; body: string; link?: string | null; lines?: string[] }): Promise<boolean> {
+export async function enqueueMail(
+  m: EntityManager,
+  user: Pick<User, 'id' | 'email' | 'displayName' | 'mailOff'>,
+  notice: { kind: MailKind; title: string; body: string; link?: string | null; lines?: string[] },
+): Promise<boolean> {
   if ((user.mailOff ?? []).includes(notice.kind)) return false;
   await queue(m, user, { ...notice, footer: NOTICE_FOOTER });
   return true;

@@ -62,7 +62,13 @@ export class MailSender {
           .getMany();
         for (const msg of due) {
           try {
-            await this.transport.sendMail({ from: this.options.from ?? process.env.MAIL_FROM ?? 'Bungwise <bungwise@localhost>', to: msg.toEmail, subject: msg.subject, text: msg.textBody, html: msg.htmlBody });
+            await this.transport.sendMail({
+              from: this.options.from ?? process.env.MAIL_FROM ?? 'Bungwise <bungwise@localhost>',
+              to: msg.toEmail,
+              subject: msg.subject,
+              text: msg.textBody,
+              html: msg.htmlBody,
+            });
             msg.status = 'sent';
             msg.sentAt = new Date();
             msg.lastError = null;

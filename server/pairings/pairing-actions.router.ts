@@ -43,7 +43,14 @@ export function pairingActionsRouter(ds: DataSource, pairings: ResourceService<P
       pairing.updatedAt = new Date();
       await m.save(pairing);
       const comment = body.comment?.trim() || (decision === 'approved' ? 'Approved.' : '');
-      await audit(m, { userId: user.id, action: decision === 'approved' ? 'approve' : decision === 'rejected' ? 'reject' : 'retire', entity: 'pairings', entityId: id, summary: `Pairing ${decision}: ${comment}`, after: { status: pairing.status, comment } });
+      await audit(m, {
+        userId: user.id,
+        action: decision === 'approved' ? 'approve' : decision === 'rejected' ? 'reject' : 'retire',
+        entity: 'pairings',
+        entityId: id,
+        summary: `Pairing ${decision}: ${comment}`,
+        after: { status: pairing.status, comment },
+      });
       await m.save(m.create(PairingReview, { pairingId: id, reviewerId: user.id, decision, comment }));
       if (decision !== 'retired' && pairing.authorId !== user.id) {
         const full = await m.findOne(Pairing, { where: { id }, relations: { dipTube: true, connector: true } });
@@ -64,4 +71,3 @@ export function pairingActionsRouter(ds: DataSource, pairings: ResourceService<P
   r.post('/pairings/:id/retire', decide('retired'));
   return router;
 }
-

@@ -64,7 +64,18 @@ export async function buildDockSnapshot(ds: DataSource, now: Date): Promise<Dock
         })
         .sort((a, b) => byText(a.id, b.id)),
       slurries: slurries
-        .map((s) => ({ id: s.id, name: s.name, supplierId: s.supplierId, supplierName: s.supplier?.name ?? null, region: s.region, drumTypeId: s.drumTypeId, drumTypeName: s.drumType?.name ?? null, foams: s.foams, shearSensitive: s.shearSensitive, acceptance: slurryAcceptance(s) }))
+        .map((s) => ({
+          id: s.id,
+          name: s.name,
+          supplierId: s.supplierId,
+          supplierName: s.supplier?.name ?? null,
+          region: s.region,
+          drumTypeId: s.drumTypeId,
+          drumTypeName: s.drumType?.name ?? null,
+          foams: s.foams,
+          shearSensitive: s.shearSensitive,
+          acceptance: slurryAcceptance(s),
+        }))
         .sort((a, b) => byText(a.id, b.id)),
       suppliers: suppliers.map((s) => ({ id: s.id, name: s.name, region: s.region })).sort((a, b) => byText(a.id, b.id)),
     };

@@ -38,10 +38,26 @@ export async function raiseHoldNotices(m: EntityManager, fit: FitCheckService, r
       needs: needs.length ? [{ stations: needs, order: totalOrder(needs) }] : [{ stations: [], order: [] }],
     }),
   );
-  await notifyRoles(m, ['engineer', 'buyer'], { kind: 'lot-held', title: `${what} ${state}`, body: `${what} was put ${state} at the dock: ${reason}`.slice(0, 4000), link: `/receive/${r.id}` }, userId);
+  await notifyRoles(
+    m,
+    ['engineer', 'buyer'],
+    { kind: 'lot-held', title: `${what} ${state}`, body: `${what} was put ${state} at the dock: ${reason}`.slice(0, 4000), link: `/receive/${r.id}` },
+    userId,
+  );
   // Buyers also hear what the site lacks, with what to order.
   if (needs.length) {
-    await notifyRoles(m, ['buyer'], { kind: 'hardware-gap', title: `Hardware needed for ${what}`, body: `${what} is held because the site lacks fitting hardware. What to order:`, link: `/sourcing/warnings`, lines: orderLines(totalOrder(needs)) }, userId);
+    await notifyRoles(
+      m,
+      ['buyer'],
+      {
+        kind: 'hardware-gap',
+        title: `Hardware needed for ${what}`,
+        body: `${what} is held because the site lacks fitting hardware. What to order:`,
+        link: `/sourcing/warnings`,
+        lines: orderLines(totalOrder(needs)),
+      },
+      userId,
+    );
   }
 }
 
@@ -62,7 +78,10 @@ export async function noticeVerdictDiffers(
   const notice = {
     kind: 'verdict-differs' as const,
     title: `${what}: the server's verdict differs from the phone's`,
-    body: `Worked out on the phone with no network (${phone.madeAt}): ${DECISION_WORDS[phone.decision]}. ${phone.sentence} Recorded by the server: ${DECISION_WORDS[server.decision]}. ${server.sentence} The server's verdict is the one recorded; check the lot before its drums go further.`.slice(0, 4000),
+    body: `Worked out on the phone with no network (${phone.madeAt}): ${DECISION_WORDS[phone.decision]}. ${phone.sentence} Recorded by the server: ${DECISION_WORDS[server.decision]}. ${server.sentence} The server's verdict is the one recorded; check the lot before its drums go further.`.slice(
+      0,
+      4000,
+    ),
     link: `/receive/${r.id}`,
   };
   await notifyUser(m, userId, notice);

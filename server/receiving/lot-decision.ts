@@ -29,7 +29,15 @@ export async function certificateAttached(m: EntityManager, checkId: string): Pr
  */
 export async function decide(
   m: EntityManager,
-  args: { fit: FitForVerdict & { candidates: Array<{ connectorId?: string }> }; slurryId: string | null; today: string; productionDate: string | null; expiryDate: string | null; temperatureIndicator: TemperatureIndicator | null; certificateAttached: boolean },
+  args: {
+    fit: FitForVerdict & { candidates: Array<{ connectorId?: string }> };
+    slurryId: string | null;
+    today: string;
+    productionDate: string | null;
+    expiryDate: string | null;
+    temperatureIndicator: TemperatureIndicator | null;
+    certificateAttached: boolean;
+  },
 ): Promise<LotVerdict> {
   const slurry = args.slurryId ? await m.findOneBy(Slurry, { id: args.slurryId }) : null;
   const best = args.fit.candidates[0];

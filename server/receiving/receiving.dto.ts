@@ -20,7 +20,8 @@ export class ReceivingCheckDto {
   /** The phone's key for this check: sending the same key again records nothing new. */
   @Optional() @IsUUID('all', { message: 'must be an id' }) clientKey?: string;
   @Optional() @ValidateNested() @Type(() => ProvisionalDto) provisional?: ProvisionalDto;
-  @IsString({ message: 'must be text' }) @MinLength(1, { message: LOT_NUMBER_MESSAGES.required })
+  @IsString({ message: 'must be text' })
+  @MinLength(1, { message: LOT_NUMBER_MESSAGES.required })
   @MaxLength(LOT_NUMBER_MAX_LENGTH, { message: LOT_NUMBER_MESSAGES.tooLong })
   @Matches(LOT_NUMBER_PATTERN, { message: LOT_NUMBER_MESSAGES.characters })
   lotNumber: string;

@@ -108,7 +108,14 @@ export class ReceivingService {
     // The same authoritative check the API offers, run with what the clerk entered.
     const result = await this.fit.check({ drumTypeId: dto.drumTypeId, drum: dto.drum, slurryId: dto.slurryId, stationId: dto.stationId });
     const id = await this.ds.transaction(async (tx) => {
-      const verdict = await decide(tx, { fit: result as FitForVerdict, slurryId: dto.slurryId ?? null, today, ...dates, temperatureIndicator: dto.temperatureIndicator ?? null, certificateAttached: false });
+      const verdict = await decide(tx, {
+        fit: result as FitForVerdict,
+        slurryId: dto.slurryId ?? null,
+        today,
+        ...dates,
+        temperatureIndicator: dto.temperatureIndicator ?? null,
+        certificateAttached: false,
+      });
       const held = verdict.decision === 'hold' || verdict.decision === 'quarantine';
       const saved = await tx.save(
         tx.create(ReceivingCheck, {
@@ -133,7 +140,14 @@ export class ReceivingService {
         }),
       );
       if (held) {
-        await audit(tx, { userId, action: 'hold', entity: 'receiving-checks', entityId: saved.id, summary: `Lot ${saved.lotNumber} ${saved.status} by the rules: ${verdict.sentence}`, after: { status: saved.status, holdReason: saved.holdReason } });
+        await audit(tx, {
+          userId,
+          action: 'hold',
+          entity: 'receiving-checks',
+          entityId: saved.id,
+          summary: `Lot ${saved.lotNumber} ${saved.status} by the rules: ${verdict.sentence}`,
+          after: { status: saved.status, holdReason: saved.holdReason },
+        });
         await raiseHoldNotices(tx, this.fit, saved, verdict.sentence, userId);
       }
       if (dto.provisional && (dto.provisional.decision !== verdict.decision || dto.provisional.verdict !== result.verdict)) {
@@ -160,11 +174,17 @@ export class ReceivingService {
     if (q.status) qb.andWhere('r.status = :status', { status: q.status });
     if (q.from) qb.andWhere('r.created_at >= :from::date', { from: q.from });
     if (q.to) qb.andWhere("r.created_at < (:to::date + interval '1 day')", { to: q.to });
-    qb.orderBy('r.createdAt', 'DESC').skip((page - 1) * pageSize).take(pageSize);
+    qb.orderBy('r.createdAt', 'DESC')
+      .skip((page - 1) * pageSize)
+      .take(pageSize);
     const [rows, total] = await qb.getManyAndCount();
     // The stored result is large; the history list needs only the verdict, the summary and the sentence.
     return {
-      items: rows.map((r) => ({ ...receivingJson(r), lotVerdict: r.acceptance ? { decision: r.acceptance.decision, sentence: r.acceptance.sentence } : null, result: { summary: (r.result as { summary?: string }).summary ?? '' } })),
+      items: rows.map((r) => ({
+        ...receivingJson(r),
+        lotVerdict: r.acceptance ? { decision: r.acceptance.decision, sentence: r.acceptance.sentence } : null,
+        result: { summary: (r.result as { summary?: string }).summary ?? '' },
+      })),
       total,
       page,
       pageSize,
@@ -210,7 +230,14 @@ export class ReceivingService {
       r.heldAt = this.clock();
       r.heldByRules = false;
       await m.save(r);
-      await audit(m, { userId, action: 'hold', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} put on hold: ${r.holdReason}`, after: { status: r.status, holdReason: r.holdReason } });
+      await audit(m, {
+        userId,
+        action: 'hold',
+        entity: 'receiving-checks',
+        entityId: r.id,
+        summary: `Lot ${r.lotNumber} put on hold: ${r.holdReason}`,
+        after: { status: r.status, holdReason: r.holdReason },
+      });
       await raiseHoldNotices(m, this.fit, r, r.holdReason, userId);
     });
     return this.detail(id);
@@ -228,7 +255,15 @@ export class ReceivingService {
       r.releasedAt = this.clock();
       r.releaseComment = dto.comment.trim();
       await m.save(r);
-      await audit(m, { userId, action: 'release', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} released: ${r.releaseComment}`, before: { status: before }, after: { status: r.status } });
+      await audit(m, {
+        userId,
+        action: 'release',
+        entity: 'receiving-checks',
+        entityId: r.id,
+        summary: `Lot ${r.lotNumber} released: ${r.releaseComment}`,
+        before: { status: before },
+        after: { status: r.status },
+      });
     });
     return this.detail(id);
   }
@@ -260,7 +295,15 @@ export class ReceivingService {
     }
     await m.save(r);
     if (lifted) {
-      await audit(m, { userId, action: 'release', entity: 'receiving-checks', entityId: r.id, summary: `Lot ${r.lotNumber} released: certificate of analysis attached`, before: { status: 'on-hold' }, after: { status: r.status } });
+      await audit(m, {
+        userId,
+        action: 'release',
+        entity: 'receiving-checks',
+        entityId: r.id,
+        summary: `Lot ${r.lotNumber} released: certificate of analysis attached`,
+        before: { status: 'on-hold' },
+        after: { status: r.status },
+      });
       // The warning the hold opened was about the certificate alone: it is settled too.
       await m.update(HardwareWarning, { receivingCheckId: r.id, status: 'open' }, { status: 'resolved', resolvedById: userId, resolvedAt: this.clock() });
     }

@@ -7,7 +7,23 @@ import { notifyRoles } from '../notifications/notifications.service';
 import { PAIRING_STATUSES, REGIONS, SUITED_TO, THREAD_FAMILIES, TUBE_SET_STATES } from '../entities/registry';
 import { anId, codeLike, oneOf, type ListFilter } from './list-query';
 import { ensureExists, pick, resolveKey, resolveThread } from './refs';
-import { KEY_CODE_PATTERN, KEY_CODE_SAYS, THREAD_CODE_PATTERN, THREAD_CODE_SAYS, ConnectorDto, DipTubeDto, DrumTypeDto, KeyCodeDto, OpeningDto, PairingDto, SlurryDto, StationDto, SupplierDto, ThreadSpecDto, TubeSetDto } from './registry.dto';
+import {
+  KEY_CODE_PATTERN,
+  KEY_CODE_SAYS,
+  THREAD_CODE_PATTERN,
+  THREAD_CODE_SAYS,
+  ConnectorDto,
+  DipTubeDto,
+  DrumTypeDto,
+  KeyCodeDto,
+  OpeningDto,
+  PairingDto,
+  SlurryDto,
+  StationDto,
+  SupplierDto,
+  ThreadSpecDto,
+  TubeSetDto,
+} from './registry.dto';
 import type { ResourceDef, WriteContext } from './resource';
 
 type Dto = Record<string, unknown>;
@@ -116,7 +132,14 @@ async function writeOpenings(drum: DrumType, dto: Dto, { manager }: WriteContext
     if (labels.has(o.label)) throw fieldError(`openings.${i}.label`, 'must be different from the other openings');
     labels.add(o.label);
     const thread = await resolveThread(manager, o.threadCode, `openings.${i}.threadCode`);
-    rows.push({ drumTypeId: drum.id, label: o.label, threadSpecId: thread.id, boreMm: o.boreMm, keyCodeId: await resolveKey(manager, o.keyCode, `openings.${i}.keyCode`), position: o.position as DrumOpening['position'] });
+    rows.push({
+      drumTypeId: drum.id,
+      label: o.label,
+      threadSpecId: thread.id,
+      boreMm: o.boreMm,
+      keyCodeId: await resolveKey(manager, o.keyCode, `openings.${i}.keyCode`),
+      position: o.position as DrumOpening['position'],
+    });
   }
   await manager.delete(DrumOpening, { drumTypeId: drum.id });
   for (const row of rows) await manager.save(manager.create(DrumOpening, row));
@@ -134,8 +157,7 @@ export const drumTypeDef: ResourceDef<DrumType> = {
   entity: DrumType,
   alias: 'd',
   dto: DrumTypeDto,
-  joins: (qb) =>
-    qb.leftJoinAndSelect('d.supplier', 'sup').leftJoinAndSelect('d.openings', 'o').leftJoinAndSelect('o.threadSpec', 'ot').leftJoinAndSelect('o.keyCode', 'ok'),
+  joins: (qb) => qb.leftJoinAndSelect('d.supplier', 'sup').leftJoinAndSelect('d.openings', 'o').leftJoinAndSelect('o.threadSpec', 'ot').leftJoinAndSelect('o.keyCode', 'ok'),
   search: ['d.name', 'd.part_number', 'sup.name'],
   sorts: { name: 'd.name', partNumber: 'd.partNumber', region: 'd.region', insideDepthMm: 'd.insideDepthMm', nominalCapacityL: 'd.nominalCapacityL', updatedAt: 'd.updatedAt' },
   defaultSort: 'name',
@@ -150,7 +172,19 @@ export const drumTypeDef: ResourceDef<DrumType> = {
   toJson: drumTypeJson,
   toColumns: async (dto, { manager, existing }) => {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
-    const cols = pick<DrumType>(dto, ['supplierId', 'region', 'name', 'partNumber', 'nominalCapacityL', 'material', 'head', 'unPackagingCode', 'outsideHeightMm', 'insideDepthMm', 'outsideDiameterMm']);
+    const cols = pick<DrumType>(dto, [
+      'supplierId',
+      'region',
+      'name',
+      'partNumber',
+      'nominalCapacityL',
+      'material',
+      'head',
+      'unPackagingCode',
+      'outsideHeightMm',
+      'insideDepthMm',
+      'outsideDiameterMm',
+    ]);
     const merged = { ...(existing as DrumType | undefined), ...cols };
     if (merged.insideDepthMm! >= merged.outsideHeightMm!) throw fieldError('insideDepthMm', 'must be less than the outside height');
     return cols;
@@ -168,7 +202,17 @@ export const drumTypeDef: ResourceDef<DrumType> = {
       .orderBy('p.status', 'ASC')
       .limit(100)
       .getMany()
-      .then((ps) => ps.map((p) => ({ id: p.id, status: p.status, dipTubeId: p.dipTubeId, dipTubePartNumber: p.dipTube?.partNumber, threadCode: p.dipTube?.threadSpec?.code, connectorId: p.connectorId, connectorPartNumber: p.connector?.partNumber }))),
+      .then((ps) =>
+        ps.map((p) => ({
+          id: p.id,
+          status: p.status,
+          dipTubeId: p.dipTubeId,
+          dipTubePartNumber: p.dipTube?.partNumber,
+          threadCode: p.dipTube?.threadSpec?.code,
+          connectorId: p.connectorId,
+          connectorPartNumber: p.connector?.partNumber,
+        })),
+      ),
     slurries: (await m.find(Slurry, { where: { drumTypeId: d.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name })),
   }),
 };
@@ -223,7 +267,12 @@ export const dipTubeDef: ResourceDef<DipTube> = {
         .limit(100)
         .getMany()
     ).map((d) => ({ id: d.id, name: d.name, partNumber: d.partNumber, insideDepthMm: d.insideDepthMm })),
-    pairings: (await m.find(Pairing, { where: { dipTubeId: t.id }, relations: { connector: true } })).map((p) => ({ id: p.id, status: p.status, connectorId: p.connectorId, connectorPartNumber: p.connector?.partNumber })),
+    pairings: (await m.find(Pairing, { where: { dipTubeId: t.id }, relations: { connector: true } })).map((p) => ({
+      id: p.id,
+      status: p.status,
+      connectorId: p.connectorId,
+      connectorPartNumber: p.connector?.partNumber,
+    })),
   }),
 };
 
@@ -271,7 +320,12 @@ export const connectorDef: ResourceDef<Connector> = {
   },
   detailExtras: async (c, m) => ({
     stations: (await m.find(Station, { where: { connectorId: c.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name, bay: s.bay, tapping: s.tapping })),
-    pairings: (await m.find(Pairing, { where: { connectorId: c.id }, relations: { dipTube: true } })).map((p) => ({ id: p.id, status: p.status, dipTubeId: p.dipTubeId, dipTubePartNumber: p.dipTube?.partNumber })),
+    pairings: (await m.find(Pairing, { where: { connectorId: c.id }, relations: { dipTube: true } })).map((p) => ({
+      id: p.id,
+      status: p.status,
+      dipTubeId: p.dipTubeId,
+      dipTubePartNumber: p.dipTube?.partNumber,
+    })),
   }),
 };
 
@@ -316,7 +370,8 @@ export const pairingDef: ResourceDef<Pairing> = {
   toJson: pairingJson,
   toColumns: async (dto, { manager, user, existing }) => {
     if (existing) {
-      if (dto.dipTubeId !== undefined || dto.connectorId !== undefined) throw fieldError(dto.dipTubeId !== undefined ? 'dipTubeId' : 'connectorId', 'cannot change; retire this pairing and create a new one');
+      if (dto.dipTubeId !== undefined || dto.connectorId !== undefined)
+        throw fieldError(dto.dipTubeId !== undefined ? 'dipTubeId' : 'connectorId', 'cannot change; retire this pairing and create a new one');
       return pick<Pairing>(dto, ['notes']);
     }
     await ensureExists(manager, DipTube, dto.dipTubeId, 'dipTubeId', 'dip tube');
@@ -328,7 +383,17 @@ export const pairingDef: ResourceDef<Pairing> = {
     if (existing) return;
     const full = await manager.findOne(Pairing, { where: { id: p.id }, relations: { dipTube: true, connector: true } });
     const what = `${full?.dipTube?.partNumber} with ${full?.connector?.partNumber}`;
-    await notifyRoles(manager, ['engineer'], { kind: 'pairing-review', title: `Pairing ${what} awaits review`, body: `${user.displayName} registered the pairing of ${what}; an engineer other than the author approves or rejects it.`, link: `/registry/pairings/${p.id}` }, user.id);
+    await notifyRoles(
+      manager,
+      ['engineer'],
+      {
+        kind: 'pairing-review',
+        title: `Pairing ${what} awaits review`,
+        body: `${user.displayName} registered the pairing of ${what}; an engineer other than the author approves or rejects it.`,
+        link: `/registry/pairings/${p.id}`,
+      },
+      user.id,
+    );
   },
   detailExtras: async (p, m) => ({
     reviews: (await m.find(PairingReview, { where: { pairingId: p.id }, relations: { reviewer: true }, order: { createdAt: 'ASC' } })).map((r) => ({
@@ -376,7 +441,20 @@ export const slurryDef: ResourceDef<Slurry> = {
   toColumns: async (dto, { manager }) => {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
     if (dto.drumTypeId !== undefined) await ensureExists(manager, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
-    return pick<Slurry>(dto, ['name', 'supplierId', 'region', 'drumTypeId', 'foams', 'shearSensitive', 'solidsWtPct', 'shelfLifeDays', 'minRemainingDays', 'storageMinC', 'storageMaxC', 'certificateRequired']);
+    return pick<Slurry>(dto, [
+      'name',
+      'supplierId',
+      'region',
+      'drumTypeId',
+      'foams',
+      'shearSensitive',
+      'solidsWtPct',
+      'shelfLifeDays',
+      'minRemainingDays',
+      'storageMinC',
+      'storageMaxC',
+      'certificateRequired',
+    ]);
   },
 };
 

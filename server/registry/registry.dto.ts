@@ -34,11 +34,13 @@ const Mm = (max: number) => (target: object, key: string) => {
   Min(0.1, { message: 'must be more than 0 mm' })(target, key);
   Max(max, { message: `must be at most ${max} mm` })(target, key);
 };
-const Name = (max = 120) => (target: object, key: string) => {
-  IsString({ message: 'must be text' })(target, key);
-  MinLength(1, { message: 'is required' })(target, key);
-  MaxLength(max, { message: `must be at most ${max} characters` })(target, key);
-};
+const Name =
+  (max = 120) =>
+  (target: object, key: string) => {
+    IsString({ message: 'must be text' })(target, key);
+    MinLength(1, { message: 'is required' })(target, key);
+    MaxLength(max, { message: `must be at most ${max} characters` })(target, key);
+  };
 const Code = (target: object, key: string) => {
   IsString({ message: 'must be text' })(target, key);
   MaxLength(40, { message: 'must be at most 40 characters' })(target, key);
@@ -152,10 +154,22 @@ export class SlurryDto {
   @IsBoolean({ message: 'must be true or false' }) shearSensitive: boolean;
   @IsNumber(num, { message: NUMBER }) @Min(0, { message: 'must be 0 or more' }) @Max(100, { message: 'must be at most 100' }) solidsWtPct: number;
   // Receiving (shared/acceptance): optional; null clears a value.
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsInt({ message: 'must be a whole number of days' }) @Min(1, { message: 'must be at least 1 day' }) @Max(3650, { message: 'must be at most 3650 days' }) shelfLifeDays?: number | null;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsInt({ message: 'must be a whole number of days' }) @Min(0, { message: 'must be 0 days or more' }) @Max(3650, { message: 'must be at most 3650 days' }) minRemainingDays?: number | null;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: NUMBER }) @Min(-50, { message: 'must be -50 °C or more' }) @Max(80, { message: 'must be at most 80 °C' }) storageMinC?: number | null;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: NUMBER }) @Min(-50, { message: 'must be -50 °C or more' }) @Max(80, { message: 'must be at most 80 °C' }) storageMaxC?: number | null;
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsInt({ message: 'must be a whole number of days' })
+  @Min(1, { message: 'must be at least 1 day' })
+  @Max(3650, { message: 'must be at most 3650 days' })
+  shelfLifeDays?: number | null;
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsInt({ message: 'must be a whole number of days' })
+  @Min(0, { message: 'must be 0 days or more' })
+  @Max(3650, { message: 'must be at most 3650 days' })
+  minRemainingDays?: number | null;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: NUMBER }) @Min(-50, { message: 'must be -50 °C or more' }) @Max(80, { message: 'must be at most 80 °C' }) storageMinC?:
+    number | null;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: NUMBER }) @Min(-50, { message: 'must be -50 °C or more' }) @Max(80, { message: 'must be at most 80 °C' }) storageMaxC?:
+    number | null;
   @IsOptional() @IsBoolean({ message: 'must be true or false' }) certificateRequired?: boolean;
 }
 
@@ -185,5 +199,8 @@ export class SettingsDto {
   @Optional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
   /** IANA name, checked against the runtime's zone list in the service. */
   @Optional() @IsString({ message: 'must be text' }) @MaxLength(64, { message: 'must be at most 64 characters' }) timeZone?: string;
-  @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
+  @IsInt({ message: 'is required: the version you last read' })
+  @Min(1, { message: 'must be the version you last read' })
+  @Max(2147483647, { message: 'must be the version you last read' })
+  version: number;
 }

@@ -169,7 +169,8 @@ export class ResourceService<E extends ObjectLiteral> {
       .transaction(async (manager) => {
         const existing = await manager.getRepository(this.def.entity).findOne({ where: { id } as never, lock: { mode: 'pessimistic_write' } });
         if (!existing) throw notFound(this.def.label);
-        if (existing.version !== v) throw conflict(`Someone else changed this ${this.def.label.toLowerCase()} first; reload before deleting.`, { current: this.def.toJson(await this.findEntity(id, manager)) });
+        if (existing.version !== v)
+          throw conflict(`Someone else changed this ${this.def.label.toLowerCase()} first; reload before deleting.`, { current: this.def.toJson(await this.findEntity(id, manager)) });
         const before = this.def.toJson(await this.findEntity(id, manager));
         await manager.getRepository(this.def.entity).delete(id);
         await audit(manager, { userId: user.id, action: 'delete', entity: this.def.path, entityId: id, summary: `${this.def.label} deleted`, before });
@@ -202,4 +203,3 @@ export function resourceRouter<E extends ObjectLiteral>(ds: DataSource, def: Res
   });
   return { router, service };
 }
-

@@ -36,7 +36,13 @@ export async function needsForStation(m: EntityManager, fit: FitCheckService, dr
   const best = result.candidates[0];
   if (result.verdict === 'fits' && best) {
     const order = [...tubeOrder(best.dipTubeId, best.dipTubePartNumber), ...headOrder(best.connectorId, best.connectorPartNumber)];
-    return { stationId: station.id, stationName: station.name, verdict: 'fits', summary: order.length ? `Fits with ${best.dipTubePartNumber} and ${best.connectorPartNumber}; order the parts listed.` : `Fits with the hardware already at ${station.name}.`, order };
+    return {
+      stationId: station.id,
+      stationName: station.name,
+      verdict: 'fits',
+      summary: order.length ? `Fits with ${best.dipTubePartNumber} and ${best.connectorPartNumber}; order the parts listed.` : `Fits with the hardware already at ${station.name}.`,
+      order,
+    };
   }
 
   // Nothing approved fits: look at every registered tube of the drum's threads with every head, as if approved.
@@ -51,7 +57,15 @@ export async function needsForStation(m: EntityManager, fit: FitCheckService, dr
       const e = evaluateCandidate({
         drum: drum.input,
         tube: { id: tube.id, partNumber: tube.partNumber, threadCode: tube.threadSpec!.code, lengthMm: tube.lengthMm, keyCode: tube.keyCode?.code ?? null, channels: tube.channels },
-        connector: { id: head.id, partNumber: head.partNumber, keyCode: head.keyCode?.code ?? null, feedBoreMm: head.feedBoreMm, returnBoreMm: head.returnBoreMm, returnPath: head.returnPath, suitedTo: head.suitedTo },
+        connector: {
+          id: head.id,
+          partNumber: head.partNumber,
+          keyCode: head.keyCode?.code ?? null,
+          feedBoreMm: head.feedBoreMm,
+          returnBoreMm: head.returnBoreMm,
+          returnPath: head.returnPath,
+          suitedTo: head.suitedTo,
+        },
         station: stationInput,
         slurry: slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null,
         pairing: { status: 'approved' },
@@ -89,7 +103,13 @@ export async function needsForStation(m: EntityManager, fit: FitCheckService, dr
       count: 1,
     },
   ];
-  return { stationId: station.id, stationName: station.name, verdict: result.verdict, summary: `No registered tube and head fit this drum at ${station.name}; order to the specification below.`, order };
+  return {
+    stationId: station.id,
+    stationName: station.name,
+    verdict: result.verdict,
+    summary: `No registered tube and head fit this drum at ${station.name}; order to the specification below.`,
+    order,
+  };
 }
 
 /** Adds up order lines across stations (the same part for two stations is one line). */

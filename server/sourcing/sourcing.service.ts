@@ -86,8 +86,16 @@ export class SourcingService {
       // A warning and the buyers' notices are written with the plan: all or nothing.
       if (impact.lacking.length) {
         const summary = `${plan.slurryName} from ${supplier.name} (${supplier.region}) from ${plan.startDate} arrives in ${drum.name}: ${impact.lacking.length} of ${impact.stations.length} station(s) need hardware.`;
-        await m.save(m.create(HardwareWarning, { source: 'plan', sourcingPlanId: plan.id, receivingCheckId: null, status: 'open', summary, needs: [{ stations: impact.lacking, order: impact.order }] }));
-        await notifyRoles(m, ['buyer'], { kind: 'hardware-gap', title: `Hardware needed for ${plan.slurryName}`, body: `${summary} What to order:`, link: `/sourcing/${plan.id}`, lines: [...impact.lacking.map((n) => `${n.stationName}: ${n.summary}`), ...orderLines(impact.order)] });
+        await m.save(
+          m.create(HardwareWarning, { source: 'plan', sourcingPlanId: plan.id, receivingCheckId: null, status: 'open', summary, needs: [{ stations: impact.lacking, order: impact.order }] }),
+        );
+        await notifyRoles(m, ['buyer'], {
+          kind: 'hardware-gap',
+          title: `Hardware needed for ${plan.slurryName}`,
+          body: `${summary} What to order:`,
+          link: `/sourcing/${plan.id}`,
+          lines: [...impact.lacking.map((n) => `${n.stationName}: ${n.summary}`), ...orderLines(impact.order)],
+        });
       }
       return plan.id;
     });

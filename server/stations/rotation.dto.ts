@@ -11,5 +11,8 @@ export class StandbyDto {
   @Optional() @IsUUID('all', { message: 'must be an id' }) receivingCheckId?: string;
   @Optional() @IsString({ message: 'must be text' }) @MaxLength(LOT_NUMBER_MAX_LENGTH, { message: LOT_NUMBER_MESSAGES.tooLong }) lotNumber?: string;
   @Optional() @IsString({ message: 'must be text' }) @MaxLength(60) drumSerial?: string;
-  @IsInt({ message: 'is required: the version you last read' }) @Min(1, { message: 'must be the version you last read' }) @Max(2147483647, { message: 'must be the version you last read' }) version: number;
+  @IsInt({ message: 'is required: the version you last read' })
+  @Min(1, { message: 'must be the version you last read' })
+  @Max(2147483647, { message: 'must be the version you last read' })
+  version: number;
 }

@@ -15,7 +15,8 @@ export class RotationService {
   private async lockSet(m: EntityManager, id: string, version?: number): Promise<TubeSet> {
     const set = await m.findOne(TubeSet, { where: { id }, lock: { mode: 'pessimistic_write' } });
     if (!set) throw notFound('Tube set');
-    if (version !== undefined && set.version !== version) throw conflict(`Someone else moved ${set.label} first; reload the station.`, { current: { id: set.id, state: set.state, version: set.version } });
+    if (version !== undefined && set.version !== version)
+      throw conflict(`Someone else moved ${set.label} first; reload the station.`, { current: { id: set.id, state: set.state, version: set.version } });
     return set;
   }
 
@@ -56,7 +57,15 @@ export class RotationService {
       set.currentLotNumber = lotNumber;
       set.currentDrumSerial = dto.drumSerial?.trim() || null;
       await m.save(set);
-      await audit(m, { userId, action: 'standby', entity: 'tube-sets', entityId: set.id, summary: `${set.label} into the standby drum${lotNumber ? ` (lot ${lotNumber})` : ''}`, before: { state: 'ready' }, after: { state: 'standby', lotNumber } });
+      await audit(m, {
+        userId,
+        action: 'standby',
+        entity: 'tube-sets',
+        entityId: set.id,
+        summary: `${set.label} into the standby drum${lotNumber ? ` (lot ${lotNumber})` : ''}`,
+        before: { state: 'ready' },
+        after: { state: 'standby', lotNumber },
+      });
     });
   }
 
@@ -98,7 +107,14 @@ export class RotationService {
           at: now,
         }),
       );
-      await audit(m, { userId, action: 'change-out', entity: 'stations', entityId: stationId, summary: `${station.name}: ${standby.label} online${online ? `, ${online.label} out for cleaning` : ''}`, after: { online: standby.id, cleaning: online?.id ?? null, lotNumber: standby.currentLotNumber } });
+      await audit(m, {
+        userId,
+        action: 'change-out',
+        entity: 'stations',
+        entityId: stationId,
+        summary: `${station.name}: ${standby.label} online${online ? `, ${online.label} out for cleaning` : ''}`,
+        after: { online: standby.id, cleaning: online?.id ?? null, lotNumber: standby.currentLotNumber },
+      });
     });
   }
 
@@ -119,7 +135,17 @@ export class RotationService {
         .getMany(),
     ]);
     return {
-      station: { id: station.id, version: station.version, name: station.name, bay: station.bay, tapping: station.tapping, agitation: station.agitation, flowLpm: station.flowLpm, connectorId: station.connectorId, connectorPartNumber: station.connector?.partNumber ?? null },
+      station: {
+        id: station.id,
+        version: station.version,
+        name: station.name,
+        bay: station.bay,
+        tapping: station.tapping,
+        agitation: station.agitation,
+        flowLpm: station.flowLpm,
+        connectorId: station.connectorId,
+        connectorPartNumber: station.connector?.partNumber ?? null,
+      },
       tubeSets: sets.map((s) => ({
         id: s.id,
         version: s.version,

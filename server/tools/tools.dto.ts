@@ -26,5 +26,10 @@ export class ThreadMatchDto {
 export class FlowDto {
   @IsDefined({ message: 'is required: { value, unit }' }) @ValidateNested() @Type(() => FlowValueDto) flow: FlowValueDto;
   @IsNumber(num, { message: 'must be a number' }) @Min(0.5, { message: 'must be at least 0.5 mm' }) @Max(500, { message: 'must be at most 500 mm' }) feedBoreMm: number;
-  @Optional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: 'must be a number' }) @Min(0.5, { message: 'must be at least 0.5 mm' }) @Max(500, { message: 'must be at most 500 mm' }) returnBoreMm?: number | null;
+  @Optional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsNumber(num, { message: 'must be a number' })
+  @Min(0.5, { message: 'must be at least 0.5 mm' })
+  @Max(500, { message: 'must be at most 500 mm' })
+  returnBoreMm?: number | null;
 }

@@ -14,7 +14,6 @@ import { parseId } from '../registry/resource';
 import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 import { FlowDto, ThreadMatchDto } from './tools.dto';
 
-
 /** The calculators. They only read, so every signed-in role may use them. */
 export function toolsRouter(ds: DataSource): Router {
   const router = Router();

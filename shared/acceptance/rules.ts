@@ -43,7 +43,14 @@ export function checkShelfLife(input: LotAcceptanceInput): Check {
   const numbers = { remainingDays: left, minRemainingDays: minimum, ...(shelf !== null ? { shelfLifeDays: shelf } : {}) };
   const engineer = { action: 'hold' as const, release: 'engineer' as const, releasedBy: ENGINEER_ROLES };
   if (left < 0) {
-    return { rule: 'shelf-life', outcome: 'fail', ...engineer, numbers, headline: `the lot expired on ${when}`, message: `The lot expired on ${when} (${source}), ${plural(-left, 'day')} ago: expired slurry is not used.` };
+    return {
+      rule: 'shelf-life',
+      outcome: 'fail',
+      ...engineer,
+      numbers,
+      headline: `the lot expired on ${when}`,
+      message: `The lot expired on ${when} (${source}), ${plural(-left, 'day')} ago: expired slurry is not used.`,
+    };
   }
   if (left < minimum) {
     return {
@@ -96,14 +103,26 @@ export function checkTemperature(input: LotAcceptanceInput): Check {
       // Many lots ship without one; its absence is said, not held [practice].
       return { rule: 'temperature', outcome: 'pass', message: `No temperature indicator was fitted; look for frost or settled, separated slurry before use${range ? ` (storage ${range})` : ''}.` };
   }
-  return { rule: 'temperature', outcome: 'fail', action: 'hold', release: 'engineer', releasedBy: ENGINEER_ROLES, headline: 'the temperature indicator reading is not known', message: 'The temperature indicator reading is not one Bungwise knows, so an engineer must check the lot.' };
+  return {
+    rule: 'temperature',
+    outcome: 'fail',
+    action: 'hold',
+    release: 'engineer',
+    releasedBy: ENGINEER_ROLES,
+    headline: 'the temperature indicator reading is not known',
+    message: 'The temperature indicator reading is not one Bungwise knows, so an engineer must check the lot.',
+  };
 }
 
 /** A slurry that needs its certificate of analysis at the dock is held until the certificate is attached [practice]. */
 export function checkCertificate(input: LotAcceptanceInput): Check {
   if (!input.slurry) return { rule: 'certificate', reason: 'not checked: no slurry chosen' };
   if (!input.slurry.certificateRequired) {
-    return { rule: 'certificate', outcome: 'pass', message: input.certificateAttached ? 'The certificate of analysis is attached (this slurry does not require one).' : 'This slurry needs no certificate of analysis at the dock.' };
+    return {
+      rule: 'certificate',
+      outcome: 'pass',
+      message: input.certificateAttached ? 'The certificate of analysis is attached (this slurry does not require one).' : 'This slurry needs no certificate of analysis at the dock.',
+    };
   }
   if (input.certificateAttached) return { rule: 'certificate', outcome: 'pass', message: 'The certificate of analysis is attached.' };
   return {

@@ -116,7 +116,12 @@ export function provisionalCheck(snap: DockSnapshot, q: DockQuestion, now: Date)
   if (q.stationId && !station) throw new SnapshotGap('stationId', 'This station is not in the registry kept on this phone.');
   const slurry = q.slurryId ? snap.slurries.find((s) => s.id === q.slurryId) : undefined;
   if (q.slurryId && !slurry) throw new SnapshotGap('slurryId', 'This slurry is not in the registry kept on this phone.');
-  const pool = selectPool(snap, { insideDepthMm: drum.input.insideDepthMm, threadCodes: drum.input.openings.flatMap((o) => (o.threadCode ? [o.threadCode] : [])) }, station?.connectorId ?? null, settings);
+  const pool = selectPool(
+    snap,
+    { insideDepthMm: drum.input.insideDepthMm, threadCodes: drum.input.openings.flatMap((o) => (o.threadCode ? [o.threadCode] : [])) },
+    station?.connectorId ?? null,
+    settings,
+  );
   const { timeZone: _tz, ...fitSettings } = settings;
   const result = judgeDrum({
     drum,
@@ -128,7 +133,13 @@ export function provisionalCheck(snap: DockSnapshot, q: DockQuestion, now: Date)
     settings: fitSettings,
   });
   const best = result.candidates[0];
-  const stationsWithHead = best && !station ? snap.stations.filter((s) => s.connectorId === best.connectorId).map((s) => s.name).sort(byName) : [];
+  const stationsWithHead =
+    best && !station
+      ? snap.stations
+          .filter((s) => s.connectorId === best.connectorId)
+          .map((s) => s.name)
+          .sort(byName)
+      : [];
   const lotVerdict = decideLot({
     fit: result,
     lot: {

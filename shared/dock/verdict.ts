@@ -113,7 +113,10 @@ export function composeLotVerdict(args: { fit: FitForVerdict; acceptance: Accept
   if (fit.verdict === 'no-fit') {
     // The sentence says why across candidates; the reason gives the closest pairing's own words.
     const fail = best?.rules.find((r) => r.outcome === 'fail');
-    const reason = best && fail ? `Closest pairing, dip tube ${best.dipTubePartNumber} with head ${best.connectorPartNumber}: ${lowerFirst(fail.message)}` : `No registered tube and head pairing threads into this drum's openings.`;
+    const reason =
+      best && fail
+        ? `Closest pairing, dip tube ${best.dipTubePartNumber} with head ${best.connectorPartNumber}: ${lowerFirst(fail.message)}`
+        : `No registered tube and head pairing threads into this drum's openings.`;
     items.push({ blocker: { source: 'fit', severity: 'hold', reason, release: 'engineer', releasedBy: ENGINEER_ROLES }, rank: rankOf('fit_hold') });
   } else if (fit.verdict === 'caution' && best) {
     const c = best.rules.find((r) => r.outcome !== 'pass');
@@ -142,5 +145,8 @@ export function decideLot(args: { fit: FitForVerdict; lot: LotAcceptanceInput; s
 
 /** The hold reason recorded with an automatic hold: every holding rule's reason, largest first. */
 export function holdReasonOf(verdict: LotVerdict): string {
-  return verdict.blockers.filter((b) => b.severity !== 'caution').map((b) => b.reason).join(' ');
+  return verdict.blockers
+    .filter((b) => b.severity !== 'caution')
+    .map((b) => b.reason)
+    .join(' ');
 }

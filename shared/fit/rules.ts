@@ -6,18 +6,7 @@ import { recommendDipTubeLength, validateClearanceWindow } from '../recommend-le
 import { threadSpecEquals } from '../threads/identify';
 import { findThreadSpec } from '../threads/thread-table';
 import { flowToM3s, formatLength, mmToIn } from '../units';
-import type {
-  CandidateInput,
-  ConnectorInput,
-  DrumInput,
-  DrumOpening,
-  FitSettings,
-  RuleName,
-  RuleNotChecked,
-  RuleResult,
-  TubeInput,
-  TubeSetInput,
-} from './types';
+import type { CandidateInput, ConnectorInput, DrumInput, DrumOpening, FitSettings, RuleName, RuleNotChecked, RuleResult, TubeInput, TubeSetInput } from './types';
 
 // Site settings until a site sets its own. Clearance 5 to 25 mm: at least 5 mm keeps the tip off the
 // bottom chime and any dent, at most 25 mm keeps the undrawn heel small [practice]. Return velocity at
@@ -54,12 +43,9 @@ export function isNotChecked(check: RuleCheck): check is RuleNotChecked {
   return !('outcome' in check);
 }
 
-const pass = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult =>
-  numbers ? { rule, outcome: 'pass', message, numbers } : { rule, outcome: 'pass', message };
-const caution = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult =>
-  numbers ? { rule, outcome: 'caution', message, numbers } : { rule, outcome: 'caution', message };
-const fail = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult =>
-  numbers ? { rule, outcome: 'fail', message, numbers } : { rule, outcome: 'fail', message };
+const pass = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult => (numbers ? { rule, outcome: 'pass', message, numbers } : { rule, outcome: 'pass', message });
+const caution = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult => (numbers ? { rule, outcome: 'caution', message, numbers } : { rule, outcome: 'caution', message });
+const fail = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult => (numbers ? { rule, outcome: 'fail', message, numbers } : { rule, outcome: 'fail', message });
 const notChecked = (rule: RuleName, reason: string): RuleNotChecked => ({ rule, reason });
 
 const round = (x: number, digits: number): number => Math.round(x * 10 ** digits) / 10 ** digits;
@@ -125,7 +111,10 @@ export const checkKey: RuleFn = ({ drum, tube, connector }) => {
     return pass('key', `No keying is in use on the drum, the tube or the head.${scope}`);
   }
   if (keyed.length < parts.length) {
-    const unkeyed = parts.filter((p) => p.key === null).map((p) => p.name).join(' and ');
+    const unkeyed = parts
+      .filter((p) => p.key === null)
+      .map((p) => p.name)
+      .join(' and ');
     return caution('key', `Keys agree where present (${keys[0]}), but ${unkeyed} ${parts.length - keyed.length > 1 ? 'are' : 'is'} not keyed, so keying cannot stop a wrong connection.${scope}`);
   }
   return pass('key', `The keys agree (${keys[0]}).${scope}`);
@@ -149,24 +138,13 @@ export const checkReach: RuleFn = ({ drum, tube }, settings) => {
   };
   const gapText = `${formatLength(Math.abs(gapMm), 'mm')} (${formatLength(Math.abs(gapMm), 'in', 2)})`;
   if (tube.lengthMm < window.minLengthMm) {
-    return fail(
-      'reach',
-      `The tube does not reach: its tip sits ${gapText} above the drum bottom (at most ${settings.tipClearanceMaxMm} mm allowed), leaving slurry undrawn.`,
-      numbers,
-    );
+    return fail('reach', `The tube does not reach: its tip sits ${gapText} above the drum bottom (at most ${settings.tipClearanceMaxMm} mm allowed), leaving slurry undrawn.`, numbers);
   }
   if (tube.lengthMm > window.maxLengthMm) {
-    const where =
-      gapMm <= 0
-        ? `it is ${gapText} longer than the drum is deep`
-        : `its tip would sit only ${gapText} above the drum bottom (at least ${settings.tipClearanceMinMm} mm needed)`;
+    const where = gapMm <= 0 ? `it is ${gapText} longer than the drum is deep` : `its tip would sit only ${gapText} above the drum bottom (at least ${settings.tipClearanceMinMm} mm needed)`;
     return fail('reach', `The tube is too long and bottoms out: ${where}.`, numbers);
   }
-  return pass(
-    'reach',
-    `The tip sits ${gapText} above the drum bottom, inside the ${settings.tipClearanceMinMm} to ${settings.tipClearanceMaxMm} mm window.`,
-    numbers,
-  );
+  return pass('reach', `The tip sits ${gapText} above the drum bottom, inside the ${settings.tipClearanceMinMm} to ${settings.tipClearanceMaxMm} mm window.`, numbers);
 };
 
 export const checkTapping: RuleFn = ({ connector, station, slurry }) => {
@@ -185,10 +163,7 @@ export const checkTapping: RuleFn = ({ connector, station, slurry }) => {
       `This head is made for two-opening tapping: used in one opening, its return runs through small openings, so slurry sprays back at high velocity and is sheared.${sensitive}`,
     );
   }
-  return fail(
-    'tapping',
-    'This head is made for one-opening tapping and does not suit this station, which returns through a second opening.',
-  );
+  return fail('tapping', 'This head is made for one-opening tapping and does not suit this station, which returns through a second opening.');
 };
 
 function portNumbers(connector: ConnectorInput, flowLpm: number | undefined, settings: FitSettings): Record<string, number> {
@@ -218,22 +193,19 @@ function portNumbers(connector: ConnectorInput, flowLpm: number | undefined, set
 export const checkPorts: RuleFn = ({ connector, station }, settings) => {
   if (!station) return notChecked('ports', 'not checked: no station chosen');
   if (station.tapping === 'two-opening') {
-    return pass('ports', 'The return goes back through the other opening, so this head\'s return port does not carry it.');
+    return pass('ports', "The return goes back through the other opening, so this head's return port does not carry it.");
   }
   const numbers = portNumbers(connector, station.flowLpm, settings);
   if (connector.returnPath === 'none' || connector.returnBoreMm === null) {
     return fail('ports', 'This head has no return port, but one-opening tapping returns the slurry through the head.', numbers);
   }
   if (connector.returnPath === 'restricted') {
-    return fail('ports', 'This head\'s return path is restricted, so in one opening the slurry would be forced back through it fast and sheared.', numbers);
+    return fail('ports', "This head's return path is restricted, so in one opening the slurry would be forced back through it fast and sheared.", numbers);
   }
   const ratio = numbers.velocityRatio!;
   const feed = portLabel(connector.feedBoreMm, connector.feedNominal);
   const ret = portLabel(connector.returnBoreMm, connector.returnNominal);
-  const atFlow =
-    numbers.returnVelocityMs !== undefined
-      ? ` (${round(numbers.returnVelocityMs, 2)} m/s at ${round(numbers.flowLpm!, 1)} L/min)`
-      : '';
+  const atFlow = numbers.returnVelocityMs !== undefined ? ` (${round(numbers.returnVelocityMs, 2)} m/s at ${round(numbers.flowLpm!, 1)} L/min)` : '';
   // Equal bores give exactly 1; the epsilon only absorbs rounding of recorded bores.
   if (ratio <= 1 + 1e-9) {
     return pass('ports', `The return port (${ret}) is at least as large as the feed port (${feed}), so slurry returns no faster than it is drawn${atFlow}.`, numbers);
@@ -246,11 +218,7 @@ export const checkPorts: RuleFn = ({ connector, station }, settings) => {
       numbers,
     );
   }
-  return caution(
-    'ports',
-    `The return port (${ret}) is smaller than the feed port (${feed}): slurry returns ${times} faster than it is drawn${atFlow}, which shears it.`,
-    numbers,
-  );
+  return caution('ports', `The return port (${ret}) is smaller than the feed port (${feed}): slurry returns ${times} faster than it is drawn${atFlow}, which shears it.`, numbers);
 };
 
 export const checkFoam: RuleFn = ({ station, slurry }) => {
@@ -271,7 +239,11 @@ export const checkOpenings: RuleFn = ({ drum, tube, station }) => {
   const numbers = { usableOpenings: usable, neededOpenings: needed };
   const thread = describeThread(tube.threadCode);
   if (usable >= needed) {
-    return pass('openings', `The drum has ${usable} opening${usable === 1 ? '' : 's'} that take${usable === 1 ? 's' : ''} the tube's ${thread} thread; ${station.tapping} tapping needs ${needed}.`, numbers);
+    return pass(
+      'openings',
+      `The drum has ${usable} opening${usable === 1 ? '' : 's'} that take${usable === 1 ? 's' : ''} the tube's ${thread} thread; ${station.tapping} tapping needs ${needed}.`,
+      numbers,
+    );
   }
   return fail(
     'openings',
@@ -309,7 +281,7 @@ export function rinseCheck(tubeSet: TubeSetInput): RuleResult {
   const rinsed = toTime(tubeSet.lastRinsedAt);
   const used = toTime(tubeSet.lastUsedAt);
   if ((rinsed !== null && Number.isNaN(rinsed)) || (used !== null && Number.isNaN(used))) {
-    return fail('rinse', 'The tube set\'s rinse or use date cannot be read, so it cannot be cleared for the next drum.');
+    return fail('rinse', "The tube set's rinse or use date cannot be read, so it cannot be cleared for the next drum.");
   }
   if (used === null) {
     // [practice] New wetted parts are flushed with deionised water before their first drum too.
@@ -318,10 +290,7 @@ export function rinseCheck(tubeSet: TubeSetInput): RuleResult {
       : pass('rinse', 'This tube set has been rinsed and not used since.');
   }
   if (rinsed === null || rinsed < used) {
-    return fail(
-      'rinse',
-      'This tube set has not been rinsed since its last drum, so it cannot go into the next one: dried slurry flakes off and raises large-particle counts.',
-    );
+    return fail('rinse', 'This tube set has not been rinsed since its last drum, so it cannot go into the next one: dried slurry flakes off and raises large-particle counts.');
   }
   return pass('rinse', 'This tube set was rinsed after its last drum.');
 }

@@ -195,8 +195,16 @@ export function selectPool(src: PoolSource, drum: { insideDepthMm: number; threa
     for (const t of [...inside.slice(0, TUBES_IN_WINDOW), ...below.slice(0, TUBES_NEAR_MISS), ...above.slice(0, TUBES_NEAR_MISS)]) tubeIds.add(t.id);
   }
   const live = src.pairings.filter((p) => p.status !== 'retired');
-  const byTube = live.filter((p) => tubeIds.has(p.dip_tube_id)).sort(byPool).slice(0, POOL_LIMIT);
+  const byTube = live
+    .filter((p) => tubeIds.has(p.dip_tube_id))
+    .sort(byPool)
+    .slice(0, POOL_LIMIT);
   const taken = new Set(byTube.map((p) => p.pairing_id));
-  const byHead = installedConnectorId ? live.filter((p) => p.connector_id === installedConnectorId && !taken.has(p.pairing_id)).sort(byPool).slice(0, POOL_LIMIT) : [];
+  const byHead = installedConnectorId
+    ? live
+        .filter((p) => p.connector_id === installedConnectorId && !taken.has(p.pairing_id))
+        .sort(byPool)
+        .slice(0, POOL_LIMIT)
+    : [];
   return [...byTube, ...byHead];
 }

@@ -1,17 +1,7 @@
 // Inputs and outputs of the fit check. Plain objects so the server can pass entities and the client can
 // pass form state; all lengths in mm.
 
-export const RULE_NAMES = [
-  'thread',
-  'key',
-  'reach',
-  'tapping',
-  'ports',
-  'foam',
-  'openings',
-  'approval',
-  'rinse',
-] as const;
+export const RULE_NAMES = ['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse'] as const;
 export type RuleName = (typeof RULE_NAMES)[number];
 
 export type RuleOutcome = 'pass' | 'caution' | 'fail';

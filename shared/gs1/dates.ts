@@ -19,7 +19,6 @@ export function gs1Year(yy: number, today: Date): number {
   return century + yy;
 }
 
-
 /**
  * Reads YYMMDD into an ISO date (YYYY-MM-DD). Day 00 means the last day of the month (§3.4.7: a date
  * with only year and month fills DD with zeroes). A day the month does not have is refused, not rolled over.

@@ -88,14 +88,20 @@ function fromElements(elements: Element[], today: Date): DrumLabelResult {
     if (!hasValidCheckDigit(gtin)) return fail(`The ${NAMES['01']} ${gtin} fails its check digit: with these first 13 digits the last one would be ${gs1CheckDigit(gtin.slice(0, 13))}`);
     label.gtin = gtin;
   }
-  for (const [ai, key] of [['11', 'productionDate'], ['17', 'expiryDate']] as const) {
+  for (const [ai, key] of [
+    ['11', 'productionDate'],
+    ['17', 'expiryDate'],
+  ] as const) {
     const raw = seen.get(ai);
     if (raw === undefined) continue;
     const date = parseGs1Date(raw, today);
     if (!date.ok) return fail(`The ${NAMES[ai]} is not a real date: ${date.error}`);
     label[key] = date.iso;
   }
-  for (const [ai, key] of [['10', 'batch'], ['21', 'serial']] as const) {
+  for (const [ai, key] of [
+    ['10', 'batch'],
+    ['21', 'serial'],
+  ] as const) {
     const value = seen.get(ai);
     if (value === undefined) continue;
     const problem = variableProblem(NAMES[ai], value);

@@ -85,11 +85,7 @@ function formatTpi(tpi: number): string {
   return String(Math.round(tpi * 100) / 100);
 }
 
-export function identifyThread(
-  input: ThreadMeasurement,
-  table: readonly ThreadSpecRow[] = THREAD_TABLE,
-  opts: IdentifyOptions = {},
-): ThreadIdentification {
+export function identifyThread(input: ThreadMeasurement, table: readonly ThreadSpecRow[] = THREAD_TABLE, opts: IdentifyOptions = {}): ThreadIdentification {
   positiveOrThrow('majorDiameterMm', input.majorDiameterMm);
   positiveOrThrow('pitchMm', input.pitchMm);
   positiveOrThrow('threadsPerInch', input.threadsPerInch);
@@ -97,15 +93,12 @@ export function identifyThread(
   const o = { ...DEFAULT_IDENTIFY_OPTIONS, ...opts };
 
   // A direct pitch reading wins over a count; both name the same quantity.
-  const measuredPitch =
-    input.pitchMm ?? (input.threadsPerInch !== undefined ? MM_PER_IN / input.threadsPerInch : undefined);
+  const measuredPitch = input.pitchMm ?? (input.threadsPerInch !== undefined ? MM_PER_IN / input.threadsPerInch : undefined);
   const notes: string[] = [];
   if (input.pitchMm !== undefined && input.threadsPerInch !== undefined) {
     const fromCount = MM_PER_IN / input.threadsPerInch;
     if (Math.abs(fromCount - input.pitchMm) > (o.pitchTolerancePct / 100) * input.pitchMm) {
-      notes.push(
-        `The pitch (${input.pitchMm} mm) and the count (${input.threadsPerInch} per inch) you entered disagree; the pitch was used, so recount.`,
-      );
+      notes.push(`The pitch (${input.pitchMm} mm) and the count (${input.threadsPerInch} per inch) you entered disagree; the pitch was used, so recount.`);
     }
   }
 
@@ -146,12 +139,7 @@ export function identifyThread(
 
   // Rounded to 0.001 mm so rows with the same published size tie and keep table order.
   // Array.prototype.sort is stable, so equal rows keep table order.
-  matches.sort(
-    (a, b) =>
-      round3(a.deltaMm) - round3(b.deltaMm) ||
-      (a.pitchDeltaMm ?? 0) - (b.pitchDeltaMm ?? 0) ||
-      (a.flankDeltaDeg ?? 0) - (b.flankDeltaDeg ?? 0),
-  );
+  matches.sort((a, b) => round3(a.deltaMm) - round3(b.deltaMm) || (a.pitchDeltaMm ?? 0) - (b.pitchDeltaMm ?? 0) || (a.flankDeltaDeg ?? 0) - (b.flankDeltaDeg ?? 0));
 
   const ambiguous = matches.length > 1;
   const advice = [...notes, adviceFor(input, matches, o)].join(' ');
@@ -190,22 +178,31 @@ function adviceFor(input: ThreadMeasurement, matches: ThreadMatch[], o: Required
 
   if (tpis.size > 1) {
     const byTpi = [...tpis]
-      .map((tpi) => `${formatTpi(tpi)} for ${matches.filter((m) => m.threadsPerInch === tpi).map((m) => m.nominalLabel).join(' or ')}`)
+      .map(
+        (tpi) =>
+          `${formatTpi(tpi)} for ${matches
+            .filter((m) => m.threadsPerInch === tpi)
+            .map((m) => m.nominalLabel)
+            .join(' or ')}`,
+      )
       .join(', ');
     steps.push(`Count threads per inch with a thread gauge: ${byTpi}.`);
   }
   if (flanks.size > 1) {
     const byFlank = [...flanks]
-      .map((deg) => `${deg} degrees for ${matches.filter((m) => m.flankAngleDeg === deg).map((m) => m.nominalLabel).join(' or ')}`)
+      .map(
+        (deg) =>
+          `${deg} degrees for ${matches
+            .filter((m) => m.flankAngleDeg === deg)
+            .map((m) => m.nominalLabel)
+            .join(' or ')}`,
+      )
       .join(', ');
     steps.push(`Check the flank angle with a thread gauge: ${byFlank}.`);
   }
   if (forms.size > 1) {
     // 1:16 taper on diameter: 25 mm along the thread changes the diameter by about 1.6 mm.
-    steps.push(
-      'Check for taper by measuring the diameter at two points about 25 mm apart along the thread: ' +
-        'a tapered (NPT) thread changes by about 1.6 mm, a straight thread does not.',
-    );
+    steps.push('Check for taper by measuring the diameter at two points about 25 mm apart along the thread: ' + 'a tapered (NPT) thread changes by about 1.6 mm, a straight thread does not.');
   }
   if (steps.length === 0) {
     steps.push('These cannot be told apart by measuring; compare with a fitting whose thread is known.');

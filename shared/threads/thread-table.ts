@@ -112,13 +112,8 @@ const BUTTRESS_ROWS: ThreadSpecRow[] = [
 }));
 
 // Frozen so no caller can edit the shared table in place.
-export const THREAD_TABLE: readonly Readonly<ThreadSpecRow>[] = Object.freeze(
-  [...NPT_ROWS, ...NPS_ROWS, ...G_ROWS, ...BUTTRESS_ROWS].map((row) => Object.freeze(row)),
-);
+export const THREAD_TABLE: readonly Readonly<ThreadSpecRow>[] = Object.freeze([...NPT_ROWS, ...NPS_ROWS, ...G_ROWS, ...BUTTRESS_ROWS].map((row) => Object.freeze(row)));
 
-export function findThreadSpec(
-  code: string,
-  table: readonly ThreadSpecRow[] = THREAD_TABLE,
-): ThreadSpecRow | undefined {
+export function findThreadSpec(code: string, table: readonly ThreadSpecRow[] = THREAD_TABLE): ThreadSpecRow | undefined {
   return table.find((row) => row.code === code);
 }

@@ -36,11 +36,15 @@ describe('attachments through the S3 stand-in', () => {
     expect(res.body).toMatchObject({ contentType: 'application/pdf', sizeBytes: PDF.length, fileName: 'spec-sheet.pdf' });
     const list = await request(app).get(`/api/attachments?ownerKind=drum-type&ownerId=${drumTypeId}`).set(bearer(t.buyer));
     expect(list.body.items.map((a: { id: string }) => a.id)).toContain(res.body.id);
-    const content = await request(app).get(`/api/attachments/${res.body.id}/content`).set(bearer(t.clerk)).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const content = await request(app)
+      .get(`/api/attachments/${res.body.id}/content`)
+      .set(bearer(t.clerk))
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(content.status).toBe(200);
     expect(Buffer.compare(content.body as Buffer, PDF)).toBe(0);
     // A short-lived signed link serves the same bytes from the store.

@@ -63,10 +63,31 @@ const TARGETS: Record<string, Target> = {
     method: 'post',
     path: () => '/drum-types',
     body: () => ({
-      supplierId: id.supplier, region: 'NA', name: 'Corpus drum', partNumber: 'CORPUS-1', nominalCapacityL: 208, material: 'steel', head: 'tight',
-      outsideHeightMm: 880, insideDepthMm: 851, outsideDiameterMm: 585, openings: [{ label: 'large', threadCode: 'NPS-2', boreMm: 50, position: 'large' }],
+      supplierId: id.supplier,
+      region: 'NA',
+      name: 'Corpus drum',
+      partNumber: 'CORPUS-1',
+      nominalCapacityL: 208,
+      material: 'steel',
+      head: 'tight',
+      outsideHeightMm: 880,
+      insideDepthMm: 851,
+      outsideDiameterMm: 585,
+      openings: [{ label: 'large', threadCode: 'NPS-2', boreMm: 50, position: 'large' }],
     }),
-    fields: { supplierId: 'id', region: 'enum', name: 'text', partNumber: 'text', nominalCapacityL: 'number', material: 'enum', head: 'enum', outsideHeightMm: 'number', insideDepthMm: 'number', outsideDiameterMm: 'number', openings: 'array' },
+    fields: {
+      supplierId: 'id',
+      region: 'enum',
+      name: 'text',
+      partNumber: 'text',
+      nominalCapacityL: 'number',
+      material: 'enum',
+      head: 'enum',
+      outsideHeightMm: 'number',
+      insideDepthMm: 'number',
+      outsideDiameterMm: 'number',
+      openings: 'array',
+    },
   },
   'POST /dip-tubes': {
     method: 'post',
@@ -85,7 +106,18 @@ const TARGETS: Record<string, Target> = {
     method: 'post',
     path: () => '/slurries',
     body: () => ({ name: 'Corpus slurry', supplierId: id.supplier, region: 'NA', drumTypeId: id.drumType, foams: false, shearSensitive: false, solidsWtPct: 12, shelfLifeDays: 365, storageMinC: 5 }),
-    fields: { name: 'text', supplierId: 'id', region: 'enum', drumTypeId: 'id', foams: 'bool', shearSensitive: 'bool', solidsWtPct: 'number', shelfLifeDays: 'int', minRemainingDays: 'int', certificateRequired: 'bool' },
+    fields: {
+      name: 'text',
+      supplierId: 'id',
+      region: 'enum',
+      drumTypeId: 'id',
+      foams: 'bool',
+      shearSensitive: 'bool',
+      solidsWtPct: 'number',
+      shelfLifeDays: 'int',
+      minRemainingDays: 'int',
+      certificateRequired: 'bool',
+    },
     optional: ['shelfLifeDays', 'minRemainingDays', 'certificateRequired'],
   },
   'POST /stations': {
@@ -94,12 +126,45 @@ const TARGETS: Record<string, Target> = {
     body: () => ({ name: 'Corpus station', bay: 'Z', tapping: 'one-opening', agitation: 'pump', flowLpm: 20 }),
     fields: { name: 'text', bay: 'text', tapping: 'enum', agitation: 'enum', flowLpm: 'number' },
   },
-  'POST /tube-sets': { method: 'post', path: () => '/tube-sets', body: () => ({ stationId: id.station, label: 'Set Z', dipTubeId: id.tube }), fields: { stationId: 'id', label: 'text', dipTubeId: 'id' } },
-  'PATCH /dip-tubes/:id': { method: 'patch', path: () => `/dip-tubes/${id.tube}`, body: () => ({ version: Number(id.tubeVersion), lengthMm: 840 }), fields: { version: 'int', lengthMm: 'number' }, optional: ['lengthMm'] },
-  'POST /fit-checks': { method: 'post', path: () => '/fit-checks', body: () => ({ drumTypeId: id.drumType, tapping: 'one-opening', flowLpm: 20 }), fields: { drumTypeId: 'id', tapping: 'enum', flowLpm: 'number' }, optional: ['tapping', 'flowLpm'] },
-  'POST /tools/flow': { method: 'post', path: () => '/tools/flow', body: () => ({ flow: { value: 20, unit: 'L/min' }, feedBoreMm: 19.05 }), fields: { 'flow.value': 'number', 'flow.unit': 'unit', feedBoreMm: 'number' } },
-  'POST /tools/thread-match': { method: 'post', path: () => '/tools/thread-match', body: () => ({ majorDiameter: { value: 60, unit: 'mm' } }), fields: { 'majorDiameter.value': 'number', 'majorDiameter.unit': 'unit' } },
-  'POST /receiving-checks': { method: 'post', path: () => '/receiving-checks', body: () => ({ lotNumber: 'CORPUS-LOT', drumCount: 2, drumTypeId: id.drumType, productionDate: '2026-01-05', temperatureIndicator: 'intact' }), fields: { lotNumber: 'text', drumCount: 'int', drumTypeId: 'id', productionDate: 'date', expiryDate: 'date', temperatureIndicator: 'enum' }, optional: ['productionDate', 'expiryDate', 'temperatureIndicator'] },
+  'POST /tube-sets': {
+    method: 'post',
+    path: () => '/tube-sets',
+    body: () => ({ stationId: id.station, label: 'Set Z', dipTubeId: id.tube }),
+    fields: { stationId: 'id', label: 'text', dipTubeId: 'id' },
+  },
+  'PATCH /dip-tubes/:id': {
+    method: 'patch',
+    path: () => `/dip-tubes/${id.tube}`,
+    body: () => ({ version: Number(id.tubeVersion), lengthMm: 840 }),
+    fields: { version: 'int', lengthMm: 'number' },
+    optional: ['lengthMm'],
+  },
+  'POST /fit-checks': {
+    method: 'post',
+    path: () => '/fit-checks',
+    body: () => ({ drumTypeId: id.drumType, tapping: 'one-opening', flowLpm: 20 }),
+    fields: { drumTypeId: 'id', tapping: 'enum', flowLpm: 'number' },
+    optional: ['tapping', 'flowLpm'],
+  },
+  'POST /tools/flow': {
+    method: 'post',
+    path: () => '/tools/flow',
+    body: () => ({ flow: { value: 20, unit: 'L/min' }, feedBoreMm: 19.05 }),
+    fields: { 'flow.value': 'number', 'flow.unit': 'unit', feedBoreMm: 'number' },
+  },
+  'POST /tools/thread-match': {
+    method: 'post',
+    path: () => '/tools/thread-match',
+    body: () => ({ majorDiameter: { value: 60, unit: 'mm' } }),
+    fields: { 'majorDiameter.value': 'number', 'majorDiameter.unit': 'unit' },
+  },
+  'POST /receiving-checks': {
+    method: 'post',
+    path: () => '/receiving-checks',
+    body: () => ({ lotNumber: 'CORPUS-LOT', drumCount: 2, drumTypeId: id.drumType, productionDate: '2026-01-05', temperatureIndicator: 'intact' }),
+    fields: { lotNumber: 'text', drumCount: 'int', drumTypeId: 'id', productionDate: 'date', expiryDate: 'date', temperatureIndicator: 'enum' },
+    optional: ['productionDate', 'expiryDate', 'temperatureIndicator'],
+  },
   'POST /receiving-checks/:id/hold': { method: 'post', path: () => `/receiving-checks/${id.check}/hold`, body: () => ({ reason: 'does not fit' }), fields: { reason: 'text' } },
   'POST /sourcing-plans': {
     method: 'post',
@@ -107,11 +172,32 @@ const TARGETS: Record<string, Target> = {
     body: () => ({ slurryName: 'Corpus', supplierId: id.supplier, drumTypeId: id.drumType, startDate: '2027-01-01', drumsPerMonth: 4 }),
     fields: { slurryName: 'text', supplierId: 'id', drumTypeId: 'id', startDate: 'date', drumsPerMonth: 'int' },
   },
-  'POST /users': { method: 'post', path: () => '/users', body: () => ({ email: 'corpus@bungwise.example', name: 'Corpus', role: 'clerk', temporaryPassword: 'long-enough-password' }), fields: { email: 'email', name: 'text', role: 'enum', temporaryPassword: 'text' } },
-  'PATCH /settings': { method: 'patch', path: () => '/settings', body: () => ({ version: Number(id.settingsVersion), tipClearanceMinMm: 5 }), fields: { version: 'int', tipClearanceMinMm: 'number' }, optional: ['tipClearanceMinMm'] },
-  'POST /me/password': { method: 'post', path: () => '/me/password', body: () => ({ currentPassword: 'bungwise-demo', newPassword: 'long-enough-password' }), fields: { currentPassword: 'text', newPassword: 'text' } },
+  'POST /users': {
+    method: 'post',
+    path: () => '/users',
+    body: () => ({ email: 'corpus@bungwise.example', name: 'Corpus', role: 'clerk', temporaryPassword: 'long-enough-password' }),
+    fields: { email: 'email', name: 'text', role: 'enum', temporaryPassword: 'text' },
+  },
+  'PATCH /settings': {
+    method: 'patch',
+    path: () => '/settings',
+    body: () => ({ version: Number(id.settingsVersion), tipClearanceMinMm: 5 }),
+    fields: { version: 'int', tipClearanceMinMm: 'number' },
+    optional: ['tipClearanceMinMm'],
+  },
+  'POST /me/password': {
+    method: 'post',
+    path: () => '/me/password',
+    body: () => ({ currentPassword: 'bungwise-demo', newPassword: 'long-enough-password' }),
+    fields: { currentPassword: 'text', newPassword: 'text' },
+  },
   'POST /auth/forgot-password': { method: 'post', path: () => '/auth/forgot-password', body: () => ({ email: 'admin@bungwise.example' }), fields: { email: 'email' } },
-  'POST /auth/reset-password': { method: 'post', path: () => '/auth/reset-password', body: () => ({ token: 'A'.repeat(43), newPassword: 'long-enough-password' }), fields: { token: 'text', newPassword: 'text' } },
+  'POST /auth/reset-password': {
+    method: 'post',
+    path: () => '/auth/reset-password',
+    body: () => ({ token: 'A'.repeat(43), newPassword: 'long-enough-password' }),
+    fields: { token: 'text', newPassword: 'text' },
+  },
   'PATCH /me': { method: 'patch', path: () => '/me', body: () => ({ lengthUnit: 'in', theme: 'dark' }), fields: { lengthUnit: 'enum', theme: 'enum' }, optional: ['lengthUnit', 'theme'] },
   'POST /tube-sets/:id/standby': { method: 'post', path: () => `/tube-sets/${id.tubeSet}/standby`, body: () => ({ version: 1 }), fields: { version: 'int' } },
   'POST /tube-sets/:id/rinse': { method: 'post', path: () => `/tube-sets/${id.tubeSet}/rinse`, body: () => ({ note: 'x' }), fields: { note: 'text' }, optional: ['note'] },
@@ -129,19 +215,71 @@ function setPath(body: Record<string, unknown>, field: string, value: unknown): 
 function corpus(kind: Kind): Array<[string, unknown]> {
   const long = 'x'.repeat(5000);
   const byKind: Record<Kind, Array<[string, unknown]>> = {
-    text: [['wrong type', 12345], ['over-long', long], ['an object', { $ne: null }]],
+    text: [
+      ['wrong type', 12345],
+      ['over-long', long],
+      ['an object', { $ne: null }],
+    ],
     // A new record's own code: any form the pattern allows is fine, so no "unknown code" case.
-    ident: [['wrong type', 12345], ['over-long', long], ['non-Latin', 'ＫＥＹ－１'], ['punctuation', 'K1;DROP']],
-    code: [['wrong type', 12345], ['over-long', long], ['unknown code', 'NO-SUCH-CODE-9'], ['non-Latin', 'ＮＰＳ－２']],
-    number: [['wrong type', 'abc'], ['negative', -1], ['absurd', 1e12], ['non-Latin digits', '８５１'], ['not finite', 'Infinity']],
-    int: [['wrong type', 'abc'], ['negative', -1], ['absurd', 1e12], ['a fraction', 1.5]],
-    bool: [['wrong type', 'yes'], ['a number', 1]],
-    id: [['wrong type', 12345], ['not an id', 'abc'], ['non-Latin', '識別子'], ['unknown id', '00000000-0000-4000-8000-000000000000'], ['over-long', long]],
-    enum: [['wrong type', 12345], ['unknown value', 'sideways'], ['over-long', long]],
-    date: [['wrong type', 12345], ['not a date', 'next week'], ['over-long', long]],
-    email: [['wrong type', 12345], ['not an e-mail', 'nobody'], ['over-long', `${long}@x.example`]],
-    array: [['wrong type', 'x'], ['empty', []]],
-    unit: [['unknown unit', 'furlong'], ['wrong type', 3]],
+    ident: [
+      ['wrong type', 12345],
+      ['over-long', long],
+      ['non-Latin', 'ＫＥＹ－１'],
+      ['punctuation', 'K1;DROP'],
+    ],
+    code: [
+      ['wrong type', 12345],
+      ['over-long', long],
+      ['unknown code', 'NO-SUCH-CODE-9'],
+      ['non-Latin', 'ＮＰＳ－２'],
+    ],
+    number: [
+      ['wrong type', 'abc'],
+      ['negative', -1],
+      ['absurd', 1e12],
+      ['non-Latin digits', '８５１'],
+      ['not finite', 'Infinity'],
+    ],
+    int: [
+      ['wrong type', 'abc'],
+      ['negative', -1],
+      ['absurd', 1e12],
+      ['a fraction', 1.5],
+    ],
+    bool: [
+      ['wrong type', 'yes'],
+      ['a number', 1],
+    ],
+    id: [
+      ['wrong type', 12345],
+      ['not an id', 'abc'],
+      ['non-Latin', '識別子'],
+      ['unknown id', '00000000-0000-4000-8000-000000000000'],
+      ['over-long', long],
+    ],
+    enum: [
+      ['wrong type', 12345],
+      ['unknown value', 'sideways'],
+      ['over-long', long],
+    ],
+    date: [
+      ['wrong type', 12345],
+      ['not a date', 'next week'],
+      ['over-long', long],
+    ],
+    email: [
+      ['wrong type', 12345],
+      ['not an e-mail', 'nobody'],
+      ['over-long', `${long}@x.example`],
+    ],
+    array: [
+      ['wrong type', 'x'],
+      ['empty', []],
+    ],
+    unit: [
+      ['unknown unit', 'furlong'],
+      ['wrong type', 3],
+    ],
   };
   return byKind[kind];
 }
@@ -163,7 +301,11 @@ describe('the bad-input corpus', () => {
     const problems: string[] = [];
     let cases = 0;
     for (const [name, target] of Object.entries(TARGETS)) {
-      const send = (body: unknown) => request(app)[target.method](`/api${target.path()}`).set(bearer(admin)).send(body as object);
+      const send = (body: unknown) =>
+        request(app)
+          [target.method](`/api${target.path()}`)
+          .set(bearer(admin))
+          .send(body as object);
       for (const [field, kind] of Object.entries(target.fields)) {
         const mutations: Array<[string, unknown]> = [...(target.optional?.includes(field) ? [] : ([['missing', undefined]] as Array<[string, unknown]>)), ...corpus(kind)];
         for (const [label, value] of mutations) {
@@ -173,7 +315,8 @@ describe('the bad-input corpus', () => {
           const res = await send(body);
           if (res.status >= 500) problems.push(`${name} ${field} ${label}: ${res.status}`);
           else if (res.status < 400) problems.push(`${name} ${field} ${label}: accepted with ${res.status}`);
-          else if (!namesField(res.body?.error?.details, field)) problems.push(`${name} ${field} ${label}: ${res.status} without naming the field (${JSON.stringify(res.body?.error?.details)?.slice(0, 160)})`);
+          else if (!namesField(res.body?.error?.details, field))
+            problems.push(`${name} ${field} ${label}: ${res.status} without naming the field (${JSON.stringify(res.body?.error?.details)?.slice(0, 160)})`);
         }
       }
       cases++;

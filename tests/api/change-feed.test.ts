@@ -39,7 +39,11 @@ afterEach(async () => {
 
 /** Asks twice so the answer is kept, and returns it. */
 async function warm(): Promise<Answer> {
-  await until('the shared feed to listen', async () => feed.isListening, (v) => v);
+  await until(
+    'the shared feed to listen',
+    async () => feed.isListening,
+    (v) => v,
+  );
   await ask(app);
   const res = await ask(app);
   expect(res.headers['cache-status']).toBe('bungwise; hit');
@@ -112,7 +116,11 @@ describe('kept fit answers', () => {
     const best = before.candidates[0];
     expect(best.pairingId).not.toBeNull();
     await ds.query(`UPDATE pairings SET status = 'retired' WHERE id = $1`, [best.pairingId]);
-    const after = await until('the change notice', () => ask(app), (r) => r.headers['cache-status'] !== 'bungwise; hit');
+    const after = await until(
+      'the change notice',
+      () => ask(app),
+      (r) => r.headers['cache-status'] !== 'bungwise; hit',
+    );
     expect(after.body).toEqual((await ask(plain)).body);
     expect(after.body.candidates.map((c: { pairingId: string }) => c.pairingId)).not.toContain(best.pairingId);
   });
@@ -127,10 +135,12 @@ describe('kept fit answers', () => {
     expect((await ask(slowApp)).headers['cache-status']).toBe('bungwise; hit');
     // Ends every listening connection, this suite's shared feed too (it reconnects within a second).
     await ds.query(`SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE datname = current_database() AND query LIKE 'LISTEN bungwise_%'`);
-    await until('the listener to drop', async () => slow.isListening, (v) => !v);
-    const [{ id: tubeId, version }] = await ds.query(
-      `SELECT t.id, t.version FROM dip_tubes t JOIN pairings p ON p.dip_tube_id = t.id WHERE p.status = 'approved' ORDER BY t.part_number LIMIT 1`,
+    await until(
+      'the listener to drop',
+      async () => slow.isListening,
+      (v) => !v,
     );
+    const [{ id: tubeId, version }] = await ds.query(`SELECT t.id, t.version FROM dip_tubes t JOIN pairings p ON p.dip_tube_id = t.id WHERE p.status = 'approved' ORDER BY t.part_number LIMIT 1`);
     await ds.query(`UPDATE dip_tubes SET length_mm = 310, version = version + 1 WHERE id = $1 AND version = $2`, [tubeId, version]);
     for (let i = 0; i < 2; i++) {
       const down = await ask(slowApp);
@@ -144,11 +154,19 @@ describe('kept fit answers', () => {
   });
 
   it.each(CHANGE_CHANNELS.bungwise_registry)('drops kept answers on any statement on %s', async (table) => {
-    await until('the shared feed to listen', async () => feed.isListening, (v) => v);
+    await until(
+      'the shared feed to listen',
+      async () => feed.isListening,
+      (v) => v,
+    );
     await warm();
     // A statement-level trigger fires even when no row matches: this checks the trigger, not the data.
     await ds.query(`UPDATE ${table} SET id = id WHERE false`);
-    await until(`the notice from ${table}`, () => ask(app), (r) => r.headers['cache-status'] !== 'bungwise; hit');
+    await until(
+      `the notice from ${table}`,
+      () => ask(app),
+      (r) => r.headers['cache-status'] !== 'bungwise; hit',
+    );
   });
 });
 
@@ -158,12 +176,20 @@ describe('kept users', () => {
     expect((await request(app).get('/api/notifications').set(bearer(token))).status).toBe(200);
     await ds.query(`UPDATE users SET active = false WHERE email = 'buyer@bungwise.example'`);
     try {
-      const refused = await until('the users notice', () => request(app).get('/api/notifications').set(bearer(token)), (r) => r.status !== 200);
+      const refused = await until(
+        'the users notice',
+        () => request(app).get('/api/notifications').set(bearer(token)),
+        (r) => r.status !== 200,
+      );
       expect(refused.status).toBe(401);
     } finally {
       await ds.query(`UPDATE users SET active = true WHERE email = 'buyer@bungwise.example'`);
     }
-    await until('the user to be allowed again', () => request(app).get('/api/notifications').set(bearer(token)), (r) => r.status === 200);
+    await until(
+      'the user to be allowed again',
+      () => request(app).get('/api/notifications').set(bearer(token)),
+      (r) => r.status === 200,
+    );
   });
 
   it('takes a deactivation through this process at once, without waiting for the notice', async () => {

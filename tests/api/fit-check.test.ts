@@ -11,7 +11,9 @@ let clerk: string;
 const ids: Record<string, string> = {};
 
 async function idOf(resource: string, field: string, value: string): Promise<string> {
-  const res = await request(app).get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`).set(bearer(clerk));
+  const res = await request(app)
+    .get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`)
+    .set(bearer(clerk));
   const row = res.body.items.find((r: Record<string, string>) => r[field] === value);
   if (!row) throw new Error(`${resource} ${value} not in the demo data`);
   return row.id;
@@ -108,7 +110,9 @@ describe('POST /api/fit-checks', () => {
   it('checks a drum described by hand (caliper and gauge) like a registered one', async () => {
     const registered = await check({ drumTypeId: ids.fittingDrum });
     const drum = registered.body.drum;
-    const adHoc = await check({ drum: { insideDepthMm: drum.insideDepthMm, openings: drum.openings.map((o: { threadCode: string; keyCode: string | null }) => ({ threadCode: o.threadCode, keyCode: o.keyCode })) } });
+    const adHoc = await check({
+      drum: { insideDepthMm: drum.insideDepthMm, openings: drum.openings.map((o: { threadCode: string; keyCode: string | null }) => ({ threadCode: o.threadCode, keyCode: o.keyCode })) },
+    });
     expect(adHoc.status).toBe(200);
     expect(adHoc.body.verdict).toBe(registered.body.verdict);
     expect(adHoc.body.candidates.map((c: Candidate) => c.dipTubePartNumber + c.connectorPartNumber).sort()).toEqual(

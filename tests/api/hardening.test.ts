@@ -85,7 +85,10 @@ describe('bad input answers a 4xx naming the field, never a 500', () => {
     expectRefused(await get('/api/tools/packaging-codes/1A1%00'), 'path');
     const hold = await request(app).post(`/api/receiving-checks/${id.check}/hold`).set(bearer(t.clerk)).send({ reason: 'does not\u0000 fit' });
     expectRefused(hold, 'reason');
-    const nested = await request(app).post('/api/fit-checks').set(bearer(t.clerk)).send({ drum: { insideDepthMm: 800, openings: [{ threadCode: 'NPS-2\u0001' }] } });
+    const nested = await request(app)
+      .post('/api/fit-checks')
+      .set(bearer(t.clerk))
+      .send({ drum: { insideDepthMm: 800, openings: [{ threadCode: 'NPS-2\u0001' }] } });
     expectRefused(nested, 'drum.openings.0.threadCode');
     const key = await request(app).patch('/api/me').set(bearer(t.clerk)).set('Content-Type', 'application/json').send('{"lengthUnit\\u0000":"mm"}');
     expectRefused(key, 'lengthUnit\u0000');
@@ -139,12 +142,19 @@ describe('bad input answers a 4xx naming the field, never a 500', () => {
 
   it('answers encodings it does not read with 415, and a damaged body or upload with 400', async () => {
     // The identity serializer: superagent would otherwise JSON.stringify a Buffer sent as JSON.
-    const post = () => request(app).post('/api/fit-checks').set(bearer(t.clerk)).serialize((bytes: unknown) => bytes as string);
+    const post = () =>
+      request(app)
+        .post('/api/fit-checks')
+        .set(bearer(t.clerk))
+        .serialize((bytes: unknown) => bytes as string);
     expectRefused(await post().set('Content-Type', 'application/json').set('Content-Encoding', 'compress').send('{}'), 'Content-Encoding', 415);
     expectRefused(await post().set('Content-Type', 'application/json').set('Content-Encoding', 'gzip').send(Buffer.from('not gzip')), 'body');
     expectRefused(await post().set('Content-Type', 'application/json; charset=koi8-r').send('{}'), 'Content-Type', 415);
     expectRefused(await post().set('Content-Type', 'text/plain').send('drumTypeId'), 'Content-Type', 415);
-    const fine = await post().set('Content-Type', 'application/json').set('Content-Encoding', 'gzip').send(gzipSync(JSON.stringify({ drumTypeId: id.drumType })));
+    const fine = await post()
+      .set('Content-Type', 'application/json')
+      .set('Content-Encoding', 'gzip')
+      .send(gzipSync(JSON.stringify({ drumTypeId: id.drumType })));
     expect(fine.status).toBe(200);
     const upload = () => request(app).post('/api/imports').set(bearer(t.engineer));
     expectRefused(await upload().set('Content-Type', 'multipart/form-data').send(Buffer.from('kind=dip-tubes')), 'file');
@@ -187,7 +197,10 @@ describe('PATCH /api/me', () => {
     const before = (await get('/api/me', t.buyer)).body.user.mailOff;
     expectRefused(await request(app).patch('/api/me').set(bearer(t.buyer)).send({ mailOff: 'lot-held' }), 'mailOff');
     expect((await get('/api/me', t.buyer)).body.user.mailOff).toEqual(before);
-    const ok = await request(app).patch('/api/me').set(bearer(t.buyer)).send({ mailOff: ['lot-held'] });
+    const ok = await request(app)
+      .patch('/api/me')
+      .set(bearer(t.buyer))
+      .send({ mailOff: ['lot-held'] });
     expect(ok.body.user.mailOff).toEqual(['lot-held']);
   });
 });

@@ -16,7 +16,12 @@ let clerk: string;
 let supplierName: string;
 
 const upload = (a: Express, token: string, kind: string, dryRun: boolean, content: Buffer | string, name = 'spec.csv') =>
-  request(a).post('/api/imports').set(bearer(token)).field('kind', kind).field('dryRun', String(dryRun)).attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content, 'utf8'), name);
+  request(a)
+    .post('/api/imports')
+    .set(bearer(token))
+    .field('kind', kind)
+    .field('dryRun', String(dryRun))
+    .attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content, 'utf8'), name);
 
 const tubeCount = async () => Number((await ds.query(`SELECT count(*) AS n FROM dip_tubes`))[0].n);
 const importCount = async () => Number((await ds.query(`SELECT count(*) AS n FROM imports`))[0].n);
@@ -182,10 +187,17 @@ describe('CSV import of dip tubes', () => {
 describe('CSV export', () => {
   it('exports a registry table with formula-like cells neutralised', async () => {
     const suppliers = await request(app).get('/api/suppliers?region=NA').set(bearer(clerk));
-    const created = await request(app)
-      .post('/api/dip-tubes')
-      .set(bearer(engineer))
-      .send({ partNumber: '=HYPERLINK("http://x")', supplierId: suppliers.body.items[0].id, threadCode: 'NPS-2', lengthMm: 836, boreMm: 19, odMm: 25.4, material: '@SUM(A1)', keyCode: null, channels: 'feed' });
+    const created = await request(app).post('/api/dip-tubes').set(bearer(engineer)).send({
+      partNumber: '=HYPERLINK("http://x")',
+      supplierId: suppliers.body.items[0].id,
+      threadCode: 'NPS-2',
+      lengthMm: 836,
+      boreMm: 19,
+      odMm: 25.4,
+      material: '@SUM(A1)',
+      keyCode: null,
+      channels: 'feed',
+    });
     expect(created.status).toBe(201);
     const csv = await request(app).get('/api/exports/dip-tubes.csv?q=HYPERLINK').set(bearer(clerk));
     expect(csv.status).toBe(200);
@@ -201,7 +213,12 @@ describe('spec sheets in each encoding', () => {
     const res = await request(app).post('/api/suppliers').set(bearer(engineer)).send({ name, region });
     expect(res.status).toBe(201);
   };
-  const tube = async (partNumber: string) => (await request(app).get(`/api/dip-tubes?q=${encodeURIComponent(partNumber)}`).set(bearer(clerk))).body.items[0];
+  const tube = async (partNumber: string) =>
+    (
+      await request(app)
+        .get(`/api/dip-tubes?q=${encodeURIComponent(partNumber)}`)
+        .set(bearer(clerk))
+    ).body.items[0];
   const sheet = (rows: string[]) => [TUBE_HEADER, ...rows].join('\r\n') + '\r\n';
 
   it('commits a Windows-1252 sheet as written (DT-Müller, once read as Shift_JIS) and records the encoding read', async () => {

@@ -16,7 +16,9 @@ const t: Record<string, string> = {};
 const ids: Record<string, string> = {};
 
 async function idOf(resource: string, field: string, value: string): Promise<string> {
-  const res = await request(app).get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`).set(bearer(t.clerk));
+  const res = await request(app)
+    .get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`)
+    .set(bearer(t.clerk));
   return res.body.items.find((r: Record<string, string>) => r[field] === value).id;
 }
 
@@ -40,7 +42,10 @@ afterAll(async () => {
 });
 
 const check = (body: Record<string, unknown>, token = t.clerk) =>
-  request(app).post('/api/receiving-checks').set(bearer(token)).send({ drumCount: 2, drumTypeId: ids.fittingDrum, stationId: ids.fittingStation, slurryId: ids.oxide, temperatureIndicator: 'intact', ...body });
+  request(app)
+    .post('/api/receiving-checks')
+    .set(bearer(token))
+    .send({ drumCount: 2, drumTypeId: ids.fittingDrum, stationId: ids.fittingStation, slurryId: ids.oxide, temperatureIndicator: 'intact', ...body });
 const notices = async (token: string) => (await request(app).get('/api/notifications').set(bearer(token))).body;
 const ruleOf = (body: { lotVerdict: { acceptance: { rules: Array<{ rule: string }> } } }, rule: string) => body.lotVerdict.acceptance.rules.find((r) => r.rule === rule);
 
@@ -48,7 +53,15 @@ describe('lot acceptance at the dock', () => {
   it('a good lot that fits is recorded as checked, with its dates and the sentence naming what to use', async () => {
     const res = await check({ lotNumber: 'OX-GOOD-1', expiryDate: '2027-09-30', productionDate: '2026-10-01' });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ status: 'checked', decision: 'accept', verdict: 'fits', productionDate: '2026-10-01', expiryDate: '2027-09-30', temperatureIndicator: 'intact', heldByRules: false });
+    expect(res.body).toMatchObject({
+      status: 'checked',
+      decision: 'accept',
+      verdict: 'fits',
+      productionDate: '2026-10-01',
+      expiryDate: '2027-09-30',
+      temperatureIndicator: 'intact',
+      heldByRules: false,
+    });
     expect(res.body.lotVerdict.sentence).toBe(`Use dip tube ${demo.fittingTube} with head ${demo.fittingHead} at ${demo.fittingStation}.`);
     expect(ruleOf(res.body, 'shelf-life')).toMatchObject({ outcome: 'pass', numbers: { remainingDays: 314, minRemainingDays: 90 } });
   });
@@ -127,14 +140,27 @@ describe('lot acceptance at the dock', () => {
   it('attaching the certificate does not lift a hold that another rule makes', async () => {
     const res = await check({ lotNumber: 'W-CERT-2', drumTypeId: ids.twinDrum, stationId: ids.twoOpeningStation, slurryId: ids.tungsten, expiryDate: '2026-11-10' });
     expect(res.body.lotVerdict.blockers.map((b: { source: string }) => b.source)).toEqual(['shelf-life', 'certificate']);
-    await request(app).post('/api/attachments').set(bearer(t.clerk)).field('ownerKind', 'receiving-check').field('ownerId', res.body.id).field('purpose', 'certificate').attach('file', PDF, 'coa.pdf').expect(201);
+    await request(app)
+      .post('/api/attachments')
+      .set(bearer(t.clerk))
+      .field('ownerKind', 'receiving-check')
+      .field('ownerId', res.body.id)
+      .field('purpose', 'certificate')
+      .attach('file', PDF, 'coa.pdf')
+      .expect(201);
     const after = await request(app).get(`/api/receiving-checks/${res.body.id}`).set(bearer(t.clerk));
     expect(after.body).toMatchObject({ status: 'on-hold', decision: 'hold' });
     expect(after.body.lotVerdict.blockers.map((b: { source: string }) => b.source)).toEqual(['shelf-life']);
   });
 
   it('a certificate is for a receiving check only', async () => {
-    const res = await request(app).post('/api/attachments').set(bearer(t.engineer)).field('ownerKind', 'drum-type').field('ownerId', ids.fittingDrum).field('purpose', 'certificate').attach('file', PDF, 'coa.pdf');
+    const res = await request(app)
+      .post('/api/attachments')
+      .set(bearer(t.engineer))
+      .field('ownerKind', 'drum-type')
+      .field('ownerId', ids.fittingDrum)
+      .field('purpose', 'certificate')
+      .attach('file', PDF, 'coa.pdf');
     expect(res.status).toBe(400);
     expect(res.body.error.details[0].field).toBe('purpose');
   });
@@ -167,9 +193,15 @@ describe('lot acceptance at the dock', () => {
     const late = makeTestApp(ds, { clock: () => new Date('2026-11-20T23:30:00Z') });
     const settings = await request(late).get('/api/settings').set(bearer(t.engineer));
     await request(late).patch('/api/settings').set(bearer(t.engineer)).send({ version: settings.body.version, timeZone: 'Asia/Tokyo' }).expect(200);
-    const bad = await request(late).patch('/api/settings').set(bearer(t.engineer)).send({ version: settings.body.version + 1, timeZone: 'Mars/Olympus' });
+    const bad = await request(late)
+      .patch('/api/settings')
+      .set(bearer(t.engineer))
+      .send({ version: settings.body.version + 1, timeZone: 'Mars/Olympus' });
     expect(bad.body.error.details[0].field).toBe('timeZone');
-    const res = await request(late).post('/api/receiving-checks').set(bearer(t.clerk)).send({ lotNumber: 'TZ-1', drumCount: 1, drumTypeId: ids.fittingDrum, expiryDate: '2026-11-20', temperatureIndicator: 'intact' });
+    const res = await request(late)
+      .post('/api/receiving-checks')
+      .set(bearer(t.clerk))
+      .send({ lotNumber: 'TZ-1', drumCount: 1, drumTypeId: ids.fittingDrum, expiryDate: '2026-11-20', temperatureIndicator: 'intact' });
     expect(res.body).toMatchObject({ status: 'on-hold', decision: 'hold' });
     expect(res.body.lotVerdict.today).toBe('2026-11-21');
   });

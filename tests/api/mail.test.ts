@@ -37,9 +37,7 @@ describe('e-mail through the outbox', () => {
   it('a held lot mails the engineers and the buyers, in text and HTML with a link back, through the relay', async () => {
     const id = await holdForeignLot('ML-001');
     const queued = await ds.getRepository(OutboxMessage).find({ where: { status: 'pending' } });
-    expect(queued.map((q) => q.toEmail).sort()).toEqual(
-      expect.arrayContaining(['buyer@bungwise.example', 'engineer2@bungwise.example', 'engineer@bungwise.example']),
-    );
+    expect(queued.map((q) => q.toEmail).sort()).toEqual(expect.arrayContaining(['buyer@bungwise.example', 'engineer2@bungwise.example', 'engineer@bungwise.example']));
     const sender = new MailSender(ds, nodemailer.createTransport(smtpUrl()));
     expect(await sender.flush()).toBe(queued.length);
     const mail = await inbox();
@@ -74,9 +72,15 @@ describe('e-mail through the outbox', () => {
 
   it('a pairing awaiting review mails the other engineers; its approval mails the author; each kind can be turned off', async () => {
     await clearInbox();
-    const off = await request(app).patch('/api/me').set(bearer(t.engineer2)).send({ mailOff: ['pairing-review'] });
+    const off = await request(app)
+      .patch('/api/me')
+      .set(bearer(t.engineer2))
+      .send({ mailOff: ['pairing-review'] });
     expect(off.body.user.mailOff).toEqual(['pairing-review']);
-    const bad = await request(app).patch('/api/me').set(bearer(t.engineer2)).send({ mailOff: ['everything'] });
+    const bad = await request(app)
+      .patch('/api/me')
+      .set(bearer(t.engineer2))
+      .send({ mailOff: ['everything'] });
     expect(bad.body.error.details[0].field).toBe('mailOff');
     const tubes = await request(app).get('/api/dip-tubes?pageSize=100').set(bearer(t.engineer));
     const heads = await request(app).get('/api/connectors?pageSize=100').set(bearer(t.engineer));

@@ -31,11 +31,21 @@ afterAll(async () => {
 });
 
 /** What a verdict is made of, for comparing the phone's with the server's. */
-const shapeOfFit = (r: { verdict: string; summary: string; candidateCount: number; candidates: Array<{ dipTubePartNumber: string; connectorPartNumber: string; verdict: string; installedAtStation: boolean; rules: Array<{ rule: string; outcome: string; message: string }> }> }) => ({
+const shapeOfFit = (r: {
+  verdict: string;
+  summary: string;
+  candidateCount: number;
+  candidates: Array<{ dipTubePartNumber: string; connectorPartNumber: string; verdict: string; installedAtStation: boolean; rules: Array<{ rule: string; outcome: string; message: string }> }>;
+}) => ({
   verdict: r.verdict,
   summary: r.summary,
   candidateCount: r.candidateCount,
-  candidates: r.candidates.map((c) => ({ pair: `${c.dipTubePartNumber}+${c.connectorPartNumber}`, verdict: c.verdict, installed: c.installedAtStation, rules: c.rules.map((x) => `${x.rule}:${x.outcome}:${x.message}`) })),
+  candidates: r.candidates.map((c) => ({
+    pair: `${c.dipTubePartNumber}+${c.connectorPartNumber}`,
+    verdict: c.verdict,
+    installed: c.installedAtStation,
+    rules: c.rules.map((x) => `${x.rule}:${x.outcome}:${x.message}`),
+  })),
 });
 
 describe('the dock snapshot', () => {
@@ -52,7 +62,11 @@ describe('the dock snapshot', () => {
   it('gets a new revision when the registry changes', async () => {
     const station = snap.stations[0];
     const row = (await request(app).get(`/api/stations/${station.id}`).set(bearer(t.engineer))).body;
-    await request(app).patch(`/api/stations/${station.id}`).set(bearer(t.engineer)).send({ version: row.version, flowLpm: row.flowLpm + 1 }).expect(200);
+    await request(app)
+      .patch(`/api/stations/${station.id}`)
+      .set(bearer(t.engineer))
+      .send({ version: row.version, flowLpm: row.flowLpm + 1 })
+      .expect(200);
     const after = (await request(app).get('/api/dock-snapshot').set(bearer(t.clerk)).expect(200)).body as DockSnapshot;
     expect(after.revision).not.toBe(snap.revision);
     const again = (await request(app).get(`/api/stations/${station.id}`).set(bearer(t.engineer))).body;
@@ -74,7 +88,12 @@ describe('the phone and the server find the same verdicts', () => {
           const q: DockQuestion = { drumTypeId: drum.id, ...(station ? { stationId: station.id } : {}), ...(slurry ? { slurryId: slurry.id } : {}) };
           const server = await request(app).post('/api/fit-checks').set(bearer(t.clerk)).send(q).expect(200);
           const phone = provisionalCheck(snap, q, NOW);
-          expect({ drum: drum.partNumber, station: station?.name, slurry: slurry?.name, ...shapeOfFit(phone.result) }).toEqual({ drum: drum.partNumber, station: station?.name, slurry: slurry?.name, ...shapeOfFit(server.body) });
+          expect({ drum: drum.partNumber, station: station?.name, slurry: slurry?.name, ...shapeOfFit(phone.result) }).toEqual({
+            drum: drum.partNumber,
+            station: station?.name,
+            slurry: slurry?.name,
+            ...shapeOfFit(server.body),
+          });
           compared++;
         }
       }
@@ -98,7 +117,11 @@ describe('the phone and the server find the same verdicts', () => {
         n++;
         const q: DockQuestion = { drumTypeId: drum.id, slurryId: slurry.id, ...(station ? { stationId: station.id } : {}), ...lot };
         const phone = provisionalCheck(snap, q, NOW);
-        const server = await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ lotNumber: `CMP-${n}`, drumCount: 1, ...q }).expect(201);
+        const server = await request(app)
+          .post('/api/receiving-checks')
+          .set(bearer(t.clerk))
+          .send({ lotNumber: `CMP-${n}`, drumCount: 1, ...q })
+          .expect(201);
         expect({ case: n, decision: phone.lotVerdict.decision, sentence: phone.lotVerdict.sentence, blockers: phone.lotVerdict.blockers.map((b) => b.source) }).toEqual({
           case: n,
           decision: server.body.lotVerdict.decision,
@@ -121,7 +144,14 @@ describe('the phone and the server find the same verdicts', () => {
 });
 
 describe('checks sent later, by key', () => {
-  const body = (clientKey: string, extra: Record<string, unknown> = {}) => ({ clientKey, lotNumber: `KEY-${clientKey.slice(0, 8)}`, drumCount: 1, drumTypeId: snap.drumTypes[0].id, temperatureIndicator: 'intact', ...extra });
+  const body = (clientKey: string, extra: Record<string, unknown> = {}) => ({
+    clientKey,
+    lotNumber: `KEY-${clientKey.slice(0, 8)}`,
+    drumCount: 1,
+    drumTypeId: snap.drumTypes[0].id,
+    temperatureIndicator: 'intact',
+    ...extra,
+  });
   const count = async (key: string) => Number((await ds.query(`SELECT count(*) AS n FROM receiving_checks WHERE client_key = $1`, [key]))[0].n);
 
   it('records a key once: the replay answers the same check with 200', async () => {
@@ -153,16 +183,28 @@ describe('checks sent later, by key', () => {
     const q = body(randomUUID());
     const honest = provisionalCheck(snap, q as DockQuestion, NOW);
     const same = { decision: honest.lotVerdict.decision, verdict: honest.result.verdict, sentence: honest.lotVerdict.sentence, revision: snap.revision, madeAt: NOW.toISOString() };
-    const recorded = await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ ...q, provisional: same }).expect(201);
+    const recorded = await request(app)
+      .post('/api/receiving-checks')
+      .set(bearer(t.clerk))
+      .send({ ...q, provisional: same })
+      .expect(201);
     expect(recorded.body.provisional).toMatchObject({ decision: same.decision });
     expect([await unread(t.clerk), await unread(t.engineer)]).toEqual([clerkBefore, engineerBefore]);
     const other = same.decision === 'quarantine' ? 'accept' : 'quarantine';
-    await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ ...body(randomUUID()), provisional: { ...same, decision: other } }).expect(201);
+    await request(app)
+      .post('/api/receiving-checks')
+      .set(bearer(t.clerk))
+      .send({ ...body(randomUUID()), provisional: { ...same, decision: other } })
+      .expect(201);
     expect([await unread(t.clerk), await unread(t.engineer)]).toEqual([clerkBefore + 1, engineerBefore + 1]);
   });
 
   it('refuses a malformed provisional verdict, naming the field', async () => {
-    const res = await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ ...body(randomUUID()), provisional: { decision: 'maybe', verdict: 'fits', sentence: 'x', revision: 'r', madeAt: NOW.toISOString() } }).expect(400);
+    const res = await request(app)
+      .post('/api/receiving-checks')
+      .set(bearer(t.clerk))
+      .send({ ...body(randomUUID()), provisional: { decision: 'maybe', verdict: 'fits', sentence: 'x', revision: 'r', madeAt: NOW.toISOString() } })
+      .expect(400);
     expect(JSON.stringify(res.body.error.details)).toContain('provisional');
   });
 });

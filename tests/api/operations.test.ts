@@ -11,7 +11,9 @@ const t: Record<string, string> = {};
 const ids: Record<string, string> = {};
 
 async function idOf(resource: string, field: string, value: string): Promise<string> {
-  const res = await request(app).get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`).set(bearer(t.clerk));
+  const res = await request(app)
+    .get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`)
+    .set(bearer(t.clerk));
   const row = res.body.items.find((r: Record<string, string>) => r[field] === value);
   if (!row) throw new Error(`${resource} ${value} not in the demo data`);
   return row.id;
@@ -57,7 +59,12 @@ describe('dock checks', () => {
     const buyer = await notices(t.buyer);
     // The buyer hears of the hold and of the hardware it needs.
     expect(buyer.unread).toBe(before + 2);
-    expect(buyer.items.slice(0, 2).map((n: { kind: string }) => n.kind).sort()).toEqual(['hardware-gap', 'lot-held']);
+    expect(
+      buyer.items
+        .slice(0, 2)
+        .map((n: { kind: string }) => n.kind)
+        .sort(),
+    ).toEqual(['hardware-gap', 'lot-held']);
     expect(buyer.items.find((n: { kind: string }) => n.kind === 'lot-held')).toMatchObject({ link: `/receive/${check.body.id}` });
     expect((await notices(t.engineer)).items[0].kind).toBe('lot-held');
     // The clerk who recorded it is not notified of their own check.
@@ -146,11 +153,20 @@ describe('sourcing plans and warnings', () => {
 
   it('a plan for the drum the site is built for fits; a warning opens only when something must be ordered', async () => {
     const suppliers = await request(app).get('/api/suppliers?region=NA').set(bearer(t.buyer));
-    const fitting = await request(app).get(`/api/stations?q=${encodeURIComponent(demo.fittingStation)}`).set(bearer(t.buyer));
+    const fitting = await request(app)
+      .get(`/api/stations?q=${encodeURIComponent(demo.fittingStation)}`)
+      .set(bearer(t.buyer));
     const res = await request(app)
       .post('/api/sourcing-plans')
       .set(bearer(t.buyer))
-      .send({ slurryName: 'Second source oxide', supplierId: suppliers.body.items[0].id, drumTypeId: ids.fittingDrum, startDate: '2027-03-01', drumsPerMonth: 6, stationIds: [fitting.body.items[0].id] });
+      .send({
+        slurryName: 'Second source oxide',
+        supplierId: suppliers.body.items[0].id,
+        drumTypeId: ids.fittingDrum,
+        startDate: '2027-03-01',
+        drumsPerMonth: 6,
+        stationIds: [fitting.body.items[0].id],
+      });
     expect(res.status).toBe(201);
     expect(res.body.impact.stations[0].verdict).toBe('fits');
     expect(res.body.impact.order.every((o: { kind: string }) => o.kind === 'dip-tube' || o.kind === 'connector')).toBe(true);
@@ -167,13 +183,20 @@ describe('sourcing plans and warnings', () => {
     expect(resolved.body.status).toBe('resolved');
     expect((await request(app).post(`/api/warnings/${id}/resolve`).set(bearer(t.buyer))).status).toBe(409);
     expect((await request(app).post('/api/sourcing-plans').set(bearer(t.clerk)).send({})).status).toBe(403);
-    const bad = await request(app).post('/api/sourcing-plans').set(bearer(t.buyer)).send({ slurryName: 'x', supplierId: ids.krSupplier, drumTypeId: ids.foreignDrum, startDate: 'next week', drumsPerMonth: 2 });
+    const bad = await request(app)
+      .post('/api/sourcing-plans')
+      .set(bearer(t.buyer))
+      .send({ slurryName: 'x', supplierId: ids.krSupplier, drumTypeId: ids.foreignDrum, startDate: 'next week', drumsPerMonth: 2 });
     expect(bad.body.error.details[0].field).toBe('startDate');
   });
 });
 
 describe('station rotation', () => {
-  type Board = { tubeSets: Array<{ id: string; label: string; state: string; version: number; rinse: { outcome: string } }>; changeOuts: Array<{ tubeSetLabel: string; lotNumber: string; connectorPartNumber: string }>; rinses: Array<{ tubeSetLabel: string; byName: string }> };
+  type Board = {
+    tubeSets: Array<{ id: string; label: string; state: string; version: number; rinse: { outcome: string } }>;
+    changeOuts: Array<{ tubeSetLabel: string; lotNumber: string; connectorPartNumber: string }>;
+    rinses: Array<{ tubeSetLabel: string; byName: string }>;
+  };
   const board = async (): Promise<Board> => (await request(app).get(`/api/stations/${ids.fittingStation}/board`).set(bearer(t.clerk))).body;
   const set = (b: Board, state: string) => b.tubeSets.find((s) => s.state === state)!;
 

@@ -52,7 +52,9 @@ describe('asking for a reset link', () => {
     expect(res.body).toEqual({ message: FORGOT_ANSWER });
     const token = await linkTokenFor('clerk@bungwise.example');
     expect(token).toMatch(/^[A-Za-z0-9_-]{43}$/);
-    const rows = await ds.query(`SELECT r.token_hash, r.used_at, extract(epoch FROM r.expires_at - r.created_at) AS seconds FROM password_resets r JOIN users u ON u.id = r.user_id WHERE u.email = 'clerk@bungwise.example'`);
+    const rows = await ds.query(
+      `SELECT r.token_hash, r.used_at, extract(epoch FROM r.expires_at - r.created_at) AS seconds FROM password_resets r JOIN users u ON u.id = r.user_id WHERE u.email = 'clerk@bungwise.example'`,
+    );
     expect(rows).toHaveLength(1);
     expect(rows[0].token_hash).toBe(createHash('sha256').update(token).digest('hex'));
     expect(rows[0].used_at).toBeNull();
@@ -140,7 +142,10 @@ describe('following the link', () => {
     expect((await signIn('buyer@bungwise.example', 'lantern-quarry-basin')).status).toBe(200);
     const [{ n }] = await ds.query(`SELECT count(*)::int AS n FROM audit_log WHERE action = 'password-reset' AND summary LIKE '%e-mailed link%'`);
     expect(n).toBe(1);
-    const [{ leaks }] = await ds.query(`SELECT count(*)::int AS leaks FROM audit_log WHERE concat_ws(' ', summary, after::text) LIKE '%lantern-quarry-basin%' OR concat_ws(' ', summary, after::text) LIKE '%' || $1 || '%'`, [token]);
+    const [{ leaks }] = await ds.query(
+      `SELECT count(*)::int AS leaks FROM audit_log WHERE concat_ws(' ', summary, after::text) LIKE '%lantern-quarry-basin%' OR concat_ws(' ', summary, after::text) LIKE '%' || $1 || '%'`,
+      [token],
+    );
     expect(leaks).toBe(0);
   });
 
@@ -193,7 +198,10 @@ describe('following the link', () => {
 
   it('is sent even to someone who turned every notice mail off', async () => {
     const clerk = await tokenFor(app, 'clerk@bungwise.example', 'gravel-orbit-canal');
-    await request(app).patch('/api/me').set(bearer(clerk)).send({ mailOff: ['lot-held', 'hardware-gap', 'pairing-review', 'pairing-decision'] });
+    await request(app)
+      .patch('/api/me')
+      .set(bearer(clerk))
+      .send({ mailOff: ['lot-held', 'hardware-gap', 'pairing-review', 'pairing-decision'] });
     const before = await resetMails('clerk@bungwise.example');
     await forgot('clerk@bungwise.example');
     expect(await resetMails('clerk@bungwise.example')).toBe(before + 1);
@@ -237,7 +245,9 @@ describe('with signed-in users kept in memory (the change feed)', () => {
       await meOn(kept, token);
       expect((await meOn(kept, token)).status).toBe(200);
       await request(kept).post('/api/auth/forgot-password').send({ email: 'engineer2@bungwise.example' });
-      const done = await request(kept).post('/api/auth/reset-password').send({ token: await linkTokenFor('engineer2@bungwise.example'), newPassword: 'thistle-canal-forge' });
+      const done = await request(kept)
+        .post('/api/auth/reset-password')
+        .send({ token: await linkTokenFor('engineer2@bungwise.example'), newPassword: 'thistle-canal-forge' });
       expect(done.status).toBe(200);
       expect((await meOn(kept, token)).status).toBe(401);
     } finally {

@@ -30,8 +30,7 @@ afterAll(async () => {
   await ds.destroy();
 });
 
-const changePassword = (token: string, currentPassword: unknown, newPassword: unknown, on = app) =>
-  request(on).post('/api/me/password').set(bearer(token)).send({ currentPassword, newPassword });
+const changePassword = (token: string, currentPassword: unknown, newPassword: unknown, on = app) => request(on).post('/api/me/password').set(bearer(token)).send({ currentPassword, newPassword });
 const me = (token: string) => request(app).get('/api/me').set(bearer(token));
 const fields = (res: request.Response) => (res.body.error?.details ?? []).map((d: { field: string }) => d.field).sort();
 

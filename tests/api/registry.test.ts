@@ -51,9 +51,13 @@ describe('registry lists', () => {
   it('searches with q, case-insensitively, and filters by thread, region and status', async () => {
     const all = await request(app).get('/api/dip-tubes?pageSize=100').set(bearer(clerk));
     const sample = all.body.items[0];
-    const byQ = await request(app).get(`/api/dip-tubes?q=${encodeURIComponent(sample.partNumber.toLowerCase())}`).set(bearer(clerk));
+    const byQ = await request(app)
+      .get(`/api/dip-tubes?q=${encodeURIComponent(sample.partNumber.toLowerCase())}`)
+      .set(bearer(clerk));
     expect(byQ.body.items.map((t: { id: string }) => t.id)).toContain(sample.id);
-    const byThread = await request(app).get(`/api/dip-tubes?thread=${encodeURIComponent(sample.threadCode)}&pageSize=100`).set(bearer(clerk));
+    const byThread = await request(app)
+      .get(`/api/dip-tubes?thread=${encodeURIComponent(sample.threadCode)}&pageSize=100`)
+      .set(bearer(clerk));
     expect(byThread.body.items.length).toBeGreaterThan(0);
     expect(byThread.body.items.every((t: { threadCode: string }) => t.threadCode === sample.threadCode)).toBe(true);
     const eu = await request(app).get('/api/drum-types?region=EU').set(bearer(clerk));
@@ -126,7 +130,10 @@ describe('registry writes', () => {
   });
 
   it('refuses an unknown thread code, suggesting the nearest known codes', async () => {
-    const res = await request(app).post('/api/dip-tubes').set(bearer(engineer)).send({ ...tube(), threadCode: 'NPS-2.5' });
+    const res = await request(app)
+      .post('/api/dip-tubes')
+      .set(bearer(engineer))
+      .send({ ...tube(), threadCode: 'NPS-2.5' });
     expect(res.status).toBe(400);
     expect(res.body.error.details[0].field).toBe('threadCode');
     expect(res.body.error.details[0].messages[0]).toMatch(/nearest: .*NPS-2/);
@@ -150,7 +157,10 @@ describe('registry writes', () => {
     const negative = await request(app).post('/api/drum-types').set(bearer(engineer)).send(drum);
     expect(negative.status).toBe(400);
     expect(negative.body.error.details.map((d: { field: string }) => d.field)).toEqual(['insideDepthMm']);
-    const deeper = await request(app).post('/api/drum-types').set(bearer(engineer)).send({ ...drum, insideDepthMm: 900 });
+    const deeper = await request(app)
+      .post('/api/drum-types')
+      .set(bearer(engineer))
+      .send({ ...drum, insideDepthMm: 900 });
     expect(deeper.status).toBe(400);
     expect(deeper.body.error.details[0].field).toBe('insideDepthMm');
     const badOpening = await request(app)
@@ -159,9 +169,15 @@ describe('registry writes', () => {
       .send({ ...drum, insideDepthMm: 851, openings: [{ label: 'x', threadCode: 'G-9', boreMm: 50, position: 'large' }] });
     expect(badOpening.status).toBe(400);
     expect(badOpening.body.error.details[0].field).toBe('openings.0.threadCode');
-    const region = await request(app).post('/api/drum-types').set(bearer(engineer)).send({ ...drum, insideDepthMm: 851, region: 'Mars' });
+    const region = await request(app)
+      .post('/api/drum-types')
+      .set(bearer(engineer))
+      .send({ ...drum, insideDepthMm: 851, region: 'Mars' });
     expect(region.body.error.details[0].field).toBe('region');
-    const bore = await request(app).post('/api/dip-tubes').set(bearer(engineer)).send({ ...tube(), boreMm: 30 });
+    const bore = await request(app)
+      .post('/api/dip-tubes')
+      .set(bearer(engineer))
+      .send({ ...tube(), boreMm: 30 });
     expect(bore.status).toBe(400);
     expect(bore.body.error.details[0].field).toBe('boreMm');
     // Nothing was written by any of these.
@@ -195,7 +211,13 @@ describe('registry writes', () => {
     const dupLabel = await request(app)
       .patch(`/api/drum-types/${created.body.id}`)
       .set(bearer(engineer))
-      .send({ version: 1, openings: [{ label: 'a', threadCode: 'NPS-2', boreMm: 50, position: 'large' }, { label: 'a', threadCode: 'NPS-2', boreMm: 50, position: 'small' }] });
+      .send({
+        version: 1,
+        openings: [
+          { label: 'a', threadCode: 'NPS-2', boreMm: 50, position: 'large' },
+          { label: 'a', threadCode: 'NPS-2', boreMm: 50, position: 'small' },
+        ],
+      });
     expect(dupLabel.status).toBe(400);
     expect(dupLabel.body.error.details[0].field).toBe('openings.1.label');
     const after = await request(app).get(`/api/drum-types/${created.body.id}`).set(bearer(clerk));
@@ -226,11 +248,17 @@ describe('pairings and their approval', () => {
     for (const t of tubes.body.items) for (const c of heads.body.items) if (!pair && !taken.has(`${t.id}/${c.id}`)) pair = { dipTubeId: t.id, connectorId: c.id };
     expect(pair).not.toBeNull();
 
-    const created = await request(app).post('/api/pairings').set(bearer(engineer)).send({ ...pair, notes: 'Trial on bay 2', status: 'approved' });
+    const created = await request(app)
+      .post('/api/pairings')
+      .set(bearer(engineer))
+      .send({ ...pair, notes: 'Trial on bay 2', status: 'approved' });
     // A client cannot set the status directly.
     expect(created.status).toBe(400);
     expect(created.body.error.details[0].field).toBe('status');
-    const draft = await request(app).post('/api/pairings').set(bearer(engineer)).send({ ...pair, notes: 'Trial on bay 2' });
+    const draft = await request(app)
+      .post('/api/pairings')
+      .set(bearer(engineer))
+      .send({ ...pair, notes: 'Trial on bay 2' });
     expect(draft.status).toBe(201);
     expect(draft.body).toMatchObject({ status: 'draft', authorName: 'Tomasz Ilunga', approverId: null });
 

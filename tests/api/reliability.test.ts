@@ -51,7 +51,11 @@ describe('commits interrupted part-way leave nothing partial', () => {
     ds.subscribers.push(failer);
     const drafts = await request(app).get('/api/pairings?status=draft').set(bearer(t.engineer2));
     const draft = drafts.body.items.find((p: { authorName: string }) => p.authorName !== 'Mirela Sandoval');
-    const before = { notices: await count('SELECT count(*) AS n FROM notifications'), audit: await count('SELECT count(*) AS n FROM audit_log'), outbox: await count('SELECT count(*) AS n FROM outbox') };
+    const before = {
+      notices: await count('SELECT count(*) AS n FROM notifications'),
+      audit: await count('SELECT count(*) AS n FROM audit_log'),
+      outbox: await count('SELECT count(*) AS n FROM outbox'),
+    };
     failer.armed = true;
     const res = await request(app).post(`/api/pairings/${draft.id}/approve`).set(bearer(t.engineer2)).send({ comment: 'ok' });
     expect(res.status).toBe(500);
@@ -66,7 +70,9 @@ describe('commits interrupted part-way leave nothing partial', () => {
   it('a change-out whose record fails leaves every tube set where it was', async () => {
     const failer = new FailNextInsert(ChangeOut);
     ds.subscribers.push(failer);
-    const stations = await request(app).get(`/api/stations?q=${encodeURIComponent(demo.fittingStation)}`).set(bearer(t.clerk));
+    const stations = await request(app)
+      .get(`/api/stations?q=${encodeURIComponent(demo.fittingStation)}`)
+      .set(bearer(t.clerk));
     const id = stations.body.items[0].id;
     const before = (await request(app).get(`/api/stations/${id}/board`).set(bearer(t.clerk))).body.tubeSets.map((s: { id: string; state: string; version: number }) => [s.id, s.state, s.version]);
     failer.armed = true;
@@ -94,7 +100,10 @@ describe('the database going away under the server', () => {
       const down = await request(papp).get('/api/dip-tubes').set(bearer(token));
       expect(down.status).toBe(503);
       expect(down.body.error.code).toBe('unavailable');
-      const write = await request(papp).post('/api/fit-checks').set(bearer(token)).send({ drum: { insideDepthMm: 851, openings: [{ threadCode: 'NPS-2' }] } });
+      const write = await request(papp)
+        .post('/api/fit-checks')
+        .set(bearer(token))
+        .send({ drum: { insideDepthMm: 851, openings: [{ threadCode: 'NPS-2' }] } });
       expect(write.status).toBe(503);
       await proxy.open(port);
       let status = 0;
@@ -133,7 +142,8 @@ describe('npm run db:backup and db:restore', () => {
       expect(tool(['restore', file], scratch.toString()).status).toBe(0);
       const copy = new Client({ connectionString: scratch.toString() });
       await copy.connect();
-      const tubes = async (c: Client | DataSource) => Number(((c instanceof Client ? (await c.query('SELECT count(*) AS n FROM dip_tubes')).rows : await c.query('SELECT count(*) AS n FROM dip_tubes')) as Array<{ n: string }>)[0].n);
+      const tubes = async (c: Client | DataSource) =>
+        Number(((c instanceof Client ? (await c.query('SELECT count(*) AS n FROM dip_tubes')).rows : await c.query('SELECT count(*) AS n FROM dip_tubes')) as Array<{ n: string }>)[0].n);
       expect(await tubes(copy)).toBe(await tubes(ds));
       // Damage the copy, restore again over it: back to the backup.
       await copy.query('DELETE FROM pairing_reviews; DELETE FROM pairings; DELETE FROM tube_sets; DELETE FROM change_outs');

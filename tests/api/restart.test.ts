@@ -92,7 +92,13 @@ describe('npm start keeps data across a stop and a start', () => {
       // Eight failures are allowed per account; the ninth is refused, whichever process answers each one.
       const statuses: number[] = [];
       for (let i = 0; i < 9; i++) {
-        statuses.push((await request(base).post('/api/auth/sign-in').send({ email: 'night.shift@bungwise.example', password: `wrong-password-${i}` })).status);
+        statuses.push(
+          (
+            await request(base)
+              .post('/api/auth/sign-in')
+              .send({ email: 'night.shift@bungwise.example', password: `wrong-password-${i}` })
+          ).status,
+        );
       }
       expect(statuses).toEqual([...Array(8).fill(401), 429]);
     } finally {

@@ -61,7 +61,10 @@ beforeAll(async () => {
   }
   fitting.set(':code', ['1A1', '31HA1', 'UN 1H1/Y1.4/150']);
   fitting.set(':kind', ['dip-tubes', 'connectors', 'drum-types']);
-  fitting.set(':resource', RESOURCES.flatMap((d) => [d.path, `${d.path}.csv`]));
+  fitting.set(
+    ':resource',
+    RESOURCES.flatMap((d) => [d.path, `${d.path}.csv`]),
+  );
   fields = dtoFieldNames();
   prototypeNames = Object.getOwnPropertyNames(Object.prototype).sort();
 });
@@ -93,8 +96,12 @@ function answerProblem(res: request.Response): string | null {
   if (/\n\s+at \S+ \(.*:\d+:\d+\)/.test(text)) return `leaked a stack: ${text.slice(0, 200)}`;
   if (res.status >= 400) {
     const error = res.body?.error;
-    if (!error || typeof error.code !== 'string' || typeof error.message !== 'string' || !error.message || !('details' in error)) return `answered ${res.status} without the error shape: ${text.slice(0, 200)}`;
-    if (Array.isArray(error.details) && !error.details.every((d: { field?: unknown; messages?: unknown }) => typeof d?.field === 'string' && Array.isArray(d.messages) && d.messages.every((m) => typeof m === 'string'))) {
+    if (!error || typeof error.code !== 'string' || typeof error.message !== 'string' || !error.message || !('details' in error))
+      return `answered ${res.status} without the error shape: ${text.slice(0, 200)}`;
+    if (
+      Array.isArray(error.details) &&
+      !error.details.every((d: { field?: unknown; messages?: unknown }) => typeof d?.field === 'string' && Array.isArray(d.messages) && d.messages.every((m) => typeof m === 'string'))
+    ) {
       return `answered ${res.status} with malformed details: ${JSON.stringify(error.details).slice(0, 200)}`;
     }
   }
@@ -148,7 +155,8 @@ const queryPart = (name: string, value: string) => (value === 'twice' ? `${name}
 /** The hand-picked cases of one route: each hostile class at least once. */
 function handPicked(route: Route, token: string): Array<[string, Call]> {
   const cases: Array<[string, Call]> = [];
-  const add = (label: string, c: Omit<Call, 'method' | 'token'>) => cases.push([`${route.key} [${label}]`, { method: route.method, token, ...(writes(route) && c.body === undefined ? json('{}') : {}), ...c }]);
+  const add = (label: string, c: Omit<Call, 'method' | 'token'>) =>
+    cases.push([`${route.key} [${label}]`, { method: route.method, token, ...(writes(route) && c.body === undefined ? json('{}') : {}), ...c }]);
   for (const param of route.params) {
     for (const raw of RAW_ENCODED) add(`${param}=${raw}`, { path: pathOf(route, { [param]: raw }) });
     for (const text of PATH_TEXT) add(`${param}=${JSON.stringify(text).slice(0, 40)}`, { path: pathOf(route, { [param]: pct(text) }) });
@@ -180,28 +188,54 @@ function handPicked(route: Route, token: string): Array<[string, Call]> {
 /** Runs the cases a few at a time: the server is made to answer concurrent requests, and the run is shorter. */
 async function runAll(cases: Array<[string, Call]>, inFlight = 4): Promise<void> {
   let next = 0;
-  await Promise.all(Array.from({ length: inFlight }, async () => {
-    while (next < cases.length) {
-      const [label, c] = cases[next++];
-      await expectSound(label, c);
-    }
-  }));
+  await Promise.all(
+    Array.from({ length: inFlight }, async () => {
+      while (next < cases.length) {
+        const [label, c] = cases[next++];
+        await expectSound(label, c);
+      }
+    }),
+  );
 }
 
 /** fast-check: a random mix of hostile and fitting path values, query parameters and bodies. */
 function generated(route: Route, token: string): fc.IAsyncPropertyWithHooks<[Record<string, string>, Array<[string, string[]]>, unknown, number]> {
   const pathValues = fc.record(
-    Object.fromEntries(route.params.map((p) => [p, fc.oneof({ weight: 3, arbitrary: fc.constantFrom(...fittingFor(route, p)).map(pct) }, fc.constantFrom(...RAW_ENCODED), fc.constantFrom(...HOSTILE_TEXT).map(pct), fc.string({ unit: 'binary', maxLength: 40 }).map(pct))])),
+    Object.fromEntries(
+      route.params.map((p) => [
+        p,
+        fc.oneof(
+          { weight: 3, arbitrary: fc.constantFrom(...fittingFor(route, p)).map(pct) },
+          fc.constantFrom(...RAW_ENCODED),
+          fc.constantFrom(...HOSTILE_TEXT).map(pct),
+          fc.string({ unit: 'binary', maxLength: 40 }).map(pct),
+        ),
+      ]),
+    ),
   ) as fc.Arbitrary<Record<string, string>>;
   const ids = [...fitting.values()].flat();
-  const query = fc.array(fc.tuple(fc.oneof({ weight: 4, arbitrary: fc.constantFrom(...QUERY_NAMES) }, fc.constantFrom(...PROTOTYPE_KEYS), fc.string({ maxLength: 8 }).map(pct)), hostileQueryValue([...ids, 'name', 'asc', 'desc', '1', '2', 'NA', 'NPS-2', 'draft', 'open'])), { maxLength: 3 });
-  const bodyValue = fc.dictionary(fc.oneof({ weight: 5, arbitrary: fc.constantFrom(...fields) }, fc.constantFrom(...PROTOTYPE_KEYS)), hostileJson([...ids, 'NPS-2', 'mm', 'in', 'L/min', 'NA', 'pump', 'one-opening']), { maxKeys: 4 });
+  const query = fc.array(
+    fc.tuple(
+      fc.oneof({ weight: 4, arbitrary: fc.constantFrom(...QUERY_NAMES) }, fc.constantFrom(...PROTOTYPE_KEYS), fc.string({ maxLength: 8 }).map(pct)),
+      hostileQueryValue([...ids, 'name', 'asc', 'desc', '1', '2', 'NA', 'NPS-2', 'draft', 'open']),
+    ),
+    { maxLength: 3 },
+  );
+  const bodyValue = fc.dictionary(
+    fc.oneof({ weight: 5, arbitrary: fc.constantFrom(...fields) }, fc.constantFrom(...PROTOTYPE_KEYS)),
+    hostileJson([...ids, 'NPS-2', 'mm', 'in', 'L/min', 'NA', 'pump', 'one-opening']),
+    { maxKeys: 4 },
+  );
   const body = fc.oneof({ weight: 6, arbitrary: fc.tuple(bodyValue, fc.integer({ min: 1, max: 3 })).map(([b, version]) => ({ version, ...b })) }, hostileJson(ids));
   return fc.asyncProperty(pathValues, query, body, fc.integer({ min: 0, max: HOSTILE_ENCODINGS.length * 4 }), async (values, params, payload, encoding) => {
     const qs = params.flatMap(([name, vs]) => vs.map((v) => `${name}=${v}`)).join('&');
     const path = `${pathOf(route, values)}${qs ? `?${qs}` : ''}`;
     const enc = HOSTILE_ENCODINGS[encoding];
-    const c: Call = writes(route) ? (enc ? { method: route.method, path, token, headers: enc.headers, body: enc.body } : { method: route.method, path, token, ...json(JSON.stringify(payload) ?? 'null') }) : { method: route.method, path, token };
+    const c: Call = writes(route)
+      ? enc
+        ? { method: route.method, path, token, headers: enc.headers, body: enc.body }
+        : { method: route.method, path, token, ...json(JSON.stringify(payload) ?? 'null') }
+      : { method: route.method, path, token };
     const problem = answerProblem(await call(c));
     if (problem) throw new Error(`${c.method} ${c.path.slice(0, 200)} ${typeof c.body === 'string' ? c.body.slice(0, 200) : ''}: ${problem}`);
   });
@@ -257,7 +291,10 @@ describe('no request breaks the server', () => {
     const authorizations = ['Bearer ', 'Bearer a.b.c', `Bearer ${'x'.repeat(10_000)}`, 'Basic YWRtaW46YWRtaW4=', 'bearer  ' + tokens.clerk, `Bearer ${tokens.clerk}.${tokens.clerk}`];
     await runAll(
       ROUTES.flatMap((route): Array<[string, Call]> => [
-        ...authorizations.map((authorization): [string, Call] => [`${route.key} [Authorization ${authorization.slice(0, 20)}]`, { method: route.method, path: pathOf(route), headers: { Authorization: authorization } }]),
+        ...authorizations.map((authorization): [string, Call] => [
+          `${route.key} [Authorization ${authorization.slice(0, 20)}]`,
+          { method: route.method, path: pathOf(route), headers: { Authorization: authorization } },
+        ]),
         [`${route.key} [no token, hostile path]`, { method: route.method, path: pathOf(route, Object.fromEntries(route.params.map((p) => [p, '%E0%A4%A']))) }],
       ]),
     );

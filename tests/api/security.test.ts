@@ -76,7 +76,16 @@ describe('the role matrix: every route, every role, no token', () => {
         if (allowed && (res.status === 401 || res.status === 403) && !(route.key === 'POST /api/attachments')) problems.push(`${route.key} as ${role} got ${res.status}, expected to pass`);
         if (res.status >= 500) problems.push(`${route.key} as ${role} got ${res.status}`);
         // Reads that need no input answer 200 to every role allowed.
-        if (allowed && route.method === 'GET' && res.status !== 200 && !route.path.includes('/content') && !route.path.includes('/url') && !route.path.includes('/imports/:id') && !route.path.includes('/receiving-checks/:id') && !route.path.includes('/sourcing-plans/:id')) {
+        if (
+          allowed &&
+          route.method === 'GET' &&
+          res.status !== 200 &&
+          !route.path.includes('/content') &&
+          !route.path.includes('/url') &&
+          !route.path.includes('/imports/:id') &&
+          !route.path.includes('/receiving-checks/:id') &&
+          !route.path.includes('/sourcing-plans/:id')
+        ) {
           problems.push(`${route.key} as ${role} got ${res.status}, expected 200`);
         }
       }
@@ -91,9 +100,25 @@ describe('tokens', () => {
     const payload = jwt.decode(token) as { sub: string };
     const [h, p, sig] = token.split('.');
     const promoted = Buffer.from(JSON.stringify({ ...payload, role: 'admin' })).toString('base64url');
-    expect((await request(app).get('/api/users').set(bearer(`${h}.${promoted}.${sig}`))).status).toBe(401);
-    expect((await request(app).get('/api/me').set(bearer(signToken({ sub: payload.sub, role: 'buyer' }, TEST_SECRET, -1)))).status).toBe(401);
-    expect((await request(app).get('/api/me').set(bearer(signToken({ sub: payload.sub, role: 'buyer' }, 'another-secret'))))).toMatchObject({ status: 401 });
+    expect(
+      (
+        await request(app)
+          .get('/api/users')
+          .set(bearer(`${h}.${promoted}.${sig}`))
+      ).status,
+    ).toBe(401);
+    expect(
+      (
+        await request(app)
+          .get('/api/me')
+          .set(bearer(signToken({ sub: payload.sub, role: 'buyer' }, TEST_SECRET, -1)))
+      ).status,
+    ).toBe(401);
+    expect(
+      await request(app)
+        .get('/api/me')
+        .set(bearer(signToken({ sub: payload.sub, role: 'buyer' }, 'another-secret'))),
+    ).toMatchObject({ status: 401 });
     const none = `${Buffer.from('{"alg":"none","typ":"JWT"}').toString('base64url')}.${p}.`;
     expect((await request(app).get('/api/me').set(bearer(none))).status).toBe(401);
     const users = await request(app).get('/api/users').set(bearer(tokens.admin));
@@ -110,7 +135,14 @@ describe('sign-in limits', () => {
   it('limits failures per address across accounts', async () => {
     const limited = makeTestApp(ds, { signInLimits: { perAccount: 100, perAddress: 3, windowMs: 60_000 } });
     const statuses: number[] = [];
-    for (const who of ['a', 'b', 'c', 'd']) statuses.push((await request(limited).post('/api/auth/sign-in').send({ email: `${who}@bungwise.example`, password: 'wrong-password' })).status);
+    for (const who of ['a', 'b', 'c', 'd'])
+      statuses.push(
+        (
+          await request(limited)
+            .post('/api/auth/sign-in')
+            .send({ email: `${who}@bungwise.example`, password: 'wrong-password' })
+        ).status,
+      );
     expect(statuses).toEqual([401, 401, 401, 429]);
   });
 
@@ -148,7 +180,12 @@ describe('the audit log', () => {
     expect(changed.status).toBe(200);
     const log = await request(app).get(`/api/audit?entity=dip-tubes&entityId=${tube.id}`).set(bearer(tokens.engineer));
     expect(log.status).toBe(200);
-    expect(log.body.items[0]).toMatchObject({ action: 'update', userName: 'Tomasz Ilunga', before: expect.objectContaining({ material: tube.material }), after: expect.objectContaining({ material: 'PVDF' }) });
+    expect(log.body.items[0]).toMatchObject({
+      action: 'update',
+      userName: 'Tomasz Ilunga',
+      before: expect.objectContaining({ material: tube.material }),
+      after: expect.objectContaining({ material: 'PVDF' }),
+    });
     expect(typeof log.body.items[0].at).toBe('string');
     expect((await request(app).get('/api/audit').set(bearer(tokens.clerk))).status).toBe(403);
     const byAction = await request(app).get('/api/audit?action=update&entity=dip-tubes').set(bearer(tokens.admin));

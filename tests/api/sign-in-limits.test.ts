@@ -26,8 +26,7 @@ beforeEach(async () => {
 
 const OWNER = 'clerk@bungwise.example';
 // The app trusts X-Forwarded-For from loopback (its default `trust proxy`), as from a load balancer there.
-const from = (app: Express | string, address: string, password: string, email = OWNER) =>
-  request(app).post('/api/auth/sign-in').set('X-Forwarded-For', address).send({ email, password });
+const from = (app: Express | string, address: string, password: string, email = OWNER) => request(app).post('/api/auth/sign-in').set('X-Forwarded-For', address).send({ email, password });
 
 describe('two server processes on one database', () => {
   const a = new ServerProcess();
@@ -44,7 +43,13 @@ describe('two server processes on one database', () => {
     const statuses: number[] = [];
     // Alternating: each process alone sees only half the failures.
     for (let i = 0; i <= perAccount; i++) {
-      statuses.push((await request(i % 2 ? b.base : a.base).post('/api/auth/sign-in').send({ email: OWNER, password: `wrong-password-${i}` })).status);
+      statuses.push(
+        (
+          await request(i % 2 ? b.base : a.base)
+            .post('/api/auth/sign-in')
+            .send({ email: OWNER, password: `wrong-password-${i}` })
+        ).status,
+      );
     }
     expect(statuses).toEqual([...Array(perAccount).fill(401), 429]);
     for (const base of [a.base, b.base]) {

@@ -27,10 +27,7 @@ describe('people, managed by admins', () => {
   });
 
   it('creates a user with a temporary password who can then sign in', async () => {
-    const res = await request(app)
-      .post('/api/users')
-      .set(bearer(admin))
-      .send({ email: 'Dock.Two@Bungwise.Example', name: 'Ravi Lindqvist', role: 'clerk', temporaryPassword: 'slate-harbor-91' });
+    const res = await request(app).post('/api/users').set(bearer(admin)).send({ email: 'Dock.Two@Bungwise.Example', name: 'Ravi Lindqvist', role: 'clerk', temporaryPassword: 'slate-harbor-91' });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ email: 'dock.two@bungwise.example', role: 'clerk', active: true });
     const token = await tokenFor(app, 'dock.two@bungwise.example', 'slate-harbor-91');
@@ -63,7 +60,7 @@ describe('people, managed by admins', () => {
     await request(app).patch(`/api/users/${id}`).set(bearer(admin)).send({ role: 'buyer' });
   });
 
-  it("deactivates a user: their token stops working and they cannot sign in", async () => {
+  it('deactivates a user: their token stops working and they cannot sign in', async () => {
     const engineer = await tokenFor(app, 'engineer@bungwise.example');
     expect((await request(app).get('/api/me').set(bearer(engineer))).status).toBe(200);
     const list = await request(app).get('/api/users').set(bearer(admin));
@@ -91,7 +88,7 @@ describe('people, managed by admins', () => {
   });
 });
 
-describe('a person\'s own colour theme', () => {
+describe("a person's own colour theme", () => {
   it("starts at 'system', is kept on the account by PATCH /me, and comes back at sign-in", async () => {
     const buyer = await tokenFor(app, 'buyer@bungwise.example');
     expect((await request(app).get('/api/me').set(bearer(buyer))).body.user.theme).toBe('system');

@@ -23,7 +23,10 @@ async function pick(page: Page, testID: string, search: string) {
   const change = page.getByTestId(`${testID}-change`);
   if (await change.count()) await change.click();
   await page.getByTestId(`${testID}-search`).fill(search);
-  const option = page.getByTestId(new RegExp(`^${testID}-option-`)).filter({ hasText: search }).first();
+  const option = page
+    .getByTestId(new RegExp(`^${testID}-option-`))
+    .filter({ hasText: search })
+    .first();
   await option.waitFor();
   await option.click();
   await page.getByTestId(`${testID}-selected`).waitFor();
@@ -43,7 +46,12 @@ async function expectDockVerdictScreen(page: Page, viewport: Viewport) {
   // The sentence is the first thing in the verdict and on screen without scrolling.
   expect(sentence!.y - banner!.y).toBeLessThan(40);
   expect(sentence!.y + sentence!.height).toBeLessThanOrEqual(size.height);
-  const overflow = await page.evaluate(() => Array.from(document.querySelectorAll('*')).filter((el) => el.getBoundingClientRect().right > window.innerWidth + 1).map((el) => el.getAttribute('data-testid') ?? el.tagName).slice(0, 5));
+  const overflow = await page.evaluate(() =>
+    Array.from(document.querySelectorAll('*'))
+      .filter((el) => el.getBoundingClientRect().right > window.innerWidth + 1)
+      .map((el) => el.getAttribute('data-testid') ?? el.tagName)
+      .slice(0, 5),
+  );
   expect(overflow).toEqual([]);
   const bar = await page.getByTestId('dock-screen-footer').boundingBox();
   expect(bar!.y).toBeGreaterThan(0);

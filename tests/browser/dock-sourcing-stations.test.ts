@@ -26,12 +26,14 @@ afterEach(async () => {
   expect(harness.takeConsoleErrors()).toEqual([]);
 });
 
-
 /** Searches a record picker (components/ui/record-picker) and takes the first match. */
 async function pick(page: Page, testID: string, search: string, opened = true) {
   if (!opened) await page.getByTestId(`${testID}-change`).click();
   await page.getByTestId(`${testID}-search`).fill(search);
-  const option = page.getByTestId(new RegExp(`^${testID}-option-`)).filter({ hasText: search }).first();
+  const option = page
+    .getByTestId(new RegExp(`^${testID}-option-`))
+    .filter({ hasText: search })
+    .first();
   await option.waitFor();
   await option.click();
   await page.getByTestId(`${testID}-selected`).waitFor();

@@ -24,7 +24,6 @@ afterEach(async () => {
   expect(harness.takeConsoleErrors()).toEqual([]);
 });
 
-
 /** Screens scroll inside the app, so a full-page shot shows one screenful: scroll the part to look at into view. */
 async function shotOf(page: Page, testID: string, name: string, viewport: Viewport) {
   await page.getByTestId(testID).first().scrollIntoViewIfNeeded();
@@ -117,7 +116,10 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     await page.getByTestId('import-commit').click();
     await seen(page, 'import-done-summary', /3 new, 0 changed and 0 unchanged dip tubes/);
     await seen(page, 'import-history-list', `tubes-${tag}.csv`);
-    const committed = page.getByTestId(/^import-history-item-/).filter({ hasText: `tubes-${tag}.csv` }).filter({ hasText: 'Imported' });
+    const committed = page
+      .getByTestId(/^import-history-item-/)
+      .filter({ hasText: `tubes-${tag}.csv` })
+      .filter({ hasText: 'Imported' });
     await committed.first().waitFor();
     expect(await committed.first().textContent()).toMatch(/3 new · 0 changed · 0 unchanged · 0 rejected/);
     expect(await committed.first().textContent()).toMatch(/Tomasz Ilunga/);
@@ -125,7 +127,10 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     await seen(page, 'import-history-list', `tubes-${tag}-draft.csv`);
     // The file is kept as it was read, behind the sign-in (fetched with the token, saved through an object URL).
     const download = page.waitForEvent('download');
-    await committed.first().getByTestId(/-download$/).click();
+    await committed
+      .first()
+      .getByTestId(/-download$/)
+      .click();
     const saved = await download;
     expect(saved.suggestedFilename()).toBe(`tubes-${tag}.csv`);
     expect(fs.readFileSync(await saved.path()).toString('utf8')).toContain(`IMP-${tag}-002`);
@@ -170,7 +175,10 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     await seen(page, 'files-added', `Added ${photoName}`);
     await shotOf(page, 'files-panel', 'files-listed', viewport);
     const download = page.waitForEvent('download');
-    await page.getByTestId(/^files-item-.+-download$/).first().click();
+    await page
+      .getByTestId(/^files-item-.+-download$/)
+      .first()
+      .click();
     const saved = await download;
     expect(saved.suggestedFilename()).toBe(photoName);
     expect(fs.readFileSync(await saved.path()).equals(PNG)).toBe(true);

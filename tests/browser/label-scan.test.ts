@@ -66,7 +66,10 @@ const lotValue = (page: Page) => page.getByTestId('dock-lot').inputValue();
 
 async function pickFittingDrum(page: Page) {
   await page.getByTestId('dock-drum-search').fill(demo.fittingDrum);
-  const option = page.getByTestId(/^dock-drum-option-/).filter({ hasText: demo.fittingDrum }).first();
+  const option = page
+    .getByTestId(/^dock-drum-option-/)
+    .filter({ hasText: demo.fittingDrum })
+    .first();
   await option.click();
   await page.getByTestId('dock-drum-selected').waitFor();
 }
@@ -74,84 +77,96 @@ async function pickFittingDrum(page: Page) {
 describe.each(VIEWPORTS)('scanning a drum label at $name width ($width px)', (viewport: Viewport) => {
   const lot = `LR-${viewport.name === 'phone' ? 'P' : 'W'}-26-4711`;
 
-  it('a GS1 DataMatrix through the camera fills the lot number and shows the dates; the decoder loads only then, from the app', async () => {
-    await cameraShowing(`dm-${viewport.name}`, 'gs1datamatrix', `(01)${GTIN}(11)261114(17)270500(10)${lot}(21)D-0042`);
-    const { page, requests } = await dock(viewport);
-    // The first route's JavaScript holds no decoder: neither the scanner's chunk nor the WebAssembly is fetched yet.
-    expect(requests.filter((u) => /label-scanner-|\.wasm/.test(u))).toEqual([]);
-    await harness.shot(page, 'scan-dock-before', viewport);
+  it(
+    'a GS1 DataMatrix through the camera fills the lot number and shows the dates; the decoder loads only then, from the app',
+    async () => {
+      await cameraShowing(`dm-${viewport.name}`, 'gs1datamatrix', `(01)${GTIN}(11)261114(17)270500(10)${lot}(21)D-0042`);
+      const { page, requests } = await dock(viewport);
+      // The first route's JavaScript holds no decoder: neither the scanner's chunk nor the WebAssembly is fetched yet.
+      expect(requests.filter((u) => /label-scanner-|\.wasm/.test(u))).toEqual([]);
+      await harness.shot(page, 'scan-dock-before', viewport);
 
-    const wasm = page.waitForResponse((r) => /\/zxing_reader\.[0-9a-f]+\.wasm$/.test(r.url()));
-    await page.getByTestId('dock-lot-scan').click();
-    const wasmResponse = await wasm;
-    expect(wasmResponse.status()).toBe(200);
-    // WebAssembly.instantiateStreaming needs this type; without it the decoder falls back or fails.
-    expect(wasmResponse.headers()['content-type']).toMatch(/^application\/wasm/);
+      const wasm = page.waitForResponse((r) => /\/zxing_reader\.[0-9a-f]+\.wasm$/.test(r.url()));
+      await page.getByTestId('dock-lot-scan').click();
+      const wasmResponse = await wasm;
+      expect(wasmResponse.status()).toBe(200);
+      // WebAssembly.instantiateStreaming needs this type; without it the decoder falls back or fails.
+      expect(wasmResponse.headers()['content-type']).toMatch(/^application\/wasm/);
 
-    await seen(page, 'dock-lot-label-source', 'filled in from the label’s batch (10)');
-    expect(await lotValue(page)).toBe(lot);
-    // GS1 General Specifications §3.4.7: (17) 270500, day 00 = the last day of May 2027.
-    await seen(page, 'dock-lot-label-expiry', '31 May 2027');
-    await seen(page, 'dock-lot-label-production', '14 Nov 2026');
-    await seen(page, 'dock-lot-label-gtin', GTIN);
-    await seen(page, 'dock-lot-label-serial', 'D-0042');
-    expect(await page.getByTestId(SCANNER).count()).toBe(0);
-    await harness.shot(page, 'scan-dock-filled', viewport);
-    expect(requests.some((u) => /\/label-scanner-[0-9a-f]+\.js$/.test(u))).toBe(true);
-    expectOnlyOwnOrigin(requests);
+      await seen(page, 'dock-lot-label-source', 'filled in from the label’s batch (10)');
+      expect(await lotValue(page)).toBe(lot);
+      // GS1 General Specifications §3.4.7: (17) 270500, day 00 = the last day of May 2027.
+      await seen(page, 'dock-lot-label-expiry', '31 May 2027');
+      await seen(page, 'dock-lot-label-production', '14 Nov 2026');
+      await seen(page, 'dock-lot-label-gtin', GTIN);
+      await seen(page, 'dock-lot-label-serial', 'D-0042');
+      expect(await page.getByTestId(SCANNER).count()).toBe(0);
+      await harness.shot(page, 'scan-dock-filled', viewport);
+      expect(requests.some((u) => /\/label-scanner-[0-9a-f]+\.js$/.test(u))).toBe(true);
+      expectOnlyOwnOrigin(requests);
 
-    // The label's dates fill the form's date fields, which the lot rules read.
-    expect(await page.getByTestId('dock-expiry').inputValue()).toBe('2027-05-31');
-    expect(await page.getByTestId('dock-production').inputValue()).toBe('2026-11-14');
+      // The label's dates fill the form's date fields, which the lot rules read.
+      expect(await page.getByTestId('dock-expiry').inputValue()).toBe('2027-05-31');
+      expect(await page.getByTestId('dock-production').inputValue()).toBe('2026-11-14');
 
-    // The scanned lot is recorded like a typed one.
-    await pickFittingDrum(page);
-    await page.getByTestId('dock-indicator-intact').click();
-    await page.getByTestId('dock-submit').click();
-    await page.getByTestId('verdict-word').waitFor();
-    if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
-    await seen(page, 'record-lot', lot);
-  }, SLOW);
+      // The scanned lot is recorded like a typed one.
+      await pickFittingDrum(page);
+      await page.getByTestId('dock-indicator-intact').click();
+      await page.getByTestId('dock-submit').click();
+      await page.getByTestId('verdict-word').waitFor();
+      if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
+      await seen(page, 'record-lot', lot);
+    },
+    SLOW,
+  );
 
-  it('GS1-128 and a plain QR code through the camera', async () => {
-    await cameraShowing(`128-${viewport.name}`, 'gs1-128', `(01)${GTIN}(10)${lot}-B(17)280200`);
-    let { page, requests } = await dock(viewport);
-    await page.getByTestId('dock-lot-scan').click();
-    await seen(page, 'dock-lot-label-expiry', '29 Feb 2028'); // day 00 of a leap February
-    expect(await lotValue(page)).toBe(`${lot}-B`);
-    expectOnlyOwnOrigin(requests);
+  it(
+    'GS1-128 and a plain QR code through the camera',
+    async () => {
+      await cameraShowing(`128-${viewport.name}`, 'gs1-128', `(01)${GTIN}(10)${lot}-B(17)280200`);
+      let { page, requests } = await dock(viewport);
+      await page.getByTestId('dock-lot-scan').click();
+      await seen(page, 'dock-lot-label-expiry', '29 Feb 2028'); // day 00 of a leap February
+      expect(await lotValue(page)).toBe(`${lot}-B`);
+      expectOnlyOwnOrigin(requests);
 
-    await cameraShowing(`qr-${viewport.name}`, 'qrcode', `${lot}-Q`);
-    ({ page, requests } = await dock(viewport));
-    await page.getByTestId('dock-lot-scan').click();
-    await seen(page, 'dock-lot-label-source', 'read from the label’s code');
-    expect(await lotValue(page)).toBe(`${lot}-Q`);
-    expect(await page.getByTestId('dock-lot-label-expiry').count()).toBe(0);
-    expectOnlyOwnOrigin(requests);
-  }, SLOW);
+      await cameraShowing(`qr-${viewport.name}`, 'qrcode', `${lot}-Q`);
+      ({ page, requests } = await dock(viewport));
+      await page.getByTestId('dock-lot-scan').click();
+      await seen(page, 'dock-lot-label-source', 'read from the label’s code');
+      expect(await lotValue(page)).toBe(`${lot}-Q`);
+      expect(await page.getByTestId('dock-lot-label-expiry').count()).toBe(0);
+      expectOnlyOwnOrigin(requests);
+    },
+    SLOW,
+  );
 
-  it('a label with a wrong check digit gets a sentence, the scanner stays open, and cancelling leaves typing', async () => {
-    await cameraShowing(`bad-${viewport.name}`, 'gs1datamatrix', `(01)09506000134359(10)${lot}`, true);
-    const { page, requests } = await dock(viewport);
-    await page.getByTestId('dock-lot-scan').click();
-    await page.getByTestId(`${SCANNER}-video`).waitFor();
-    await seen(page, `${SCANNER}-problem`, /GTIN \(01\) 09506000134359 fails its check digit: .* would be 2\. Scan another code, or type the lot number\./);
-    await seen(page, `${SCANNER}-engine`, 'app’s own barcode decoder');
-    // Glove-sized controls: at least 48 px tall.
-    for (const id of [`${SCANNER}-cancel`, `${SCANNER}-photo`]) expect((await page.getByTestId(id).boundingBox())!.height).toBeGreaterThanOrEqual(48);
-    await harness.shot(page, 'scan-open-bad-code', viewport);
+  it(
+    'a label with a wrong check digit gets a sentence, the scanner stays open, and cancelling leaves typing',
+    async () => {
+      await cameraShowing(`bad-${viewport.name}`, 'gs1datamatrix', `(01)09506000134359(10)${lot}`, true);
+      const { page, requests } = await dock(viewport);
+      await page.getByTestId('dock-lot-scan').click();
+      await page.getByTestId(`${SCANNER}-video`).waitFor();
+      await seen(page, `${SCANNER}-problem`, /GTIN \(01\) 09506000134359 fails its check digit: .* would be 2\. Scan another code, or type the lot number\./);
+      await seen(page, `${SCANNER}-engine`, 'app’s own barcode decoder');
+      // Glove-sized controls: at least 48 px tall.
+      for (const id of [`${SCANNER}-cancel`, `${SCANNER}-photo`]) expect((await page.getByTestId(id).boundingBox())!.height).toBeGreaterThanOrEqual(48);
+      await harness.shot(page, 'scan-open-bad-code', viewport);
 
-    await page.getByTestId(`${SCANNER}-cancel`).click();
-    expect(await page.getByTestId(SCANNER).count()).toBe(0);
-    expect(await lotValue(page)).toBe('');
-    // Typed by hand, the lot number meets the same rule (shared/lot-number.ts) before anything is sent.
-    await page.getByTestId('dock-lot').fill('LOT#1');
-    await page.getByTestId('dock-submit').click();
-    await seen(page, 'dock-lot-error', 'The lot number holds “#”');
-    await page.getByTestId('dock-lot').fill(`${lot}-T`);
-    expect(await page.getByTestId('dock-lot-label').count()).toBe(0);
-    expectOnlyOwnOrigin(requests);
-  }, SLOW);
+      await page.getByTestId(`${SCANNER}-cancel`).click();
+      expect(await page.getByTestId(SCANNER).count()).toBe(0);
+      expect(await lotValue(page)).toBe('');
+      // Typed by hand, the lot number meets the same rule (shared/lot-number.ts) before anything is sent.
+      await page.getByTestId('dock-lot').fill('LOT#1');
+      await page.getByTestId('dock-submit').click();
+      await seen(page, 'dock-lot-error', 'The lot number holds “#”');
+      await page.getByTestId('dock-lot').fill(`${lot}-T`);
+      expect(await page.getByTestId('dock-lot-label').count()).toBe(0);
+      expectOnlyOwnOrigin(requests);
+    },
+    SLOW,
+  );
 });
 
 describe.each(VIEWPORTS)('the photo fallback on a plain-http intranet address at $name width ($width px)', (viewport: Viewport) => {
@@ -162,25 +177,29 @@ describe.each(VIEWPORTS)('the photo fallback on a plain-http intranet address at
 
   beforeAll(() => harness.launch([`--host-resolver-rules=MAP ${host} 127.0.0.1`]));
 
-  it('says why there is no camera, and reads a photo of the label instead', async () => {
-    // Chromium's own note that it ignores the Cross-Origin-Opener-Policy header on plain http: expected here.
-    harness.allowConsoleError(/Cross-Origin-Opener-Policy header has been ignored/);
-    const { page, requests } = await dock(viewport, origin());
-    expect(await page.evaluate(() => window.isSecureContext)).toBe(false);
-    await page.getByTestId('dock-lot-scan').click();
-    await seen(page, `${SCANNER}-camera-problem`, /plain http address.*secure one \(https, or localhost on this device\).*Take a photo of the label instead/);
-    expect(await page.getByTestId(`${SCANNER}-video`).count()).toBe(0);
-    await harness.shot(page, 'scan-photo-fallback', viewport);
+  it(
+    'says why there is no camera, and reads a photo of the label instead',
+    async () => {
+      // Chromium's own note that it ignores the Cross-Origin-Opener-Policy header on plain http: expected here.
+      harness.allowConsoleError(/Cross-Origin-Opener-Policy header has been ignored/);
+      const { page, requests } = await dock(viewport, origin());
+      expect(await page.evaluate(() => window.isSecureContext)).toBe(false);
+      await page.getByTestId('dock-lot-scan').click();
+      await seen(page, `${SCANNER}-camera-problem`, /plain http address.*secure one \(https, or localhost on this device\).*Take a photo of the label instead/);
+      expect(await page.getByTestId(`${SCANNER}-video`).count()).toBe(0);
+      await harness.shot(page, 'scan-photo-fallback', viewport);
 
-    // A photo with no code in it first, then the label.
-    const blank = toPng({ width: 800, height: 600, data: new Uint8ClampedArray(800 * 600 * 4).fill(255) });
-    await page.getByTestId(`${SCANNER}-photo-input`).setInputFiles({ name: 'wall.png', mimeType: 'image/png', buffer: blank });
-    await seen(page, `${SCANNER}-problem`, 'No QR, Data Matrix or Code 128 code was found in the photo');
-    const photo = toPng(await labelPage('gs1datamatrix', `(01)${GTIN}(17)270400(10)${lot}`));
-    await page.getByTestId(`${SCANNER}-photo-input`).setInputFiles({ name: 'label.png', mimeType: 'image/png', buffer: photo });
-    await seen(page, 'dock-lot-label-expiry', '30 Apr 2027');
-    expect(await lotValue(page)).toBe(lot);
-    await harness.shot(page, 'scan-photo-filled', viewport);
-    expectOnlyOwnOrigin(requests, origin());
-  }, SLOW);
+      // A photo with no code in it first, then the label.
+      const blank = toPng({ width: 800, height: 600, data: new Uint8ClampedArray(800 * 600 * 4).fill(255) });
+      await page.getByTestId(`${SCANNER}-photo-input`).setInputFiles({ name: 'wall.png', mimeType: 'image/png', buffer: blank });
+      await seen(page, `${SCANNER}-problem`, 'No QR, Data Matrix or Code 128 code was found in the photo');
+      const photo = toPng(await labelPage('gs1datamatrix', `(01)${GTIN}(17)270400(10)${lot}`));
+      await page.getByTestId(`${SCANNER}-photo-input`).setInputFiles({ name: 'label.png', mimeType: 'image/png', buffer: photo });
+      await seen(page, 'dock-lot-label-expiry', '30 Apr 2027');
+      expect(await lotValue(page)).toBe(lot);
+      await harness.shot(page, 'scan-photo-filled', viewport);
+      expectOnlyOwnOrigin(requests, origin());
+    },
+    SLOW,
+  );
 });

@@ -49,7 +49,10 @@ async function pick(page: Page, testID: string, search: string) {
   const change = page.getByTestId(`${testID}-change`);
   if (await change.count()) await change.click();
   await page.getByTestId(`${testID}-search`).fill(search);
-  const option = page.getByTestId(new RegExp(`^${testID}-option-`)).filter({ hasText: search }).first();
+  const option = page
+    .getByTestId(new RegExp(`^${testID}-option-`))
+    .filter({ hasText: search })
+    .first();
   await option.waitFor();
   await option.click();
   await page.getByTestId(`${testID}-selected`).waitFor();
@@ -121,7 +124,10 @@ describe.each(VIEWPORTS)('the dock offline at $name width ($width px)', (viewpor
     await again.getByTestId('dock-lot').waitFor();
     await again.waitForTimeout(1500);
     expect(await recorded(lot)).toBe(1);
-    const rows = (await harness.ds.query(`SELECT provisional->>'decision' AS decision, decision AS server FROM receiving_checks WHERE lot_number = $1`, [lot])) as Array<{ decision: string; server: string }>;
+    const rows = (await harness.ds.query(`SELECT provisional->>'decision' AS decision, decision AS server FROM receiving_checks WHERE lot_number = $1`, [lot])) as Array<{
+      decision: string;
+      server: string;
+    }>;
     expect(rows).toEqual([{ decision: 'accept', server: 'accept' }]);
   }, 180_000);
 });

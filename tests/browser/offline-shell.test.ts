@@ -65,7 +65,11 @@ function deploy(build: number): void {
   write('index.html', html);
   write('sw.js', sw);
 }
-const buildOf = (page: Page) => page.locator('meta[name="bungwise-build"]').getAttribute('content', { timeout: 1000 }).catch(() => null);
+const buildOf = (page: Page) =>
+  page
+    .locator('meta[name="bungwise-build"]')
+    .getAttribute('content', { timeout: 1000 })
+    .catch(() => null);
 
 describe.each(VIEWPORTS)('the app shell offline at $name width ($width px)', (viewport) => {
   it('after one visit, the sign-in screen opens with no network, in the app typeface', async () => {
@@ -81,7 +85,14 @@ describe.each(VIEWPORTS)('the app shell offline at $name width ($width px)', (vi
     await fontsLoaded(again);
     // The API is not kept by the service worker: with no network it does not answer.
     harness.allowConsoleError(OFFLINE_REQUEST);
-    expect(await again.evaluate(() => fetch('/api/health').then(() => 'answered', () => 'no network'))).toBe('no network');
+    expect(
+      await again.evaluate(() =>
+        fetch('/api/health').then(
+          () => 'answered',
+          () => 'no network',
+        ),
+      ),
+    ).toBe('no network');
     await harness.shot(again, 'offline-sign-in', viewport);
     await context.close();
   }, 60_000);

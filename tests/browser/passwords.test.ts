@@ -33,7 +33,11 @@ async function open(viewport: Viewport) {
 }
 
 async function api(method: string, path: string, body?: unknown, token = adminToken) {
-  const res = await fetch(`${harness.baseUrl}/api${path}`, { method, headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) }, body: body ? JSON.stringify(body) : undefined });
+  const res = await fetch(`${harness.baseUrl}/api${path}`, {
+    method,
+    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
+    body: body ? JSON.stringify(body) : undefined,
+  });
   const json = await res.json();
   if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${JSON.stringify(json)}`);
   return json;

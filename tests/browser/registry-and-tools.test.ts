@@ -327,8 +327,7 @@ describe('keyboard on a wide screen', () => {
     const after = await waitForRows(page, (ids) => ids[0] !== before[0], 'in the other order');
     expect(after).toEqual([...before].reverse());
     // Tab moves on through the other sortable headers to the first row's name, a link with a visible focus ring.
-    const inFirstRow = () =>
-      page.evaluate((id) => !!document.activeElement?.closest(`[data-testid="${id}"]`) && document.activeElement?.tagName === 'A', `${ROW_PREFIX}${after[0]}`);
+    const inFirstRow = () => page.evaluate((id) => !!document.activeElement?.closest(`[data-testid="${id}"]`) && document.activeElement?.tagName === 'A', `${ROW_PREFIX}${after[0]}`);
     for (let i = 0; i < 6 && !(await inFirstRow()); i++) await page.keyboard.press('Tab');
     expect(await inFirstRow()).toBe(true);
     expect(await page.evaluate(() => getComputedStyle(document.activeElement!).outlineStyle)).not.toBe('none');

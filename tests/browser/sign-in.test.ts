@@ -26,22 +26,26 @@ describe.each(VIEWPORTS)('sign-in at $name width ($width px)', (viewport) => {
     await context.close();
   }, 30_000);
 
-  it.each(['clerk', 'engineer', 'buyer', 'admin'])('%s lands on their home, keeps the session on reload, and signs out', async (role) => {
-    const { context, page } = await harness.page(viewport);
-    await signInAs(page, harness.baseUrl, `${role}@bungwise.example`);
-    await page.getByTestId(`home-${role}`).waitFor();
-    await expect(page.getByTestId('current-role').textContent()).resolves.toMatch(new RegExp(role === 'clerk' ? 'clerk' : role, 'i'));
-    await harness.shot(page, `home-${role}`, viewport);
-    // Only admins see People in the navigation (on a phone, behind More).
-    if (await page.getByTestId('nav-more').count()) await page.getByTestId('nav-more').click();
-    expect(await page.getByTestId('nav-users').count()).toBe(role === 'admin' ? 1 : 0);
-    if (await page.getByTestId('nav-more-menu').count()) await page.getByTestId('nav-more').click();
-    await page.reload();
-    await page.getByTestId(`home-${role}`).waitFor();
-    await page.getByTestId('sign-out').click();
-    await page.getByTestId('sign-in-submit').waitFor();
-    await context.close();
-  }, 30_000);
+  it.each(['clerk', 'engineer', 'buyer', 'admin'])(
+    '%s lands on their home, keeps the session on reload, and signs out',
+    async (role) => {
+      const { context, page } = await harness.page(viewport);
+      await signInAs(page, harness.baseUrl, `${role}@bungwise.example`);
+      await page.getByTestId(`home-${role}`).waitFor();
+      await expect(page.getByTestId('current-role').textContent()).resolves.toMatch(new RegExp(role === 'clerk' ? 'clerk' : role, 'i'));
+      await harness.shot(page, `home-${role}`, viewport);
+      // Only admins see People in the navigation (on a phone, behind More).
+      if (await page.getByTestId('nav-more').count()) await page.getByTestId('nav-more').click();
+      expect(await page.getByTestId('nav-users').count()).toBe(role === 'admin' ? 1 : 0);
+      if (await page.getByTestId('nav-more-menu').count()) await page.getByTestId('nav-more').click();
+      await page.reload();
+      await page.getByTestId(`home-${role}`).waitFor();
+      await page.getByTestId('sign-out').click();
+      await page.getByTestId('sign-in-submit').waitFor();
+      await context.close();
+    },
+    30_000,
+  );
 });
 
 describe('a choice of chips from the keyboard', () => {

@@ -19,7 +19,7 @@ beforeAll(async () => {
     body: JSON.stringify({ email: 'clerk@bungwise.example', password: 'bungwise-demo' }),
   });
   const { token } = (await signIn.json()) as { token: string };
-  const api = async <T,>(path: string, body?: unknown): Promise<T> => {
+  const api = async <T>(path: string, body?: unknown): Promise<T> => {
     const res = await fetch(`${harness.baseUrl}/api${path}`, {
       method: body ? 'POST' : 'GET',
       headers: { Authorization: `Bearer ${token}`, ...(body ? { 'Content-Type': 'application/json' } : {}) },
@@ -105,95 +105,115 @@ const DEVICE: Array<[ThemeName, BrowserContextOptions]> = [
 const SLOW = 120_000;
 
 describe.each(VIEWPORTS)('themes at $name width ($width px)', (viewport: Viewport) => {
-  it.each(DEVICE)('follows the device to the %s palette: sign-in, dock, registry and lot pages pass colour contrast', async (theme, options) => {
-    const p = palettes[theme];
-    const { page } = await open(viewport, options);
-    await go(page, '/sign-in', 'sign-in-email');
-    const doc = await expectPalette(page, p);
-    expect(doc.attribute).toBeNull(); // no choice made: the media queries decide
-    expect(doc.bar).toBe(theme === 'light' ? p.primary : p.nav);
-    await expectNoContrastViolations(page, `${theme} sign-in`);
-    await harness.shot(page, `theme-${theme}-sign-in`, viewport);
+  it.each(DEVICE)(
+    'follows the device to the %s palette: sign-in, dock, registry and lot pages pass colour contrast',
+    async (theme, options) => {
+      const p = palettes[theme];
+      const { page } = await open(viewport, options);
+      await go(page, '/sign-in', 'sign-in-email');
+      const doc = await expectPalette(page, p);
+      expect(doc.attribute).toBeNull(); // no choice made: the media queries decide
+      expect(doc.bar).toBe(theme === 'light' ? p.primary : p.nav);
+      await expectNoContrastViolations(page, `${theme} sign-in`);
+      await harness.shot(page, `theme-${theme}-sign-in`, viewport);
 
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
-    await go(page, '/receive', 'dock-lot');
-    await expectPalette(page, p);
-    await expectNoContrastViolations(page, `${theme} dock`);
-    await harness.shot(page, `theme-${theme}-dock`, viewport);
+      await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
+      await page.getByTestId('home-clerk').waitFor();
+      await go(page, '/receive', 'dock-lot');
+      await expectPalette(page, p);
+      await expectNoContrastViolations(page, `${theme} dock`);
+      await harness.shot(page, `theme-${theme}-dock`, viewport);
 
-    await go(page, '/registry/drum-types', 'registry-table');
-    await page.locator('[data-testid^="registry-row-"]').first().waitFor();
-    await expectNoContrastViolations(page, `${theme} registry list`);
-    await harness.shot(page, `theme-${theme}-registry`, viewport);
+      await go(page, '/registry/drum-types', 'registry-table');
+      await page.locator('[data-testid^="registry-row-"]').first().waitFor();
+      await expectNoContrastViolations(page, `${theme} registry list`);
+      await harness.shot(page, `theme-${theme}-registry`, viewport);
 
-    // The drawing takes its colours from the same properties: the slurry is surfaceSunk, the walls ink.
-    await go(page, `/receive/${lots.fits}`, 'verdict-word');
-    await seen(page, 'verdict-word', 'FITS');
-    // On a phone the details (with the drawing) start folded away.
-    if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
-    await page.getByTestId('drum-section').first().waitFor();
-    const drawing = await page.getByTestId('drum-section').locator('svg rect').first().evaluate((el) => getComputedStyle(el).fill);
-    expect(drawing).toBe(rgb(p.surfaceSunk));
-    const wall = await page.getByTestId('drum-section').locator('svg rect').nth(1).evaluate((el) => getComputedStyle(el).stroke);
-    expect(wall).toBe(rgb(p.ink));
-    await expectNoContrastViolations(page, `${theme} lot that fits`);
-    await shotOf(page, 'verdict-word', `theme-${theme}-lot-fits`, viewport);
-    await shotOf(page, 'drum-section', `theme-${theme}-drawing-fits`, viewport);
+      // The drawing takes its colours from the same properties: the slurry is surfaceSunk, the walls ink.
+      await go(page, `/receive/${lots.fits}`, 'verdict-word');
+      await seen(page, 'verdict-word', 'FITS');
+      // On a phone the details (with the drawing) start folded away.
+      if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
+      await page.getByTestId('drum-section').first().waitFor();
+      const drawing = await page
+        .getByTestId('drum-section')
+        .locator('svg rect')
+        .first()
+        .evaluate((el) => getComputedStyle(el).fill);
+      expect(drawing).toBe(rgb(p.surfaceSunk));
+      const wall = await page
+        .getByTestId('drum-section')
+        .locator('svg rect')
+        .nth(1)
+        .evaluate((el) => getComputedStyle(el).stroke);
+      expect(wall).toBe(rgb(p.ink));
+      await expectNoContrastViolations(page, `${theme} lot that fits`);
+      await shotOf(page, 'verdict-word', `theme-${theme}-lot-fits`, viewport);
+      await shotOf(page, 'drum-section', `theme-${theme}-drawing-fits`, viewport);
 
-    await go(page, `/receive/${lots.noFit}`, 'verdict-word');
-    await seen(page, 'verdict-word', 'NO FIT');
-    await expectNoContrastViolations(page, `${theme} lot that does not fit`);
-    await shotOf(page, 'verdict-word', `theme-${theme}-lot-no-fit`, viewport);
-  }, SLOW);
+      await go(page, `/receive/${lots.noFit}`, 'verdict-word');
+      await seen(page, 'verdict-word', 'NO FIT');
+      await expectNoContrastViolations(page, `${theme} lot that does not fit`);
+      await shotOf(page, 'verdict-word', `theme-${theme}-lot-no-fit`, viewport);
+    },
+    SLOW,
+  );
 
-  it('takes the high contrast palette when the device forces its colours', async () => {
-    const { page } = await open(viewport, { forcedColors: 'active' });
-    await go(page, '/sign-in', 'sign-in-email');
-    const doc = await documentColours(page);
-    expect(doc.ink.toUpperCase()).toBe(palettes.contrast.ink);
-    expect(doc.bar).toBe(palettes.contrast.nav);
-  }, SLOW);
+  it(
+    'takes the high contrast palette when the device forces its colours',
+    async () => {
+      const { page } = await open(viewport, { forcedColors: 'active' });
+      await go(page, '/sign-in', 'sign-in-email');
+      const doc = await documentColours(page);
+      expect(doc.ink.toUpperCase()).toBe(palettes.contrast.ink);
+      expect(doc.bar).toBe(palettes.contrast.nav);
+    },
+    SLOW,
+  );
 
-  it("keeps the person's choice over the device's: Light while the device is dark, after a reload, after sign-out, on another device", async () => {
-    const { page } = await open(viewport, { colorScheme: 'dark' });
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
-    await expectPalette(page, palettes.dark);
+  it(
+    "keeps the person's choice over the device's: Light while the device is dark, after a reload, after sign-out, on another device",
+    async () => {
+      const { page } = await open(viewport, { colorScheme: 'dark' });
+      await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
+      await page.getByTestId('home-clerk').waitFor();
+      await expectPalette(page, palettes.dark);
 
-    await go(page, '/notices', 'appearance');
-    await expect(page.getByTestId('appearance-theme-system').getAttribute('aria-checked')).resolves.toBe('true');
-    await page.getByTestId('appearance-theme-light').click();
-    await seen(page, 'appearance-status', 'Saved.');
-    expect((await expectPalette(page, palettes.light)).attribute).toBe('light');
-    await shotOf(page, 'appearance', 'theme-choice-light-on-dark-device', viewport);
+      await go(page, '/notices', 'appearance');
+      await expect(page.getByTestId('appearance-theme-system').getAttribute('aria-checked')).resolves.toBe('true');
+      await page.getByTestId('appearance-theme-light').click();
+      await seen(page, 'appearance-status', 'Saved.');
+      expect((await expectPalette(page, palettes.light)).attribute).toBe('light');
+      await shotOf(page, 'appearance', 'theme-choice-light-on-dark-device', viewport);
 
-    await page.reload();
-    await page.getByTestId('appearance').waitFor();
-    await expectPalette(page, palettes.light);
-    await expect(page.getByTestId('appearance-theme-light').getAttribute('aria-checked')).resolves.toBe('true');
+      await page.reload();
+      await page.getByTestId('appearance').waitFor();
+      await expectPalette(page, palettes.light);
+      await expect(page.getByTestId('appearance-theme-light').getAttribute('aria-checked')).resolves.toBe('true');
 
-    await page.getByTestId('sign-out').click();
-    await page.getByTestId('sign-in-email').waitFor();
-    await expectPalette(page, palettes.light);
+      await page.getByTestId('sign-out').click();
+      await page.getByTestId('sign-in-email').waitFor();
+      await expectPalette(page, palettes.light);
 
-    // A new device (dark, nothing stored) takes the account's choice once the person signs in.
-    const other = await open(viewport, { colorScheme: 'dark' });
-    await go(other.page, '/sign-in', 'sign-in-email');
-    await expectPalette(other.page, palettes.dark);
-    await signInAs(other.page, harness.baseUrl, 'clerk@bungwise.example');
-    await other.page.getByTestId('home-clerk').waitFor();
-    await expectPalette(other.page, palettes.light);
+      // A new device (dark, nothing stored) takes the account's choice once the person signs in.
+      const other = await open(viewport, { colorScheme: 'dark' });
+      await go(other.page, '/sign-in', 'sign-in-email');
+      await expectPalette(other.page, palettes.dark);
+      await signInAs(other.page, harness.baseUrl, 'clerk@bungwise.example');
+      await other.page.getByTestId('home-clerk').waitFor();
+      await expectPalette(other.page, palettes.light);
 
-    // High contrast as a choice, then back to following the device.
-    await go(other.page, '/notices', 'appearance');
-    await other.page.getByTestId('appearance-theme-contrast').click();
-    await seen(other.page, 'appearance-status', 'Saved.');
-    expect((await expectPalette(other.page, palettes.contrast)).attribute).toBe('contrast');
-    await expectNoContrastViolations(other.page, 'notices and settings in high contrast');
-    await shotOf(other.page, 'appearance', 'theme-choice-contrast', viewport);
-    await other.page.getByTestId('appearance-theme-system').click();
-    await seen(other.page, 'appearance-status', 'Saved.');
-    expect((await expectPalette(other.page, palettes.dark)).attribute).toBeNull();
-  }, SLOW);
+      // High contrast as a choice, then back to following the device.
+      await go(other.page, '/notices', 'appearance');
+      await other.page.getByTestId('appearance-theme-contrast').click();
+      await seen(other.page, 'appearance-status', 'Saved.');
+      expect((await expectPalette(other.page, palettes.contrast)).attribute).toBe('contrast');
+      await expectNoContrastViolations(other.page, 'notices and settings in high contrast');
+      await shotOf(other.page, 'appearance', 'theme-choice-contrast', viewport);
+      await other.page.getByTestId('appearance-theme-system').click();
+      await seen(other.page, 'appearance-status', 'Saved.');
+      expect((await expectPalette(other.page, palettes.dark)).attribute).toBeNull();
+    },
+    SLOW,
+  );
 });

@@ -11,9 +11,7 @@ export async function openTestDataSource(url = process.env.DATABASE_URL): Promis
 }
 
 export async function resetDatabase(ds: DataSource, options: { demo?: boolean } = {}): Promise<void> {
-  const tables: Array<{ tablename: string }> = await ds.query(
-    `SELECT tablename FROM pg_tables WHERE schemaname = 'public' AND tablename <> 'migrations'`,
-  );
+  const tables: Array<{ tablename: string }> = await ds.query(`SELECT tablename FROM pg_tables WHERE schemaname = 'public' AND tablename <> 'migrations'`);
   if (tables.length) await ds.query(`TRUNCATE ${tables.map((t) => `"${t.tablename}"`).join(', ')} RESTART IDENTITY CASCADE`);
   if (options.demo !== false) await seedIfEmpty(ds, { demo: true });
 }

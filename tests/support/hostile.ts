@@ -121,13 +121,35 @@ export const HOSTILE_ENCODINGS: RawRequest[] = [
   { label: 'content type garbage', headers: { 'Content-Type': ';;;/' }, body: '{}' },
   { label: 'multipart without boundary', headers: { 'Content-Type': 'multipart/form-data' }, body: 'xx' },
   { label: 'multipart with empty boundary', headers: { 'Content-Type': 'multipart/form-data; boundary=' }, body: 'xx' },
-  { label: 'multipart truncated', headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` }, body: multipart(`--${boundary}\nContent-Disposition: form-data; name="kind"\n\ndip-tubes\n--${boundary}\nContent-Disposition: form-data; name="file"; filename="a.csv"\nContent-Type: text/csv\n\npart_number,le`) },
+  {
+    label: 'multipart truncated',
+    headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` },
+    body: multipart(
+      `--${boundary}\nContent-Disposition: form-data; name="kind"\n\ndip-tubes\n--${boundary}\nContent-Disposition: form-data; name="file"; filename="a.csv"\nContent-Type: text/csv\n\npart_number,le`,
+    ),
+  },
   { label: 'multipart garbage', headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` }, body: 'no parts here at all' },
   { label: 'multipart bad part header', headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` }, body: multipart(`--${boundary}\nContent-Disposition\n\nx\n--${boundary}--\n`) },
-  { label: 'multipart NUL field', headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` }, body: multipart(`--${boundary}\nContent-Disposition: form-data; name="kind"\n\ndip-tubes\u0000\n--${boundary}\nContent-Disposition: form-data; name="ownerKind"\n\n__proto__\n--${boundary}--\n`) },
-  { label: 'multipart NUL file name', headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` }, body: multipart(`--${boundary}\nContent-Disposition: form-data; name="file"; filename="a\u0000.csv"\nContent-Type: text/csv\n\na,b\n--${boundary}--\n`) },
-  { label: 'multipart gzip', headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}`, 'Content-Encoding': 'gzip' }, body: gzipSync(multipart(`--${boundary}\nContent-Disposition: form-data; name="kind"\n\ndip-tubes\n--${boundary}--\n`)) },
-  { label: 'multipart many fields', headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` }, body: multipart(Array.from({ length: 40 }, (_, i) => `--${boundary}\nContent-Disposition: form-data; name="f${i}"\n\nv\n`).join('') + `--${boundary}--\n`) },
+  {
+    label: 'multipart NUL field',
+    headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` },
+    body: multipart(`--${boundary}\nContent-Disposition: form-data; name="kind"\n\ndip-tubes\u0000\n--${boundary}\nContent-Disposition: form-data; name="ownerKind"\n\n__proto__\n--${boundary}--\n`),
+  },
+  {
+    label: 'multipart NUL file name',
+    headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` },
+    body: multipart(`--${boundary}\nContent-Disposition: form-data; name="file"; filename="a\u0000.csv"\nContent-Type: text/csv\n\na,b\n--${boundary}--\n`),
+  },
+  {
+    label: 'multipart gzip',
+    headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}`, 'Content-Encoding': 'gzip' },
+    body: gzipSync(multipart(`--${boundary}\nContent-Disposition: form-data; name="kind"\n\ndip-tubes\n--${boundary}--\n`)),
+  },
+  {
+    label: 'multipart many fields',
+    headers: { 'Content-Type': `multipart/form-data; boundary=${boundary}` },
+    body: multipart(Array.from({ length: 40 }, (_, i) => `--${boundary}\nContent-Disposition: form-data; name="f${i}"\n\nv\n`).join('') + `--${boundary}--\n`),
+  },
   { label: 'body larger than allowed', headers: { 'Content-Type': 'application/json' }, body: `{"x":"${'z'.repeat(1_100_000)}"}` },
 ];
 
@@ -143,7 +165,31 @@ export function dtoFieldNames(): string[] {
 }
 
 /** Query parameter names to try on every route: the list parameters and whatever the DTOs take. */
-export const QUERY_NAMES = ['q', 'sort', 'order', 'page', 'pageSize', 'region', 'thread', 'key', 'status', 'supplierId', 'stationId', 'verdict', 'from', 'to', 'entity', 'entityId', 'userId', 'action', 'ownerKind', 'ownerId', 'version', 'kind', 'dryRun'];
+export const QUERY_NAMES = [
+  'q',
+  'sort',
+  'order',
+  'page',
+  'pageSize',
+  'region',
+  'thread',
+  'key',
+  'status',
+  'supplierId',
+  'stationId',
+  'verdict',
+  'from',
+  'to',
+  'entity',
+  'entityId',
+  'userId',
+  'action',
+  'ownerKind',
+  'ownerId',
+  'version',
+  'kind',
+  'dryRun',
+];
 
 /** %-encodes text for a URL, lone surrogates included (encodeURIComponent throws on them). */
 export function pct(text: string): string {

@@ -7,7 +7,17 @@ export const TUBE_HEADER = 'supplier,part_number,thread,length_mm,bore_mm,od_mm,
 /** Supplier names and materials as they would be written in each encoding's region. */
 export const REGIONAL: Record<string, { names: string[]; materials: string[] }> = {
   'windows-1252': {
-    names: ['Müller Rohrtechnik GmbH', 'Société Générale des Tubes', 'Peña Ingeniería S.L.', 'Ångström Rør AS', 'Krämer & Söhne', 'Tubos Ibéricos', 'Jürgen Weiß KG', 'Øresund Væsker', 'Zoë Brontë Ltd'],
+    names: [
+      'Müller Rohrtechnik GmbH',
+      'Société Générale des Tubes',
+      'Peña Ingeniería S.L.',
+      'Ångström Rør AS',
+      'Krämer & Söhne',
+      'Tubos Ibéricos',
+      'Jürgen Weiß KG',
+      'Øresund Væsker',
+      'Zoë Brontë Ltd',
+    ],
     materials: ['PFA', 'PVDF – grade “A”', 'PTFE (größer)'],
   },
   'ISO-8859-1': {

@@ -1,10 +1,32 @@
-import { addDays, checkCertificate, checkShelfLife, checkTemperature, daysBetween, evaluateAcceptance, formatDay, isIsoDate, localDate, lotDateProblems, lotExpiry, type LotAcceptanceInput, type SlurryAcceptance } from '../../shared/acceptance';
+import {
+  addDays,
+  checkCertificate,
+  checkShelfLife,
+  checkTemperature,
+  daysBetween,
+  evaluateAcceptance,
+  formatDay,
+  isIsoDate,
+  localDate,
+  lotDateProblems,
+  lotExpiry,
+  type LotAcceptanceInput,
+  type SlurryAcceptance,
+} from '../../shared/acceptance';
 import { DOCK_ROLES, ENGINEER_ROLES } from '../../shared/roles';
 
 // Fixed dates: "today" is an input, never the clock.
 const TODAY = '2026-11-20';
 const slurry = (over: Partial<SlurryAcceptance> = {}): SlurryAcceptance => ({ shelfLifeDays: 365, minRemainingDays: 90, storageMinC: 5, storageMaxC: 30, certificateRequired: false, ...over });
-const lot = (over: Partial<LotAcceptanceInput> = {}): LotAcceptanceInput => ({ today: TODAY, productionDate: null, expiryDate: null, temperatureIndicator: 'intact', certificateAttached: false, slurry: slurry(), ...over });
+const lot = (over: Partial<LotAcceptanceInput> = {}): LotAcceptanceInput => ({
+  today: TODAY,
+  productionDate: null,
+  expiryDate: null,
+  temperatureIndicator: 'intact',
+  certificateAttached: false,
+  slurry: slurry(),
+  ...over,
+});
 const outcome = (c: ReturnType<typeof checkShelfLife>) => ('outcome' in c ? c.outcome : 'not-checked');
 
 describe('calendar dates', () => {

@@ -39,7 +39,9 @@ describe('the API client offline', () => {
   });
 
   it('gives up on a request that hangs, after its timeout', async () => {
-    global.fetch = jest.fn((_url: string, init: RequestInit) => new Promise((_resolve, reject) => init.signal!.addEventListener('abort', () => reject(new DOMException('aborted', 'AbortError'))))) as never;
+    global.fetch = jest.fn(
+      (_url: string, init: RequestInit) => new Promise((_resolve, reject) => init.signal!.addEventListener('abort', () => reject(new DOMException('aborted', 'AbortError')))),
+    ) as never;
     const started = Date.now();
     const err = await api('/me', { timeoutMs: 50 }).catch((e: unknown) => e);
     expect(isNetworkError(err)).toBe(true);

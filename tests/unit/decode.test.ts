@@ -77,7 +77,11 @@ describe('refusing what it cannot read for certain', () => {
 
   it('refuses text that does not convert back to its bytes, or holds U+FFFD, C1 controls or half a UTF-16 pair', () => {
     // 髙 at its NEC-selected place (0xEEEC) decodes, but is written back at its IBM place (0xFBFC).
-    const nec = Buffer.concat([iconv.encode(`${TUBE_HEADER}\r\n`, 'Shift_JIS'), Buffer.from([0xee, 0xec]), iconv.encode('橋精機,SJ-DT-02,BT-56x4,862,19,25.4,PFA（高純度）,,feed\r\n東雲精機,SJ-DT-01,BT-56x4,862,19,25.4,フッ素樹脂,,feed\r\n', 'Shift_JIS')]);
+    const nec = Buffer.concat([
+      iconv.encode(`${TUBE_HEADER}\r\n`, 'Shift_JIS'),
+      Buffer.from([0xee, 0xec]),
+      iconv.encode('橋精機,SJ-DT-02,BT-56x4,862,19,25.4,PFA（高純度）,,feed\r\n東雲精機,SJ-DT-01,BT-56x4,862,19,25.4,フッ素樹脂,,feed\r\n', 'Shift_JIS'),
+    ]);
     expect(refusal(nec)).toMatchObject({ status: 400, code: 'encoding_uncertain', message: expect.stringMatching(/Shift_JIS.*does not convert back/) });
     expect(refusal(Buffer.from(sheet(['Acme,DT-1,NPS-2,836,19,25.4,PF\ufffdA,,feed']))).message).toMatch(/line 2 holds U\+FFFD/);
     expect(refusal(Buffer.from(sheet(['Acme,DT-1,NPS-2,836,19,25.4,PF\u0085A,,feed']))).message).toMatch(/line 2 holds the control character U\+0085/);

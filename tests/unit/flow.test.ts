@@ -1,14 +1,4 @@
-import {
-  circleAreaM2,
-  computePortFlow,
-  flowRegime,
-  laminarPressureDrop,
-  meanVelocity,
-  reynoldsNumber,
-  velocityRatio,
-  wallShearRate,
-  WATER_20C,
-} from '../../shared/flow';
+import { circleAreaM2, computePortFlow, flowRegime, laminarPressureDrop, meanVelocity, reynoldsNumber, velocityRatio, wallShearRate, WATER_20C } from '../../shared/flow';
 import { flowToM3s } from '../../shared/units';
 
 describe('worked examples', () => {

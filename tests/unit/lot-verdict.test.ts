@@ -9,7 +9,15 @@ const tube = (partNumber: string, lengthMm: number, threadCode = 'G-2'): TubeInp
 function fitOf(drum: DrumInput, tubes: TubeInput[], station: { name: string } | null = null): FitForVerdict {
   const candidates = tubes.map((t) => {
     const e = evaluateCandidate({ drum, tube: t, connector: head, pairing: { status: 'approved' } });
-    return { dipTubePartNumber: t.partNumber!, connectorPartNumber: 'HEAD-1', dipTubeThreadCode: t.threadCode, dipTubeLengthMm: t.lengthMm, installedAtStation: !!station, verdict: e.verdict, rules: e.rules };
+    return {
+      dipTubePartNumber: t.partNumber!,
+      connectorPartNumber: 'HEAD-1',
+      dipTubeThreadCode: t.threadCode,
+      dipTubeLengthMm: t.lengthMm,
+      installedAtStation: !!station,
+      verdict: e.verdict,
+      rules: e.rules,
+    };
   });
   const rank = { fits: 0, caution: 1, 'no-fit': 2 } as const;
   candidates.sort((a, b) => rank[a.verdict] - rank[b.verdict]);
@@ -18,7 +26,13 @@ function fitOf(drum: DrumInput, tubes: TubeInput[], station: { name: string } | 
 }
 
 // Site window 5 to 25 mm: an 818 mm drum takes tubes of 793 to 813 mm.
-const shallow: DrumInput = { insideDepthMm: 818, openings: [{ label: 'G 2 bung', threadCode: 'G-2', keyCode: null }, { label: 'G 3/4 bung', threadCode: 'G-3/4', keyCode: null }] };
+const shallow: DrumInput = {
+  insideDepthMm: 818,
+  openings: [
+    { label: 'G 2 bung', threadCode: 'G-2', keyCode: null },
+    { label: 'G 3/4 bung', threadCode: 'G-3/4', keyCode: null },
+  ],
+};
 const TODAY = '2026-11-20';
 const goodLot: LotAcceptanceInput = { today: TODAY, productionDate: null, expiryDate: '2027-06-01', temperatureIndicator: 'intact', certificateAttached: false, slurry: null };
 
@@ -56,7 +70,9 @@ describe('the lot verdict in plain words', () => {
     expect(v.decision).toBe('quarantine');
     expect(v.sentence).toBe('Quarantine: the temperature indicator shows the lot froze; an engineer must decide.');
     expect(v.blockers.map((b) => `${b.source}:${b.severity}`)).toEqual(['temperature:quarantine', 'shelf-life:hold', 'fit:hold']);
-    expect(holdReasonOf(v)).toMatch(/froze.*expired on 1 Nov 2026.*Closest pairing, dip tube T-830 with head HEAD-1: the tube is too long and bottoms out: it is 12\.0 mm \(0\.47 in\) longer than the drum is deep/s);
+    expect(holdReasonOf(v)).toMatch(
+      /froze.*expired on 1 Nov 2026.*Closest pairing, dip tube T-830 with head HEAD-1: the tube is too long and bottoms out: it is 12\.0 mm \(0\.47 in\) longer than the drum is deep/s,
+    );
   });
 
   it('expired outranks a tripped indicator, which outranks hardware, which outranks a short life and a missing certificate', () => {
@@ -82,7 +98,11 @@ describe('the lot verdict in plain words', () => {
 
   it('a caution keeps what to use first and says the caution after', () => {
     const fits = fitOf(shallow, [tube('T-803', 803)], { name: 'Feed A' });
-    const v = composeLotVerdict({ fit: fits, acceptance: { rules: [{ rule: 'shelf-life', outcome: 'caution', message: "The lot's remaining life is unknown: no production or expiry date was recorded." }], notChecked: [] }, today: TODAY });
+    const v = composeLotVerdict({
+      fit: fits,
+      acceptance: { rules: [{ rule: 'shelf-life', outcome: 'caution', message: "The lot's remaining life is unknown: no production or expiry date was recorded." }], notChecked: [] },
+      today: TODAY,
+    });
     expect(v.decision).toBe('caution');
     expect(v.sentence).toBe("Caution: use dip tube T-803 with head HEAD-1 at Feed A, but the lot's remaining life is unknown: no production or expiry date was recorded.");
   });

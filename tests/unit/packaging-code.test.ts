@@ -64,8 +64,7 @@ describe('parsePackagingCode', () => {
 });
 
 describe('checkDrumPackagingCode', () => {
-  const outcomes = (findings: ReturnType<typeof checkDrumPackagingCode>) =>
-    Object.fromEntries(findings.map((f) => [f.check, f.outcome]));
+  const outcomes = (findings: ReturnType<typeof checkDrumPackagingCode>) => Object.fromEntries(findings.map((f) => [f.check, f.outcome]));
 
   it('passes a code that agrees with the drum record', () => {
     expect(outcomes(checkDrumPackagingCode({ code: '1A1', material: 'steel', head: 'tight' }))).toEqual({
@@ -101,9 +100,7 @@ describe('checkDrumPackagingCode', () => {
   });
 
   it('fails an unreadable code and cautions a code with no head category', () => {
-    expect(checkDrumPackagingCode({ code: 'XYZ', material: 'steel', head: 'tight' })).toEqual([
-      expect.objectContaining({ check: 'code', outcome: 'fail' }),
-    ]);
+    expect(checkDrumPackagingCode({ code: 'XYZ', material: 'steel', head: 'tight' })).toEqual([expect.objectContaining({ check: 'code', outcome: 'fail' })]);
     expect(outcomes(checkDrumPackagingCode({ code: '1G', material: 'fibre', head: 'open' }))).toMatchObject({
       material: 'pass',
       head: 'caution',

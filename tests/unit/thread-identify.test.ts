@@ -58,21 +58,18 @@ describe('thread table holds the published values', () => {
 });
 
 describe('every row identifies itself from its published dimensions', () => {
-  it.each(ASME_B1_20_1.flatMap((s) => ['NPT', 'NPS'].map((family) => ({ ...s, family }))))(
-    '$family $size from ASME B1.20.1 values',
-    ({ size, tpi, odIn, family }) => {
-      // ASME B1.20.1 Table 2: OD and threads per inch, 60 deg [pub]; taper tells NPT from NPS
-      const result = identifyThread({
-        majorDiameterMm: odIn * IN,
-        threadsPerInch: tpi,
-        flankAngleDeg: 60,
-        taper: family === 'NPT' ? 'tapered' : 'parallel',
-      });
-      expect(result.matches[0]?.code).toBe(`${family}-${size}`);
-      expect(result.matches).toHaveLength(1);
-      expect(result.ambiguous).toBe(false);
-    },
-  );
+  it.each(ASME_B1_20_1.flatMap((s) => ['NPT', 'NPS'].map((family) => ({ ...s, family }))))('$family $size from ASME B1.20.1 values', ({ size, tpi, odIn, family }) => {
+    // ASME B1.20.1 Table 2: OD and threads per inch, 60 deg [pub]; taper tells NPT from NPS
+    const result = identifyThread({
+      majorDiameterMm: odIn * IN,
+      threadsPerInch: tpi,
+      flankAngleDeg: 60,
+      taper: family === 'NPT' ? 'tapered' : 'parallel',
+    });
+    expect(result.matches[0]?.code).toBe(`${family}-${size}`);
+    expect(result.matches).toHaveLength(1);
+    expect(result.ambiguous).toBe(false);
+  });
 
   it.each(ISO_228_1)('G $size from ISO 228-1 values', ({ size, tpi, majorMm }) => {
     // ISO 228-1: major diameter, threads per inch, 55 deg [pub]
