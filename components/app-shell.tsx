@@ -5,6 +5,8 @@ import { ROLE_LABELS } from '@/shared/roles';
 import { isActive, navFor } from './navigation';
 import { NoticesIndicator } from './notifications/notices-indicator';
 import { NetworkStrip } from './offline/network-strip';
+import { SignOutGuard } from './offline/sign-out-guard';
+import { useWaitingCount } from './data/dock-queue';
 import { useDockSnapshot } from './data/dock-snapshot';
 import { useSession } from './session';
 import { colors, fonts, minTouch, radius, space, type } from './theme';
@@ -17,6 +19,8 @@ export function AppShell({ children }: { children: ReactNode }) {
   const pathname = usePathname();
   const { session, end } = useSession();
   const [menuOpen, setMenuOpen] = useState(false);
+  const [asking, setAsking] = useState(false);
+  const waiting = useWaitingCount();
   // Kept on the device from the first visit, so the dock can judge a lot when the network is gone.
   useDockSnapshot();
   if (!session) return null;
@@ -35,7 +39,7 @@ export function AppShell({ children }: { children: ReactNode }) {
     </View>
   );
   const signOut = (
-    <Pressable accessibilityRole="button" onPress={end} testID="sign-out" style={[styles.signOut, wide && styles.signOutWide]}>
+    <Pressable accessibilityRole="button" onPress={waiting ? () => setAsking(true) : end} testID="sign-out" style={[styles.signOut, wide && styles.signOutWide]}>
       <Text style={[styles.signOutText, wide && { color: colors.onNav }]}>Sign out</Text>
     </Pressable>
   );
@@ -63,6 +67,7 @@ export function AppShell({ children }: { children: ReactNode }) {
         </View>
         <View style={styles.main}>
           <NetworkStrip />
+          <SignOutGuard asking={asking} setAsking={setAsking} end={end} />
           {children}
         </View>
       </View>
@@ -80,6 +85,7 @@ export function AppShell({ children }: { children: ReactNode }) {
         </View>
       </View>
       <NetworkStrip />
+      <SignOutGuard asking={asking} setAsking={setAsking} end={end} />
       <View style={styles.main}>{children}</View>
       {menuOpen ? (
         <View style={styles.menu} testID="nav-more-menu">

@@ -117,7 +117,7 @@ export function ConnectorFormScreen({ id }: { id?: string }) {
   return (
     <FormFrame
       form={form}
-      title={id ? `Edit connector ${form.base?.partNumber ?? ''}`.trim() : 'New connector'}
+      title={id ? `Edit dispense head ${form.base?.partNumber ?? ''}`.trim() : 'New dispense head'}
       subtitle="A dispense head: its ports, keying and the tapping it is made for."
       testID="connector-form"
       cancelTo={id ? `/registry/connectors/${id}` : '/registry/connectors'}

@@ -20,20 +20,20 @@ export type PairingDraft = {
   notes: string;
 };
 
-const LABELS: Record<string, string> = { dipTubeId: 'Dip tube', connectorId: 'Connector', notes: 'Notes' };
+const LABELS: Record<string, string> = { dipTubeId: 'Dip tube', connectorId: 'Dispense head', notes: 'Notes' };
 
 export const pairingSpec: FormSpec<PairingRecord, PairingDraft> = {
   noun: 'pairing',
   empty: () => ({ dipTubeId: null, connectorId: null, notes: '' }),
   fromRecord: (p) => ({
     dipTubeId: { id: p.dipTubeId, label: p.dipTubePartNumber ?? 'Dip tube' },
-    connectorId: { id: p.connectorId, label: p.connectorPartNumber ?? 'Connector' },
+    connectorId: { id: p.connectorId, label: p.connectorPartNumber ?? 'Dispense head' },
     notes: p.notes ?? '',
   }),
   check: (d) => {
     const c = new Checks();
     c.pick('dipTubeId', 'Dip tube', d.dipTubeId, 'the tube');
-    c.pick('connectorId', 'Connector', d.connectorId, 'the head it goes with');
+    c.pick('connectorId', 'Dispense head', d.connectorId, 'the head it goes with');
     c.text('notes', 'Notes', d.notes, { max: 2000, optional: true });
     return c.errors;
   },
@@ -42,7 +42,7 @@ export const pairingSpec: FormSpec<PairingRecord, PairingDraft> = {
   labelOf: (path) => LABELS[path],
   // The database allows one pairing per tube and connector; its refusal names the connector field.
   serverMessage: (path, message) =>
-    path === 'connectorId' && /already in use/.test(message) ? 'This dip tube and connector are already paired: open that pairing from the pairings list instead.' : undefined,
+    path === 'connectorId' && /already in use/.test(message) ? 'This dip tube and dispense head are already paired: open that pairing from the pairings list instead.' : undefined,
 };
 
 /** Create a pairing of a dip tube and a connector (a draft until another engineer approves it), or edit its notes. */
@@ -87,7 +87,7 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
       title={title}
       subtitle={
         mode === 'create'
-          ? 'A dip tube and the connector it is used with. It starts as a draft; another engineer approves it.'
+          ? 'A dip tube and the dispense head it is used with. It starts as a draft; another engineer approves it.'
           : 'Only the notes change; to pair other parts, retire this pairing and create a new one.'
       }
       testID="pairing-form"
@@ -122,7 +122,7 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
             <Text style={type.body} testID="form-dipTubeId-selected">
               {tube ? dipTubeLabel(tube) : draft.dipTubeId?.label}
             </Text>
-            <Text style={type.label}>Connector</Text>
+            <Text style={type.label}>Dispense head</Text>
             <Text style={type.body} testID="form-connectorId-selected">
               {connector ? connectorLabel(connector) : draft.connectorId?.label}
             </Text>

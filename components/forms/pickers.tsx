@@ -73,7 +73,7 @@ export const DipTubePicker = forwardRef<RecordPickerHandle, PickerProps<DipTubeR
 
 export const connectorLabel = (c: Pick<ConnectorRecord, 'partNumber' | 'suitedTo'>) => `${c.partNumber} · ${c.suitedTo === 'both' ? 'one or two openings' : c.suitedTo}`;
 
-export const ConnectorPicker = forwardRef<RecordPickerHandle, PickerProps<ConnectorRecord> & { noneLabel?: string }>(function ConnectorPicker({ label = 'Connector (dispense head)', ...rest }, ref) {
+export const ConnectorPicker = forwardRef<RecordPickerHandle, PickerProps<ConnectorRecord> & { noneLabel?: string }>(function ConnectorPicker({ label = 'Dispense head', ...rest }, ref) {
   return (
     <RecordPicker
       ref={ref}

@@ -24,7 +24,7 @@ const LABELS: Record<string, string> = {
   bay: 'Bay',
   tapping: 'Tapping',
   agitation: 'Agitation',
-  connectorId: 'Installed connector',
+  connectorId: 'Installed dispense head',
   flowLpm: 'Recirculation flow',
 };
 
@@ -36,7 +36,7 @@ export const stationSpec: FormSpec<StationRecord, StationDraft> = {
     bay: s.bay,
     tapping: s.tapping,
     agitation: s.agitation,
-    connectorId: s.connectorId ? { id: s.connectorId, label: s.connectorPartNumber ?? 'Connector' } : null,
+    connectorId: s.connectorId ? { id: s.connectorId, label: s.connectorPartNumber ?? 'Dispense head' } : null,
     flowLpm: numberText(s.flowLpm, 2),
   }),
   check: (d) => {
@@ -87,8 +87,8 @@ export function StationFormScreen({ id }: { id?: string }) {
         <ChoiceChips label="Tapping" options={TAPPING_OPTIONS} value={draft.tapping} onChange={(v) => set('tapping', v)} error={field('tapping').error} testID="form-tapping" />
         <ChoiceChips label="Agitation" options={AGITATION_OPTIONS} value={draft.agitation} onChange={(v) => set('agitation', v)} error={field('agitation').error} testID="form-agitation" />
         <ConnectorPicker
-          label="Installed connector"
-          noneLabel="No connector installed"
+          label="Installed dispense head"
+          noneLabel="No dispense head installed"
           value={draft.connectorId}
           onChange={(p) => set('connectorId', p)}
           testID="form-connectorId"

@@ -3,7 +3,7 @@ import type { ImportCounts, ImportKind, ImportOutcome } from '../data/imports';
 export const KIND_LABELS: Record<ImportKind, string> = {
   'drum-types': 'Drum types',
   'dip-tubes': 'Dip tubes',
-  connectors: 'Connectors',
+  connectors: 'Dispense heads',
 };
 
 /** What one row of each kind of sheet holds. */

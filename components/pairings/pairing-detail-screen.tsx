@@ -34,9 +34,9 @@ function PairingFacts({ pairing: p }: { pairing: PairingRecord }) {
           {p.threadCode ? ` (${p.threadCode})` : ''}
         </Link>
       </Fact>
-      <Fact label="Connector" testID="pairing-connector">
+      <Fact label="Dispense head" testID="pairing-connector">
         <Link href={`/registry/connectors/${p.connectorId}` as never} style={styles.link}>
-          {p.connectorPartNumber ?? 'Connector'}
+          {p.connectorPartNumber ?? 'Dispense head'}
         </Link>
       </Fact>
       <Fact label="Author" testID="pairing-author">
@@ -79,7 +79,7 @@ export function PairingDetailScreen({ id }: { id: string }) {
     canEdit && p.status !== 'retired' ? <Button label="Edit notes" variant="secondary" onPress={() => router.push(`/registry/pairings/edit/${p.id}` as never)} testID="pairing-edit" /> : null;
   const title = `${p.dipTubePartNumber ?? 'Dip tube'} + ${p.connectorPartNumber ?? 'connector'}`;
   return (
-    <Screen title={title} subtitle="Pairing of a dip tube and the connector it is used with." actions={actions} testID="pairing-detail">
+    <Screen title={title} subtitle="Pairing of a dip tube and the dispense head it is used with." actions={actions} testID="pairing-detail">
       {wide ? (
         <View style={styles.columns}>
           <View style={styles.main}>

@@ -14,7 +14,7 @@ export function ConnectorDetailScreen({ id }: { id: string }) {
     <DetailScreen<ConnectorRecord>
       resource="connectors"
       id={id}
-      kind="Connector"
+      kind="Dispense head"
       query={query}
       title={(c) => c.partNumber}
       subtitle={(c) => `Dispense head · ${SUITED_TO_LABELS[c.suitedTo].toLowerCase()} · ${c.supplierName ?? 'unknown supplier'}`}

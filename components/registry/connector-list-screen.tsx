@@ -29,9 +29,9 @@ export function ConnectorListScreen() {
   return (
     <RegistryListScreen<ConnectorRecord>
       resource="connectors"
-      title="Connectors"
-      subtitle="Dispense heads that lock onto a dip tube: feed and return ports, keying and tapping."
-      noun={{ one: 'connector', many: 'connectors' }}
+      title="Dispense heads"
+      subtitle="Heads that lock onto a dip tube: feed and return ports, keying and tapping."
+      noun={{ one: 'dispense head', many: 'dispense heads' }}
       searchHint="Part number or wetted material"
       useList={(p) => connectorQueries.useList(p)}
       columns={columns}

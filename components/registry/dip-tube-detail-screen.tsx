@@ -59,13 +59,13 @@ export function DipTubeDetailScreen({ id }: { id: string }) {
               </Section>
               <Section title="Pairings" testID="tube-pairings">
                 <RelationList
-                  empty="This tube is not paired with a connector yet."
+                  empty="This tube is not paired with a dispense head yet."
                   items={(t.pairings ?? []).map((p) => ({
                     key: p.id,
-                    title: `With ${p.connectorPartNumber ?? 'a connector'}`,
+                    title: `With ${p.connectorPartNumber ?? 'a dispense head'}`,
                     href: `/registry/pairings/${p.id}`,
                     aside: <StatusChip status={p.status} />,
-                    links: [{ label: 'Connector', href: `/registry/connectors/${p.connectorId}` }],
+                    links: [{ label: 'Dispense head', href: `/registry/connectors/${p.connectorId}` }],
                     testID: `tube-pairing-${p.connectorPartNumber}`,
                   }))}
                 />

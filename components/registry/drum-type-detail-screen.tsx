@@ -63,7 +63,7 @@ export function DrumTypeDetailScreen({ id }: { id: string }) {
               <DrumTypeChecks id={id} unPackagingCode={d.unPackagingCode} />
               <Section
                 title="Pairings for its threads"
-                note="Tube and connector pairings whose tube threads into one of these bungs; the dock check decides whether they reach and lock."
+                note="Tube and dispense head pairings whose tube threads into one of these bungs; the dock check decides whether they reach and lock."
                 testID="drum-pairings"
               >
                 <RelationList
@@ -76,7 +76,7 @@ export function DrumTypeDetailScreen({ id }: { id: string }) {
                     aside: <StatusChip status={p.status} />,
                     links: [
                       { label: 'Dip tube', href: `/registry/dip-tubes/${p.dipTubeId}` },
-                      { label: 'Connector', href: `/registry/connectors/${p.connectorId}` },
+                      { label: 'Dispense head', href: `/registry/connectors/${p.connectorId}` },
                     ],
                     testID: `drum-pairing-${p.dipTubePartNumber}+${p.connectorPartNumber}`,
                   }))}

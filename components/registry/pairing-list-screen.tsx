@@ -8,7 +8,7 @@ const col = createColumnHelper<PairingRecord>();
 
 const columns = [
   col.accessor('dipTubePartNumber', { id: 'dipTube', header: 'Dip tube', enableSorting: true, meta: { primary: true, flex: 1.7 } }),
-  col.accessor('connectorPartNumber', { id: 'connector', header: 'Connector', enableSorting: true, meta: { flex: 1.7 } }),
+  col.accessor('connectorPartNumber', { id: 'connector', header: 'Dispense head', enableSorting: true, meta: { flex: 1.7 } }),
   col.accessor('threadCode', { id: 'threadCode', header: 'Thread', meta: { flex: 0.9 } }),
   col.accessor('status', { id: 'status', header: 'Status', enableSorting: true, cell: (c) => <StatusChip status={c.getValue()} />, meta: { flex: 1.1 } }),
   col.accessor('authorName', { id: 'authorName', header: 'Proposed by', meta: { flex: 1.3, hideOnPhone: true } }),
@@ -21,15 +21,15 @@ export function PairingListScreen() {
     <RegistryListScreen<PairingRecord>
       resource="pairings"
       title="Pairings"
-      subtitle="Which dip tube goes with which connector, as proposed by one engineer and reviewed by another."
+      subtitle="Which dip tube goes with which dispense head, as proposed by one engineer and reviewed by another."
       noun={{ one: 'pairing', many: 'pairings' }}
-      searchHint="Tube or connector part number, notes"
+      searchHint="Tube or dispense head part number, notes"
       useList={(p) => pairingQueries.useList(p)}
       columns={columns}
       defaultSort={{ key: 'updatedAt', order: 'desc' }}
       filters={['pairingStatus', 'thread', 'key']}
       rowTestID={(p) => `${p.dipTubePartNumber}+${p.connectorPartNumber}`}
-      firstHint="from a dip tube and a connector"
+      firstHint="from a dip tube and a dispense head"
     />
   );
 }

@@ -34,7 +34,7 @@ export function SupplierDetailScreen({ id }: { id: string }) {
                   items={[
                     { key: 'drum-types', title: 'Drum types', href: narrow('drum-types'), detail: count(s.drumTypes, 'drum type', 'drum types'), testID: 'supplier-drum-types' },
                     { key: 'dip-tubes', title: 'Dip tubes', href: narrow('dip-tubes'), detail: count(s.dipTubes, 'dip tube', 'dip tubes'), testID: 'supplier-dip-tubes' },
-                    { key: 'connectors', title: 'Connectors', href: narrow('connectors'), detail: count(s.connectors, 'connector', 'connectors'), testID: 'supplier-connectors' },
+                    { key: 'connectors', title: 'Dispense heads', href: narrow('connectors'), detail: count(s.connectors, 'dispense head', 'dispense heads'), testID: 'supplier-connectors' },
                     { key: 'slurries', title: 'Slurries', href: narrow('slurries'), testID: 'supplier-slurries' },
                   ]}
                 />

@@ -42,6 +42,14 @@ export function PlanForm() {
   const [errors, setErrors] = useState<Errors>({});
   const [formError, setFormError] = useState<string | null>(null);
 
+  // A field's message goes when the field is changed, not only at the next submit.
+  const edited =
+    <T,>(field: string, set: (v: T) => void) =>
+    (v: T) => {
+      set(v);
+      setErrors((e) => (e[field] ? { ...e, [field]: null } : e));
+    };
+
   const n = parseNumber(perMonth);
   const sentence = [
     slurryName.trim() || 'Slurry …',
@@ -102,14 +110,14 @@ export function PlanForm() {
       <Text style={[styles.sentence]} testID="plan-sentence" aria-live="polite">
         {sentence}
       </Text>
-      <TextField label="Slurry" placeholder="e.g. STI slurry, second source" value={slurryName} onChangeText={setSlurryName} error={errors.slurryName} testID="plan-slurry" />
+      <TextField label="Slurry" placeholder="e.g. STI slurry, second source" value={slurryName} onChangeText={edited('slurryName', setSlurryName)} error={errors.slurryName} testID="plan-slurry" />
       <RecordPicker<SupplierRecord>
         label="Supplier"
         hint="The supplier's region is shown with its name."
         source={supplierQueries}
         toOption={(s) => ({ id: s.id, label: s.name, detail: REGION_LABELS[s.region] })}
         value={supplier}
-        onChange={(picked, rec) => setSupplier(picked && rec ? { ...picked, region: rec.region } : null)}
+        onChange={(picked, rec) => edited('supplierId', setSupplier)(picked && rec ? { ...picked, region: rec.region } : null)}
         error={errors.supplierId}
         testID="plan-supplier"
       />
@@ -119,16 +127,32 @@ export function PlanForm() {
         source={drumTypeQueries}
         toOption={(d) => ({ id: d.id, label: d.name, detail: `${d.partNumber} · ${REGION_LABELS[d.region]} · ${d.openings.map((o) => o.threadCode).join(' + ')}` })}
         value={drumType}
-        onChange={setDrumType}
+        onChange={edited('drumTypeId', setDrumType)}
         error={errors.drumTypeId}
         testID="plan-drum"
       />
       <View style={styles.pair}>
         <View style={styles.grow}>
-          <TextField label="First delivery" placeholder="YYYY-MM-DD" value={startDate} onChangeText={setStartDate} inputMode="numeric" error={errors.startDate} testID="plan-start" />
+          <TextField
+            label="First delivery"
+            placeholder="YYYY-MM-DD"
+            value={startDate}
+            onChangeText={edited('startDate', setStartDate)}
+            inputMode="numeric"
+            error={errors.startDate}
+            testID="plan-start"
+          />
         </View>
         <View style={styles.grow}>
-          <NumberField label="Drums a month" value={perMonth} onChangeText={setPerMonth} inputMode="numeric" placeholder="e.g. 12" error={errors.drumsPerMonth} testID="plan-drums" />
+          <NumberField
+            label="Drums a month"
+            value={perMonth}
+            onChangeText={edited('drumsPerMonth', setPerMonth)}
+            inputMode="numeric"
+            placeholder="e.g. 12"
+            error={errors.drumsPerMonth}
+            testID="plan-drums"
+          />
         </View>
       </View>
       <ChoiceChips label="Stations that would receive it" options={STATION_MODES} value={stationMode} onChange={setStationMode} testID="plan-stations" />
@@ -148,7 +172,7 @@ export function PlanForm() {
                 label={s.name}
                 hint={s.bay}
                 value={chosen.includes(s.id)}
-                onChange={(on) => setChosen((list) => (on ? [...list, s.id] : list.filter((x) => x !== s.id)))}
+                onChange={(on) => edited('stationIds', setChosen)(on ? [...chosen, s.id] : chosen.filter((x) => x !== s.id))}
                 testID={`plan-station-${s.name}`}
               />
             ))
@@ -162,7 +186,7 @@ export function PlanForm() {
       ) : null}
       <Toggle label="Foams" hint="Checked against each station's agitation." value={foams} onChange={setFoams} testID="plan-foams" />
       <Toggle label="Shear-sensitive" hint="Checked against each station's head and return path." value={shear} onChange={setShear} testID="plan-shear" />
-      <TextField label="Notes (optional)" value={notes} onChangeText={setNotes} multiline error={errors.notes} testID="plan-notes" />
+      <TextField label="Notes (optional)" value={notes} onChangeText={edited('notes', setNotes)} multiline error={errors.notes} testID="plan-notes" />
       {formError ? (
         <Text role="alert" style={styles.error} testID="plan-error">
           {formError}

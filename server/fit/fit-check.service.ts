@@ -88,7 +88,7 @@ interface AdHocDrum {
 }
 type DrumRef = { id: string } | AdHocDrum;
 
-/** "Which tube and connector pairs fit this drum, and why": the server's authoritative answer. */
+/** "Which tube and dispense head pairs fit this drum, and why": the server's authoritative answer. */
 export class FitCheckService {
   constructor(
     private readonly ds: DataSource,

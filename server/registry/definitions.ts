@@ -293,7 +293,7 @@ export const connectorJson = (c: Connector) => ({
 
 export const connectorDef: ResourceDef<Connector> = {
   path: 'connectors',
-  label: 'Connector',
+  label: 'Dispense head',
   entity: Connector,
   alias: 'c',
   dto: ConnectorDto,

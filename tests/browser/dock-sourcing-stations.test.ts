@@ -190,7 +190,12 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await page.getByTestId('nav-sourcing').click();
     await page.getByTestId('plan-form').waitFor();
 
+    // An empty plan is refused field by field, and a field's message goes as soon as it is filled.
+    await page.getByTestId('plan-submit').click();
+    await seen(page, 'plan-slurry-error', 'Name the slurry.');
     await page.getByTestId('plan-slurry').fill(planName);
+    await page.getByTestId('plan-slurry-error').waitFor({ state: 'detached' });
+    await seen(page, 'plan-start-error', 'Enter the first delivery date');
     await pick(page, 'plan-supplier', 'Seoripul');
     await pick(page, 'plan-drum', demo.foreignDrum);
     await page.getByTestId('plan-start').fill('2027-02-01');

@@ -105,6 +105,14 @@ describe.each(VIEWPORTS)('the dock offline at $name width ($width px)', (viewpor
     await harness.shot(offline, 'offline-provisional-verdict', viewport);
     expect(await recorded(lot)).toBe(0);
 
+    // Signing out would delete the waiting check: the first tap asks, and the clerk stays signed in.
+    await offline.getByTestId('sign-out').click();
+    await seen(offline, 'sign-out-guard', /1 dock check is still waiting to be sent\. Signing out deletes it/);
+    await harness.shot(offline, 'offline-sign-out-guard', viewport);
+    await offline.getByTestId('sign-out-keep').click();
+    await offline.getByTestId('sign-out-guard').waitFor({ state: 'detached' });
+    await seen(offline, 'current-role', 'Receiving clerk');
+
     // The app is closed and opened again, still offline: the check is still waiting.
     await waitKept(offline, lot);
     await offline.close();

@@ -205,7 +205,7 @@ describe.each(VIEWPORTS)('registry at $name width ($width px)', (viewport) => {
     await expect(text(page, 'tube-pairings')).resolves.toMatch(/RFH-DH-C1919-OX/);
     await shot(page, 'registry-dip-tube-detail', viewport);
 
-    await page.getByTestId('tube-pairing-RFH-DH-C1919-OX').getByRole('link', { name: 'Connector' }).click();
+    await page.getByTestId('tube-pairing-RFH-DH-C1919-OX').getByRole('link', { name: 'Dispense head' }).click();
     await page.getByTestId('connector-stations').waitFor();
     await page.getByTestId('connector-station-Oxide CMP feed A').waitFor();
     await shot(page, 'registry-connector-detail', viewport);
