@@ -347,7 +347,12 @@ async function main() {
     if (mode === 'bench') {
       // A scratch database filled by the benchmark itself; the web export is measured, so it is built first.
       if (serverCli(['prepare', '--recreate', '--no-seed'], dbEnv) !== 0) fail('Preparing the benchmark database failed: see the output above.');
-      exportWeb();
+      // BUNGWISE_BENCH_ONLY without "web" measures no page load: no export needed.
+      const only = (env.BUNGWISE_BENCH_ONLY ?? '')
+        .split(',')
+        .map((s) => s.trim())
+        .filter(Boolean);
+      if (!only.length || only.includes('web')) exportWeb();
       const code = run('node', [path.join(root, 'dist', 'server', 'scripts', 'bench.js')], {
         env: { ...env, ...dbEnv, BUNGWISE_WEB_DIR: webDir, BUNGWISE_PG_BIN: bin ?? findPgBin() ?? '', JWT_SECRET: 'bench-secret' },
       });

@@ -1,14 +1,12 @@
 import { Readable } from 'node:stream';
-import { plainToInstance } from 'class-transformer';
-import { validateSync, type ValidationError } from 'class-validator';
 import { parse } from 'csv-parse';
 import type { EntityManager } from 'typeorm';
 import { inToMm } from '../../shared/units';
 import { HttpError } from '../common/errors';
 import { KeyCode, Supplier, ThreadSpec, type ImportKind } from '../entities';
 import { nearestCodes } from '../registry/refs';
-import { ConnectorDto, DipTubeDto, DrumTypeDto } from '../registry/registry.dto';
 import { COLUMNS, normaliseHeader, type ColumnSpec } from './columns';
+import { rowProblem } from './row-rules';
 
 // Reading a sheet's rows: headers to fields and units, names and codes to ids, each row validated like the API.
 
@@ -16,21 +14,6 @@ export interface RowError {
   line: number;
   column: string;
   reason: string;
-}
-
-const DTO = new Map<ImportKind, new () => object>([
-  ['dip-tubes', DipTubeDto],
-  ['connectors', ConnectorDto],
-  ['drum-types', DrumTypeDto],
-]);
-
-function firstProblem(errors: ValidationError[]): { field: string; message: string } | null {
-  for (const e of errors) {
-    if (e.constraints) return { field: e.property, message: Object.values(e.constraints)[0] };
-    const inner = firstProblem(e.children ?? []);
-    if (inner) return { field: `${e.property}.${inner.field}`, message: inner.message };
-  }
-  return null;
 }
 
 /** The registry's suppliers, thread and key codes, to resolve names and codes in a sheet. */
@@ -137,7 +120,7 @@ export async function parseRows(kind: ImportKind, text: string, delimiter: ',' |
   return { rows, errors, ignoredColumns, header };
 }
 
-/** Supplier names, thread and key codes to ids; then the same validation as the API. False when rejected. */
+/** Supplier names, thread and key codes to ids; then the API's field rules (row-rules.ts). False when rejected. */
 function resolveRow(kind: ImportKind, values: Record<string, unknown>, line: number, header: string[], map: Array<{ spec: ColumnSpec; index: number }>, refs: References, errors: RowError[]): boolean {
   const col = (field: string) => header[map.find((c) => c.spec.field === field)?.index ?? -1] ?? field;
   const supplier = refs.suppliers.get(String(values.supplier).toLowerCase());
@@ -166,23 +149,9 @@ function resolveRow(kind: ImportKind, values: Record<string, unknown>, line: num
     });
     return false;
   }
-  const dto =
-    kind === 'drum-types'
-      ? {
-          ...pickKeys(values, ['supplierId', 'region', 'name', 'partNumber', 'nominalCapacityL', 'material', 'head', 'unPackagingCode', 'outsideHeightMm', 'insideDepthMm', 'outsideDiameterMm']),
-          openings: [{ label: values.openingLabel, threadCode: values.openingThread, boreMm: values.openingBoreMm, keyCode: values.openingKey ?? null, position: values.openingPosition }],
-        }
-      : { ...values, supplier: undefined };
-  delete (dto as Record<string, unknown>).supplier;
-  const problem = firstProblem(validateSync(plainToInstance(DTO.get(kind)!, dto), { whitelist: true, forbidNonWhitelisted: false }));
+  const problem = rowProblem(kind, values);
   if (problem) {
-    const field = OPENING_FIELDS.get(problem.field) ?? problem.field;
-    errors.push({ line, column: col(field), reason: `${field} ${problem.message}` });
-    return false;
-  }
-  const extra = crossFieldProblem(kind, values);
-  if (extra) {
-    errors.push({ line, column: col(extra.field), reason: extra.reason });
+    errors.push({ line, column: col(problem.field), reason: problem.cross ? problem.message : `${problem.field} ${problem.message}` });
     return false;
   }
   if (kind !== 'drum-types') {
@@ -196,26 +165,6 @@ function resolveRow(kind: ImportKind, values: Record<string, unknown>, line: num
 }
 
 type References = Awaited<ReturnType<typeof loadReferences>>;
-
-/** Drum-type rows carry one opening each; validation names the nested field, the file names the column. */
-const OPENING_FIELDS = new Map([
-  ['openings.0.label', 'openingLabel'],
-  ['openings.0.threadCode', 'openingThread'],
-  ['openings.0.boreMm', 'openingBoreMm'],
-  ['openings.0.keyCode', 'openingKey'],
-  ['openings.0.position', 'openingPosition'],
-]);
-
-/** The checks the API makes across fields, which class-validator does not express. */
-function crossFieldProblem(kind: ImportKind, v: Record<string, unknown>): { field: string; reason: string } | null {
-  if (kind === 'dip-tubes' && Number(v.boreMm) >= Number(v.odMm)) return { field: 'boreMm', reason: 'bore must be smaller than the outside diameter' };
-  if (kind === 'connectors') {
-    if (v.returnPath === 'none' && v.returnBoreMm != null) return { field: 'returnBoreMm', reason: 'must be empty when the head has no return path' };
-    if (v.returnPath !== 'none' && v.returnBoreMm == null) return { field: 'returnBoreMm', reason: 'is required when the head has a return path' };
-  }
-  if (kind === 'drum-types' && Number(v.insideDepthMm) >= Number(v.outsideHeightMm)) return { field: 'insideDepthMm', reason: 'must be less than the outside height' };
-  return null;
-}
 
 export function pickKeys(o: Record<string, unknown>, keys: string[]): Record<string, unknown> {
   return Object.fromEntries(keys.filter((k) => o[k] !== undefined).map((k) => [k, o[k]]));
