@@ -3,7 +3,7 @@ import type { DataSource } from 'typeorm';
 import type { DockSnapshot } from '../../shared/dock/snapshot';
 import type { PoolRow } from '../../shared/fit/search';
 import { DrumType, Slurry, Station, Supplier, ThreadSpec, TubeSet } from '../entities';
-import { CANDIDATE_SQL } from '../fit/fit-check.service';
+import { CANDIDATE_SQL } from '../fit/fit-check.sql';
 import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 import { slurryAcceptance } from './lot-decision';
 
