@@ -217,7 +217,11 @@ export class FitCheckService {
             id: drumTypeId,
             name: row.drum.name,
             partNumber: row.drum.part_number,
-            input: { insideDepthMm: row.drum.inside_depth_mm, openings: row.openings.map((o) => ({ label: o.label, threadCode: o.thread_code, keyCode: o.key_code, boreMm: o.bore_mm })) },
+            input: {
+              insideDepthMm: row.drum.inside_depth_mm,
+              head: row.drum.head,
+              openings: row.openings.map((o) => ({ label: o.label, threadCode: o.thread_code, keyCode: o.key_code, boreMm: o.bore_mm })),
+            },
             threadSpecIds: row.openings.map((o) => o.thread_spec_id),
           }
         : { id: null, name: null, partNumber: null, input: adHoc!.input, threadSpecIds: adHoc!.threadSpecIds };

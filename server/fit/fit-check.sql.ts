@@ -1,3 +1,4 @@
+import type { DrumHead } from '../../shared/packaging-code';
 import { POOL_LIMIT, TUBES_IN_WINDOW, TUBES_NEAR_MISS, type PoolRow } from '../../shared/fit/search';
 
 // The statements of the fit check (server/fit/fit-check.service.ts) and the dock snapshot.
@@ -25,7 +26,7 @@ const CANDIDATE_ORDER = `CASE status WHEN 'approved' THEN 0 ELSE 1 END, tube_par
  */
 export const SNAPSHOT_SQL = `
   WITH st AS (SELECT * FROM site_settings ORDER BY created_at LIMIT 1),
-  d AS (SELECT name, part_number, inside_depth_mm FROM drum_types WHERE id = $1::uuid),
+  d AS (SELECT name, part_number, inside_depth_mm, head FROM drum_types WHERE id = $1::uuid),
   o AS (
     SELECT o.label, o.thread_spec_id, th.code AS thread_code, k.code AS key_code, o.bore_mm
     FROM drum_openings o JOIN thread_specs th ON th.id = o.thread_spec_id LEFT JOIN key_codes k ON k.id = o.key_code_id
@@ -58,7 +59,7 @@ export const SNAPSHOT_SQL = `
 
 export interface SnapshotRow {
   settings: { tip_clearance_min_mm: number; tip_clearance_max_mm: number; thread_match_tolerance_mm: number; laminar_limit: number; max_return_velocity_ratio: number } | null;
-  drum: { name: string; part_number: string; inside_depth_mm: number } | null;
+  drum: { name: string; part_number: string; inside_depth_mm: number; head: DrumHead } | null;
   openings: Array<{ label: string; thread_spec_id: string; thread_code: string; key_code: string | null; bore_mm: number }>;
   candidates: PoolRow[];
 }

@@ -40,6 +40,7 @@ export async function buildDockSnapshot(ds: DataSource, now: Date): Promise<Dock
           partNumber: d.partNumber,
           supplierName: d.supplier?.name ?? null,
           insideDepthMm: d.insideDepthMm,
+          head: d.head,
           openings: (d.openings ?? [])
             .map((o) => ({ label: o.label, threadCode: o.threadSpec!.code, keyCode: o.keyCode?.code ?? null, boreMm: o.boreMm ?? null }))
             .sort((a, b) => byText(a.label, b.label)),
