@@ -4,8 +4,9 @@
 
 import { checkApproval, checkFoam, checkKey, checkOpenings, checkPorts, checkReach, checkRinse, checkTapping, checkThread } from './rules';
 import type { RuleFn } from './rule-kit';
+import { checkTightHeadOpenings } from './tight-head';
 
-export const RULE_NAMES = ['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse'] as const;
+export const RULE_NAMES = ['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse', 'tight-head'] as const;
 export type RuleName = (typeof RULE_NAMES)[number];
 
 interface RuleEntry {
@@ -25,6 +26,7 @@ const RULES: Record<RuleName, RuleEntry> = {
   openings: { label: 'Openings', judgesDrum: true, check: checkOpenings },
   approval: { label: 'Approval', judgesDrum: false, check: checkApproval },
   rinse: { label: 'Rinse', judgesDrum: false, check: checkRinse },
+  'tight-head': { label: 'Tight-head openings', judgesDrum: true, check: checkTightHeadOpenings },
 };
 
 /** Every rule, in the order results are listed. */
