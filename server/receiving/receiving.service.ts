@@ -10,44 +10,11 @@ import { audit } from '../audit/audit';
 import { noticeVerdictDiffers, raiseHoldNotices } from './hold-effects';
 import { certificateAttached, decide, siteToday } from './lot-decision';
 import type { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
+import { receivingJson } from './receiving.json';
+
+export { receivingJson };
 
 const RELATIONS = { supplier: true, slurry: true, drumType: true, station: true, checkedBy: true, heldBy: true, releasedBy: true } as const;
-
-export const receivingJson = (r: ReceivingCheck) => ({
-  id: r.id,
-  version: r.version,
-  lotNumber: r.lotNumber,
-  supplierId: r.supplierId,
-  supplierName: r.supplier?.name ?? null,
-  slurryId: r.slurryId,
-  slurryName: r.slurry?.name ?? null,
-  drumCount: r.drumCount,
-  drumTypeId: r.drumTypeId,
-  drumTypeName: r.drumType?.name ?? null,
-  drumTypePartNumber: r.drumType?.partNumber ?? null,
-  drumDescription: r.drumDescription,
-  stationId: r.stationId,
-  stationName: r.station?.name ?? null,
-  productionDate: r.productionDate,
-  expiryDate: r.expiryDate,
-  temperatureIndicator: r.temperatureIndicator,
-  verdict: r.verdict,
-  decision: r.decision,
-  lotVerdict: r.acceptance,
-  provisional: r.provisional,
-  result: r.result,
-  checkedById: r.checkedById,
-  checkedByName: r.checkedBy?.displayName ?? null,
-  checkedAt: r.createdAt,
-  status: r.status,
-  holdReason: r.holdReason,
-  heldByRules: r.heldByRules,
-  heldByName: r.heldBy?.displayName ?? null,
-  heldAt: r.heldAt,
-  releasedByName: r.releasedBy?.displayName ?? null,
-  releasedAt: r.releasedAt,
-  releaseComment: r.releaseComment,
-});
 
 const isClientKeyClash = (err: unknown) => err instanceof QueryFailedError && (err.driverError as { constraint?: string }).constraint === 'receiving_checks_client_key';
 
