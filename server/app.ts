@@ -19,13 +19,16 @@ import { attachmentsRouter } from './attachments/attachments.router';
 import { auditRouter } from './audit/audit';
 import type { ChangeFeed } from './db/change-feed';
 import { fitCheckRouter } from './fit/fit-check.router';
+import { FitCheckService } from './fit/fit-check.service';
 import { exportsRouter } from './imports/exports.router';
 import type { ImportOptions } from './imports/import.service';
 import { importsRouter } from './imports/imports.router';
 import type { Storage } from './storage/storage';
 import { notificationsRouter } from './notifications/notifications.router';
 import { receivingRouter } from './receiving/receiving.router';
+import { ReceivingService } from './receiving/receiving.service';
 import { sourcingRouter } from './sourcing/sourcing.router';
+import { SourcingService } from './sourcing/sourcing.service';
 import { rotationRouter } from './stations/rotation.router';
 import { pairingActionsRouter } from './pairings/pairing-actions.router';
 import { RESOURCES, pairingDef } from './registry/definitions';
@@ -64,6 +67,10 @@ export interface AppOptions {
   clock?: () => Date;
 }
 
+// Requests that change no table the kept answers or users are read from (a fit check writes nothing; a dock
+// check writes the lot, its notices and warnings): they leave what is kept in place.
+const WRITES_NO_KEPT_TABLE = new Set(['/fit-checks', '/receiving-checks']);
+
 /** The app factory: everything under /api, the web app at /. One process is stateless apart from the kept fit
  * answers and signed-in users (which every process drops when their tables change). */
 export function createApp(options: AppOptions): Express {
@@ -96,11 +103,14 @@ export function createApp(options: AppOptions): Express {
   api.use(passwords.forgot);
   const changes = options.changes ?? null;
   const fitAnswers = changes?.keep<Buffer>('bungwise_registry', { maxSize: 32 * 2 ** 20, sizeOf: (json) => json.length }) ?? null;
+  // One fit service for the fit-check route, the dock and sourcing: all three use the kept answers.
+  const fit = new FitCheckService(ds, fitAnswers);
+  const receiving = new ReceivingService(ds, fit, options.clock);
   if (changes) {
     // Read your own writes: a change accepted by this process drops what it keeps before its answer is
     // sent, without waiting for the database's notice (which the other processes act on).
     api.use((req, res, next) => {
-      if (req.method !== 'GET' && req.method !== 'HEAD' && req.path !== '/fit-checks') {
+      if (req.method !== 'GET' && req.method !== 'HEAD' && !WRITES_NO_KEPT_TABLE.has(req.path)) {
         onHeaders(res, () => {
           if (res.statusCode < 400) changes.invalidateAll();
         });
@@ -116,7 +126,7 @@ export function createApp(options: AppOptions): Express {
   // An account with a temporary password may only change it (and read itself) until it has.
   api.use(passwordChangeGate());
   // The dock's hot path first: every router above it is matched against each request.
-  api.use(fitCheckRouter(ds, fitAnswers));
+  api.use(fitCheckRouter(fit));
   api.use(usersRouter(ds));
   api.use(passwords.signedIn);
   api.use(settingsRouter(ds));
@@ -124,10 +134,10 @@ export function createApp(options: AppOptions): Express {
   api.use(rotationRouter(ds));
   for (const def of RESOURCES) api.use(resourceRouter(ds, def).router);
   api.use(toolsRouter(ds));
-  api.use(receivingRouter(ds, options.clock));
-  api.use(sourcingRouter(ds));
+  api.use(receivingRouter(ds, receiving, options.clock));
+  api.use(sourcingRouter(new SourcingService(ds, fit)));
   api.use(notificationsRouter(ds));
-  api.use(attachmentsRouter(ds, options.storage ?? null, options.clock));
+  api.use(attachmentsRouter(ds, options.storage ?? null, receiving));
   api.use(importsRouter(ds, options.storage ?? null, options.imports));
   api.use(exportsRouter(ds));
   api.use(auditRouter(ds));

@@ -1,5 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { FitRuleRecord } from '@/shared/api-types';
+import { FIT_RULE_LABELS } from '@/shared/fit/registry';
 import { colors, fonts, radius, space, type } from '../theme';
 
 export type Verdict = 'fits' | 'caution' | 'no-fit';
@@ -18,16 +19,9 @@ const OUTCOME_LOOK: Record<Outcome, { word: string; mark: string; fg: string }> 
   fail: { word: 'fails', mark: '✕', fg: colors.noFit },
 };
 
+// The fit rules' labels live with the rules (shared/fit/registry.ts); the lot rules' here.
 export const RULE_LABELS: Record<string, string> = {
-  thread: 'Thread',
-  key: 'Keying',
-  reach: 'Reach to bottom',
-  tapping: 'Tapping',
-  ports: 'Feed and return ports',
-  foam: 'Foaming',
-  openings: 'Openings',
-  approval: 'Approval',
-  rinse: 'Rinse',
+  ...FIT_RULE_LABELS,
   'shelf-life': 'Shelf life',
   temperature: 'Temperature indicator',
   certificate: 'Certificate of analysis',

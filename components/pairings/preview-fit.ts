@@ -9,7 +9,6 @@ import {
   verdictOf,
   type CandidateInput,
   type FitSettings,
-  type RuleName,
   type RuleNotChecked,
   type RuleResult,
   type StationInput,
@@ -17,7 +16,7 @@ import {
 } from '@/shared/fit';
 
 export interface FitPreviewInput {
-  drum: Pick<DrumTypeRecord, 'insideDepthMm' | 'openings'> | null;
+  drum: Pick<DrumTypeRecord, 'insideDepthMm' | 'head' | 'openings'> | null;
   tube: Pick<DipTubeRecord, 'threadCode' | 'lengthMm' | 'keyCode' | 'channels'>;
   connector: Pick<ConnectorRecord, 'keyCode' | 'feedBoreMm' | 'feedNominal' | 'returnBoreMm' | 'returnNominal' | 'returnPath' | 'suitedTo'>;
   station: StationInput | null;
@@ -31,12 +30,9 @@ export interface FitPreviewResult {
   notChecked: RuleNotChecked[];
 }
 
-/** Rules that read the drum; without a drum type they are listed as not checked. */
-const DRUM_RULES: ReadonlySet<RuleName> = new Set<RuleName>(['thread', 'reach', 'openings']);
-
 export function previewFit(input: FitPreviewInput): FitPreviewResult {
   const candidate: CandidateInput = {
-    drum: input.drum ? { insideDepthMm: input.drum.insideDepthMm, openings: input.drum.openings } : { insideDepthMm: 0, openings: [] },
+    drum: input.drum ? { insideDepthMm: input.drum.insideDepthMm, head: input.drum.head, openings: input.drum.openings } : { insideDepthMm: 0, openings: [] },
     tube: { threadCode: input.tube.threadCode ?? '', lengthMm: input.tube.lengthMm, keyCode: input.tube.keyCode, channels: input.tube.channels },
     connector: { ...input.connector },
     station: input.station,
@@ -51,8 +47,9 @@ export function previewFit(input: FitPreviewInput): FitPreviewResult {
   const settings = resolveSettings(input.settings);
   const rules: RuleResult[] = [];
   const notChecked: RuleNotChecked[] = [];
-  for (const { name, check } of FIT_RULES) {
-    if (DRUM_RULES.has(name)) {
+  // Rules that judge the drum are listed as not checked without a drum type.
+  for (const { name, judgesDrum, check } of FIT_RULES) {
+    if (judgesDrum) {
       notChecked.push({ rule: name, reason: 'not checked: no drum type chosen' });
       continue;
     }

@@ -4,7 +4,7 @@ import type { DataSource } from 'typeorm';
 import { secured } from '../auth/policy';
 import { parseId } from '../registry/resource';
 import { attachmentDisposition, type Storage } from '../storage/storage';
-import { ReceivingService } from '../receiving/receiving.service';
+import type { ReceivingService } from '../receiving/receiving.service';
 import { AttachmentsService } from './attachments.service';
 import { MAX_ATTACHMENT_BYTES } from './file-kind';
 import { singleFileUpload } from '../common/uploads';
@@ -13,10 +13,9 @@ import { refuseQuery } from '../common/validate';
 const LINK_SECONDS = 120;
 
 /** Files kept with records: the service checks the owner's policy, the store and the type. */
-export function attachmentsRouter(ds: DataSource, storage: Storage | null, clock?: () => Date): Router {
+export function attachmentsRouter(ds: DataSource, storage: Storage | null, receiving: ReceivingService): Router {
   const service = new AttachmentsService(ds, storage);
   const router = Router();
-  const receiving = new ReceivingService(ds, clock);
   const r = secured(router);
   const upload = singleFileUpload({ fileSize: MAX_ATTACHMENT_BYTES, files: 1, fields: 10 });
 

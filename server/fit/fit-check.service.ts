@@ -1,7 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { DrumInput, FitSettings, StationInput } from '../../shared/fit/types';
 import { resolveSettings } from '../../shared/fit/rules';
-import { judgeDrum, POOL_LIMIT, TUBES_IN_WINDOW, TUBES_NEAR_MISS, type JudgedDrum, type PoolRow } from '../../shared/fit/search';
+import { judgeDrum, type JudgedDrum, type PoolRow } from '../../shared/fit/search';
 import { fieldError, ValidationFailed } from '../common/errors';
 import { parseDto } from '../common/validate';
 import { Slurry, Station, TubeSet } from '../entities';
@@ -10,75 +10,12 @@ import { loadSettings } from '../settings/settings.service';
 import { preparedQuery } from '../db/prepared';
 import type { Kept } from '../db/change-feed';
 import { FitCheckDto } from './fit-check.dto';
+import { SNAPSHOT_SQL, type SnapshotRow } from './fit-check.sql';
 
 const isoOrNull = (d: Date | string | null): string | null => (d === null ? null : d instanceof Date ? d.toISOString() : d);
 
-/** A candidate row as the SQL reads it (the columns `judgeDrum` takes). */
-type CandidateRow = PoolRow;
-
 interface ResolvedDrum extends JudgedDrum {
   threadSpecIds: string[];
-}
-
-export const CANDIDATE_SQL = `
-  SELECT p.id AS pairing_id, p.status, t.id AS dip_tube_id, t.part_number AS tube_part, th.code AS thread_code, t.length_mm,
-         tk.code AS tube_key, t.channels, c.id AS connector_id, c.part_number AS head_part, ck.code AS head_key,
-         c.feed_bore_mm, c.feed_nominal, c.return_bore_mm, c.return_nominal, c.return_path, c.suited_to
-  FROM pairings p
-  JOIN dip_tubes t ON t.id = p.dip_tube_id
-  JOIN thread_specs th ON th.id = t.thread_spec_id
-  LEFT JOIN key_codes tk ON tk.id = t.key_code_id
-  JOIN connectors c ON c.id = p.connector_id
-  LEFT JOIN key_codes ck ON ck.id = c.key_code_id
-  WHERE p.status <> 'retired'`;
-
-/** Approved pairings first, then by part numbers: which candidates make the pool when there are more. */
-const POOL_ORDER = `CASE p.status WHEN 'approved' THEN 0 ELSE 1 END, t.part_number, c.part_number`;
-const CANDIDATE_ORDER = `CASE status WHEN 'approved' THEN 0 ELSE 1 END, tube_part, head_part`;
-
-/**
- * $1 the drum type, or null for a hand-described drum with depth $2 and thread ids $3; $4 the station's
- * installed head or null. The limits are written into the text (not parameters) so the generic plan is
- * costed for the real sizes: a few dozen index lookups, never a scan of the pairings.
- */
-export const SNAPSHOT_SQL = `
-  WITH st AS (SELECT * FROM site_settings ORDER BY created_at LIMIT 1),
-  d AS (SELECT name, part_number, inside_depth_mm FROM drum_types WHERE id = $1::uuid),
-  o AS (
-    SELECT o.label, o.thread_spec_id, th.code AS thread_code, k.code AS key_code, o.bore_mm
-    FROM drum_openings o JOIN thread_specs th ON th.id = o.thread_spec_id LEFT JOIN key_codes k ON k.id = o.key_code_id
-    WHERE o.drum_type_id = $1::uuid),
-  reach AS (
-    SELECT depth - st.tip_clearance_max_mm AS lo, depth - st.tip_clearance_min_mm AS hi
-    FROM st, (SELECT coalesce((SELECT inside_depth_mm FROM d), $2::float8) AS depth) depth),
-  threads AS (SELECT thread_spec_id AS id FROM o UNION SELECT unnest($3::uuid[])),
-  tubes AS (
-    SELECT x.id FROM threads, reach, LATERAL (
-      (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm BETWEEN reach.lo AND reach.hi ORDER BY length_mm LIMIT ${TUBES_IN_WINDOW})
-      UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm < reach.lo ORDER BY length_mm DESC LIMIT ${TUBES_NEAR_MISS}) below)
-      UNION ALL (SELECT id FROM (SELECT id FROM dip_tubes WHERE thread_spec_id = threads.id AND length_mm > reach.hi ORDER BY length_mm ASC LIMIT ${TUBES_NEAR_MISS}) above)) x),
-  pairs AS (
-    SELECT p.* FROM tubes, LATERAL (SELECT id, status, dip_tube_id, connector_id FROM pairings WHERE dip_tube_id = tubes.id AND status <> 'retired' OFFSET 0) p),
-  by_tube AS (
-    SELECT p.id FROM pairs p JOIN dip_tubes t ON t.id = p.dip_tube_id JOIN connectors c ON c.id = p.connector_id
-    ORDER BY ${POOL_ORDER} LIMIT ${POOL_LIMIT}),
-  by_head AS (
-    SELECT p.id FROM pairings p JOIN dip_tubes t ON t.id = p.dip_tube_id JOIN connectors c ON c.id = p.connector_id
-    WHERE p.connector_id = $4::uuid AND p.status <> 'retired' AND p.id NOT IN (SELECT id FROM by_tube)
-    ORDER BY ${POOL_ORDER} LIMIT ${POOL_LIMIT}),
-  pool AS (
-    SELECT CASE WHEN x.pairing_id IN (SELECT id FROM by_tube) THEN 0 ELSE 1 END AS part, x.*
-    FROM (${CANDIDATE_SQL} AND p.id IN (SELECT id FROM by_tube UNION ALL SELECT id FROM by_head)) x)
-  SELECT (SELECT to_jsonb(st) FROM st) AS settings,
-         (SELECT to_jsonb(d) FROM d) AS drum,
-         (SELECT coalesce(jsonb_agg(o ORDER BY o.label), '[]') FROM o) AS openings,
-         (SELECT coalesce(jsonb_agg(to_jsonb(pool) - 'part' ORDER BY part, ${CANDIDATE_ORDER}), '[]') FROM pool) AS candidates`;
-
-interface SnapshotRow {
-  settings: { tip_clearance_min_mm: number; tip_clearance_max_mm: number; thread_match_tolerance_mm: number; laminar_limit: number; max_return_velocity_ratio: number } | null;
-  drum: { name: string; part_number: string; inside_depth_mm: number } | null;
-  openings: Array<{ label: string; thread_spec_id: string; thread_code: string; key_code: string | null; bore_mm: number }>;
-  candidates: CandidateRow[];
 }
 
 /** A drum to check: a registered drum type by id, or one described by hand (already resolved to thread ids). */
@@ -88,72 +25,102 @@ interface AdHocDrum {
 }
 type DrumRef = { id: string } | AdHocDrum;
 
-/** "Which tube and dispense head pairs fit this drum, and why": the server's authoritative answer. */
+/** A slurry as the rules read it: a registered one, or a plan's name and properties. */
+type SlurryFlags = { id?: string; name: string; foams: boolean; shearSensitive: boolean };
+
+/** A fit-check question that has passed validation (the API's body, or one the dock or sourcing builds). */
+export type FitQuestion = Pick<FitCheckDto, 'drumTypeId' | 'drum' | 'slurryId' | 'stationId' | 'tubeSetId' | 'tapping' | 'agitation' | 'flowLpm'>;
+
+export type FitAnswer = ReturnType<typeof judgeDrum>;
+
+/**
+ * "Which tube and dispense head pairs fit this drum, and why": the server's authoritative answer. One instance,
+ * built by the app factory, serves the fit-check route, the dock and sourcing, so all three use the answers
+ * kept since the registry last changed.
+ */
 export class FitCheckService {
   constructor(
     private readonly ds: DataSource,
     private readonly answers: Kept<Buffer> | null = null,
   ) {}
 
-  /** The check for one request body. */
-  async check(body: unknown) {
-    return this.compute(await this.parse(body));
+  /** A request body as a question: validated once, here, with the rules that tie its fields together. */
+  async parse(body: unknown): Promise<FitQuestion> {
+    return this.crossCheck(await parseDto(FitCheckDto, body));
+  }
+
+  /** The fields that go together (already-validated questions from inside the server come through here too). */
+  crossCheck(q: FitQuestion): FitQuestion {
+    if (!q.drumTypeId === !q.drum) {
+      throw new ValidationFailed([{ field: q.drumTypeId ? 'drum' : 'drumTypeId', messages: ['give either drumTypeId or drum, not both and not neither'] }]);
+    }
+    if (q.stationId && (q.tapping || q.agitation || q.flowLpm !== undefined)) {
+      throw fieldError('stationId', 'give either stationId or tapping/agitation/flowLpm, not both');
+    }
+    return q;
   }
 
   /**
    * The answer as UTF-8 JSON, from the kept answers when the question is about the registry alone (a
    * drum type, with a slurry or a described station at most). With a registered station or tube set the
-   * rinse rules depend on the clock and on rotation, so those are always computed.
+   * answer depends on the station's rotation, which the kept answers do not follow, so those are always computed.
    */
-  async answer(body: unknown): Promise<{ json: Buffer; cache: 'hit' | 'miss' | 'bypass'; stored: boolean }> {
-    const dto = await this.parse(body);
-    const key =
-      this.answers && dto.drumTypeId && !dto.stationId && !dto.tubeSetId
-        ? JSON.stringify([dto.drumTypeId.toLowerCase(), dto.slurryId?.toLowerCase() ?? null, dto.tapping ?? null, dto.agitation ?? null, dto.flowLpm ?? null])
-        : null;
+  async answer(q: FitQuestion): Promise<{ json: Buffer; cache: 'hit' | 'miss' | 'bypass'; stored: boolean }> {
+    return this.kept(this.keyOf(q), () => this.compute(q));
+  }
+
+  /** The answer as an object, for the dock: the same kept answers the route serves. */
+  async result(q: FitQuestion): Promise<FitAnswer> {
+    const key = this.keyOf(this.crossCheck(q));
+    if (!key || !this.answers) return this.compute(q);
+    return JSON.parse((await this.kept(key, () => this.compute(q))).json.toString('utf8')) as FitAnswer;
+  }
+
+  private keyOf(q: FitQuestion): string | null {
+    if (!q.drumTypeId || q.stationId || q.tubeSetId) return null;
+    return JSON.stringify([q.drumTypeId.toLowerCase(), q.slurryId?.toLowerCase() ?? null, q.tapping ?? null, q.agitation ?? null, q.flowLpm ?? null]);
+  }
+
+  /** A registered drum type at a registered station with a slurry by its properties (sourcing plans, hold notices). */
+  async checkFor(m: EntityManager, args: { drumTypeId: string; stationId?: string | null; slurry?: SlurryFlags | null }): Promise<FitAnswer> {
+    const compute = async () => {
+      const { station, stationRow } = await this.station(m, { stationId: args.stationId ?? undefined });
+      const tubeSet = await this.nextTubeSet(m, {}, stationRow);
+      return this.run(m, { drum: { id: args.drumTypeId }, station, stationRow, slurry: args.slurry ?? null, tubeSet, fieldForDrum: 'drumTypeId' });
+    };
+    const s = args.slurry;
+    const key = args.stationId ? null : JSON.stringify(['flags', args.drumTypeId.toLowerCase(), s ? [s.name, s.foams, s.shearSensitive] : null]);
+    if (!key || !this.answers) return compute();
+    return JSON.parse((await this.kept(key, compute)).json.toString('utf8')) as FitAnswer;
+  }
+
+  /** `compute`'s answer, kept under `key` until the registry changes; a null key is always computed. */
+  private async kept(key: string | null, compute: () => Promise<FitAnswer>): Promise<{ json: Buffer; cache: 'hit' | 'miss' | 'bypass'; stored: boolean }> {
     const encode = (answer: unknown) => Buffer.from(JSON.stringify(answer));
-    if (!key || !this.answers) return { json: encode(await this.compute(dto)), cache: 'bypass', stored: false };
+    if (!key || !this.answers) return { json: encode(await compute()), cache: 'bypass', stored: false };
     const kept = this.answers.get(key);
     if (kept !== undefined) return { json: kept, cache: 'hit', stored: true };
     const ticket = this.answers.ticket();
-    const json = encode(await this.compute(dto));
+    const json = encode(await compute());
     if (ticket === null) return { json, cache: 'bypass', stored: false };
     return { json, cache: 'miss', stored: this.answers.set(key, ticket, json) };
   }
 
-  private async parse(body: unknown): Promise<FitCheckDto> {
-    const dto = await parseDto(FitCheckDto, body);
-    if (!dto.drumTypeId === !dto.drum) {
-      throw new ValidationFailed([{ field: dto.drumTypeId ? 'drum' : 'drumTypeId', messages: ['give either drumTypeId or drum, not both and not neither'] }]);
-    }
-    if (dto.stationId && (dto.tapping || dto.agitation || dto.flowLpm !== undefined)) {
-      throw fieldError('stationId', 'give either stationId or tapping/agitation/flowLpm, not both');
-    }
-    return dto;
-  }
-
-  private async compute(dto: FitCheckDto) {
+  private async compute(q: FitQuestion) {
     const m = this.ds.manager;
-    const drum: DrumRef = dto.drumTypeId ? { id: dto.drumTypeId } : await this.adHocDrum(m, dto);
-    const slurry = dto.slurryId ? await m.findOneBy(Slurry, { id: dto.slurryId }) : null;
-    if (dto.slurryId && !slurry) throw fieldError('slurryId', 'does not name an existing slurry');
-    const { station, stationRow } = await this.station(m, dto);
-    const tubeSet = await this.nextTubeSet(m, dto, stationRow);
+    const drum: DrumRef = q.drumTypeId ? { id: q.drumTypeId } : await this.adHocDrum(m, q);
+    const slurry = q.slurryId ? await m.findOneBy(Slurry, { id: q.slurryId }) : null;
+    if (q.slurryId && !slurry) throw fieldError('slurryId', 'does not name an existing slurry');
+    const { station, stationRow } = await this.station(m, q);
+    const tubeSet = await this.nextTubeSet(m, q, stationRow);
     return this.run(m, {
       drum,
       station,
       stationRow,
       slurry: slurry ? { id: slurry.id, name: slurry.name, foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null,
       tubeSet,
-      fieldForDrum: dto.drum ? 'drum.insideDepthMm' : 'drumTypeId',
+      fieldForDrum: q.drum ? 'drum.insideDepthMm' : 'drumTypeId',
     });
-  }
-
-  /** The same check for callers inside the server (dock records, sourcing plans), by ids and slurry properties. */
-  async checkFor(m: EntityManager, args: { drumTypeId: string; stationId?: string | null; slurry?: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null }) {
-    const { station, stationRow } = await this.station(m, { stationId: args.stationId ?? undefined } as FitCheckDto);
-    const tubeSet = await this.nextTubeSet(m, {} as FitCheckDto, stationRow);
-    return this.run(m, { drum: { id: args.drumTypeId }, station, stationRow, slurry: args.slurry ?? null, tubeSet, fieldForDrum: 'drumTypeId' });
   }
 
   private async run(
@@ -162,7 +129,7 @@ export class FitCheckService {
       drum: DrumRef;
       station: StationInput | null;
       stationRow: Station | null;
-      slurry: { id?: string; name: string; foams: boolean; shearSensitive: boolean } | null;
+      slurry: SlurryFlags | null;
       tubeSet: TubeSet | null;
       fieldForDrum: string;
     },
@@ -180,42 +147,7 @@ export class FitCheckService {
     });
   }
 
-  /** The drum and its openings in one statement (this runs on every dock check). */
-  async loadDrum(m: EntityManager, id: string): Promise<ResolvedDrum> {
-    const rows: Array<{
-      name: string;
-      part_number: string;
-      inside_depth_mm: number;
-      label: string | null;
-      thread_spec_id: string | null;
-      thread_code: string | null;
-      key_code: string | null;
-      bore_mm: number | null;
-    }> = await m.query(
-      `SELECT d.name, d.part_number, d.inside_depth_mm, o.label, o.thread_spec_id, th.code AS thread_code, k.code AS key_code, o.bore_mm
-       FROM drum_types d
-       LEFT JOIN drum_openings o ON o.drum_type_id = d.id
-       LEFT JOIN thread_specs th ON th.id = o.thread_spec_id
-       LEFT JOIN key_codes k ON k.id = o.key_code_id
-       WHERE d.id = $1
-       ORDER BY o.label`,
-      [id],
-    );
-    if (!rows.length) throw fieldError('drumTypeId', 'does not name an existing drum type');
-    const openings = rows.filter((r) => r.label !== null);
-    return {
-      id,
-      name: rows[0].name,
-      partNumber: rows[0].part_number,
-      input: {
-        insideDepthMm: rows[0].inside_depth_mm,
-        openings: openings.map((o) => ({ label: o.label!, threadCode: o.thread_code, keyCode: o.key_code, boreMm: o.bore_mm })),
-      },
-      threadSpecIds: openings.map((o) => o.thread_spec_id!),
-    };
-  }
-
-  private async adHocDrum(m: EntityManager, dto: FitCheckDto): Promise<AdHocDrum> {
+  private async adHocDrum(m: EntityManager, dto: FitQuestion): Promise<AdHocDrum> {
     const drum = dto.drum!;
     const openings = [];
     const ids: string[] = [];
@@ -228,7 +160,7 @@ export class FitCheckService {
     return { input: { insideDepthMm: drum.insideDepthMm, openings }, threadSpecIds: ids };
   }
 
-  private async station(m: EntityManager, dto: FitCheckDto): Promise<{ station: StationInput | null; stationRow: Station | null }> {
+  private async station(m: EntityManager, dto: FitQuestion): Promise<{ station: StationInput | null; stationRow: Station | null }> {
     if (dto.stationId) {
       const row = await m.findOneBy(Station, { id: dto.stationId });
       if (!row) throw fieldError('stationId', 'does not name an existing station');
@@ -245,7 +177,7 @@ export class FitCheckService {
    * The tube set that would go into this drum: the one named, or the station's clean and ready set. The sets
    * online and in standby are already in drums; one still being cleaned is not a candidate yet.
    */
-  private async nextTubeSet(m: EntityManager, dto: FitCheckDto, station: Station | null): Promise<TubeSet | null> {
+  private async nextTubeSet(m: EntityManager, dto: FitQuestion, station: Station | null): Promise<TubeSet | null> {
     if (dto.tubeSetId) {
       const set = await m.findOneBy(TubeSet, { id: dto.tubeSetId });
       if (!set) throw fieldError('tubeSetId', 'does not name an existing tube set');
@@ -263,7 +195,7 @@ export class FitCheckService {
    * station's installed head. Tubes come from an index range scan per thread; a large registry is never
    * sorted whole.
    */
-  private async snapshot(m: EntityManager, ref: DrumRef, installedConnectorId: string | null, fieldForDrum: string): Promise<{ drum: ResolvedDrum; settings: FitSettings; pool: CandidateRow[] }> {
+  private async snapshot(m: EntityManager, ref: DrumRef, installedConnectorId: string | null, fieldForDrum: string): Promise<{ drum: ResolvedDrum; settings: FitSettings; pool: PoolRow[] }> {
     const drumTypeId = 'id' in ref ? ref.id : null;
     const adHoc = 'input' in ref ? ref : null;
     const [row] = await preparedQuery<SnapshotRow>(this.ds, 'fit-snapshot', SNAPSHOT_SQL, [drumTypeId, adHoc?.input.insideDepthMm ?? null, adHoc?.threadSpecIds ?? [], installedConnectorId], m);
@@ -285,7 +217,11 @@ export class FitCheckService {
             id: drumTypeId,
             name: row.drum.name,
             partNumber: row.drum.part_number,
-            input: { insideDepthMm: row.drum.inside_depth_mm, openings: row.openings.map((o) => ({ label: o.label, threadCode: o.thread_code, keyCode: o.key_code, boreMm: o.bore_mm })) },
+            input: {
+              insideDepthMm: row.drum.inside_depth_mm,
+              head: row.drum.head,
+              openings: row.openings.map((o) => ({ label: o.label, threadCode: o.thread_code, keyCode: o.key_code, boreMm: o.bore_mm })),
+            },
             threadSpecIds: row.openings.map((o) => o.thread_spec_id),
           }
         : { id: null, name: null, partNumber: null, input: adHoc!.input, threadSpecIds: adHoc!.threadSpecIds };

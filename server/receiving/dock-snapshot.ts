@@ -3,7 +3,7 @@ import type { DataSource } from 'typeorm';
 import type { DockSnapshot } from '../../shared/dock/snapshot';
 import type { PoolRow } from '../../shared/fit/search';
 import { DrumType, Slurry, Station, Supplier, ThreadSpec, TubeSet } from '../entities';
-import { CANDIDATE_SQL } from '../fit/fit-check.service';
+import { CANDIDATE_SQL } from '../fit/fit-check.sql';
 import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 import { slurryAcceptance } from './lot-decision';
 
@@ -40,6 +40,7 @@ export async function buildDockSnapshot(ds: DataSource, now: Date): Promise<Dock
           partNumber: d.partNumber,
           supplierName: d.supplier?.name ?? null,
           insideDepthMm: d.insideDepthMm,
+          head: d.head,
           openings: (d.openings ?? [])
             .map((o) => ({ label: o.label, threadCode: o.threadSpec!.code, keyCode: o.keyCode?.code ?? null, boreMm: o.boreMm ?? null }))
             .sort((a, b) => byText(a.label, b.label)),

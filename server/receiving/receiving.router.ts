@@ -4,11 +4,10 @@ import type { DataSource } from 'typeorm';
 import { body, parseQuery } from '../common/validate';
 import { parseId } from '../registry/resource';
 import { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
-import { ReceivingService } from './receiving.service';
+import type { ReceivingService } from './receiving.service';
 import { buildDockSnapshot } from './dock-snapshot';
 
-export function receivingRouter(ds: DataSource, clock?: () => Date): Router {
-  const service = new ReceivingService(ds, clock);
+export function receivingRouter(ds: DataSource, service: ReceivingService, clock?: () => Date): Router {
   const router = Router();
   const r = secured(router);
   // What a phone keeps to judge a lot offline; its revision is the ETag, so an unchanged registry costs a 304.

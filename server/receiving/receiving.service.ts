@@ -3,51 +3,18 @@ import { lotDateProblems } from '../../shared/acceptance/rules';
 import { HELD_STATUSES } from '../../shared/dock/lot-status';
 import { holdReasonOf, type FitForVerdict, type LotVerdict } from '../../shared/dock/verdict';
 import { conflict, fieldError, notFound, ValidationFailed } from '../common/errors';
-import { ChangeOut, HardwareWarning, ReceivingCheck, Slurry, Station, Supplier } from '../entities';
-import { FitCheckService } from '../fit/fit-check.service';
+import { ChangeOut, HardwareWarning, ReceivingCheck, Supplier } from '../entities';
+import type { FitCheckService } from '../fit/fit-check.service';
 import { ensureExists } from '../registry/refs';
 import { audit } from '../audit/audit';
 import { noticeVerdictDiffers, raiseHoldNotices } from './hold-effects';
 import { certificateAttached, decide, siteToday } from './lot-decision';
 import type { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
+import { receivingJson } from './receiving.json';
+
+export { receivingJson };
 
 const RELATIONS = { supplier: true, slurry: true, drumType: true, station: true, checkedBy: true, heldBy: true, releasedBy: true } as const;
-
-export const receivingJson = (r: ReceivingCheck) => ({
-  id: r.id,
-  version: r.version,
-  lotNumber: r.lotNumber,
-  supplierId: r.supplierId,
-  supplierName: r.supplier?.name ?? null,
-  slurryId: r.slurryId,
-  slurryName: r.slurry?.name ?? null,
-  drumCount: r.drumCount,
-  drumTypeId: r.drumTypeId,
-  drumTypeName: r.drumType?.name ?? null,
-  drumTypePartNumber: r.drumType?.partNumber ?? null,
-  drumDescription: r.drumDescription,
-  stationId: r.stationId,
-  stationName: r.station?.name ?? null,
-  productionDate: r.productionDate,
-  expiryDate: r.expiryDate,
-  temperatureIndicator: r.temperatureIndicator,
-  verdict: r.verdict,
-  decision: r.decision,
-  lotVerdict: r.acceptance,
-  provisional: r.provisional,
-  result: r.result,
-  checkedById: r.checkedById,
-  checkedByName: r.checkedBy?.displayName ?? null,
-  checkedAt: r.createdAt,
-  status: r.status,
-  holdReason: r.holdReason,
-  heldByRules: r.heldByRules,
-  heldByName: r.heldBy?.displayName ?? null,
-  heldAt: r.heldAt,
-  releasedByName: r.releasedBy?.displayName ?? null,
-  releasedAt: r.releasedAt,
-  releaseComment: r.releaseComment,
-});
 
 const isClientKeyClash = (err: unknown) => err instanceof QueryFailedError && (err.driverError as { constraint?: string }).constraint === 'receiving_checks_client_key';
 
@@ -59,14 +26,11 @@ const HELD_AS = { hold: 'on-hold', quarantine: 'quarantined' } as const;
  * reasons and the same warning and notices a hold by hand raises.
  */
 export class ReceivingService {
-  private readonly fit: FitCheckService;
-
   constructor(
     private readonly ds: DataSource,
+    private readonly fit: FitCheckService,
     private readonly clock: () => Date = () => new Date(),
-  ) {
-    this.fit = new FitCheckService(ds);
-  }
+  ) {}
 
   /**
    * A dock check. With a `clientKey` (a phone's key, sent again when the network comes back) the same key
@@ -103,10 +67,9 @@ export class ReceivingService {
     const problems = lotDateProblems({ today, ...dates });
     if (Object.keys(problems).length) throw new ValidationFailed(Object.entries(problems).map(([field, message]) => ({ field, messages: [message] })));
     if (dto.supplierId) await ensureExists(m, Supplier, dto.supplierId, 'supplierId', 'supplier');
-    if (dto.stationId) await ensureExists(m, Station, dto.stationId, 'stationId', 'station');
-    if (dto.slurryId) await ensureExists(m, Slurry, dto.slurryId, 'slurryId', 'slurry');
-    // The same authoritative check the API offers, run with what the clerk entered.
-    const result = await this.fit.check({ drumTypeId: dto.drumTypeId, drum: dto.drum, slurryId: dto.slurryId, stationId: dto.stationId });
+    // The same authoritative check the API offers, on the question already validated with the body (the fit
+    // service names a station or slurry that does not exist), from the kept answers when it can be.
+    const result = await this.fit.result({ drumTypeId: dto.drumTypeId, drum: dto.drum, slurryId: dto.slurryId, stationId: dto.stationId });
     const id = await this.ds.transaction(async (tx) => {
       const verdict = await decide(tx, {
         fit: result as FitForVerdict,

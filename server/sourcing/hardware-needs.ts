@@ -1,13 +1,13 @@
 import { In, type EntityManager } from 'typeorm';
-import { evaluateCandidate } from '../../shared/fit';
 import { describeThread } from '../../shared/fit/rules';
+import { judgeDrum, selectTubes, type PoolDrum, type PoolRow } from '../../shared/fit/search';
+import type { FitSettings } from '../../shared/fit/types';
 import { recommendDipTubeLength } from '../../shared/recommend-length';
 import type { OrderLine, StationNeed } from '../../shared/api-types';
-import { Connector, DipTube, Pairing, Station, TubeSet } from '../entities';
+import { Pairing, Station, TubeSet } from '../entities';
 
 export type { OrderLine, StationNeed };
 import type { FitCheckService } from '../fit/fit-check.service';
-import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 
 /** Three sets per drum position: one online, one standby, one being cleaned [practice]. */
 export const SETS_PER_POSITION = 3;
@@ -45,49 +45,35 @@ export async function needsForStation(m: EntityManager, fit: FitCheckService, dr
     };
   }
 
-  // Nothing approved fits: look at every registered tube of the drum's threads with every head, as if approved.
-  const drum = await fit.loadDrum(m, drumTypeId);
-  const settings = fitSettingsOf(await loadSettings(m));
-  const tubes = drum.threadSpecIds.length ? await m.find(DipTube, { where: { threadSpecId: In(drum.threadSpecIds) }, relations: { threadSpec: true, keyCode: true }, take: 200 }) : [];
-  const heads = await m.find(Connector, { relations: { keyCode: true }, take: 500 });
-  const stationInput = { tapping: station.tapping, agitation: station.agitation, flowLpm: station.flowLpm };
-  let pick: { tube: DipTube; head: Connector; verdict: 'fits' | 'caution' | 'no-fit'; score: number; problems: string[] } | null = null;
-  for (const tube of tubes) {
-    for (const head of heads) {
-      const e = evaluateCandidate({
-        drum: drum.input,
-        tube: { id: tube.id, partNumber: tube.partNumber, threadCode: tube.threadSpec!.code, lengthMm: tube.lengthMm, keyCode: tube.keyCode?.code ?? null, channels: tube.channels },
-        connector: {
-          id: head.id,
-          partNumber: head.partNumber,
-          keyCode: head.keyCode?.code ?? null,
-          feedBoreMm: head.feedBoreMm,
-          returnBoreMm: head.returnBoreMm,
-          returnPath: head.returnPath,
-          suitedTo: head.suitedTo,
-        },
-        station: stationInput,
-        slurry: slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null,
-        pairing: { status: 'approved' },
-        settings,
-      });
-      const score = { fits: 0, caution: 10, 'no-fit': 100 }[e.verdict] - (head.id === station.connectorId ? 2 : 0) - (sets.some((s) => s.dipTubeId === tube.id) ? 1 : 0);
-      if (!pick || score < pick.score) pick = { tube, head, verdict: e.verdict, score, problems: e.rules.filter((r) => r.outcome !== 'pass').map((r) => r.message) };
-    }
-  }
-
+  // Nothing approved fits: the registered tubes the search picks for this drum with every head, judged and
+  // ranked as if paired and approved, by the same search, rules and ranking as a fit check.
+  const { id, name, partNumber, ...input } = result.drum;
+  const settings = result.settings;
+  const pool = await hypotheticalPool(m, { insideDepthMm: input.insideDepthMm, threadCodes: input.openings.flatMap((o) => (o.threadCode ? [o.threadCode] : [])) }, settings);
+  const judged = judgeDrum({
+    drum: { id, name, partNumber, input },
+    pool,
+    station: { tapping: station.tapping, agitation: station.agitation, flowLpm: station.flowLpm },
+    stationRow: { id: station.id, name: station.name, connectorId: station.connectorId },
+    slurry,
+    tubeSet: null,
+    settings,
+  });
+  const pick = judged.candidates[0];
   if (pick && pick.verdict !== 'no-fit') {
-    const approved = await m.findOneBy(Pairing, { dipTubeId: pick.tube.id, connectorId: pick.head.id, status: 'approved' });
-    const order: OrderLine[] = [...tubeOrder(pick.tube.id, pick.tube.partNumber), ...headOrder(pick.head.id, pick.head.partNumber)];
-    if (!approved) order.push({ kind: 'approval', description: `An engineer approves the pairing of ${pick.tube.partNumber} with ${pick.head.partNumber} before use`, count: 1 });
-    const note = pick.verdict === 'caution' ? ` Caution: ${pick.problems.join(' ')}` : '';
-    return { stationId: station.id, stationName: station.name, verdict: result.verdict, summary: `Registered parts would fit: ${pick.tube.partNumber} with ${pick.head.partNumber}.${note}`, order };
+    const [tube, head] = [pick.dipTubePartNumber, pick.connectorPartNumber];
+    const approved = await m.findOneBy(Pairing, { dipTubeId: pick.dipTubeId, connectorId: pick.connectorId, status: 'approved' });
+    const order: OrderLine[] = [...tubeOrder(pick.dipTubeId, tube), ...headOrder(pick.connectorId, head)];
+    if (!approved) order.push({ kind: 'approval', description: `An engineer approves the pairing of ${tube} with ${head} before use`, count: 1 });
+    const problems = pick.rules.filter((r) => r.outcome !== 'pass').map((r) => r.message);
+    const note = pick.verdict === 'caution' ? ` Caution: ${problems.join(' ')}` : '';
+    return { stationId: station.id, stationName: station.name, verdict: result.verdict, summary: `Registered parts would fit: ${tube} with ${head}.${note}`, order };
   }
 
   // No registered part fits: say what to buy.
-  const window = recommendDipTubeLength({ insideDepthMm: drum.input.insideDepthMm, tipClearanceMinMm: settings.tipClearanceMinMm, tipClearanceMaxMm: settings.tipClearanceMaxMm });
-  const opening = drum.input.openings[0];
-  const threads = [...new Set(drum.input.openings.map((o) => describeThread(o.threadCode)))].join(' or ');
+  const window = recommendDipTubeLength({ insideDepthMm: input.insideDepthMm, tipClearanceMinMm: settings.tipClearanceMinMm, tipClearanceMaxMm: settings.tipClearanceMaxMm });
+  const opening = input.openings[0];
+  const threads = [...new Set(input.openings.map((o) => describeThread(o.threadCode)))].join(' or ');
   const order: OrderLine[] = [
     {
       kind: 'spec',
@@ -110,6 +96,27 @@ export async function needsForStation(m: EntityManager, fit: FitCheckService, dr
     summary: `No registered tube and head fit this drum at ${station.name}; order to the specification below.`,
     order,
   };
+}
+
+type TubeRow = Pick<PoolRow, 'dip_tube_id' | 'tube_part' | 'thread_code' | 'length_mm' | 'tube_key' | 'channels'>;
+type HeadRow = Omit<PoolRow, keyof TubeRow | 'pairing_id' | 'status'>;
+
+const TUBES_SQL = `SELECT t.id AS dip_tube_id, t.part_number AS tube_part, th.code AS thread_code, t.length_mm, tk.code AS tube_key, t.channels
+  FROM dip_tubes t JOIN thread_specs th ON th.id = t.thread_spec_id LEFT JOIN key_codes tk ON tk.id = t.key_code_id
+  WHERE th.code = ANY($1::text[]) ORDER BY t.part_number COLLATE "C"`;
+const HEADS_SQL = `SELECT c.id AS connector_id, c.part_number AS head_part, ck.code AS head_key, c.feed_bore_mm, c.feed_nominal, c.return_bore_mm, c.return_nominal, c.return_path, c.suited_to
+  FROM connectors c LEFT JOIN key_codes ck ON ck.id = c.key_code_id ORDER BY c.part_number COLLATE "C" LIMIT 500`;
+
+/** Every head with each tube `selectTubes` picks for the drum, as pool rows of approved pairings (hypothetical ones). */
+async function hypotheticalPool(m: EntityManager, drum: PoolDrum, settings: FitSettings): Promise<PoolRow[]> {
+  const tubes: TubeRow[] = drum.threadCodes.length ? await m.query(TUBES_SQL, [[...new Set(drum.threadCodes)]]) : [];
+  const picked = selectTubes(
+    tubes.map((t) => ({ id: t.dip_tube_id, threadCode: t.thread_code, lengthMm: t.length_mm })),
+    drum,
+    settings,
+  );
+  const heads: HeadRow[] = picked.size ? await m.query(HEADS_SQL) : [];
+  return tubes.filter((t) => picked.has(t.dip_tube_id)).flatMap((t) => heads.map((h) => ({ ...t, ...h, pairing_id: `${t.dip_tube_id}+${h.connector_id}`, status: 'approved' as const })));
 }
 
 /** Adds up order lines across stations (the same part for two stations is one line). */

@@ -1,13 +1,11 @@
 import { secured } from '../auth/policy';
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
 import { body, parseQuery, refuseQuery } from '../common/validate';
 import { parseId } from '../registry/resource';
 import { SourcingPlanDto, WarningListDto } from './sourcing.dto';
-import { SourcingService } from './sourcing.service';
+import type { SourcingService } from './sourcing.service';
 
-export function sourcingRouter(ds: DataSource): Router {
-  const service = new SourcingService(ds);
+export function sourcingRouter(service: SourcingService): Router {
   const router = Router();
   const r = secured(router);
   r.get('/sourcing-plans', async (req, res) => {

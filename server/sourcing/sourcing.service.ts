@@ -1,7 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { conflict, fieldError, notFound } from '../common/errors';
 import { DrumType, HardwareWarning, SourcingPlan, Station, Supplier } from '../entities';
-import { FitCheckService } from '../fit/fit-check.service';
+import type { FitCheckService } from '../fit/fit-check.service';
 import { notifyRoles } from '../notifications/notifications.service';
 import { ensureExists } from '../registry/refs';
 import { needsForStation, orderLines, stationsByIds, totalOrder, type StationNeed } from './hardware-needs';
@@ -47,11 +47,10 @@ export const warningJson = (w: HardwareWarning) => ({
 
 /** Buying from a new source: which stations the new drum would reach, whether they fit, what to order. */
 export class SourcingService {
-  private readonly fit: FitCheckService;
-
-  constructor(private readonly ds: DataSource) {
-    this.fit = new FitCheckService(ds);
-  }
+  constructor(
+    private readonly ds: DataSource,
+    private readonly fit: FitCheckService,
+  ) {}
 
   private async impactOf(m: EntityManager, plan: Pick<SourcingPlan, 'drumTypeId' | 'stationIds' | 'slurryName' | 'foams' | 'shearSensitive'>) {
     const stations = await stationsByIds(m, plan.stationIds);

@@ -5,6 +5,7 @@ import { localDate } from '../dates';
 import type { FitSettings, StationInput } from '../fit/types';
 import { judgeDrum, selectPool, type FitAnswer, type JudgedDrum, type JudgedTubeSet, type PoolRow } from '../fit/search';
 import type { Region } from '../api-types';
+import type { DrumHead } from '../packaging-code';
 import { decideLot, type LotVerdict } from './verdict';
 
 export interface SnapshotDrumType {
@@ -13,6 +14,8 @@ export interface SnapshotDrumType {
   partNumber: string;
   supplierName: string | null;
   insideDepthMm: number;
+  /** Absent from a snapshot kept before it was sent: the rules then take the head as not recorded (no buster change, so queued checks survive). */
+  head?: DrumHead;
   openings: Array<{ label: string; threadCode: string; keyCode: string | null; boreMm: number | null }>;
 }
 
@@ -87,7 +90,7 @@ function drumOf(snap: DockSnapshot, q: DockQuestion): JudgedDrum {
   if (q.drumTypeId) {
     const d = snap.drumTypes.find((x) => x.id === q.drumTypeId);
     if (!d) throw new SnapshotGap('drumTypeId', 'This drum type is not in the registry kept on this phone.');
-    return { id: d.id, name: d.name, partNumber: d.partNumber, input: { insideDepthMm: d.insideDepthMm, openings: d.openings } };
+    return { id: d.id, name: d.name, partNumber: d.partNumber, input: { insideDepthMm: d.insideDepthMm, head: d.head, openings: d.openings } };
   }
   const drum = q.drum;
   if (!drum) throw new SnapshotGap('drumTypeId', 'Pick a drum type or describe the drum.');

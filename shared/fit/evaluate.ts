@@ -1,7 +1,8 @@
 // Runs every rule on one drum + tube + head candidate and folds the results into a verdict.
 
 import { handlingCautions } from './handling';
-import { FIT_RULES, isNotChecked, resolveSettings } from './rules';
+import { FIT_RULES } from './registry';
+import { isNotChecked, resolveSettings } from './rules';
 import type { CandidateEvaluation, CandidateInput, RuleNotChecked, RuleOutcome, RuleResult, Verdict } from './types';
 
 const VERDICT_OF: Record<RuleOutcome, Verdict> = { pass: 'fits', caution: 'caution', fail: 'no-fit' };

@@ -1,4 +1,5 @@
 export * from './types';
 export * from './rules';
+export * from './registry';
 export * from './evaluate';
 export * from './handling';

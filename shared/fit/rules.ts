@@ -1,12 +1,15 @@
-// The fit rules, one function each. A rule whose input is missing (no station, no slurry, no tube set)
-// returns a RuleNotChecked instead of a pass, so a missing input can never turn into a "fits".
+// The fit rules, one function each (listed, labelled and ordered in registry.ts). A rule whose input is missing
+// (no station, no slurry, no tube set) returns a RuleNotChecked instead of a pass, so a missing input can never
+// turn into a "fits".
 
 import { computePortFlow, DEFAULT_LAMINAR_LIMIT, velocityRatio } from '../flow';
 import { recommendDipTubeLength, validateClearanceWindow } from '../recommend-length';
-import { threadSpecEquals } from '../threads/identify';
-import { findThreadSpec } from '../threads/thread-table';
 import { flowToM3s, formatLength, mmToIn } from '../units';
-import type { CandidateInput, ConnectorInput, DrumInput, DrumOpening, FitSettings, RuleName, RuleNotChecked, RuleResult, TubeInput, TubeSetInput } from './types';
+import { caution, describeThread, fail, notChecked, openingName, pass, round, tubeOpening, usableOpenings, type RuleFn } from './rule-kit';
+import type { ConnectorInput, FitSettings, RuleResult, TubeSetInput } from './types';
+
+// The helpers every rule uses, where they were before rule-kit.ts held them.
+export { describeThread, isNotChecked, tubeOpening, usableOpenings, type RuleCheck, type RuleFn } from './rule-kit';
 
 // Site settings until a site sets its own. Clearance 5 to 25 mm: at least 5 mm keeps the tip off the
 // bottom chime and any dent, at most 25 mm keeps the undrawn heel small [practice]. Return velocity at
@@ -34,41 +37,6 @@ export function resolveSettings(partial: Partial<FitSettings> = {}): FitSettings
     throw new RangeError(`threadMatchToleranceMm must be zero or more, got ${s.threadMatchToleranceMm}`);
   }
   return s;
-}
-
-export type RuleCheck = RuleResult | RuleNotChecked;
-export type RuleFn = (input: CandidateInput, settings: FitSettings) => RuleCheck;
-
-export function isNotChecked(check: RuleCheck): check is RuleNotChecked {
-  return !('outcome' in check);
-}
-
-const pass = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult => (numbers ? { rule, outcome: 'pass', message, numbers } : { rule, outcome: 'pass', message });
-const caution = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult => (numbers ? { rule, outcome: 'caution', message, numbers } : { rule, outcome: 'caution', message });
-const fail = (rule: RuleName, message: string, numbers?: Record<string, number>): RuleResult => (numbers ? { rule, outcome: 'fail', message, numbers } : { rule, outcome: 'fail', message });
-const notChecked = (rule: RuleName, reason: string): RuleNotChecked => ({ rule, reason });
-
-const round = (x: number, digits: number): number => Math.round(x * 10 ** digits) / 10 ** digits;
-
-/** How a person would say the thread: 'G 2', '3/4 in NPT', or the raw code if it is not in the table. */
-export function describeThread(code: string | null): string {
-  if (code === null || code.trim() === '') return 'an unknown thread';
-  return findThreadSpec(code)?.nominalLabel ?? code;
-}
-
-function openingName(opening: DrumOpening, index: number): string {
-  return opening.label?.trim() || `opening ${index + 1}`;
-}
-
-/** Openings the tube screws into: same thread spec code (never the same nominal size). */
-export function usableOpenings(drum: DrumInput, tube: Pick<TubeInput, 'threadCode'>): DrumOpening[] {
-  return drum.openings.filter((o) => threadSpecEquals(o.threadCode, tube.threadCode));
-}
-
-/** The opening the tube goes into: a usable one whose key agrees with the tube if any, else the first usable. */
-export function tubeOpening(drum: DrumInput, tube: Pick<TubeInput, 'threadCode' | 'keyCode'>): DrumOpening | undefined {
-  const usable = usableOpenings(drum, tube);
-  return usable.find((o) => o.keyCode !== null && o.keyCode === tube.keyCode) ?? usable[0];
 }
 
 function portLabel(boreMm: number, nominal?: string | null): string {
@@ -296,16 +264,3 @@ export function rinseCheck(tubeSet: TubeSetInput): RuleResult {
 }
 
 export const checkRinse: RuleFn = ({ tubeSet }) => (tubeSet ? rinseCheck(tubeSet) : notChecked('rinse', 'not checked: no tube set chosen'));
-
-/** Every rule, in the order results are listed. */
-export const FIT_RULES: ReadonlyArray<{ name: RuleName; check: RuleFn }> = [
-  { name: 'thread', check: checkThread },
-  { name: 'key', check: checkKey },
-  { name: 'reach', check: checkReach },
-  { name: 'tapping', check: checkTapping },
-  { name: 'ports', check: checkPorts },
-  { name: 'foam', check: checkFoam },
-  { name: 'openings', check: checkOpenings },
-  { name: 'approval', check: checkApproval },
-  { name: 'rinse', check: checkRinse },
-];

@@ -177,23 +177,36 @@ const byPool = (a: PoolRow, b: PoolRow) => Number(a.status !== 'approved') - Num
 // The database's "C"-like byte order for part numbers (ASCII), which is also what the SQL's ORDER BY gives.
 const cmp = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 
+/** What the search reads of the drum: its inside depth and the threads of its openings. */
+export interface PoolDrum {
+  insideDepthMm: number;
+  threadCodes: readonly string[];
+}
+
 /**
- * The candidate pool, as the server's SQL picks it: for each of the drum's threads, the 20 shortest tubes
- * inside the reach window (inside depth less the site's largest and smallest tip clearance) and the 3 nearest
- * either side; their pairings that are not retired, approved first, at most 60; then the pairings of the
- * station's installed head, at most 60 more.
+ * The tubes worth judging for a drum: for each of its threads, the 20 shortest inside the reach window (inside
+ * depth less the site's largest and smallest tip clearance) and the 3 nearest either side, so a near miss can say why.
  */
-export function selectPool(src: PoolSource, drum: { insideDepthMm: number; threadCodes: readonly string[] }, installedConnectorId: string | null, settings: FitSettings): PoolRow[] {
+export function selectTubes(tubes: PoolSource['tubes'], drum: PoolDrum, settings: FitSettings): Set<string> {
   const lo = drum.insideDepthMm - settings.tipClearanceMaxMm;
   const hi = drum.insideDepthMm - settings.tipClearanceMinMm;
   const tubeIds = new Set<string>();
   for (const code of new Set(drum.threadCodes)) {
-    const tubes = src.tubes.filter((t) => t.threadCode === code);
-    const inside = tubes.filter((t) => t.lengthMm >= lo && t.lengthMm <= hi).sort((a, b) => a.lengthMm - b.lengthMm);
-    const below = tubes.filter((t) => t.lengthMm < lo).sort((a, b) => b.lengthMm - a.lengthMm);
-    const above = tubes.filter((t) => t.lengthMm > hi).sort((a, b) => a.lengthMm - b.lengthMm);
+    const ofThread = tubes.filter((t) => t.threadCode === code);
+    const inside = ofThread.filter((t) => t.lengthMm >= lo && t.lengthMm <= hi).sort((a, b) => a.lengthMm - b.lengthMm);
+    const below = ofThread.filter((t) => t.lengthMm < lo).sort((a, b) => b.lengthMm - a.lengthMm);
+    const above = ofThread.filter((t) => t.lengthMm > hi).sort((a, b) => a.lengthMm - b.lengthMm);
     for (const t of [...inside.slice(0, TUBES_IN_WINDOW), ...below.slice(0, TUBES_NEAR_MISS), ...above.slice(0, TUBES_NEAR_MISS)]) tubeIds.add(t.id);
   }
+  return tubeIds;
+}
+
+/**
+ * The candidate pool, as the server's SQL picks it: the tubes `selectTubes` picks; their pairings that are not retired, approved first, at most 60; then the pairings of the
+ * station's installed head, at most 60 more.
+ */
+export function selectPool(src: PoolSource, drum: PoolDrum, installedConnectorId: string | null, settings: FitSettings): PoolRow[] {
+  const tubeIds = selectTubes(src.tubes, drum, settings);
   const live = src.pairings.filter((p) => p.status !== 'retired');
   const byTube = live
     .filter((p) => tubeIds.has(p.dip_tube_id))

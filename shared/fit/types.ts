@@ -1,8 +1,8 @@
 // Inputs and outputs of the fit check. Plain objects so the server can pass entities and the client can
 // pass form state; all lengths in mm.
 
-export const RULE_NAMES = ['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse'] as const;
-export type RuleName = (typeof RULE_NAMES)[number];
+import type { DrumHead } from '../packaging-code';
+import type { RuleName } from './registry';
 
 export type RuleOutcome = 'pass' | 'caution' | 'fail';
 
@@ -30,6 +30,8 @@ export interface DrumOpening {
 export interface DrumInput {
   insideDepthMm: number;
   openings: DrumOpening[];
+  /** Tight head (bungs in a fixed top) or open head (removable lid); null or absent when not recorded (a drum described at the dock). */
+  head?: DrumHead | null;
 }
 
 export type TubeChannels = 'feed' | 'feed-return';
@@ -118,7 +120,7 @@ export interface HandlingCaution {
 
 export interface CandidateEvaluation {
   verdict: Verdict;
-  /** Rules that were checked, in RULE_NAMES order. */
+  /** Rules that were checked, in RULE_NAMES order (registry.ts). */
   rules: RuleResult[];
   /** Rules left out because their input was missing; they do not affect the verdict. */
   notChecked: RuleNotChecked[];

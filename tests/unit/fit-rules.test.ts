@@ -14,6 +14,7 @@ import {
   handlingCautions,
   isNotChecked,
   resolveSettings,
+  RULE_NAMES,
   type CandidateInput,
   type RuleCheck,
   type RuleFn,
@@ -32,9 +33,10 @@ function base(): CandidateInput {
       insideDepthMm: DEPTH_55_GAL_MM,
       // North American steel drums: 2 in and 3/4 in straight pipe thread bungs [pub, old 49 CFR drum text]
       openings: [
-        { label: 'large bung', threadCode: 'NPS-2', keyCode: 'K1' },
-        { label: 'small bung', threadCode: 'NPS-3/4', keyCode: null },
+        { label: 'large bung', threadCode: 'NPS-2', keyCode: 'K1', boreMm: 50 },
+        { label: 'small bung', threadCode: 'NPS-3/4', keyCode: null, boreMm: 19 },
       ],
+      head: 'tight',
     },
     tube: { partNumber: 'DT-836', threadCode: 'NPS-2', lengthMm: DEPTH_55_GAL_MM - 15, keyCode: 'K1', channels: 'feed-return' },
     connector: {
@@ -69,7 +71,7 @@ function with_(patch: (c: CandidateInput) => void): CandidateInput {
 describe('the base candidate', () => {
   it('passes every rule and fits', () => {
     const r = evaluateCandidate(base());
-    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse']);
+    expect(r.rules.map((x) => x.rule)).toEqual([...RULE_NAMES]);
     expect(r.rules.filter((x) => x.outcome !== 'pass')).toEqual([]);
     expect(r.notChecked).toEqual([]);
     expect(r.verdict).toBe('fits');
@@ -483,7 +485,7 @@ describe('verdicts', () => {
       }),
     );
     expect(r.notChecked.map((x) => x.rule)).toEqual(['tapping', 'ports', 'foam', 'openings', 'rinse']);
-    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'approval']);
+    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'approval', 'tight-head']);
     expect(r.verdict).toBe('fits');
   });
 
