@@ -98,7 +98,7 @@ export function parsePackagingCode(raw: string): PackagingCodeResult {
   const written = normalisePackagingCode(raw);
   if (written === '') return fail('No packaging code was given.');
 
-  const shape = /^(11|13|21|31|\d)([A-Z]{1,2})(\d)?([WVT])?$/.exec(written);
+  const shape = /^(11|13|21|31|\d)([A-Z][A-P]?)(\d)?([WVT])?$/.exec(written);
   if (!shape) {
     return fail(`"${written}" is not a packaging code: expected a kind numeral, a material letter and usually a category numeral, like 1A1 or 31HA1.`);
   }

@@ -95,6 +95,33 @@ describe('GET /api/tools/packaging-codes/:code', () => {
     expect(res.body.error.details[0].field).toBe('code');
   });
 
+  it('answers 400 naming what is wrong for a well-formed code that does not exist', async () => {
+    // UN Model Regulations 6.1.2.7 [mem]: jerricans are 3A, 3B and 3H; the fibreboard box is 4G with no numeral
+    for (const [code, reason] of [
+      ['3N1', /jerrican/],
+      ['4G1', /written 4G/],
+    ] as const) {
+      const res = await request(app).get(`/api/tools/packaging-codes/${code}`).set(bearer(clerk));
+      expect(res.status).toBe(400);
+      expect(res.body.error.details[0]).toMatchObject({ field: 'code' });
+      expect(res.body.error.message).toMatch(reason);
+    }
+  });
+
+  it('explains a whole mark, and refuses one with a bad part', async () => {
+    // UN Model Regulations 6.1.3.7 example [mem]: 1A1/Y1.4/150/98/NL/VL824
+    const res = await request(app)
+      .get(`/api/tools/packaging-codes/${encodeURIComponent('UN 1A1/Y1.4/150/98/NL/VL824')}`)
+      .set(bearer(clerk));
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ code: '1A1', mark: { relativeDensity: 1.4, testPressureKpa: 150, state: 'NL', maker: 'VL824' } });
+    const bad = await request(app)
+      .get(`/api/tools/packaging-codes/${encodeURIComponent('1A1/Y1.4/155/98/NL/VL824')}`)
+      .set(bearer(clerk));
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.message).toMatch(/nearest 10 kPa/);
+  });
+
   it('checks a drum type: recommended tube length and its declared code', async () => {
     const drums = await request(app).get('/api/drum-types?pageSize=50').set(bearer(clerk));
     const drum = drums.body.items.find((d: { unPackagingCode: string | null }) => d.unPackagingCode);
