@@ -22,6 +22,7 @@ export const RULE_LABELS: Record<string, string> = {
   thread: 'Thread',
   key: 'Keying',
   reach: 'Reach to bottom',
+  'pass-through': 'Passes the opening',
   tapping: 'Tapping',
   ports: 'Feed and return ports',
   foam: 'Foaming',

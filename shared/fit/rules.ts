@@ -6,6 +6,7 @@ import { recommendDipTubeLength, validateClearanceWindow } from '../recommend-le
 import { threadSpecEquals } from '../threads/identify';
 import { findThreadSpec } from '../threads/thread-table';
 import { flowToM3s, formatLength, mmToIn } from '../units';
+import { checkPassThrough } from './pass-through';
 import type { CandidateInput, ConnectorInput, DrumInput, DrumOpening, FitSettings, RuleName, RuleNotChecked, RuleResult, TubeInput, TubeSetInput } from './types';
 
 // Site settings until a site sets its own. Clearance 5 to 25 mm: at least 5 mm keeps the tip off the
@@ -302,6 +303,7 @@ export const FIT_RULES: ReadonlyArray<{ name: RuleName; check: RuleFn }> = [
   { name: 'thread', check: checkThread },
   { name: 'key', check: checkKey },
   { name: 'reach', check: checkReach },
+  { name: 'pass-through', check: (input, settings) => checkPassThrough(input, settings) },
   { name: 'tapping', check: checkTapping },
   { name: 'ports', check: checkPorts },
   { name: 'foam', check: checkFoam },

@@ -1,7 +1,7 @@
 // Inputs and outputs of the fit check. Plain objects so the server can pass entities and the client can
 // pass form state; all lengths in mm.
 
-export const RULE_NAMES = ['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse'] as const;
+export const RULE_NAMES = ['thread', 'key', 'reach', 'pass-through', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse'] as const;
 export type RuleName = (typeof RULE_NAMES)[number];
 
 export type RuleOutcome = 'pass' | 'caution' | 'fail';
@@ -41,6 +41,7 @@ export interface TubeInput {
   lengthMm: number;
   keyCode: string | null;
   channels: TubeChannels;
+  /** Outside diameter of the tube, mm; when unknown the pass-through rule is not checked. */ odMm?: number | null;
 }
 
 export type Tapping = 'two-opening' | 'one-opening';

@@ -33,8 +33,11 @@ describe('POST /api/tools/thread-match', () => {
 
   it('identifies G 2 from 59.614 mm and 11 TPI, not 2 in NPS', async () => {
     // ISO 228-1: G 2, 11 threads/in, major diameter 59.614 mm [pub]
-    const res = await match({ majorDiameter: { value: 59.614, unit: 'mm' }, threadsPerInch: 11, flankAngleDeg: 55 });
-    expect(res.body.matches.map((m: { code: string }) => m.code)).toEqual(['G-2']);
+    const res = await match({ majorDiameter: { value: 59.614, unit: 'mm' }, threadsPerInch: 11, flankAngleDeg: 55, taper: 'parallel' });
+    // ISO 7-1 [mem]: Rp 2 (internal parallel) has the G 2 dimensions; R 2 and Rc 2 are tapered, so left out
+    expect(res.body.matches.map((m: { code: string }) => m.code).sort()).toEqual(['G-2', 'Rp-2']);
+    const tapered = await match({ majorDiameter: { value: 59.614, unit: 'mm' }, threadsPerInch: 11, flankAngleDeg: 55, taper: 'tapered' });
+    expect(tapered.body.matches.map((m: { code: string }) => m.code).sort()).toEqual(['R-2', 'Rc-2']);
   });
 
   it('reports a diameter-only reading near 60 mm as ambiguous, with what to measure next', async () => {

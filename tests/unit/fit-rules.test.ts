@@ -36,7 +36,7 @@ function base(): CandidateInput {
         { label: 'small bung', threadCode: 'NPS-3/4', keyCode: null },
       ],
     },
-    tube: { partNumber: 'DT-836', threadCode: 'NPS-2', lengthMm: DEPTH_55_GAL_MM - 15, keyCode: 'K1', channels: 'feed-return' },
+    tube: { partNumber: 'DT-836', threadCode: 'NPS-2', lengthMm: DEPTH_55_GAL_MM - 15, keyCode: 'K1', channels: 'feed-return', odMm: 42 },
     connector: {
       partNumber: 'HD-1',
       keyCode: 'K1',
@@ -69,7 +69,7 @@ function with_(patch: (c: CandidateInput) => void): CandidateInput {
 describe('the base candidate', () => {
   it('passes every rule and fits', () => {
     const r = evaluateCandidate(base());
-    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse']);
+    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'pass-through', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse']);
     expect(r.rules.filter((x) => x.outcome !== 'pass')).toEqual([]);
     expect(r.notChecked).toEqual([]);
     expect(r.verdict).toBe('fits');
@@ -483,7 +483,7 @@ describe('verdicts', () => {
       }),
     );
     expect(r.notChecked.map((x) => x.rule)).toEqual(['tapping', 'ports', 'foam', 'openings', 'rinse']);
-    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'approval']);
+    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'pass-through', 'approval']);
     expect(r.verdict).toBe('fits');
   });
 
