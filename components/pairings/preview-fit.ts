@@ -18,7 +18,7 @@ import {
 
 export interface FitPreviewInput {
   drum: Pick<DrumTypeRecord, 'insideDepthMm' | 'openings'> | null;
-  tube: Pick<DipTubeRecord, 'threadCode' | 'lengthMm' | 'keyCode' | 'channels'>;
+  tube: Pick<DipTubeRecord, 'threadCode' | 'lengthMm' | 'keyCode' | 'channels'> & Partial<Pick<DipTubeRecord, 'odMm'>>;
   connector: Pick<ConnectorRecord, 'keyCode' | 'feedBoreMm' | 'feedNominal' | 'returnBoreMm' | 'returnNominal' | 'returnPath' | 'suitedTo'>;
   station: StationInput | null;
   status: PairingStatus;
@@ -32,12 +32,12 @@ export interface FitPreviewResult {
 }
 
 /** Rules that read the drum; without a drum type they are listed as not checked. */
-const DRUM_RULES: ReadonlySet<RuleName> = new Set<RuleName>(['thread', 'reach', 'openings']);
+const DRUM_RULES: ReadonlySet<RuleName> = new Set<RuleName>(['thread', 'reach', 'pass-through', 'openings']);
 
 export function previewFit(input: FitPreviewInput): FitPreviewResult {
   const candidate: CandidateInput = {
     drum: input.drum ? { insideDepthMm: input.drum.insideDepthMm, openings: input.drum.openings } : { insideDepthMm: 0, openings: [] },
-    tube: { threadCode: input.tube.threadCode ?? '', lengthMm: input.tube.lengthMm, keyCode: input.tube.keyCode, channels: input.tube.channels },
+    tube: { threadCode: input.tube.threadCode ?? '', lengthMm: input.tube.lengthMm, keyCode: input.tube.keyCode, channels: input.tube.channels, odMm: input.tube.odMm ?? null },
     connector: { ...input.connector },
     station: input.station,
     // A pairing being drafted is not approved yet: the approval rule says so.
