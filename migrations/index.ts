@@ -1,5 +1,6 @@
 // Every migration, in order. A new migration is added here as well as in its own timestamped file
 // (see DEVELOPERS.md): an explicit list works the same compiled by tsc and under ts-jest.
+import { Iso7ThreadFamilies1764759600000 } from './1764759600000-iso-7-thread-families';
 import { CreateUsers1764612000000 } from './1764612000000-create-users';
 import { CreateRegistry1764615600000 } from './1764615600000-create-registry';
 import { CreateOperations1764619200000 } from './1764619200000-create-operations';
@@ -28,4 +29,5 @@ export const MIGRATIONS = [
   LotAcceptance1764655200000,
   UserTheme1764662400000,
   OfflineDockChecks1764666000000,
+  Iso7ThreadFamilies1764759600000,
 ];

@@ -1,15 +1,17 @@
 // Reads the packaging code from a UN packaging mark (UN Model Regulations 6.1.2; 49 CFR 178.502 for
 // single and composite packagings, 49 CFR 178.702 for IBCs) and checks a drum record against it.
-// Only the code segment is read; the rest of the mark (packing group, density, year, state) is not.
+// Only codes listed in shared/packaging-table.ts exist; the rest of the mark is read in packaging-mark.ts.
 
-export type PackagingGroup = 'single' | 'composite' | 'ibc';
+import { codesOf, PACKAGING_CODES, type PackagingCodeEntry, type PackagingGroup } from './packaging-table';
+
+export type { PackagingGroup };
 
 export interface ParsedPackagingCode {
   ok: true;
-  /** Normalised code, e.g. '1A1', '31HA1'. */
+  /** Normalised code, e.g. '1A1', '31HA1' (without a W, V or T suffix). */
   code: string;
   group: PackagingGroup;
-  /** The kind numeral(s): '1' to '7', or the IBC type '11', '13', '21', '31'. */
+  /** The kind numeral(s): '1' to '6', or the IBC type '11', '13', '21', '31'. */
   kind: string;
   kindLabel: string;
   /** The material letter(s): 'A', or inner then outer for composites, e.g. 'HA'. */
@@ -18,6 +20,9 @@ export interface ParsedPackagingCode {
   /** Category numeral, or null where the code has none (e.g. fibre drum 1G). */
   category: string | null;
   categoryLabel: string | null;
+  /** W, V or T after the code, or null. */
+  suffix: string | null;
+  suffixLabel: string | null;
   /** One sentence, e.g. '1A1: steel drum, tight head (non-removable head).' */
   explanation: string;
 }
@@ -63,120 +68,89 @@ export const IBC_TYPE_LABELS: Readonly<Record<string, string>> = {
   '31': 'rigid intermediate bulk container for liquids',
 };
 
-// Drums and jerricans of these materials must carry a head category [pub].
-const HEADED_MATERIALS = new Set(['A', 'B', 'H', 'N']);
-// Plywood and fibre drums carry no category numeral [mem].
-const UNCATEGORISED_DRUM_MATERIALS = new Set(['D', 'G']);
-
-const HEAD_CATEGORY_LABELS: Readonly<Record<string, string>> = {
-  '1': 'tight head (non-removable head)',
-  '2': 'open head (removable head)',
+// Letters that may follow the code, UN Model Regulations 6.1.2.4 and 6.1.5.1.7 / 6.1.5.1.11 [mem].
+export const PACKAGING_SUFFIX_LABELS: Readonly<Record<string, string>> = {
+  W: 'made to a different specification accepted as equivalent by the competent authority',
+  V: 'special packaging: tested with varied inner packagings',
+  T: 'salvage packaging',
 };
 
 function fail(error: string): PackagingCodeError {
   return { ok: false, error };
 }
 
-function materialLabelOf(letter: string): string | undefined {
-  return PACKAGING_MATERIAL_LABELS[letter];
-}
-
 /** Takes the code out of what a person may type: '1a1', 'UN 1A1/Y1.4/150/...', ' 31HA1 '. */
-function normalise(raw: string): string {
+export function normalisePackagingCode(raw: string): string {
   return raw
     .trim()
     .toUpperCase()
-    .replace(/^UN\s*/, '')
+    .replace(/^UN(?=[\s\d])\s*/, '')
     .split('/')[0]!
     .trim();
 }
 
+const kindWord = (kind: string) => PACKAGING_KIND_LABELS[kind] ?? IBC_TYPE_LABELS[kind] ?? kind;
+const listed = (entries: PackagingCodeEntry[]) => entries.map((e) => (e.categoryLabel ? `${e.code} (${e.categoryLabel.replace(' (', ', ').replace(')', '')})` : e.code)).join(', ');
+const or = (items: string[]) => (items.length < 2 ? items.join('') : `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`);
+
 export function parsePackagingCode(raw: string): PackagingCodeResult {
   if (typeof raw !== 'string' || raw.trim() === '') return fail('No packaging code was given.');
-  const code = normalise(raw);
-  if (code === '') return fail('No packaging code was given.');
+  const written = normalisePackagingCode(raw);
+  if (written === '') return fail('No packaging code was given.');
 
-  const ibc = /^(11|13|21|31)([A-Z]{1,2})(\d)?$/.exec(code);
-  if (ibc) return parseIbc(code, ibc[1]!, ibc[2]!, ibc[3] ?? null);
-
-  const single = /^(\d)([A-Z]{1,2})(\d)?$/.exec(code);
-  if (!single) {
-    return fail(`"${code}" is not a packaging code: expected a kind numeral, a material letter and usually a category numeral, like 1A1 or 31HA1.`);
+  const shape = /^(11|13|21|31|\d)([A-Z][A-P]?)(\d)?([WVT])?$/.exec(written);
+  if (!shape) {
+    return fail(`"${written}" is not a packaging code: expected a kind numeral, a material letter and usually a category numeral, like 1A1 or 31HA1.`);
   }
-  const kind = single[1]!;
-  const material = single[2]!;
-  const category = single[3] ?? null;
-  const kindLabel = PACKAGING_KIND_LABELS[kind];
-  if (!kindLabel) return fail(`"${code}": kind numeral ${kind} is not used; kinds run from 1 (drum) to 7 (pressure receptacle).`);
-
+  const [, kind, material, category, suffix] = shape as unknown as [string, string, string, string | undefined, string | undefined];
+  const code = `${kind}${material}${category ?? ''}`;
+  const ibc = kind.length === 2;
+  if (!ibc && !PACKAGING_KIND_LABELS[kind]) return fail(`"${written}": kind numeral ${kind} is not used; kinds run from 1 (drum) to 7 (pressure receptacle).`);
   for (const letter of material) {
-    if (!materialLabelOf(letter)) {
-      return fail(`"${code}": material letter ${letter} is not used; the letters are A B C D F G H L M N P.`);
-    }
+    if (!PACKAGING_MATERIAL_LABELS[letter]) return fail(`"${written}": material letter ${letter} is not used; the letters are A B C D F G H L M N P.`);
   }
+  if (suffix && ibc) return fail(`"${written}": the letter ${suffix} after the code is for packagings, not IBCs.`);
 
-  if (kind === '6') {
-    // Composite: inner receptacle letter, then outer packaging letter, then the outer packaging's form [mem].
-    if (material.length !== 2) return fail(`"${code}": a composite packaging needs two material letters, inner then outer, like 6HA1.`);
-    if (category === null) return fail(`"${code}": a composite packaging code ends in a category numeral, like 6HA1.`);
-    const materialLabel = `${materialLabelOf(material[0]!)} inner receptacle in a ${materialLabelOf(material[1]!)} outer packaging`;
-    const categoryLabel = `outer packaging form ${category}`;
-    return ok(code, 'composite', kind, kindLabel, material, materialLabel, category, categoryLabel);
-  }
-
-  if (material.length !== 1) return fail(`"${code}": only composite packagings (kind 6) and IBCs have two material letters.`);
-  const materialLabel = materialLabelOf(material)!;
-
-  if (kind === '1' || kind === '3') {
-    if (HEADED_MATERIALS.has(material)) {
-      if (category === null) return fail(`"${code}": a ${materialLabel} ${kindLabel} code ends in 1 (tight head) or 2 (open head).`);
-      const categoryLabel = HEAD_CATEGORY_LABELS[category];
-      if (!categoryLabel) return fail(`"${code}": the last numeral of a ${kindLabel} code is 1 (tight head) or 2 (open head), not ${category}.`);
-      return ok(code, 'single', kind, kindLabel, material, materialLabel, category, categoryLabel);
-    }
-    if (kind === '1' && UNCATEGORISED_DRUM_MATERIALS.has(material)) {
-      if (category !== null) return fail(`"${code}": a ${materialLabel} drum code has no category numeral; it is written 1${material}.`);
-      return ok(code, 'single', kind, kindLabel, material, materialLabel, null, null);
-    }
-    return fail(`"${code}": ${materialLabel} is not a material used for a ${kindLabel}.`);
-  }
-
-  if (kind === '2') {
-    if (material !== 'C') return fail(`"${code}": wooden barrels are natural wood, written 2C1 or 2C2.`);
-    const categoryLabel = category === '1' ? 'bung type' : category === '2' ? 'removable head' : undefined;
-    if (!categoryLabel) return fail(`"${code}": a wooden barrel code ends in 1 (bung type) or 2 (removable head).`);
-    return ok(code, 'single', kind, kindLabel, material, materialLabel, category, categoryLabel);
-  }
-
-  // Boxes, bags and pressure receptacles are read but their categories are not spelled out here:
-  // a drum registry never relies on them.
-  return ok(code, 'single', kind, kindLabel, material, materialLabel, category, category === null ? null : `category ${category}`);
+  const entry = PACKAGING_CODES.get(code);
+  if (!entry) return fail(`"${written}": ${whyMissing(kind, material, category ?? null)}`);
+  return ok(entry, suffix ?? null);
 }
 
-function parseIbc(code: string, type: string, material: string, category: string | null): PackagingCodeResult {
-  for (const letter of material) {
-    if (!materialLabelOf(letter)) {
-      return fail(`"${code}": material letter ${letter} is not used; the letters are A B C D F G H L M N P.`);
-    }
+/** Says what is wrong with a well-formed code that UN table 6.1.2.7 (or 6.5.1.4.3 for IBCs) does not list. */
+function whyMissing(kind: string, material: string, category: string | null): string {
+  const ofKind = codesOf(kind);
+  const table = kind.length === 2 ? 'UN Model Regulations 6.5.1.4.3' : 'UN Model Regulations 6.1.2.7';
+  if (ofKind.length === 0) return `no ${kindWord(kind)} has a packaging code in ${table}.`;
+  if (kind === '6' && material.length !== 2) return 'a composite packaging needs two material letters, inner then outer, like 6HA1.';
+  if (kind !== '6' && !ofKind.some((e) => e.material.length === material.length)) return 'only composite packagings (kind 6) and composite IBCs have two material letters.';
+  const same = codesOf(kind, material);
+  const what = material.length === 1 ? `${PACKAGING_MATERIAL_LABELS[material]} ${kindWord(kind)}` : `${kindWord(kind)} with materials ${material}`;
+  if (same.length > 0) {
+    if (same.every((e) => e.category === null)) return `the ${what} has no category numeral; it is written ${same[0]!.code}.`;
+    if (category === null) return `a ${what} code ends in a category numeral: ${listed(same)}.`;
+    return `the ${what} is written ${listed(same)}, not with ${category}.`;
   }
-  const kindLabel = IBC_TYPE_LABELS[type]!;
-  if (material.length === 2) {
-    // 49 CFR 178.702(b): composite IBC, inner receptacle letter then outer casing letter, then 1 for a
-    // rigid plastic inner receptacle or 2 for a flexible one [pub for 31HA1; mem for the rest].
-    if (material[0] !== 'H') return fail(`"${code}": a composite IBC has a plastic (H) inner receptacle, written like 31HA1.`);
-    const categoryLabel = category === '1' ? 'rigid inner receptacle' : category === '2' ? 'flexible inner receptacle' : undefined;
-    if (!categoryLabel) return fail(`"${code}": a composite IBC code ends in 1 (rigid inner receptacle) or 2 (flexible inner receptacle).`);
-    const materialLabel = `${materialLabelOf('H')} inner receptacle in a ${materialLabelOf(material[1]!)} outer casing`;
-    return ok(code, 'ibc', type, kindLabel, material, materialLabel, category, categoryLabel);
-  }
-  const materialLabel = materialLabelOf(material)!;
-  return ok(code, 'ibc', type, kindLabel, material, materialLabel, category, category === null ? null : `category ${category}`);
+  const materials = [...new Set(ofKind.filter((e) => e.material.length === material.length).map((e) => e.material))];
+  const made = or(materials.map((m) => (m.length === 1 ? `${PACKAGING_MATERIAL_LABELS[m]} (${kind}${m})` : `${kind}${m}`)));
+  return `there is no ${what} in ${table}; a ${kindWord(kind)} is ${made}.`;
 }
 
-function ok(code: string, group: PackagingGroup, kind: string, kindLabel: string, material: string, materialLabel: string, category: string | null, categoryLabel: string | null): ParsedPackagingCode {
-  const what = group === 'single' ? `${materialLabel} ${kindLabel}` : `${kindLabel}, ${materialLabel}`;
-  const explanation = `${code}: ${what}${categoryLabel ? `, ${categoryLabel}` : ''}.`;
-  return { ok: true, code, group, kind, kindLabel, material, materialLabel, category, categoryLabel, explanation };
+function materialLabelOf(e: PackagingCodeEntry): string {
+  const label = (l: string) => PACKAGING_MATERIAL_LABELS[l]!;
+  if (e.group === 'composite') return `${label(e.material[0]!)} inner receptacle ${e.categoryLabel}`;
+  if (e.group === 'ibc' && e.material.length === 2) return `${label(e.material[0]!)} inner receptacle in a ${label(e.material[1]!)} outer casing`;
+  return label(e.material);
+}
+
+function ok(e: PackagingCodeEntry, suffix: string | null): ParsedPackagingCode {
+  const kindLabel = kindWord(e.kind);
+  const materialLabel = materialLabelOf(e);
+  const categoryLabel = e.group === 'composite' ? (e.category === null ? null : `outer packaging form ${e.category}`) : e.categoryLabel;
+  const suffixLabel = suffix ? PACKAGING_SUFFIX_LABELS[suffix]! : null;
+  const what = e.group === 'single' ? `${materialLabel} ${kindLabel}` : `${kindLabel}, ${materialLabel}`;
+  const shown = e.group === 'composite' ? null : categoryLabel;
+  const explanation = `${e.code}${suffix ?? ''}: ${what}${shown ? `, ${shown}` : ''}${suffixLabel ? `; ${suffix}: ${suffixLabel}` : ''}.`;
+  return { ok: true, code: e.code, group: e.group, kind: e.kind, kindLabel, material: e.material, materialLabel, category: e.category, categoryLabel, suffix, suffixLabel, explanation };
 }
 
 // ---------------------------------------------------------------------------------------------------

@@ -6,6 +6,11 @@ export const MM_PER_IN = 25.4;
 /** 1 US gal = 231 in^3 = 3.785411784 L exactly (NIST SP 811, Appendix B; 16 CFR 500.19). */
 export const L_PER_US_GAL = 3.785411784;
 
+/** 1 lb = 0.453 592 37 kg exactly (NIST SP 811, Appendix B). */
+export const KG_PER_LB = 0.45359237;
+/** 1 psi = 6.894 757 kPa (NIST SP 811, Appendix B: 6.894 757 E+03 Pa). */
+export const KPA_PER_PSI = 6.894757293168361;
+
 export const LENGTH_UNITS = ['mm', 'in'] as const;
 export const VOLUME_UNITS = ['L', 'gal'] as const;
 export const FLOW_UNITS = ['L/min', 'gal/min', 'm3/h'] as const;
@@ -83,6 +88,14 @@ export function mmToIn(mm: number): number {
 
 export function inToMm(inches: number): number {
   return inches * MM_PER_IN;
+}
+
+export function kgToLb(kg: number): number {
+  return kg / KG_PER_LB;
+}
+
+export function kpaToPsi(kpa: number): number {
+  return kpa / KPA_PER_PSI;
 }
 
 export function toLitres(value: number, unit: VolumeUnit): number {

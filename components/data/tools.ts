@@ -1,13 +1,17 @@
 import { useMutation, useQuery } from '@tanstack/react-query';
 import type { PortFlowResult } from '@/shared/flow';
 import type { PackagingFinding, ParsedPackagingCode } from '@/shared/packaging-code';
+import type { PackagingMark } from '@/shared/packaging-mark';
 import type { LengthRecommendation } from '@/shared/recommend-length';
 import type { ThreadIdentification } from '@/shared/threads/identify';
 import type { FlowUnit, LengthUnit } from '@/shared/units';
 import { api } from '../api/client';
 import { drumTypeQueries } from './drum-types';
 
-export type { ThreadIdentification, ParsedPackagingCode, PackagingFinding, LengthRecommendation };
+export type { ThreadIdentification, ParsedPackagingCode, PackagingFinding, LengthRecommendation, PackagingMark };
+
+/** GET /api/tools/packaging-codes/:code: the code, and the rest of the mark when a whole mark was given. */
+export type PackagingCodeAnswer = ParsedPackagingCode & { mark: PackagingMark | null };
 
 export interface ThreadMatchInput {
   majorDiameter: { value: number; unit: LengthUnit };
@@ -55,7 +59,7 @@ export function useFlowMutation() {
 export function usePackagingCodeQuery(code: string | null) {
   return useQuery({
     queryKey: toolKeys.packagingCode(code ?? ''),
-    queryFn: () => api<ParsedPackagingCode>(`/tools/packaging-codes/${encodeURIComponent(code ?? '')}`),
+    queryFn: () => api<PackagingCodeAnswer>(`/tools/packaging-codes/${encodeURIComponent(code ?? '')}`),
     enabled: !!code,
     staleTime: Infinity,
   });

@@ -21,7 +21,7 @@ export function persistOptions(): Omit<PersistQueryClientOptions, 'queryClient'>
     persister,
     maxAge: KEPT_FOR_MS,
     // A new app version with another snapshot shape starts afresh rather than misread the old one.
-    buster: 'dock-1',
+    buster: 'dock-2',
     dehydrateOptions: {
       shouldDehydrateQuery: (q) => q.queryKey[0] === DOCK_SNAPSHOT_KEY[0] && q.state.status === 'success',
       shouldDehydrateMutation: (m) => m.options.mutationKey?.[0] === DOCK_CHECK_KEY[0] && m.state.status !== 'success' && m.state.status !== 'error',

@@ -17,7 +17,7 @@ import {
 
 export interface FitPreviewInput {
   drum: Pick<DrumTypeRecord, 'insideDepthMm' | 'head' | 'openings'> | null;
-  tube: Pick<DipTubeRecord, 'threadCode' | 'lengthMm' | 'keyCode' | 'channels'>;
+  tube: Pick<DipTubeRecord, 'threadCode' | 'lengthMm' | 'keyCode' | 'channels'> & Partial<Pick<DipTubeRecord, 'odMm'>>;
   connector: Pick<ConnectorRecord, 'keyCode' | 'feedBoreMm' | 'feedNominal' | 'returnBoreMm' | 'returnNominal' | 'returnPath' | 'suitedTo'>;
   station: StationInput | null;
   status: PairingStatus;
@@ -33,7 +33,7 @@ export interface FitPreviewResult {
 export function previewFit(input: FitPreviewInput): FitPreviewResult {
   const candidate: CandidateInput = {
     drum: input.drum ? { insideDepthMm: input.drum.insideDepthMm, head: input.drum.head, openings: input.drum.openings } : { insideDepthMm: 0, openings: [] },
-    tube: { threadCode: input.tube.threadCode ?? '', lengthMm: input.tube.lengthMm, keyCode: input.tube.keyCode, channels: input.tube.channels },
+    tube: { threadCode: input.tube.threadCode ?? '', lengthMm: input.tube.lengthMm, keyCode: input.tube.keyCode, channels: input.tube.channels, odMm: input.tube.odMm ?? null },
     connector: { ...input.connector },
     station: input.station,
     // A pairing being drafted is not approved yet: the approval rule says so.

@@ -1,4 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
+import { heelVolumeL } from '@/shared/heel';
+import { fromLitres } from '@/shared/units';
 import { useLengthUnit } from '../data/me';
 import { useDrumTypeChecksQuery, type PackagingFinding } from '../data/tools';
 import { colors, fonts, space, type } from '../theme';
@@ -19,9 +21,15 @@ const CHECK_LABELS: Record<PackagingFinding['check'], string> = {
 };
 
 /** The server's checks of one drum type: the tube length that lands the tip in the site's window, and its UN code against the record. */
-export function DrumTypeChecks({ id, unPackagingCode }: { id: string; unPackagingCode: string | null }) {
+export function DrumTypeChecks({ id, unPackagingCode, outsideDiameterMm, insideDepthMm }: { id: string; unPackagingCode: string | null; outsideDiameterMm: number; insideDepthMm: number }) {
   const checks = useDrumTypeChecksQuery(id);
-  const { show } = useLengthUnit();
+  const { show, unit } = useLengthUnit();
+  // Litres for a person working in mm, US gallons for one working in inches; the other in brackets.
+  const volume = (litres: number) => {
+    const l = `${litres.toFixed(1)} L`;
+    const gal = `${fromLitres(litres, 'gal').toFixed(2)} gal`;
+    return unit === 'in' ? `${gal} (${l})` : `${l} (${gal})`;
+  };
   let body;
   if (checks.isPending) body = <LoadingState label="Checking the drum type…" />;
   else if (checks.isError) body = <ErrorState error={checks.error} onRetry={() => checks.refetch()} />;
@@ -36,6 +44,16 @@ export function DrumTypeChecks({ id, unPackagingCode }: { id: string; unPackagin
           </Text>
           <Text style={type.body}>
             Anything from {show(r.minLengthMm)} to {show(r.maxLengthMm)} keeps the tip inside the site's clearance window above the drum bottom.
+          </Text>
+        </View>
+        <View style={styles.block} testID="drum-heel">
+          <Text style={type.label}>Left below the tip</Text>
+          <Text style={styles.big} testID="drum-heel-volume">
+            {volume(heelVolumeL(outsideDiameterMm, insideDepthMm - r.targetMm))}
+          </Text>
+          <Text style={type.body}>
+            At most this much stays in the drum with the tip {show(insideDepthMm - r.targetMm)} above the bottom, worked out from the outside diameter ({show(outsideDiameterMm)}); the inside is a
+            little narrower, so the real heel is a little less.
           </Text>
         </View>
         <View style={styles.block} testID="drum-packaging-findings">

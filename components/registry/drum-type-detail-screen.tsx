@@ -60,7 +60,7 @@ export function DrumTypeDetailScreen({ id }: { id: string }) {
           }
           right={
             <>
-              <DrumTypeChecks id={id} unPackagingCode={d.unPackagingCode} />
+              <DrumTypeChecks id={id} unPackagingCode={d.unPackagingCode} outsideDiameterMm={d.outsideDiameterMm} insideDepthMm={d.insideDepthMm} />
               <Section
                 title="Pairings for its threads"
                 note="Tube and dispense head pairings whose tube threads into one of these bungs; the dock check decides whether they reach and lock."

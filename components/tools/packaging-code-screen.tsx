@@ -2,7 +2,8 @@ import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ApiError } from '../api/client';
-import { usePackagingCodeQuery, type ParsedPackagingCode } from '../data/tools';
+import { useLengthUnit } from '../data/me';
+import { usePackagingCodeQuery, type PackagingMark, type ParsedPackagingCode } from '../data/tools';
 import { Screen } from '../screen';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
@@ -12,7 +13,7 @@ import { TextField } from '../ui/text-field';
 import { useIsWide } from '../use-layout';
 import { useRevealOnPhone } from './use-reveal';
 
-const EXAMPLES = ['1A1', '1A2', '1H1', '1H2', '31HA1'] as const;
+const EXAMPLES = ['1A1', '1A2', '1H1', '1H2', '31HA1', 'UN 1A1/Y1.4/150/24/NL/VL824'] as const;
 const GROUP_LABELS: Record<ParsedPackagingCode['group'], string> = {
   single: 'Single packaging',
   composite: 'Composite packaging',
@@ -76,6 +77,7 @@ export function PackagingCodeScreen() {
           {p.category !== null ? <Part mark={p.category} what="Category" meaning={p.categoryLabel ?? ''} /> : null}
         </View>
         <Text style={type.small}>{GROUP_LABELS[p.group]}.</Text>
+        {p.mark ? <MarkParts mark={p.mark} /> : null}
       </Card>
     );
   }
@@ -86,7 +88,7 @@ export function PackagingCodeScreen() {
         <Card style={wide ? styles.formCol : undefined} testID="packaging-form">
           <TextField
             label="UN packaging code"
-            hint="Just the code, or the whole mark: UN 1A1/Y1.4/150 is read as 1A1."
+            hint="Just the code, or the whole mark: UN 1A1/Y1.4/150/24/NL/VL824 is read part by part."
             value={text}
             onChangeText={setText}
             autoCapitalize="characters"
@@ -111,6 +113,41 @@ export function PackagingCodeScreen() {
     </Screen>
   );
 }
+
+/** The parts after the code; pressures and masses also in psi and lb for a person who works in inches. */
+function MarkParts({ mark }: { mark: PackagingMark }) {
+  const { unit } = useLengthUnit();
+  const imperial = (part: string) => {
+    if (unit !== 'in') return '';
+    if (part === 'contents' && mark.testPressurePsi !== null) return ` (${mark.testPressurePsi.toFixed(1)} psi)`;
+    if (part === 'performance' && mark.grossMassLb !== null) return ` (${mark.grossMassLb.toFixed(0)} lb)`;
+    return '';
+  };
+  return (
+    <View role="list" aria-label="Rest of the mark" style={styles.parts} testID="packaging-mark">
+      {mark.parts
+        .filter((m) => m.part !== 'code')
+        .map((m) => (
+          <Part key={m.part} mark={m.mark} what={MARK_PART_LABELS[m.part]} meaning={m.meaning + imperial(m.part)} />
+        ))}
+      {mark.notes.map((n) => (
+        <Text key={n} style={type.small}>
+          {n}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
+const MARK_PART_LABELS: Record<PackagingMark['parts'][number]['part'], string> = {
+  code: 'Code',
+  performance: 'Packing groups and density or gross mass',
+  contents: 'Test pressure or solids',
+  year: 'Year of manufacture',
+  state: 'State',
+  maker: 'Maker',
+  further: 'Further marks',
+};
 
 function Part({ mark, what, meaning }: { mark: string; what: string; meaning: string }) {
   return (

@@ -7,7 +7,7 @@ import { User } from './user';
 export const REGIONS = ['NA', 'EU', 'JP', 'TW', 'KR', 'CN', 'SG', 'other'] as const;
 export type Region = (typeof REGIONS)[number];
 // The closed sets that DTOs validate and list filters accept, with the columns typed from them.
-export const THREAD_FAMILIES = ['NPS', 'NPT', 'G', 'buttress', 'other'] as const;
+export const THREAD_FAMILIES = ['NPS', 'NPT', 'G', 'R', 'Rc', 'Rp', 'buttress', 'other'] as const;
 export const SUITED_TO = ['two-opening', 'one-opening', 'both'] as const;
 export const PAIRING_STATUSES = ['draft', 'approved', 'retired'] as const;
 export const TUBE_SET_STATES = ['online', 'standby', 'cleaning', 'ready'] as const;

@@ -5,7 +5,7 @@ import { POOL_LIMIT, TUBES_IN_WINDOW, TUBES_NEAR_MISS, type PoolRow } from '../.
 
 export const CANDIDATE_SQL = `
   SELECT p.id AS pairing_id, p.status, t.id AS dip_tube_id, t.part_number AS tube_part, th.code AS thread_code, t.length_mm,
-         tk.code AS tube_key, t.channels, c.id AS connector_id, c.part_number AS head_part, ck.code AS head_key,
+         tk.code AS tube_key, t.channels, t.od_mm AS tube_od_mm, c.id AS connector_id, c.part_number AS head_part, ck.code AS head_key,
          c.feed_bore_mm, c.feed_nominal, c.return_bore_mm, c.return_nominal, c.return_path, c.suited_to
   FROM pairings p
   JOIN dip_tubes t ON t.id = p.dip_tube_id

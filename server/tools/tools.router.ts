@@ -2,7 +2,8 @@ import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { computePortFlow } from '../../shared/flow';
-import { checkDrumPackagingCode, parsePackagingCode } from '../../shared/packaging-code';
+import { checkDrumPackagingCode } from '../../shared/packaging-code';
+import { readPackagingMark } from '../../shared/packaging-mark';
 import { recommendDipTubeLength } from '../../shared/recommend-length';
 import { identifyThread } from '../../shared/threads/identify';
 import { flowToM3s, fromM3s, toMm, type FlowUnit, type LengthUnit } from '../../shared/units';
@@ -47,9 +48,10 @@ export function toolsRouter(ds: DataSource): Router {
   });
 
   r.get('/tools/packaging-codes/:code', async (req, res) => {
-    const parsed = parsePackagingCode(String(req.params.code));
-    if (!parsed.ok) throw badRequest('invalid_packaging_code', parsed.error, [{ field: 'code', messages: [parsed.error] }]);
-    res.json(parsed);
+    // A code alone (1A1) or a whole mark (UN 1A1/Y1.4/150/24/NL/VL824, slashes URL-encoded).
+    const read = readPackagingMark(String(req.params.code));
+    if (!read.ok) throw badRequest('invalid_packaging_code', read.error, [{ field: 'code', messages: [read.error] }]);
+    res.json({ ...read.code, mark: read.mark });
   });
 
   r.get('/tools/drum-types/:id/checks', async (req, res) => {

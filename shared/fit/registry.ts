@@ -4,9 +4,10 @@
 
 import { checkApproval, checkFoam, checkKey, checkOpenings, checkPorts, checkReach, checkRinse, checkTapping, checkThread } from './rules';
 import type { RuleFn } from './rule-kit';
+import { checkPassThrough } from './pass-through';
 import { checkTightHeadOpenings } from './tight-head';
 
-export const RULE_NAMES = ['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse', 'tight-head'] as const;
+export const RULE_NAMES = ['thread', 'key', 'reach', 'pass-through', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse', 'tight-head'] as const;
 export type RuleName = (typeof RULE_NAMES)[number];
 
 interface RuleEntry {
@@ -20,6 +21,7 @@ const RULES: Record<RuleName, RuleEntry> = {
   thread: { label: 'Thread', judgesDrum: true, check: checkThread },
   key: { label: 'Keying', judgesDrum: false, check: checkKey },
   reach: { label: 'Reach to bottom', judgesDrum: true, check: checkReach },
+  'pass-through': { label: 'Passes the opening', judgesDrum: true, check: checkPassThrough },
   tapping: { label: 'Tapping', judgesDrum: false, check: checkTapping },
   ports: { label: 'Feed and return ports', judgesDrum: false, check: checkPorts },
   foam: { label: 'Foaming', judgesDrum: false, check: checkFoam },

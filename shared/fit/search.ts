@@ -24,6 +24,7 @@ export interface PoolRow {
   length_mm: number;
   tube_key: string | null;
   channels: TubeInput['channels'];
+  tube_od_mm?: number | null;
   connector_id: string;
   head_part: string;
   head_key: string | null;
@@ -84,7 +85,15 @@ export interface JudgeArgs {
 const SEVERITY: Record<Verdict, number> = { fits: 0, caution: 1, 'no-fit': 2 };
 const STATUS_RANK: Record<PairingStatus, number> = { approved: 0, draft: 1, retired: 2 };
 
-export const tubeInputOf = (p: PoolRow): TubeInput => ({ id: p.dip_tube_id, partNumber: p.tube_part, threadCode: p.thread_code, lengthMm: p.length_mm, keyCode: p.tube_key, channels: p.channels });
+export const tubeInputOf = (p: PoolRow): TubeInput => ({
+  id: p.dip_tube_id,
+  partNumber: p.tube_part,
+  threadCode: p.thread_code,
+  lengthMm: p.length_mm,
+  keyCode: p.tube_key,
+  channels: p.channels,
+  odMm: p.tube_od_mm ?? null,
+});
 
 export const connectorInputOf = (p: PoolRow): ConnectorInput => ({
   id: p.connector_id,

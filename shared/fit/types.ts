@@ -43,6 +43,7 @@ export interface TubeInput {
   lengthMm: number;
   keyCode: string | null;
   channels: TubeChannels;
+  /** Outside diameter of the tube, mm; when unknown the pass-through rule is not checked. */ odMm?: number | null;
 }
 
 export type Tapping = 'two-opening' | 'one-opening';

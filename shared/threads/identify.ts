@@ -201,8 +201,11 @@ function adviceFor(input: ThreadMeasurement, matches: ThreadMatch[], o: Required
     steps.push(`Check the flank angle with a thread gauge: ${byFlank}.`);
   }
   if (forms.size > 1) {
-    // 1:16 taper on diameter: 25 mm along the thread changes the diameter by about 1.6 mm.
-    steps.push('Check for taper by measuring the diameter at two points about 25 mm apart along the thread: ' + 'a tapered (NPT) thread changes by about 1.6 mm, a straight thread does not.');
+    // 1:16 taper on diameter (ASME B1.20.1 for NPT, ISO 7-1 for R and Rc): 25 mm along changes it by about 1.6 mm.
+    const tapered = matches.filter((m) => m.form === 'tapered').map((m) => m.nominalLabel);
+    steps.push(
+      `Check for taper by measuring the diameter at two points about 25 mm apart along the thread: a tapered thread (${tapered.join(' or ')}) changes by about 1.6 mm, a parallel one does not.`,
+    );
   }
   if (steps.length === 0) {
     steps.push('These cannot be told apart by measuring; compare with a fitting whose thread is known.');

@@ -3,7 +3,7 @@
 
 import { MM_PER_IN } from '../units';
 
-export type ThreadFamily = 'NPS' | 'NPT' | 'G' | 'buttress' | 'other';
+export type ThreadFamily = 'NPS' | 'NPT' | 'G' | 'R' | 'Rc' | 'Rp' | 'buttress' | 'other';
 export type ThreadForm = 'tapered' | 'parallel';
 
 export interface ThreadSpecRow {
@@ -92,6 +92,29 @@ const G_ROWS: ThreadSpecRow[] = ISO_228.map(({ size, tpi, pitchMm, majorMm }): T
   standard: 'ISO 228-1',
 }));
 
+// ISO 7-1 [mem, ../shared/REFERENCES.md "Threads, more"]: the 55 degree form, pitch and gauge-plane diameter of
+// ISO 228-1 at each size, taper 1:16 on diameter (as NPT). R external taper, Rc internal taper, Rp internal
+// parallel (mates with R). G and R differ by taper only; R and NPT by flank angle (55 against 60 degrees)
+// and at 1 in and above by pitch (11 against 11.5 per inch).
+const ISO_7_FAMILIES: Array<{ family: 'R' | 'Rc' | 'Rp'; form: ThreadForm; what: string }> = [
+  { family: 'R', form: 'tapered', what: 'external taper' },
+  { family: 'Rc', form: 'tapered', what: 'internal taper' },
+  { family: 'Rp', form: 'parallel', what: 'internal parallel' },
+];
+const ISO_7_ROWS: ThreadSpecRow[] = ISO_7_FAMILIES.flatMap(({ family, form, what }) =>
+  ISO_228.map(({ size, tpi, pitchMm, majorMm }): ThreadSpecRow => ({
+    code: `${family}-${size.codePart}`,
+    family,
+    nominalLabel: `${family} ${size.label}`,
+    majorDiameterMm: majorMm,
+    pitchMm,
+    threadsPerInch: tpi,
+    flankAngleDeg: 55,
+    form,
+    standard: `ISO 7-1 (${what})`,
+  })),
+);
+
 // Plastic-drum buttress bungs are named diameter x pitch in mm; no dimension standard was found, so
 // only the name's two numbers are trusted. Buttress forms pair a near-square load flank with a sloped
 // clearance flank; 45 deg is the clearance flank commonly quoted and is what a flank gauge will not
@@ -112,7 +135,7 @@ const BUTTRESS_ROWS: ThreadSpecRow[] = [
 }));
 
 // Frozen so no caller can edit the shared table in place.
-export const THREAD_TABLE: readonly Readonly<ThreadSpecRow>[] = Object.freeze([...NPT_ROWS, ...NPS_ROWS, ...G_ROWS, ...BUTTRESS_ROWS].map((row) => Object.freeze(row)));
+export const THREAD_TABLE: readonly Readonly<ThreadSpecRow>[] = Object.freeze([...NPT_ROWS, ...NPS_ROWS, ...G_ROWS, ...ISO_7_ROWS, ...BUTTRESS_ROWS].map((row) => Object.freeze(row)));
 
 export function findThreadSpec(code: string, table: readonly ThreadSpecRow[] = THREAD_TABLE): ThreadSpecRow | undefined {
   return table.find((row) => row.code === code);

@@ -120,6 +120,25 @@ describe('POST /api/fit-checks', () => {
     );
   });
 
+  it('refuses a tube wider than the opening on the pass-through rule, with both numbers', async () => {
+    const registered = await check({ drumTypeId: ids.fittingDrum });
+    const drum = registered.body.drum;
+    // The same drum with every bore recorded as 20 mm: the demo tubes are 25.4 mm outside (1 in, NIST SP 811).
+    const narrow = await check({
+      drum: { insideDepthMm: drum.insideDepthMm, openings: drum.openings.map((o: { threadCode: string; keyCode: string | null }) => ({ threadCode: o.threadCode, keyCode: o.keyCode, boreMm: 20 })) },
+    });
+    expect(narrow.status).toBe(200);
+    const refused = narrow.body.candidates.map((c: Candidate) => ruleOf(c, 'pass-through')).filter(Boolean);
+    expect(refused.length).toBeGreaterThan(0);
+    for (const r of refused) {
+      expect(r.outcome).toBe('fail');
+      expect(r.message).toMatch(/25\.4 mm.*20\.0 mm/);
+    }
+    expect(narrow.body.verdict).toBe('no-fit');
+    const best = registered.body.candidates[0] as Candidate;
+    expect(ruleOf(best, 'pass-through')?.outcome).toBe('pass');
+  });
+
   it('takes a station described inline: tapping, agitation and flow', async () => {
     const res = await check({ drumTypeId: ids.fittingDrum, tapping: 'one-opening', agitation: 'pump', flowLpm: 20 });
     expect(res.status).toBe(200);

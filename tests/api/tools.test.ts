@@ -33,8 +33,11 @@ describe('POST /api/tools/thread-match', () => {
 
   it('identifies G 2 from 59.614 mm and 11 TPI, not 2 in NPS', async () => {
     // ISO 228-1: G 2, 11 threads/in, major diameter 59.614 mm [pub]
-    const res = await match({ majorDiameter: { value: 59.614, unit: 'mm' }, threadsPerInch: 11, flankAngleDeg: 55 });
-    expect(res.body.matches.map((m: { code: string }) => m.code)).toEqual(['G-2']);
+    const res = await match({ majorDiameter: { value: 59.614, unit: 'mm' }, threadsPerInch: 11, flankAngleDeg: 55, taper: 'parallel' });
+    // ISO 7-1 [mem]: Rp 2 (internal parallel) has the G 2 dimensions; R 2 and Rc 2 are tapered, so left out
+    expect(res.body.matches.map((m: { code: string }) => m.code).sort()).toEqual(['G-2', 'Rp-2']);
+    const tapered = await match({ majorDiameter: { value: 59.614, unit: 'mm' }, threadsPerInch: 11, flankAngleDeg: 55, taper: 'tapered' });
+    expect(tapered.body.matches.map((m: { code: string }) => m.code).sort()).toEqual(['R-2', 'Rc-2']);
   });
 
   it('reports a diameter-only reading near 60 mm as ambiguous, with what to measure next', async () => {
@@ -93,6 +96,33 @@ describe('GET /api/tools/packaging-codes/:code', () => {
     const res = await request(app).get('/api/tools/packaging-codes/9Z9').set(bearer(clerk));
     expect(res.status).toBe(400);
     expect(res.body.error.details[0].field).toBe('code');
+  });
+
+  it('answers 400 naming what is wrong for a well-formed code that does not exist', async () => {
+    // UN Model Regulations 6.1.2.7 [mem]: jerricans are 3A, 3B and 3H; the fibreboard box is 4G with no numeral
+    for (const [code, reason] of [
+      ['3N1', /jerrican/],
+      ['4G1', /written 4G/],
+    ] as const) {
+      const res = await request(app).get(`/api/tools/packaging-codes/${code}`).set(bearer(clerk));
+      expect(res.status).toBe(400);
+      expect(res.body.error.details[0]).toMatchObject({ field: 'code' });
+      expect(res.body.error.message).toMatch(reason);
+    }
+  });
+
+  it('explains a whole mark, and refuses one with a bad part', async () => {
+    // UN Model Regulations 6.1.3.7 example [mem]: 1A1/Y1.4/150/98/NL/VL824
+    const res = await request(app)
+      .get(`/api/tools/packaging-codes/${encodeURIComponent('UN 1A1/Y1.4/150/98/NL/VL824')}`)
+      .set(bearer(clerk));
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ code: '1A1', mark: { relativeDensity: 1.4, testPressureKpa: 150, state: 'NL', maker: 'VL824' } });
+    const bad = await request(app)
+      .get(`/api/tools/packaging-codes/${encodeURIComponent('1A1/Y1.4/155/98/NL/VL824')}`)
+      .set(bearer(clerk));
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.message).toMatch(/nearest 10 kPa/);
   });
 
   it('checks a drum type: recommended tube length and its declared code', async () => {

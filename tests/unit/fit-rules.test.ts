@@ -38,7 +38,7 @@ function base(): CandidateInput {
       ],
       head: 'tight',
     },
-    tube: { partNumber: 'DT-836', threadCode: 'NPS-2', lengthMm: DEPTH_55_GAL_MM - 15, keyCode: 'K1', channels: 'feed-return' },
+    tube: { partNumber: 'DT-836', threadCode: 'NPS-2', lengthMm: DEPTH_55_GAL_MM - 15, keyCode: 'K1', channels: 'feed-return', odMm: 42 },
     connector: {
       partNumber: 'HD-1',
       keyCode: 'K1',
@@ -485,7 +485,7 @@ describe('verdicts', () => {
       }),
     );
     expect(r.notChecked.map((x) => x.rule)).toEqual(['tapping', 'ports', 'foam', 'openings', 'rinse']);
-    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'approval', 'tight-head']);
+    expect(r.rules.map((x) => x.rule)).toEqual(['thread', 'key', 'reach', 'pass-through', 'approval', 'tight-head']);
     expect(r.verdict).toBe('fits');
   });
 
