@@ -4,6 +4,8 @@ import { validateSync, type ValidationError } from 'class-validator';
 import { parse } from 'csv-parse';
 import type { EntityManager } from 'typeorm';
 import { inToMm } from '../../shared/units';
+import { dipTubeProblem } from '../../shared/records/dip-tube';
+import { drumTypeProblem } from '../../shared/records/drum-type';
 import { HttpError } from '../common/errors';
 import { KeyCode, Supplier, ThreadSpec, type ImportKind } from '../entities';
 import { nearestCodes } from '../registry/refs';
@@ -206,14 +208,14 @@ const OPENING_FIELDS = new Map([
   ['openings.0.position', 'openingPosition'],
 ]);
 
-/** The checks the API makes across fields, which class-validator does not express. */
+/** The checks the API makes across fields, which class-validator does not express: the shared record rules (shared/records). */
 function crossFieldProblem(kind: ImportKind, v: Record<string, unknown>): { field: string; reason: string } | null {
-  if (kind === 'dip-tubes' && Number(v.boreMm) >= Number(v.odMm)) return { field: 'boreMm', reason: 'bore must be smaller than the outside diameter' };
+  const shared = kind === 'dip-tubes' ? dipTubeProblem(v) : kind === 'drum-types' ? drumTypeProblem(v) : null;
+  if (shared) return { field: shared.field, reason: `${shared.field} ${shared.says}` };
   if (kind === 'connectors') {
     if (v.returnPath === 'none' && v.returnBoreMm != null) return { field: 'returnBoreMm', reason: 'must be empty when the head has no return path' };
     if (v.returnPath !== 'none' && v.returnBoreMm == null) return { field: 'returnBoreMm', reason: 'is required when the head has a return path' };
   }
-  if (kind === 'drum-types' && Number(v.insideDepthMm) >= Number(v.outsideHeightMm)) return { field: 'insideDepthMm', reason: 'must be less than the outside height' };
   return null;
 }
 

@@ -1,4 +1,5 @@
 import { fieldError } from '../../common/errors';
+import { dipTubeProblem } from '../../../shared/records/dip-tube';
 import { DipTube, DrumType, Pairing, Supplier } from '../../entities';
 import { byCode, filter, stamps } from '../common';
 import { anId } from '../list-query';
@@ -40,7 +41,8 @@ export const dipTubeDef: ResourceDef<DipTube> = {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
     const cols: Partial<DipTube> = pick<DipTube>(dto, ['partNumber', 'supplierId', 'lengthMm', 'boreMm', 'odMm', 'material', 'channels']);
     const merged = { ...(existing as DipTube | undefined), ...cols };
-    if (merged.boreMm! >= merged.odMm!) throw fieldError('boreMm', 'must be smaller than the outside diameter');
+    const problem = dipTubeProblem(merged);
+    if (problem) throw fieldError(problem.field, problem.says);
     if (dto.threadCode !== undefined) cols.threadSpecId = (await resolveThread(manager, dto.threadCode, 'threadCode')).id;
     if (dto.keyCode !== undefined) cols.keyCodeId = await resolveKey(manager, dto.keyCode, 'keyCode');
     return cols;

@@ -1,4 +1,5 @@
 import { fieldError } from '../../common/errors';
+import { drumTypeProblem } from '../../../shared/records/drum-type';
 import { DrumType, Pairing, Slurry, Supplier } from '../../entities';
 import { filter, region, stamps, threadCode, keyCode } from '../common';
 import { anId } from '../list-query';
@@ -59,7 +60,8 @@ export const drumTypeDef: ResourceDef<DrumType> = {
       'outsideDiameterMm',
     ]);
     const merged = { ...(existing as DrumType | undefined), ...cols };
-    if (merged.insideDepthMm! >= merged.outsideHeightMm!) throw fieldError('insideDepthMm', 'must be less than the outside height');
+    const problem = drumTypeProblem(merged);
+    if (problem) throw fieldError(problem.field, problem.says);
     return cols;
   },
   afterWrite: writeOpenings,

@@ -1,5 +1,6 @@
 import { fieldError } from '../../common/errors';
 import { parseDto } from '../../common/validate';
+import { DRUM_TYPE_SAYS } from '../../../shared/records/drum-type';
 import { DrumOpening, DrumType } from '../../entities';
 import type { Dto } from '../common';
 import { resolveKey, resolveThread } from '../refs';
@@ -18,7 +19,7 @@ export async function writeOpenings(drum: DrumType, dto: Dto, { manager }: Write
     const o = await parseDto(OpeningDto, { ...(raw as object) }).catch((err) => {
       throw prefixFields(err, `openings.${i}`);
     });
-    if (labels.has(o.label)) throw fieldError(`openings.${i}.label`, 'must be different from the other openings');
+    if (labels.has(o.label)) throw fieldError(`openings.${i}.label`, DRUM_TYPE_SAYS.openingLabel);
     labels.add(o.label);
     const thread = await resolveThread(manager, o.threadCode, `openings.${i}.threadCode`);
     rows.push({
