@@ -4,6 +4,8 @@ import { ChoiceChips } from '../ui/choice-chips';
 import { lengthDraft, LengthField, type LengthDraft } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
+import { DIP_TUBE_LIMITS as T, dipTubeProblem } from '@/shared/records/dip-tube';
+import { sentence } from '@/shared/records/field';
 import { Checks, mmOf } from './checks';
 import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
 import { CHANNEL_OPTIONS, optionLabel } from './options';
@@ -64,15 +66,16 @@ export const dipTubeSpec: FormSpec<DipTubeRecord, DipTubeDraft> = {
   }),
   check: (d) => {
     const c = new Checks();
-    c.text('partNumber', 'Part number', d.partNumber, { max: 60 });
+    c.text('partNumber', 'Part number', d.partNumber, { max: T.partNumberChars });
     c.pick('supplierId', 'Supplier', d.supplierId, 'the supplier who sells it');
-    c.text('material', 'Material', d.material, { max: 40 });
+    c.text('material', 'Material', d.material, { max: T.materialChars });
     c.pick('threadCode', 'Thread', d.threadCode, 'the thread it screws into');
     c.choice('channels', 'Channels', d.channels);
-    c.length('lengthMm', 'Length', d.lengthMm, { maxMm: 3000 });
-    const bore = c.length('boreMm', 'Bore', d.boreMm, { maxMm: 200 });
-    const od = c.length('odMm', 'Outside diameter', d.odMm, { maxMm: 250 });
-    if (bore !== null && od !== null) c.rule('boreMm', bore < od, 'Bore must be smaller than the outside diameter.');
+    c.length('lengthMm', 'Length', d.lengthMm, { maxMm: T.lengthMaxMm });
+    const bore = c.length('boreMm', 'Bore', d.boreMm, { maxMm: T.boreMaxMm });
+    const od = c.length('odMm', 'Outside diameter', d.odMm, { maxMm: T.odMaxMm });
+    const across = dipTubeProblem({ boreMm: bore, odMm: od });
+    if (across) c.rule(across.field, false, sentence(LABELS[across.field], across.says));
     return c.errors;
   },
   toBody: (d) => ({

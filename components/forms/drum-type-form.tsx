@@ -1,33 +1,21 @@
 import { router } from 'expo-router';
-import { StyleSheet, Text, View } from 'react-native';
-import type { OpeningRecord, Region } from '@/shared/api-types';
+import { StyleSheet, Text } from 'react-native';
+import type { Region } from '@/shared/api-types';
 import { checkDrumPackagingCode } from '@/shared/packaging-code';
-import type { LengthUnit } from '@/shared/units';
+import { DRUM_TYPE_LABELS, DRUM_TYPE_LIMITS as L, DRUM_TYPE_SAYS, drumTypeLabelOf, drumTypeProblem } from '@/shared/records/drum-type';
+import { sentence } from '@/shared/records/field';
 import { drumTypeQueries, type DrumTypeRecord } from '../data/drum-types';
-import { colors, radius, space, type, field } from '../theme';
-import { Button } from '../ui/button';
+import { colors, type } from '../theme';
 import { ChoiceChips } from '../ui/choice-chips';
 import { lengthDraft, LengthField, NumberField, numberText, type LengthDraft } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { Checks, mmOf, trimOrNull } from './checks';
 import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
-import { HEAD_OPTIONS, MATERIAL_OPTIONS, optionLabel, POSITION_OPTIONS, REGION_OPTIONS } from './options';
-import { KeyCodePicker, SupplierPicker, ThreadPicker } from './pickers';
-import { useRecordForm, type FormSpec, type RecordForm } from './use-record-form';
-
-type Position = OpeningRecord['position'];
-const MAX_OPENINGS = 6;
-
-export type OpeningDraft = {
-  /** Keeps React's list stable while openings are added and removed; never sent. */
-  _key: string;
-  label: string;
-  threadCode: PickedRef | null;
-  boreMm: LengthDraft;
-  keyCode: PickedRef | null;
-  position: Position | null;
-};
+import { HEAD_OPTIONS, MATERIAL_OPTIONS, optionLabel, REGION_OPTIONS } from './options';
+import { emptyOpening, newKey, OpeningsEditor, type OpeningDraft } from './drum-openings-editor';
+import { SupplierPicker } from './pickers';
+import { useRecordForm, type FormSpec } from './use-record-form';
 
 export type DrumTypeDraft = {
   partNumber: string;
@@ -44,28 +32,7 @@ export type DrumTypeDraft = {
   openings: OpeningDraft[];
 };
 
-const LABELS: Record<string, string> = {
-  partNumber: 'Part number',
-  name: 'Name',
-  supplierId: 'Supplier',
-  region: 'Region',
-  nominalCapacityL: 'Nominal capacity',
-  material: 'Material',
-  head: 'Head',
-  unPackagingCode: 'UN packaging code',
-  outsideHeightMm: 'Outside height',
-  insideDepthMm: 'Inside depth',
-  outsideDiameterMm: 'Outside diameter',
-  openings: 'Openings',
-};
-
-const OPENING_LABELS: Record<string, string> = { label: 'label', threadCode: 'thread', boreMm: 'bore', keyCode: 'key code', position: 'position' };
-
-let nextKey = 0;
-const newKey = () => `o${++nextKey}`;
 const code = (c: string | null): PickedRef | null => (c ? { id: c, label: c } : null);
-
-export const emptyOpening = (unit: LengthUnit): OpeningDraft => ({ _key: newKey(), label: '', threadCode: null, boreMm: lengthDraft(null, unit), keyCode: null, position: null });
 
 /** The packaging-code findings for the draft: a failure to read the code blocks saving, a mismatch is a warning. */
 function packagingFindings(d: DrumTypeDraft) {
@@ -105,31 +72,32 @@ export const drumTypeSpec: FormSpec<DrumTypeRecord, DrumTypeDraft> = {
   }),
   check: (d) => {
     const c = new Checks();
-    c.text('partNumber', 'Part number', d.partNumber, { max: 60 });
-    c.text('name', 'Name', d.name, { max: 120 });
+    c.text('partNumber', 'Part number', d.partNumber, { max: L.partNumberChars });
+    c.text('name', 'Name', d.name, { max: L.nameChars });
     c.pick('supplierId', 'Supplier', d.supplierId, 'the drum maker or slurry supplier');
     c.choice('region', 'Region', d.region);
-    c.number('nominalCapacityL', 'Nominal capacity', d.nominalCapacityL, { min: 0, above: true, max: 3000, unit: 'L' });
+    c.number('nominalCapacityL', 'Nominal capacity', d.nominalCapacityL, { min: 0, above: true, max: L.nominalCapacityMaxL, unit: 'L' });
     c.choice('material', 'Material', d.material);
     c.choice('head', 'Head', d.head);
-    if (d.unPackagingCode.trim().length > 40) c.rule('unPackagingCode', false, 'UN packaging code must be at most 40 characters.');
+    c.text('unPackagingCode', 'UN packaging code', d.unPackagingCode, { max: L.unPackagingCodeChars, optional: true });
     const codeProblem = packagingFindings(d).find((f) => f.outcome === 'fail' && (f.check === 'code' || f.check === 'kind'));
     if (codeProblem) c.rule('unPackagingCode', false, codeProblem.message);
-    const height = c.length('outsideHeightMm', 'Outside height', d.outsideHeightMm, { maxMm: 3000 });
-    const depth = c.length('insideDepthMm', 'Inside depth', d.insideDepthMm, { maxMm: 3000 });
-    if (height !== null && depth !== null) c.rule('insideDepthMm', depth < height, 'Inside depth must be less than the outside height.');
-    c.length('outsideDiameterMm', 'Outside diameter', d.outsideDiameterMm, { maxMm: 2000 });
-    c.rule('openings', d.openings.length >= 1, 'A drum type needs at least one opening.');
-    c.rule('openings', d.openings.length <= MAX_OPENINGS, `A drum type has at most ${MAX_OPENINGS} openings.`);
+    const height = c.length('outsideHeightMm', 'Outside height', d.outsideHeightMm, { maxMm: L.outsideHeightMaxMm });
+    const depth = c.length('insideDepthMm', 'Inside depth', d.insideDepthMm, { maxMm: L.insideDepthMaxMm });
+    const across = drumTypeProblem({ insideDepthMm: depth, outsideHeightMm: height });
+    if (across) c.rule(across.field, false, sentence(DRUM_TYPE_LABELS[across.field], across.says));
+    c.length('outsideDiameterMm', 'Outside diameter', d.outsideDiameterMm, { maxMm: L.outsideDiameterMaxMm });
+    c.rule('openings', d.openings.length >= L.openingsMin, 'A drum type needs at least one opening.');
+    c.rule('openings', d.openings.length <= L.openingsMax, `A drum type has at most ${L.openingsMax} openings.`);
     const seen = new Set<string>();
     d.openings.forEach((o, i) => {
       const n = `Opening ${i + 1}`;
-      c.text(`openings.${i}.label`, `${n} label`, o.label, { max: 40 });
+      c.text(`openings.${i}.label`, `${n} label`, o.label, { max: L.openingLabelChars });
       const label = o.label.trim();
-      if (label) c.rule(`openings.${i}.label`, !seen.has(label), `${n} label must be different from the other openings ("${label}" is used twice).`);
+      if (label) c.rule(`openings.${i}.label`, !seen.has(label), `${n} label ${DRUM_TYPE_SAYS.openingLabel} ("${label}" is used twice).`);
       seen.add(label);
       c.pick(`openings.${i}.threadCode`, `${n} thread`, o.threadCode, 'its thread');
-      c.length(`openings.${i}.boreMm`, `${n} bore`, o.boreMm, { maxMm: 500 });
+      c.length(`openings.${i}.boreMm`, `${n} bore`, o.boreMm, { maxMm: L.openingBoreMaxMm });
       c.choice(`openings.${i}.position`, `${n} position`, o.position);
     });
     return c.errors;
@@ -148,11 +116,7 @@ export const drumTypeSpec: FormSpec<DrumTypeRecord, DrumTypeDraft> = {
     outsideDiameterMm: mmOf(d.outsideDiameterMm),
     openings: d.openings.map((o) => ({ label: o.label.trim(), threadCode: o.threadCode!.id, boreMm: mmOf(o.boreMm), keyCode: o.keyCode?.id ?? null, position: o.position })),
   }),
-  labelOf: (path) => {
-    const m = /^openings\.(\d+)(?:\.(\w+))?$/.exec(path);
-    if (m) return m[2] ? (OPENING_LABELS[m[2]] ? `Opening ${Number(m[1]) + 1} ${OPENING_LABELS[m[2]]}` : undefined) : `Opening ${Number(m[1]) + 1}`;
-    return LABELS[path];
-  },
+  labelOf: drumTypeLabelOf,
   describe: (key, d) => {
     if (key === 'openings') return d.openings.map((o) => `${o.label || 'unnamed'} (${o.threadCode?.label ?? 'no thread'}${o.keyCode ? `, key ${o.keyCode.label}` : ''})`).join('; ');
     if (key === 'material') return optionLabel(MATERIAL_OPTIONS, d.material);
@@ -161,96 +125,6 @@ export const drumTypeSpec: FormSpec<DrumTypeRecord, DrumTypeDraft> = {
     return undefined;
   },
 };
-
-/** The repeatable list of a drum's openings (bungs): label, thread, bore, key and position each. */
-function OpeningsEditor({ form }: { form: RecordForm<DrumTypeRecord, DrumTypeDraft> }) {
-  const { draft, set, field, unit } = form;
-  const change = (i: number, key: keyof OpeningDraft, value: unknown) => {
-    const next = draft.openings.map((o, j) => (j === i ? { ...o, [key]: value } : o));
-    set('openings', next, `openings.${i}.${key}`);
-  };
-  const remove = (i: number) =>
-    set(
-      'openings',
-      draft.openings.filter((_, j) => j !== i),
-      'openings',
-    );
-  const add = () => {
-    set('openings', [...draft.openings, emptyOpening(unit)], 'openings');
-  };
-  const listError = field('openings').error;
-  return (
-    <View style={styles.openings}>
-      {draft.openings.map((o, i) => {
-        const p = `openings.${i}`;
-        return (
-          <View key={o._key} style={styles.opening} testID={`form-opening-${i}`} role="group" aria-label={`Opening ${i + 1}`}>
-            <View style={styles.openingHead}>
-              <Text role="heading" aria-level={3} style={type.label}>
-                Opening {i + 1}
-              </Text>
-              <Button
-                label="Remove"
-                variant="quiet"
-                accessibilityLabel={`Remove opening ${i + 1}`}
-                disabled={draft.openings.length <= 1}
-                onPress={() => remove(i)}
-                testID={`form-openings-${i}-remove`}
-              />
-            </View>
-            <FieldRow>
-              <FieldCell>
-                <TextField
-                  label="Label"
-                  hint="As marked or as people say it, e.g. large bung."
-                  value={o.label}
-                  onChangeText={(v) => change(i, 'label', v)}
-                  testID={`form-openings-${i}-label`}
-                  {...field(`${p}.label`)}
-                />
-              </FieldCell>
-              <FieldCell>
-                <LengthField
-                  label="Bore"
-                  hint="Inside diameter of the opening."
-                  value={o.boreMm}
-                  onChange={(v) => change(i, 'boreMm', v)}
-                  testID={`form-openings-${i}-boreMm`}
-                  {...field(`${p}.boreMm`)}
-                />
-              </FieldCell>
-            </FieldRow>
-            <FieldRow>
-              <FieldCell>
-                <ThreadPicker value={o.threadCode} onChange={(v) => change(i, 'threadCode', v)} testID={`form-openings-${i}-threadCode`} {...field(`${p}.threadCode`)} />
-              </FieldCell>
-              <FieldCell>
-                <KeyCodePicker value={o.keyCode} onChange={(v) => change(i, 'keyCode', v)} testID={`form-openings-${i}-keyCode`} {...field(`${p}.keyCode`)} />
-              </FieldCell>
-            </FieldRow>
-            <ChoiceChips
-              label="Position"
-              options={POSITION_OPTIONS}
-              value={o.position}
-              onChange={(v) => change(i, 'position', v)}
-              error={field(`${p}.position`).error}
-              testID={`form-openings-${i}-position`}
-            />
-          </View>
-        );
-      })}
-      {listError ? (
-        <Text role="alert" style={styles.error} testID="form-openings-error">
-          {listError}
-        </Text>
-      ) : null}
-      <View style={styles.addRow}>
-        <Button label="Add an opening" variant="secondary" disabled={draft.openings.length >= MAX_OPENINGS} onPress={add} testID="form-openings-add" />
-        {draft.openings.length >= MAX_OPENINGS ? <Text style={type.small}>A drum type has at most {MAX_OPENINGS} openings.</Text> : null}
-      </View>
-    </View>
-  );
-}
 
 /** Create (no id) or edit a drum type with its openings. */
 export function DrumTypeFormScreen({ id }: { id?: string }) {
@@ -358,10 +232,5 @@ export function DrumTypeFormScreen({ id }: { id?: string }) {
 }
 
 const styles = StyleSheet.create({
-  openings: { gap: space.md },
-  opening: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: space.md, backgroundColor: colors.paper },
-  openingHead: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
-  addRow: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
-  error: field.error,
   warning: { ...type.body, color: colors.caution },
 });

@@ -3,7 +3,7 @@ import { stringify } from 'csv-stringify/sync';
 import { Router } from 'express';
 import type { DataSource, ObjectLiteral } from 'typeorm';
 import { notFound } from '../common/errors';
-import { RESOURCES } from '../registry/definitions';
+import { RESOURCES } from '../registry/resources';
 import { ResourceService } from '../registry/resource';
 
 /**

@@ -19,6 +19,8 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { Optional } from '../common/fields';
+import { DIP_TUBE_LIMITS as TUBE } from '../../shared/records/dip-tube';
+import { DRUM_TYPE_LIMITS as DRUM } from '../../shared/records/drum-type';
 import { REGIONS, SUITED_TO, THREAD_FAMILIES } from '../entities/registry';
 
 // Shared field rules. Lengths are mm; the upper bounds reject absurd values (a drum is not 10 m deep).
@@ -84,9 +86,9 @@ export class KeyCodeDto {
 }
 
 export class OpeningDto {
-  @Name(40) label: string;
+  @Name(DRUM.openingLabelChars) label: string;
   @Code threadCode: string;
-  @Mm(500) boreMm: number;
+  @Mm(DRUM.openingBoreMaxMm) boreMm: number;
   @IsOptional() @NullableCode keyCode?: string | null;
   @OneOf(['large', 'small', 'center', 'other']) position: string;
 }
@@ -94,26 +96,33 @@ export class OpeningDto {
 export class DrumTypeDto {
   @Id supplierId: string;
   @OneOf(REGIONS) region: string;
-  @Name() name: string;
-  @Name(60) partNumber: string;
-  @IsNumber(num, { message: NUMBER }) @Min(0.1, { message: 'must be more than 0 L' }) @Max(3000, { message: 'must be at most 3000 L' }) nominalCapacityL: number;
+  @Name(DRUM.nameChars) name: string;
+  @Name(DRUM.partNumberChars) partNumber: string;
+  @IsNumber(num, { message: NUMBER })
+  @Min(0.1, { message: 'must be more than 0 L' })
+  @Max(DRUM.nominalCapacityMaxL, { message: `must be at most ${DRUM.nominalCapacityMaxL} L` })
+  nominalCapacityL: number;
   @OneOf(['steel', 'plastic', 'fibre', 'aluminium', 'other']) material: string;
   @OneOf(['tight', 'open']) head: string;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsString() @MaxLength(40) unPackagingCode?: string | null;
-  @Mm(3000) outsideHeightMm: number;
-  @Mm(3000) insideDepthMm: number;
-  @Mm(2000) outsideDiameterMm: number;
-  @ValidateNested({ each: true }) @Type(() => OpeningDto) @ArrayMinSize(1, { message: 'must list at least one opening' }) @ArrayMaxSize(6) openings: OpeningDto[];
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsString() @MaxLength(DRUM.unPackagingCodeChars) unPackagingCode?: string | null;
+  @Mm(DRUM.outsideHeightMaxMm) outsideHeightMm: number;
+  @Mm(DRUM.insideDepthMaxMm) insideDepthMm: number;
+  @Mm(DRUM.outsideDiameterMaxMm) outsideDiameterMm: number;
+  @ValidateNested({ each: true })
+  @Type(() => OpeningDto)
+  @ArrayMinSize(DRUM.openingsMin, { message: 'must list at least one opening' })
+  @ArrayMaxSize(DRUM.openingsMax, { message: `must list at most ${DRUM.openingsMax} openings` })
+  openings: OpeningDto[];
 }
 
 export class DipTubeDto {
-  @Name(60) partNumber: string;
+  @Name(TUBE.partNumberChars) partNumber: string;
   @Id supplierId: string;
   @Code threadCode: string;
-  @Mm(3000) lengthMm: number;
-  @Mm(200) boreMm: number;
-  @Mm(250) odMm: number;
-  @Name(40) material: string;
+  @Mm(TUBE.lengthMaxMm) lengthMm: number;
+  @Mm(TUBE.boreMaxMm) boreMm: number;
+  @Mm(TUBE.odMaxMm) odMm: number;
+  @Name(TUBE.materialChars) material: string;
   @IsOptional() @NullableCode keyCode?: string | null;
   @OneOf(['feed', 'feed-return']) channels: string;
 }

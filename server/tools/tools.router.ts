@@ -10,7 +10,7 @@ import { flowToM3s, fromM3s, toMm, type FlowUnit, type LengthUnit } from '../../
 import { badRequest, fieldError } from '../common/errors';
 import { body } from '../common/validate';
 import { DrumType, ThreadSpec } from '../entities';
-import { threadRow } from '../registry/definitions';
+import { threadRow } from '../registry/thread-specs/thread-spec.def';
 import { parseId } from '../registry/resource';
 import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 import { FlowDto, ThreadMatchDto } from './tools.dto';

@@ -4,7 +4,7 @@ import fc from 'fast-check';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { POLICY } from '../../server/auth/policy';
-import { RESOURCES } from '../../server/registry/definitions';
+import { RESOURCES } from '../../server/registry/resources';
 import { bearer, makeTestApp, tokenFor } from '../support/app';
 import { openTestDataSource, resetDatabase } from '../support/db';
 import { dtoFieldNames, HOSTILE_BODIES, HOSTILE_ENCODINGS, HOSTILE_TEXT, hostileJson, hostileQueryValue, pct, PROTOTYPE_KEYS, QUERY_NAMES, RAW_ENCODED } from '../support/hostile';

@@ -1,0 +1,61 @@
+import { fieldError } from '../../common/errors';
+import { Connector, Pairing, Station, Supplier } from '../../entities';
+import { SUITED_TO } from '../../entities/registry';
+import { byCode, filter, stamps } from '../common';
+import { anId, oneOf } from '../list-query';
+import { ensureExists, pick, resolveKey } from '../refs';
+import { ConnectorDto } from '../registry.dto';
+import type { ResourceDef } from '../resource';
+
+export const connectorJson = (c: Connector) => ({
+  ...stamps(c),
+  partNumber: c.partNumber,
+  supplierId: c.supplierId,
+  supplierName: c.supplier?.name ?? null,
+  keyCode: c.keyCode?.code ?? null,
+  feedBoreMm: c.feedBoreMm,
+  feedNominal: c.feedNominal,
+  returnBoreMm: c.returnBoreMm,
+  returnNominal: c.returnNominal,
+  returnPath: c.returnPath,
+  suitedTo: c.suitedTo,
+  wettedMaterials: c.wettedMaterials,
+});
+
+export const connectorDef: ResourceDef<Connector> = {
+  path: 'connectors',
+  label: 'Dispense head',
+  entity: Connector,
+  alias: 'c',
+  dto: ConnectorDto,
+  joins: (qb) => qb.leftJoinAndSelect('c.supplier', 'sup').leftJoinAndSelect('c.keyCode', 'k'),
+  search: ["c.part_number || ' ' || c.wetted_materials"],
+  sorts: { partNumber: 'c.partNumber', feedBoreMm: 'c.feedBoreMm', suitedTo: 'c.suitedTo', updatedAt: 'c.updatedAt' },
+  defaultSort: 'partNumber',
+  filters: {
+    key: byCode('key', 'k'),
+    supplierId: filter(anId, (qb, v) => qb.andWhere('c.supplier_id = :supplierId', { supplierId: v })),
+    // On connectors, ?status= is what the head is suited to.
+    status: filter(oneOf(SUITED_TO), (qb, v) => qb.andWhere('c.suited_to = :suited', { suited: v })),
+  },
+  toJson: connectorJson,
+  toColumns: async (dto, { manager, existing }) => {
+    if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
+    const cols: Partial<Connector> = pick<Connector>(dto, ['partNumber', 'supplierId', 'feedBoreMm', 'feedNominal', 'returnBoreMm', 'returnNominal', 'returnPath', 'suitedTo', 'wettedMaterials']);
+    if (dto.keyCode !== undefined) cols.keyCodeId = await resolveKey(manager, dto.keyCode, 'keyCode');
+    const returnPath = cols.returnPath ?? (existing as Connector | undefined)?.returnPath;
+    const returnBore = 'returnBoreMm' in cols ? cols.returnBoreMm : (existing as Connector | undefined)?.returnBoreMm;
+    if (returnPath === 'none' && returnBore != null) throw fieldError('returnBoreMm', 'must be empty when the head has no return path');
+    if (returnPath !== 'none' && returnBore == null) throw fieldError('returnBoreMm', 'is required when the head has a return path');
+    return cols;
+  },
+  detailExtras: async (c, m) => ({
+    stations: (await m.find(Station, { where: { connectorId: c.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name, bay: s.bay, tapping: s.tapping })),
+    pairings: (await m.find(Pairing, { where: { connectorId: c.id }, relations: { dipTube: true } })).map((p) => ({
+      id: p.id,
+      status: p.status,
+      dipTubeId: p.dipTubeId,
+      dipTubePartNumber: p.dipTube?.partNumber,
+    })),
+  }),
+};

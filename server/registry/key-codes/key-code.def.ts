@@ -1,0 +1,19 @@
+import { KeyCode } from '../../entities';
+import { stamps } from '../common';
+import { pick } from '../refs';
+import { KeyCodeDto } from '../registry.dto';
+import type { ResourceDef } from '../resource';
+
+export const keyCodeDef: ResourceDef<KeyCode> = {
+  path: 'key-codes',
+  label: 'Key code',
+  entity: KeyCode,
+  alias: 'k',
+  dto: KeyCodeDto,
+  joins: (qb) => qb,
+  search: ['k.code', 'k.label', "coalesce(k.marking, '')"],
+  sorts: { code: 'k.code', label: 'k.label' },
+  defaultSort: 'code',
+  toJson: (k) => ({ ...stamps(k), code: k.code, label: k.label, marking: k.marking }),
+  toColumns: async (dto) => pick<KeyCode>(dto, ['code', 'label', 'marking']),
+};

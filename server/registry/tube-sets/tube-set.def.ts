@@ -1,0 +1,51 @@
+import { fieldError } from '../../common/errors';
+import { DipTube, Station, TubeSet } from '../../entities';
+import { TUBE_SET_STATES } from '../../entities/registry';
+import { filter, stamps } from '../common';
+import { anId, oneOf } from '../list-query';
+import { ensureExists, pick } from '../refs';
+import { TubeSetDto } from '../registry.dto';
+import type { ResourceDef } from '../resource';
+
+export const tubeSetDef: ResourceDef<TubeSet> = {
+  path: 'tube-sets',
+  label: 'Tube set',
+  entity: TubeSet,
+  alias: 'ts',
+  dto: TubeSetDto,
+  joins: (qb) => qb.leftJoinAndSelect('ts.station', 'st').leftJoinAndSelect('ts.dipTube', 't').leftJoinAndSelect('ts.lastRinsedBy', 'rb'),
+  search: ['ts.label', 'st.name', 't.part_number'],
+  sorts: { label: 'ts.label', station: 'st.name', state: 'ts.state', lastRinsedAt: 'ts.lastRinsedAt' },
+  defaultSort: 'station',
+  filters: {
+    stationId: filter(anId, (qb, v) => qb.andWhere('ts.station_id = :stationId', { stationId: v })),
+    // On tube sets, ?status= is the set's state in the rotation.
+    status: filter(oneOf(TUBE_SET_STATES), (qb, v) => qb.andWhere('ts.state = :state', { state: v })),
+  },
+  toJson: (t) => ({
+    ...stamps(t),
+    currentLotNumber: t.currentLotNumber,
+    currentDrumSerial: t.currentDrumSerial,
+    stationId: t.stationId,
+    stationName: t.station?.name ?? null,
+    label: t.label,
+    dipTubeId: t.dipTubeId,
+    dipTubePartNumber: t.dipTube?.partNumber ?? null,
+    state: t.state,
+    lastRinsedAt: t.lastRinsedAt,
+    lastRinsedById: t.lastRinsedById,
+    lastRinsedByName: t.lastRinsedBy?.displayName ?? null,
+    lastUsedAt: t.lastUsedAt,
+  }),
+  toColumns: async (dto, { manager, existing }) => {
+    if (dto.stationId !== undefined) await ensureExists(manager, Station, dto.stationId, 'stationId', 'station');
+    if (dto.dipTubeId !== undefined) await ensureExists(manager, DipTube, dto.dipTubeId, 'dipTubeId', 'dip tube');
+    const cols = pick<TubeSet>(dto, ['stationId', 'label', 'dipTubeId']);
+    if (existing) {
+      if (dto.state !== undefined && dto.state !== (existing as TubeSet).state) throw fieldError('state', 'changes through the rotation: rinse, standby and change-out');
+      if (dto.stationId !== undefined && dto.stationId !== (existing as TubeSet).stationId) throw fieldError('stationId', 'cannot change; register a new set at the other station');
+      return cols;
+    }
+    return { ...cols, state: 'cleaning', lastRinsedAt: null, lastUsedAt: null };
+  },
+};
