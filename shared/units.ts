@@ -6,15 +6,9 @@ export const MM_PER_IN = 25.4;
 /** 1 US gal = 231 in^3 = 3.785411784 L exactly (NIST SP 811, Appendix B; 16 CFR 500.19). */
 export const L_PER_US_GAL = 3.785411784;
 
-export const LENGTH_UNITS = ['mm', 'in'] as const;
-export const VOLUME_UNITS = ['L', 'gal'] as const;
-export const FLOW_UNITS = ['L/min', 'gal/min', 'm3/h'] as const;
+import { FLOW_UNITS, LENGTH_UNITS, VOLUME_UNITS, type FlowUnit, type LengthUnit, type VolumeUnit } from './contract/units';
 
-export type LengthUnit = (typeof LENGTH_UNITS)[number];
-/** 'gal' is the US liquid gallon. */
-export type VolumeUnit = (typeof VOLUME_UNITS)[number];
-/** 'gal/min' is US gallons per minute. */
-export type FlowUnit = (typeof FLOW_UNITS)[number];
+export { FLOW_UNITS, LENGTH_UNITS, VOLUME_UNITS, type FlowUnit, type LengthUnit, type VolumeUnit };
 
 /** Thrown when a unit string is not one we know, so a typo never converts silently. */
 export class UnknownUnitError extends Error {

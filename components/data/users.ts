@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Role } from '@/shared/roles';
+import type { Role } from '@/shared/contract/roles';
 import { api } from '../api/client';
 
 export interface UserRow {

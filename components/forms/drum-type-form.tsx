@@ -1,6 +1,6 @@
 import { router } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
-import type { OpeningRecord, Region } from '@/shared/api-types';
+import type { OpeningRecord, Region } from '@/shared/contract/records';
 import { checkDrumPackagingCode } from '@/shared/packaging-code';
 import type { LengthUnit } from '@/shared/units';
 import { drumTypeQueries, type DrumTypeRecord } from '../data/drum-types';

@@ -3,7 +3,7 @@ import type { ColumnDef } from '@tanstack/react-table';
 import { useRouter } from 'expo-router';
 import { useEffect } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import type { ListParams, Page } from '@/shared/api-types';
+import type { ListParams, Page } from '@/shared/contract/records';
 import { Screen } from '../screen';
 import { colors, space, type } from '../theme';
 import { DataTable, type TableSort } from '../ui/data-table';

@@ -2,7 +2,7 @@ import { In, type EntityManager } from 'typeorm';
 import { evaluateCandidate } from '../../shared/fit';
 import { describeThread } from '../../shared/fit/rules';
 import { recommendDipTubeLength } from '../../shared/recommend-length';
-import type { OrderLine, StationNeed } from '../../shared/api-types';
+import type { OrderLine, StationNeed } from '../../shared/contract/records';
 import { Connector, DipTube, Pairing, Station, TubeSet } from '../entities';
 
 export type { OrderLine, StationNeed };

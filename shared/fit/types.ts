@@ -1,10 +1,11 @@
 // Inputs and outputs of the fit check. Plain objects so the server can pass entities and the client can
 // pass form state; all lengths in mm.
+import type { RuleOutcome, Verdict } from '../contract/verdicts';
 
 export const RULE_NAMES = ['thread', 'key', 'reach', 'tapping', 'ports', 'foam', 'openings', 'approval', 'rinse'] as const;
 export type RuleName = (typeof RULE_NAMES)[number];
 
-export type RuleOutcome = 'pass' | 'caution' | 'fail';
+export type { RuleOutcome, Verdict } from '../contract/verdicts';
 
 export interface RuleResult {
   rule: RuleName;
@@ -106,8 +107,6 @@ export interface CandidateInput {
   /** Partial settings are merged over DEFAULT_SETTINGS. */
   settings?: Partial<FitSettings>;
 }
-
-export type Verdict = 'fits' | 'caution' | 'no-fit';
 
 export type HandlingTopic = 'ppe' | 'sds' | 'spills' | 'pressure' | 'codes';
 
