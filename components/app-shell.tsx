@@ -1,7 +1,7 @@
 import { Link, usePathname } from 'expo-router';
 import { useState, type ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
-import { ROLE_LABELS } from '@/shared/roles';
+import { ROLE_LABELS } from '@/shared/contract/roles';
 import { isActive, navFor } from './navigation';
 import { NoticesIndicator } from './notifications/notices-indicator';
 import { NetworkStrip } from './offline/network-strip';

@@ -1,4 +1,4 @@
-import { ADMIN_ROLES, DOCK_ROLES, PLANNER_ROLES, ROLES, type Role } from '@/shared/roles';
+import { ROLES, rolesFor, type Role } from '@/shared/contract/roles';
 
 export interface NavItem {
   href: string;
@@ -14,12 +14,12 @@ const everyone = ROLES;
 
 export const NAV_ITEMS: NavItem[] = [
   { href: '/', label: 'Home', roles: everyone, testID: 'nav-home', primary: true },
-  { href: '/receive', label: 'Dock check', roles: DOCK_ROLES, testID: 'nav-receive', primary: true },
+  { href: '/receive', label: 'Dock check', roles: rolesFor('check-lots'), testID: 'nav-receive', primary: true },
   { href: '/registry/drum-types', label: 'Registry', roles: everyone, testID: 'nav-registry', primary: true },
-  { href: '/sourcing', label: 'Sourcing', roles: PLANNER_ROLES, testID: 'nav-sourcing', primary: true },
+  { href: '/sourcing', label: 'Sourcing', roles: rolesFor('plan-sourcing'), testID: 'nav-sourcing', primary: true },
   { href: '/stations', label: 'Stations', roles: everyone, testID: 'nav-stations', primary: true },
   { href: '/tools/thread', label: 'Tools', roles: everyone, testID: 'nav-tools' },
-  { href: '/admin/users', label: 'People', roles: ADMIN_ROLES, testID: 'nav-users' },
+  { href: '/admin/users', label: 'People', roles: rolesFor('manage-people'), testID: 'nav-users' },
 ];
 
 export const navFor = (role: Role) => NAV_ITEMS.filter((i) => i.roles.includes(role));

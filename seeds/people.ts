@@ -1,4 +1,4 @@
-import type { Role } from '../shared/roles';
+import type { Role } from '../shared/contract/roles';
 
 export const DEMO_PASSWORD = 'bungwise-demo';
 

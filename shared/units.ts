@@ -11,15 +11,9 @@ export const KG_PER_LB = 0.45359237;
 /** 1 psi = 6.894 757 kPa (NIST SP 811, Appendix B: 6.894 757 E+03 Pa). */
 export const KPA_PER_PSI = 6.894757293168361;
 
-export const LENGTH_UNITS = ['mm', 'in'] as const;
-export const VOLUME_UNITS = ['L', 'gal'] as const;
-export const FLOW_UNITS = ['L/min', 'gal/min', 'm3/h'] as const;
+import { FLOW_UNITS, LENGTH_UNITS, VOLUME_UNITS, type FlowUnit, type LengthUnit, type VolumeUnit } from './contract/units';
 
-export type LengthUnit = (typeof LENGTH_UNITS)[number];
-/** 'gal' is the US liquid gallon. */
-export type VolumeUnit = (typeof VOLUME_UNITS)[number];
-/** 'gal/min' is US gallons per minute. */
-export type FlowUnit = (typeof FLOW_UNITS)[number];
+export { FLOW_UNITS, LENGTH_UNITS, VOLUME_UNITS, type FlowUnit, type LengthUnit, type VolumeUnit };
 
 /** Thrown when a unit string is not one we know, so a typo never converts silently. */
 export class UnknownUnitError extends Error {

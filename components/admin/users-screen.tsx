@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { MIN_PASSWORD_LENGTH } from '@/shared/passwords';
-import { ROLE_LABELS, ROLES, type Role } from '@/shared/roles';
+import { DEFAULT_ROLE, ROLE_LABELS, ROLES, type Role } from '@/shared/contract/roles';
 import { ApiError } from '../api/client';
 import { useUserCreateMutation, useUsersQuery, useUserUpdateMutation, type UserRow } from '../data/users';
 import { Screen } from '../screen';
@@ -19,7 +19,7 @@ const roleOptions = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
 
 function NewUserForm() {
   const create = useUserCreateMutation();
-  const [form, setForm] = useState({ email: '', name: '', role: 'clerk' as Role, temporaryPassword: '' });
+  const [form, setForm] = useState({ email: '', name: '', role: DEFAULT_ROLE as Role, temporaryPassword: '' });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [done, setDone] = useState<string | null>(null);
   const submit = () => {
@@ -28,7 +28,7 @@ function NewUserForm() {
       onSuccess: (u) => {
         setErrors({});
         setDone(`${u.name} can now sign in with the temporary password.`);
-        setForm({ email: '', name: '', role: 'clerk', temporaryPassword: '' });
+        setForm({ email: '', name: '', role: DEFAULT_ROLE, temporaryPassword: '' });
       },
       onError: (err) => setErrors(err instanceof ApiError ? { ...err.fieldMessages(), form: err.message } : { form: String(err) }),
     });

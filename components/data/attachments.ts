@@ -1,6 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Linking, Platform } from 'react-native';
-import type { Page } from '@/shared/api-types';
+import type { Page } from '@/shared/contract/records';
 import { api } from '../api/client';
 import { openFile, saveFile } from '../api/download';
 import { appendFile, upload, type PickedFile } from '../api/upload';

@@ -1,4 +1,4 @@
-import type { ConnectorRecord } from '@/shared/api-types';
+import type { ConnectorRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { ConnectorRecord };

@@ -1,4 +1,4 @@
-import type { DipTubeRecord } from '@/shared/api-types';
+import type { DipTubeRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { DipTubeRecord };

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import type { DockSnapshot } from '@/shared/dock/snapshot';
-import { DOCK_ROLES, hasRole } from '@/shared/roles';
+import { can } from '@/shared/contract/roles';
 import { api } from '../api/client';
 import { useSession } from '../session';
 
@@ -22,7 +22,7 @@ export function useDockSnapshot() {
   return useQuery({
     queryKey: DOCK_SNAPSHOT_KEY,
     queryFn: async (): Promise<KeptSnapshot> => ({ snapshot: await api<DockSnapshot>('/dock-snapshot'), fetchedAt: new Date().toISOString() }),
-    enabled: !!session && hasRole(DOCK_ROLES, session.user.role),
+    enabled: !!session && can(session.user.role, 'check-lots'),
     staleTime: 60_000,
     gcTime: Infinity,
     refetchInterval: 5 * 60_000,

@@ -1,4 +1,4 @@
-import type { DrumTypeRecord } from '@/shared/api-types';
+import type { DrumTypeRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { DrumTypeRecord };

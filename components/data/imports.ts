@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page } from '@/shared/api-types';
+import type { Page } from '@/shared/contract/records';
 import { api, ApiError } from '../api/client';
 import { saveFile } from '../api/download';
 import { appendFile, upload, type PickedFile } from '../api/upload';

@@ -1,4 +1,4 @@
-import type { KeyCodeRecord } from '@/shared/api-types';
+import type { KeyCodeRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { KeyCodeRecord };

@@ -1,4 +1,4 @@
-import { NOTICE_KIND_WORDS, NOTICE_KINDS, type NoticeKind } from '@/shared/notice-kinds';
+import { NOTICE_KIND_WORDS, NOTICE_KINDS, type NoticeKind } from '@/shared/contract/notice-kinds';
 import { useMutation } from '@tanstack/react-query';
 import { api } from '../api/client';
 import { useSession } from '../session';

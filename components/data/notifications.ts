@@ -1,4 +1,4 @@
-import type { NoticeKind } from '@/shared/notice-kinds';
+import type { NoticeKind } from '@/shared/contract/notice-kinds';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../api/client';
 

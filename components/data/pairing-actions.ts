@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { PairingRecord } from '@/shared/api-types';
+import type { PairingRecord } from '@/shared/contract/records';
 import { api } from '../api/client';
 import { connectorQueries } from './connectors';
 import { dipTubeQueries } from './dip-tubes';

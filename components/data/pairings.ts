@@ -1,4 +1,4 @@
-import type { PairingRecord } from '@/shared/api-types';
+import type { PairingRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { PairingRecord };

@@ -1,7 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { TemperatureIndicator } from '@/shared/acceptance/types';
-import type { FitCheckResult, Page } from '@/shared/api-types';
-import type { LotStatus } from '@/shared/dock/lot-status';
+import type { FitCheckResult, Page } from '@/shared/contract/records';
+import type { LotStatus } from '@/shared/contract/lot-status';
 import type { LotDecision, LotVerdict } from '@/shared/dock/verdict';
 import { api } from '../api/client';
 import { useAttachmentUploadMutation } from './attachments';

@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ListParams, Page } from '@/shared/api-types';
+import type { ListParams, Page } from '@/shared/contract/records';
 import { api } from '../api/client';
 
 function queryString(params: ListParams): string {

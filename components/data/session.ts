@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import type { Role } from '@/shared/roles';
+import type { Role } from '@/shared/contract/roles';
 import type { ThemeChoice } from '@/shared/themes';
 import { api } from '../api/client';
 

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { SettingsRecord } from '@/shared/api-types';
+import type { SettingsRecord } from '@/shared/contract/records';
 import type { FitSettings } from '@/shared/fit';
 import { api } from '../api/client';
 

@@ -1,4 +1,4 @@
-import type { SlurryRecord } from '@/shared/api-types';
+import type { SlurryRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { SlurryRecord };

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { OrderLine, Page, Region, StationNeed } from '@/shared/api-types';
+import type { OrderLine, Page, Region, StationNeed } from '@/shared/contract/records';
 
 export type { OrderLine };
 import { api } from '../api/client';

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { FitRuleRecord, TubeSetState } from '@/shared/api-types';
+import type { FitRuleRecord, TubeSetState } from '@/shared/contract/records';
 import { api } from '../api/client';
 import { receivingKeys } from './receiving';
 import { stationQueries } from './stations';

@@ -1,4 +1,4 @@
-import type { StationRecord } from '@/shared/api-types';
+import type { StationRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { StationRecord };

@@ -1,4 +1,4 @@
-import type { SupplierRecord } from '@/shared/api-types';
+import type { SupplierRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { SupplierRecord };

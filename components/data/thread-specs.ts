@@ -1,4 +1,4 @@
-import type { ThreadSpecRecord } from '@/shared/api-types';
+import type { ThreadSpecRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { ThreadSpecRecord };

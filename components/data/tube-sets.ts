@@ -1,4 +1,4 @@
-import type { TubeSetRecord } from '@/shared/api-types';
+import type { TubeSetRecord } from '@/shared/contract/records';
 import { resourceQueries } from './resource';
 
 export type { TubeSetRecord };

@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Role } from '@/shared/roles';
+import type { Page } from '@/shared/contract/records';
+import type { Role } from '@/shared/contract/roles';
 import { api } from '../api/client';
 
 export interface UserRow {
@@ -10,13 +11,6 @@ export interface UserRow {
   active: boolean;
   /** Still on a temporary password (new, or reset by an administrator). */
   mustChangePassword: boolean;
-}
-
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
 }
 
 export const userKeys = { all: ['users'] as const, list: () => [...userKeys.all, 'list'] as const };

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { OrderLine, Page, StationNeed } from '@/shared/api-types';
+import type { OrderLine, Page, StationNeed } from '@/shared/contract/records';
 import { api } from '../api/client';
 
 export type WarningStatus = 'open' | 'acknowledged' | 'resolved';

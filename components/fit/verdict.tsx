@@ -1,9 +1,9 @@
 import { StyleSheet, Text, View } from 'react-native';
-import type { FitRuleRecord } from '@/shared/api-types';
+import type { FitRuleRecord } from '@/shared/contract/records';
+import type { Verdict } from '@/shared/contract/verdicts';
 import { FIT_RULE_LABELS } from '@/shared/fit/registry';
 import { colors, fonts, radius, space, type } from '../theme';
 
-export type Verdict = 'fits' | 'caution' | 'no-fit';
 type Outcome = FitRuleRecord['outcome'];
 
 // Word, mark and colour together: the verdict never rests on colour alone.

@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { DRUM_TYPE_LIMITS } from '@/shared/records/drum-type';
-import type { OpeningRecord } from '@/shared/api-types';
+import type { OpeningRecord } from '@/shared/contract/records';
 import type { LengthUnit } from '@/shared/units';
 import type { DrumTypeRecord } from '../data/drum-types';
 import { colors, radius, space, type, field } from '../theme';

@@ -1,6 +1,6 @@
 import { router } from 'expo-router';
 import { StyleSheet, Text } from 'react-native';
-import type { Region } from '@/shared/api-types';
+import type { Region } from '@/shared/contract/records';
 import { checkDrumPackagingCode } from '@/shared/packaging-code';
 import { DRUM_TYPE_LABELS, DRUM_TYPE_LIMITS as L, DRUM_TYPE_SAYS, drumTypeLabelOf, drumTypeProblem } from '@/shared/records/drum-type';
 import { sentence } from '@/shared/records/field';

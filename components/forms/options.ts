@@ -1,5 +1,5 @@
 // The choices the registry API accepts (server/registry/registry.dto.ts), with the words shown for them.
-import { REGION_LABELS, type Region } from '@/shared/api-types';
+import { REGION_LABELS, type Region } from '@/shared/contract/records';
 
 type Options<T extends string> = ReadonlyArray<{ value: T; label: string }>;
 

@@ -1,6 +1,6 @@
 // The record pickers the forms use, one per resource: what a match shows and which value the API takes.
 import { forwardRef } from 'react';
-import { REGION_LABELS } from '@/shared/api-types';
+import { REGION_LABELS } from '@/shared/contract/records';
 import { connectorQueries, type ConnectorRecord } from '../data/connectors';
 import { dipTubeQueries, type DipTubeRecord } from '../data/dip-tubes';
 import { drumTypeQueries, type DrumTypeRecord } from '../data/drum-types';

@@ -1,5 +1,5 @@
 import { router } from 'expo-router';
-import type { Region } from '@/shared/api-types';
+import type { Region } from '@/shared/contract/records';
 import { slurryQueries, type SlurryRecord } from '../data/slurries';
 import { ChoiceChips } from '../ui/choice-chips';
 import { NumberField, numberText } from '../ui/number-field';

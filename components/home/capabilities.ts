@@ -1,4 +1,4 @@
-import type { Role } from '@/shared/roles';
+import type { Role } from '@/shared/contract/roles';
 
 export interface Capability {
   title: string;

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
-import { ROLE_LABELS } from '@/shared/roles';
+import { ROLE_LABELS } from '@/shared/contract/roles';
 import { Screen } from '../screen';
 import { useSession } from '../session';
 import { colors, space, type } from '../theme';

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import type { ListParams } from '@/shared/api-types';
+import type { ListParams } from '@/shared/contract/records';
 import { saveFile } from '../api/download';
 import { space, field } from '../theme';
 import { Button } from '../ui/button';

@@ -1,3 +1,4 @@
+import { can } from '@/shared/contract/roles';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { SPEC_SHEET_ENCODINGS_TEXT } from '@/shared/encodings';
@@ -18,14 +19,13 @@ import { ImportHistory } from './import-history';
 import { ImportResult } from './import-result';
 import { KIND_HINTS, KIND_LABELS, plural } from './labels';
 
-const IMPORT_ROLES = ['engineer', 'admin'];
 const TITLE = 'Import spec sheets';
 const KIND_OPTIONS = IMPORT_KINDS.map((k) => ({ value: k, label: KIND_LABELS[k] }));
 
 /** Supplier spec sheets into the registry: checked first (a dry run), then written whole or not at all. */
 export function ImportScreen() {
   const { session } = useSession();
-  if (!IMPORT_ROLES.includes(session?.user.role ?? '')) {
+  if (!can(session?.user.role, 'import-records')) {
     return (
       <Screen title={TITLE} testID="import-screen">
         <Card testID="import-not-allowed">

@@ -1,4 +1,4 @@
-import { NOTICE_KIND_WORDS } from '@/shared/notice-kinds';
+import { NOTICE_KIND_WORDS } from '@/shared/contract/notice-kinds';
 import { useRouter } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { useMarkAllNoticesReadMutation, useMarkNoticeReadMutation, useNotificationsQuery, type NoticeRecord } from '../data/notifications';

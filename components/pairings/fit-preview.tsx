@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import type { ConnectorRecord, DipTubeRecord, DrumTypeRecord, PairingStatus } from '@/shared/api-types';
+import type { ConnectorRecord, DipTubeRecord, DrumTypeRecord, PairingStatus } from '@/shared/contract/records';
 import type { StationInput } from '@/shared/fit';
 import { drumTypeQueries } from '../data/drum-types';
 import { fitSettingsOf, useSettingsQuery } from '../data/settings';

@@ -1,6 +1,6 @@
 import { Link, router } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
-import type { PairingRecord } from '@/shared/api-types';
+import type { PairingRecord } from '@/shared/contract/records';
 import { pairingQueries } from '../data/pairings';
 import { useCanEditRegistry } from '../registry/use-can-edit-registry';
 import { Screen } from '../screen';

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
-import type { PairingStatus } from '@/shared/api-types';
+import type { PairingStatus } from '@/shared/contract/records';
 import { colors, fonts, radius, space } from '../theme';
 
 // Word, mark and colour together, like the verdicts: status never rests on colour alone.

@@ -1,6 +1,6 @@
 // The live fit preview of a tube and head while a pairing is edited: the shared fit rules (the same the
 // server runs at the dock), given whatever the engineer has picked so far.
-import type { ConnectorRecord, DipTubeRecord, DrumTypeRecord, PairingStatus } from '@/shared/api-types';
+import type { ConnectorRecord, DipTubeRecord, DrumTypeRecord, PairingStatus } from '@/shared/contract/records';
 import {
   evaluateCandidate,
   FIT_RULES,

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
-import type { PairingRecord, PairingReviewRecord } from '@/shared/api-types';
+import type { PairingRecord, PairingReviewRecord } from '@/shared/contract/records';
 import { colors, fonts, space, type } from '../theme';
 import { Card } from '../ui/card';
 

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import type { PairingRecord } from '@/shared/api-types';
+import type { PairingRecord } from '@/shared/contract/records';
 import { ApiError } from '../api/client';
 import { usePairingActionMutation, type PairingAction } from '../data/pairing-actions';
 import { useCanEditRegistry } from '../registry/use-can-edit-registry';

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { DOCK_ROLES, hasRole } from '@/shared/roles';
+import { can, type Role } from '@/shared/contract/roles';
 import { pickPdfOrPhoto } from '../attachments/pick-file';
 import { useCertificateUploadMutation, type ReceivingCheckRecord } from '../data/receiving';
 import { useSession } from '../session';
@@ -8,9 +8,9 @@ import { fonts, colors, type } from '../theme';
 import { Button } from '../ui/button';
 
 /** Whether the lot waits for its certificate of analysis (and the person may attach it). */
-export function needsCertificate(record: ReceivingCheckRecord, role: string | undefined): boolean {
+export function needsCertificate(record: ReceivingCheckRecord, role: Role | undefined): boolean {
   const waiting = record.lotVerdict?.blockers.some((b) => b.source === 'certificate' && b.severity === 'hold') ?? false;
-  return waiting && hasRole(DOCK_ROLES, role as never);
+  return waiting && can(role, 'check-lots');
 }
 
 /** Attaches the certificate of analysis (a PDF or a photo of it); the server judges the lot again. */
@@ -55,7 +55,7 @@ export function CertificateButton({ record, variant = 'primary' }: { record: Rec
   );
 }
 
-export function useRole(): string | undefined {
+export function useRole(): Role | undefined {
   return useSession().session?.user.role;
 }
 

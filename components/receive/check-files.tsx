@@ -1,4 +1,4 @@
-import { DOCK_ROLES, hasRole } from '@/shared/roles';
+import { can } from '@/shared/contract/roles';
 import { AttachmentsPanel } from '../attachments/attachments-panel';
 import { useSession } from '../session';
 
@@ -9,7 +9,7 @@ export function CheckFiles({ checkId }: { checkId: string }) {
     <AttachmentsPanel
       ownerKind="receiving-check"
       ownerId={checkId}
-      canAdd={hasRole(DOCK_ROLES, session?.user.role)}
+      canAdd={can(session?.user.role, 'check-lots')}
       title="Files for this lot"
       hint="The delivery note and photos of the drum labels: PDF or photo, up to 10 MB each. The certificate of analysis goes through Attach the certificate, so the lot rules see it."
     />

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import type { FitCandidateRecord, FitCheckResult } from '@/shared/api-types';
+import type { FitCandidateRecord, FitCheckResult } from '@/shared/contract/records';
 import { formatDay, TEMPERATURE_INDICATOR_LABELS } from '@/shared/acceptance';
 import { RULE_LABELS, RuleList, VerdictChip } from '../fit/verdict';
 import type { ReceivingCheckRecord } from '../data/receiving';

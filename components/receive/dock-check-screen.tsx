@@ -1,6 +1,6 @@
 import { useEffect } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { DOCK_ROLES, hasRole } from '@/shared/roles';
+import { can } from '@/shared/contract/roles';
 import { Screen } from '../screen';
 import { useSession } from '../session';
 import { colors, fonts, space, type } from '../theme';
@@ -32,7 +32,7 @@ export function DockCheckScreen() {
     if (shown) revealNativeId(RESULT_ID);
   }, [shown, form.recordId, form.provisional]);
 
-  if (session && !hasRole(DOCK_ROLES, session.user.role)) {
+  if (session && !can(session.user.role, 'check-lots')) {
     return (
       <Screen title="Dock check" subtitle="Clerks, engineers and administrators record dock checks." testID="dock-screen">
         <Card>

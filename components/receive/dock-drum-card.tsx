@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
-import type { DrumTypeRecord, StationRecord } from '@/shared/api-types';
+import type { DrumTypeRecord, StationRecord } from '@/shared/contract/records';
 import { keptDrumTypes, keptStations } from './dock-sources';
 import { space, type } from '../theme';
 import { Button } from '../ui/button';

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { TEMPERATURE_INDICATOR_LABELS, TEMPERATURE_INDICATORS } from '@/shared/acceptance/types';
-import { REGION_LABELS, type SlurryRecord, type SupplierRecord } from '@/shared/api-types';
+import { REGION_LABELS, type SlurryRecord, type SupplierRecord } from '@/shared/contract/records';
 import { keptSlurries, keptSuppliers } from './dock-sources';
 import { space } from '../theme';
 import { Card } from '../ui/card';

@@ -1,7 +1,7 @@
 // The dock form's pickers: the registry's list endpoints with the network, the kept snapshot without it
 // (same search: every word of the query in the record's words), so a clerk can pick offline too.
 import { useQuery, type UseQueryResult } from '@tanstack/react-query';
-import type { DrumTypeRecord, ListParams, Page, SlurryRecord, StationRecord, SupplierRecord } from '@/shared/api-types';
+import type { DrumTypeRecord, ListParams, Page, SlurryRecord, StationRecord, SupplierRecord } from '@/shared/contract/records';
 import type { DockSnapshot } from '@/shared/dock/snapshot';
 import { useDockSnapshot } from '../data/dock-snapshot';
 import { drumTypeQueries } from '../data/drum-types';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import Svg, { G, Line, Path, Rect, Text as SvgText } from 'react-native-svg';
-import type { FitCheckResult } from '@/shared/api-types';
+import type { FitCheckResult } from '@/shared/contract/records';
 import { recommendDipTubeLength } from '@/shared/recommend-length';
 import { fromMm, type LengthUnit } from '@/shared/units';
 import { useLengthUnit } from '../data/me';

@@ -2,8 +2,8 @@ import { Link, useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { isCalendarDate } from '@/shared/dates';
-import { LOT_STATUS_LABELS, LOT_STATUSES } from '@/shared/dock/lot-status';
-import { DOCK_ROLES, hasRole } from '@/shared/roles';
+import { LOT_STATUS_LABELS, LOT_STATUSES } from '@/shared/contract/lot-status';
+import { can } from '@/shared/contract/roles';
 import { VerdictChip } from '../fit/verdict';
 import { useLengthUnit } from '../data/me';
 import { useReceivingChecksQuery, type LotStatus, type ReceivingCheckRow, type Verdict } from '../data/receiving';
@@ -68,7 +68,7 @@ export function HistoryScreen() {
     setTo('');
     setPage(1);
   };
-  const canCheck = hasRole(DOCK_ROLES, session?.user.role);
+  const canCheck = can(session?.user.role, 'check-lots');
 
   return (
     <Screen

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { DOCK_ROLES, ENGINEER_ROLES, hasRole, rolesInWords } from '@/shared/roles';
+import { can, rolesFor, rolesInWords } from '@/shared/contract/roles';
 import { ApiError } from '../api/client';
 import { useHoldLotMutation, useReleaseLotMutation, type ReceivingCheckRecord } from '../data/receiving';
 import { useSession } from '../session';
@@ -67,7 +67,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
           opened.
         </Text>
         {record.heldByRules && onlyCertificate ? <Text style={type.body}>Attaching the certificate of analysis lifts this hold.</Text> : null}
-        {hasRole(ENGINEER_ROLES, role) ? (
+        {can(role, 'release-lots') ? (
           <View style={styles.form}>
             <TextField
               label="Release comment"
@@ -82,7 +82,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
           </View>
         ) : record.heldByRules ? null : (
           // A hold by the rules says who lifts it beside each reason (components/receive/lot-verdict.tsx).
-          <Text style={type.small}>Released by an {rolesInWords(ENGINEER_ROLES).toLowerCase()}, with a comment.</Text>
+          <Text style={type.small}>Released by an {rolesInWords(rolesFor('release-lots')).toLowerCase()}, with a comment.</Text>
         )}
         {formError ? (
           <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
@@ -104,7 +104,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
     );
   }
 
-  if (record.decision !== 'caution' || !hasRole(DOCK_ROLES, role)) return null;
+  if (record.decision !== 'caution' || !can(role, 'check-lots')) return null;
 
   return (
     <View style={[styles.box, styles.holdAsk]} testID={`${prefix}-hold-panel`}>

@@ -1,7 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
-import { LOT_STATUS_LABELS } from '@/shared/dock/lot-status';
+import { LOT_STATUS_LABELS } from '@/shared/contract/lot-status';
 import type { Blocker, LotDecision, LotVerdict } from '@/shared/dock/verdict';
-import { rolesInWords } from '@/shared/roles';
+import { rolesInWords } from '@/shared/contract/roles';
 import { VERDICT_LOOK } from '../fit/verdict';
 import type { ReceivingCheckRecord } from '../data/receiving';
 import { colors, fonts, radius, space, type } from '../theme';

@@ -5,6 +5,7 @@ import type { LotStatus } from '../data/receiving';
 import { colors, fonts, minTouch, radius, space, type } from '../theme';
 
 // Small pieces shared by the dock, sourcing, station and notice screens.
+export { LinkButton } from '../ui/link-button';
 
 /** A date and time as people at the site read it: "14 May 2026, 09:40". */
 export function formatWhen(iso: string | null | undefined): string {
@@ -20,15 +21,6 @@ export function formatDate(ymd: string): string {
   if (!m) return ymd;
   const d = new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
   return d.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
-}
-
-/** A link that looks like a button: it goes somewhere rather than doing something here. */
-export function LinkButton({ href, label, variant = 'secondary', testID }: { href: string; label: string; variant?: 'primary' | 'secondary'; testID?: string }) {
-  return (
-    <Link href={href as never} testID={testID} style={[styles.linkButton, variant === 'primary' ? styles.linkPrimary : styles.linkSecondary]}>
-      <Text style={[styles.linkButtonText, { color: variant === 'primary' ? colors.onPrimary : colors.primary }]}>{label}</Text>
-    </Link>
-  );
 }
 
 /** An inline text link, underlined so it never rests on colour alone. */
@@ -99,20 +91,6 @@ export function Tag({ label, tone = 'muted', testID }: { label: string; tone?: '
 }
 
 const styles = StyleSheet.create({
-  linkButton: {
-    display: 'flex' as never,
-    minHeight: minTouch,
-    minWidth: minTouch,
-    paddingHorizontal: space.lg,
-    borderRadius: radius.md,
-    alignItems: 'center',
-    justifyContent: 'center',
-    borderWidth: 2,
-    borderColor: 'transparent',
-  },
-  linkPrimary: { backgroundColor: colors.primary },
-  linkSecondary: { backgroundColor: colors.surface, borderColor: colors.primary },
-  linkButtonText: { fontFamily: fonts.semibold, fontSize: 16, textAlign: 'center' },
   textLink: { fontFamily: fonts.semibold, fontSize: 16, color: colors.primary, textDecorationLine: 'underline', minHeight: minTouch, display: 'flex' as never, alignItems: 'center' },
   fact: { gap: 2, minWidth: 140, flexShrink: 1 },
   factValue: { fontFamily: fonts.semibold },

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
-import type { FitCheckResult } from '@/shared/api-types';
+import type { FitCheckResult } from '@/shared/contract/records';
 import { useQueuedChecks } from '../data/dock-queue';
 import type { ReceivingCheckRecord } from '../data/receiving';
 import { useSession } from '../session';

@@ -7,7 +7,7 @@ import { colors, fonts, minTouch, space, type } from '../theme';
 import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
-import { LinkButton } from './link-button';
+import { LinkButton } from '../ui/link-button';
 import type { RegistryResource } from './registry-list-screen';
 import { UnitToggle } from './unit-toggle';
 import { useCanEditRegistry } from './use-can-edit-registry';

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
-import { REGION_LABELS, type Region } from '@/shared/api-types';
+import { REGION_LABELS, type Region } from '@/shared/contract/records';
 import { keyCodeQueries } from '../data/key-codes';
 import { supplierQueries } from '../data/suppliers';
 import { threadSpecQueries } from '../data/thread-specs';

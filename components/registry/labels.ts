@@ -1,5 +1,5 @@
-import type { ConnectorRecord, DipTubeRecord, DrumTypeRecord, OpeningRecord, PairingStatus, Region } from '@/shared/api-types';
-import { REGION_LABELS } from '@/shared/api-types';
+import type { ConnectorRecord, DipTubeRecord, DrumTypeRecord, OpeningRecord, PairingStatus, Region } from '@/shared/contract/records';
+import { REGION_LABELS } from '@/shared/contract/records';
 
 // Words for the registry's stored codes, in the trade's own terms.
 export const MATERIAL_LABELS: Record<DrumTypeRecord['material'], string> = {

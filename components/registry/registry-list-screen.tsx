@@ -3,7 +3,7 @@ import type { ColumnDef } from '@tanstack/react-table';
 import { useRouter } from 'expo-router';
 import { useEffect } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import type { ListParams, Page } from '@/shared/api-types';
+import type { ListParams, Page } from '@/shared/contract/records';
 import { Screen } from '../screen';
 import { colors, space, type } from '../theme';
 import { DataTable, type TableSort } from '../ui/data-table';
@@ -13,7 +13,7 @@ import { EmptyState, ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
 import { ExportButton } from '../imports/export-button';
 import { FilterBar, type FilterKind } from './filter-bar';
-import { LinkButton } from './link-button';
+import { LinkButton } from '../ui/link-button';
 import { UnitToggle } from './unit-toggle';
 import { useCanEditRegistry } from './use-can-edit-registry';
 import { useListState } from './use-list-state';
@@ -123,7 +123,7 @@ export function RegistryListScreen<T extends { id: string }>(props: RegistryList
         <>
           {showsLengths ? <UnitToggle /> : null}
           <ExportButton resource={resource} params={state.query} />
-          {canEdit ? <LinkButton href={newHref} label={`New ${noun.one}`} testID="registry-new" /> : null}
+          {canEdit ? <LinkButton href={newHref} label={`New ${noun.one}`} variant="primary" testID="registry-new" /> : null}
         </>
       }
     >

@@ -1,4 +1,4 @@
-import type { SupplierRecord } from '@/shared/api-types';
+import type { SupplierRecord } from '@/shared/contract/records';
 import { supplierQueries } from '../data/suppliers';
 import { DetailColumns, DetailScreen, FactList, RelationList, Section } from './detail-parts';
 import { regionLabel } from './labels';

@@ -1,6 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useMemo, useState } from 'react';
-import type { ListParams } from '@/shared/api-types';
+import type { ListParams } from '@/shared/contract/records';
 import type { TableSort } from '../ui/data-table';
 
 export const FILTER_NAMES = ['region', 'thread', 'key', 'status', 'supplierId'] as const;

@@ -1,7 +1,7 @@
 import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { REGION_LABELS, type DrumTypeRecord, type Region, type SupplierRecord } from '@/shared/api-types';
+import { REGION_LABELS, type DrumTypeRecord, type Region, type SupplierRecord } from '@/shared/contract/records';
 import { isCalendarDate } from '@/shared/dates';
 import { ApiError } from '../api/client';
 import { drumTypeQueries } from '../data/drum-types';

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
-import { REGION_LABELS } from '@/shared/api-types';
+import { REGION_LABELS } from '@/shared/contract/records';
 import { VerdictChip } from '../fit/verdict';
 import { useSourcingPlanQuery, type StationImpact } from '../data/sourcing';
 import { Fact, FactGrid, formatDate, formatWhen, LinkButton, SectionTitle, TextLink } from '../receive/parts';

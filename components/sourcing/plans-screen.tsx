@@ -1,6 +1,7 @@
+import { can } from '@/shared/contract/roles';
 import { Link } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
-import { REGION_LABELS } from '@/shared/api-types';
+import { REGION_LABELS } from '@/shared/contract/records';
 import { useSourcingPlansQuery, type SourcingPlanRecord } from '../data/sourcing';
 import { useWarningsQuery } from '../data/warnings';
 import { formatDate, formatWhen, LinkButton, SectionTitle } from '../receive/parts';
@@ -11,15 +12,13 @@ import { ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
 import { PlanForm } from './plan-form';
 
-const PLANNERS = ['buyer', 'engineer', 'admin'];
-
 /** Sourcing plans: a new plan's form beside the plans made so far. */
 export function PlansScreen() {
   const wide = useIsWide();
   const { session } = useSession();
   const plans = useSourcingPlansQuery();
   const open = useWarningsQuery('open');
-  const canPlan = session ? PLANNERS.includes(session.user.role) : false;
+  const canPlan = can(session?.user.role, 'plan-sourcing');
   const openCount = open.data?.total;
   const actions = <LinkButton href="/sourcing/warnings" label={openCount ? `Hardware warnings (${openCount} open)` : 'Hardware warnings'} testID="sourcing-warnings-link" />;
 

@@ -1,3 +1,4 @@
+import { can } from '@/shared/contract/roles';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { useMoveWarningMutation, useWarningsQuery, type HardwareWarningRecord, type WarningStatus } from '../data/warnings';
@@ -19,15 +20,13 @@ const FILTERS = [
   { value: 'resolved', label: 'Resolved' },
 ] as const;
 
-const PLANNERS = ['buyer', 'engineer', 'admin'];
-
 /** Every plan or held lot that needs hardware the site lacks, moved open -> acknowledged -> resolved. */
 export function WarningsScreen() {
   const wide = useIsWide();
   const [filter, setFilter] = useState<'all' | WarningStatus>('all');
   const list = useWarningsQuery(filter === 'all' ? undefined : filter);
   const { session } = useSession();
-  const canMove = session ? PLANNERS.includes(session.user.role) : false;
+  const canMove = can(session?.user.role, 'plan-sourcing');
 
   return (
     <Screen

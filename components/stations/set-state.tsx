@@ -1,4 +1,4 @@
-import type { TubeSetState } from '@/shared/api-types';
+import type { TubeSetState } from '@/shared/contract/records';
 import { Tag } from '../receive/parts';
 
 // The rotation at a drum position: online -> cleaning -> clean and ready -> standby -> online.

@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import { DOCK_ROLES, hasRole } from '@/shared/roles';
+import { can } from '@/shared/contract/roles';
 import { StyleSheet, Text, View } from 'react-native';
 import { ApiError } from '../api/client';
 import { useChangeOutMutation, useRinseMutation, useStandbyMutation, useStationBoardQuery, type BoardTubeSet, type StandbyInput, type StationBoard } from '../data/station-board';
@@ -50,7 +50,7 @@ export function StationBoardScreen({ id }: { id: string }) {
 
 function Board({ board, wide, actions }: { board: StationBoard; wide: boolean; actions: ReactNode }) {
   const { session } = useSession();
-  const canAct = hasRole(DOCK_ROLES, session?.user.role);
+  const canAct = can(session?.user.role, 'tend-stations');
   const rinse = useRinseMutation();
   const standby = useStandbyMutation();
   const changeOut = useChangeOutMutation();

@@ -1,6 +1,6 @@
 import { Link } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
-import type { StationRecord, TubeSetRecord } from '@/shared/api-types';
+import type { StationRecord, TubeSetRecord } from '@/shared/contract/records';
 import { stationQueries } from '../data/stations';
 import { tubeSetQueries } from '../data/tube-sets';
 import { SectionTitle } from '../receive/parts';

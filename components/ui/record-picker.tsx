@@ -1,7 +1,7 @@
 import type { UseQueryResult } from '@tanstack/react-query';
 import { forwardRef, useEffect, useId, useImperativeHandle, useRef, useState } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
-import type { ListParams, Page } from '@/shared/api-types';
+import type { ListParams, Page } from '@/shared/contract/records';
 import { colors, fonts, minTouch, radius, space, type, field } from '../theme';
 import { Button } from './button';
 import { focusNativeId } from './focus';

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Readable } from 'node:stream';
 import type { DataSource, EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
-import type { Role } from '../../shared/roles';
+import type { Role } from '../../shared/contract/roles';
 import { POLICY, type Access } from '../auth/policy';
 import { fieldError, forbidden, HttpError, notFound } from '../common/errors';
 import { Attachment, ATTACHMENT_OWNERS, ATTACHMENT_PURPOSES, Connector, fitFileName, DipTube, DrumType, ImportRecord, ReceivingCheck, type AttachmentOwner, type AttachmentPurpose } from '../entities';

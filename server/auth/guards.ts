@@ -3,7 +3,7 @@ import type { RequestHandler } from 'express';
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { DataSource } from 'typeorm';
-import type { Role } from '../../shared/roles';
+import type { Role } from '../../shared/contract/roles';
 import { forbidden, unauthorized } from '../common/errors';
 import type { ChangeFeed } from '../db/change-feed';
 import { preparedQuery } from '../db/prepared';

@@ -1,15 +1,13 @@
 import type { RequestHandler, Router } from 'express';
-import { ADMIN_ROLES, DOCK_ROLES, ENGINEER_ROLES, PLANNER_ROLES, type Role } from '../../shared/roles';
+import { rolesFor, type Action, type Role } from '../../shared/contract/roles';
 import { requireRole } from './guards';
 
 /** public: no token; signed-in: any active user; a list: only those roles. */
 export type Access = 'public' | 'signed-in' | readonly Role[];
 
 const EVERYONE = 'signed-in' as const;
-const ENGINEERS = ENGINEER_ROLES;
-const DOCK = DOCK_ROLES;
-const PLANNERS = PLANNER_ROLES;
-const ADMINS = ADMIN_ROLES;
+/** The roles of the one role table (shared/contract/roles.ts) for this action; the screens' `can` reads the same. */
+const may = (action: Action): readonly Role[] => rolesFor(action);
 
 /** Registry tables: everyone signed in reads; engineers and admins write. */
 const REGISTRY = ['suppliers', 'thread-specs', 'key-codes', 'drum-types', 'dip-tubes', 'connectors', 'pairings', 'slurries', 'stations', 'tube-sets'];
@@ -28,47 +26,47 @@ export const POLICY: Readonly<Record<string, Access>> = {
   'GET /api/me': EVERYONE,
   'PATCH /api/me': EVERYONE,
   'POST /api/me/password': EVERYONE,
-  'GET /api/users': ADMINS,
-  'POST /api/users': ADMINS,
-  'PATCH /api/users/:id': ADMINS,
-  'POST /api/users/:id/reset-password': ADMINS,
+  'GET /api/users': may('manage-people'),
+  'POST /api/users': may('manage-people'),
+  'PATCH /api/users/:id': may('manage-people'),
+  'POST /api/users/:id/reset-password': may('manage-people'),
   'GET /api/settings': EVERYONE,
-  'PATCH /api/settings': ENGINEERS,
+  'PATCH /api/settings': may('keep-registry'),
   ...Object.fromEntries(
     REGISTRY.flatMap((r) => [
       [`GET /api/${r}`, EVERYONE],
       [`GET /api/${r}/:id`, EVERYONE],
-      [`POST /api/${r}`, ENGINEERS],
-      [`PATCH /api/${r}/:id`, ENGINEERS],
-      [`DELETE /api/${r}/:id`, ENGINEERS],
+      [`POST /api/${r}`, may('keep-registry')],
+      [`PATCH /api/${r}/:id`, may('keep-registry')],
+      [`DELETE /api/${r}/:id`, may('keep-registry')],
     ]),
   ),
   // Four eyes: the service also refuses the pairing's own author.
-  'POST /api/pairings/:id/approve': ENGINEERS,
-  'POST /api/pairings/:id/reject': ENGINEERS,
-  'POST /api/pairings/:id/retire': ENGINEERS,
+  'POST /api/pairings/:id/approve': may('review-pairings'),
+  'POST /api/pairings/:id/reject': may('review-pairings'),
+  'POST /api/pairings/:id/retire': may('review-pairings'),
   'POST /api/fit-checks': EVERYONE,
   'POST /api/tools/thread-match': EVERYONE,
   'POST /api/tools/flow': EVERYONE,
   'GET /api/tools/packaging-codes/:code': EVERYONE,
   'GET /api/tools/drum-types/:id/checks': EVERYONE,
-  'GET /api/dock-snapshot': DOCK,
+  'GET /api/dock-snapshot': may('check-lots'),
   'GET /api/receiving-checks': EVERYONE,
   'GET /api/receiving-checks/:id': EVERYONE,
-  'POST /api/receiving-checks': DOCK,
-  'POST /api/receiving-checks/:id/hold': DOCK,
+  'POST /api/receiving-checks': may('check-lots'),
+  'POST /api/receiving-checks/:id/hold': may('check-lots'),
   // Releasing a held lot is an engineering decision.
-  'POST /api/receiving-checks/:id/release': ENGINEERS,
+  'POST /api/receiving-checks/:id/release': may('release-lots'),
   'GET /api/sourcing-plans': EVERYONE,
   'GET /api/sourcing-plans/:id': EVERYONE,
-  'POST /api/sourcing-plans': PLANNERS,
+  'POST /api/sourcing-plans': may('plan-sourcing'),
   'GET /api/warnings': EVERYONE,
-  'POST /api/warnings/:id/acknowledge': PLANNERS,
-  'POST /api/warnings/:id/resolve': PLANNERS,
+  'POST /api/warnings/:id/acknowledge': may('plan-sourcing'),
+  'POST /api/warnings/:id/resolve': may('plan-sourcing'),
   'GET /api/stations/:id/board': EVERYONE,
-  'POST /api/tube-sets/:id/rinse': DOCK,
-  'POST /api/tube-sets/:id/standby': DOCK,
-  'POST /api/stations/:id/change-out': DOCK,
+  'POST /api/tube-sets/:id/rinse': may('tend-stations'),
+  'POST /api/tube-sets/:id/standby': may('tend-stations'),
+  'POST /api/stations/:id/change-out': may('tend-stations'),
   'GET /api/notifications': EVERYONE,
   'POST /api/notifications/:id/read': EVERYONE,
   'POST /api/notifications/read-all': EVERYONE,
@@ -78,11 +76,11 @@ export const POLICY: Readonly<Record<string, Access>> = {
   'GET /api/attachments/:id/content': EVERYONE,
   'GET /api/attachments/:id/url': EVERYONE,
   'GET /api/imports/templates/:kind': EVERYONE,
-  'POST /api/imports': ENGINEERS,
-  'GET /api/imports': ENGINEERS,
-  'GET /api/imports/:id': ENGINEERS,
+  'POST /api/imports': may('import-records'),
+  'GET /api/imports': may('import-records'),
+  'GET /api/imports/:id': may('import-records'),
   'GET /api/exports/:resource': EVERYONE,
-  'GET /api/audit': ENGINEERS,
+  'GET /api/audit': may('read-audit'),
 };
 
 type Method = 'get' | 'post' | 'patch' | 'delete';

@@ -1,5 +1,5 @@
 import jwt from 'jsonwebtoken';
-import type { Role } from '../../shared/roles';
+import type { Role } from '../../shared/contract/roles';
 
 export interface TokenClaims {
   sub: string;

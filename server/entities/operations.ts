@@ -1,15 +1,16 @@
-import type { NoticeKind } from '../../shared/notice-kinds';
+import type { NoticeKind } from '../../shared/contract/notice-kinds';
 import { Column, Entity, JoinColumn, ManyToOne } from 'typeorm';
 import { LOT_NUMBER_MAX_LENGTH } from '../../shared/lot-number';
 import type { TemperatureIndicator } from '../../shared/acceptance/types';
-import type { LotStatus } from '../../shared/dock/lot-status';
+import type { LotStatus } from '../../shared/contract/lot-status';
+import type { Verdict } from '../../shared/contract/verdicts';
 import type { LotDecision, LotVerdict } from '../../shared/dock/verdict';
 import { Base } from './base';
 import { NullableText, NullableUuid, Text, Uuid } from './columns';
 import { Connector, DipTube, DrumType, Slurry, Station, Supplier, TubeSet } from './registry';
 import { User } from './user';
 
-export type Verdict = 'fits' | 'caution' | 'no-fit';
+export type { Verdict } from '../../shared/contract/verdicts';
 
 @Entity({ name: 'receiving_checks' })
 export class ReceivingCheck extends Base {

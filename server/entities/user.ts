@@ -1,5 +1,5 @@
 import { Column, Entity, JoinColumn, ManyToOne } from 'typeorm';
-import { ROLES, type Role } from '../../shared/roles';
+import { ROLES, type Role } from '../../shared/contract/roles';
 import type { ThemeChoice } from '../../shared/themes';
 import { Base } from './base';
 

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { NOTICE_KINDS, type NoticeKind } from '../../shared/notice-kinds';
+import { NOTICE_KINDS, type NoticeKind } from '../../shared/contract/notice-kinds';
 import { OutboxMessage, type User } from '../entities';
 
 export const MAIL_KINDS = NOTICE_KINDS;

@@ -1,5 +1,5 @@
 import { In, type EntityManager } from 'typeorm';
-import type { Role } from '../../shared/roles';
+import type { Role } from '../../shared/contract/roles';
 import { Notification, User } from '../entities';
 import { enqueueMail } from '../mail/outbox';
 

@@ -3,14 +3,14 @@ import { IsIn, IsInt, IsISO8601, IsOptional, IsString, IsUUID, Matches, Max, Max
 import { LOT_NUMBER_MAX_LENGTH, LOT_NUMBER_MESSAGES, LOT_NUMBER_PATTERN } from '../../shared/lot-number';
 import { IsCalendarDate, Optional, PageParam, PageSizeParam } from '../common/fields';
 import { TEMPERATURE_INDICATORS } from '../../shared/acceptance/types';
-import { LOT_STATUSES } from '../../shared/dock/lot-status';
-import { LOT_DECISIONS } from '../../shared/dock/verdict';
+import { LOT_STATUSES } from '../../shared/contract/lot-status';
+import { FIT_VERDICTS, LOT_DECISIONS, type Verdict } from '../../shared/contract/verdicts';
 import { AdHocDrumDto } from '../fit/fit-check.dto';
 
 /** What the phone decided for a check it made with no network (compared with the server's decision). */
 export class ProvisionalDto {
   @IsIn(LOT_DECISIONS, { message: `must be one of ${LOT_DECISIONS.join(', ')}` }) decision: (typeof LOT_DECISIONS)[number];
-  @IsIn(['fits', 'caution', 'no-fit'], { message: 'must be fits, caution or no-fit' }) verdict: 'fits' | 'caution' | 'no-fit';
+  @IsIn(FIT_VERDICTS, { message: `must be one of ${FIT_VERDICTS.join(', ')}` }) verdict: Verdict;
   @IsString({ message: 'must be text' }) @MaxLength(2000, { message: 'must be at most 2000 characters' }) sentence: string;
   @IsString({ message: 'must be text' }) @MaxLength(40, { message: 'must be at most 40 characters' }) revision: string;
   @IsISO8601({ strict: true }, { message: 'must be a date and time' }) madeAt: string;

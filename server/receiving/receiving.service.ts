@@ -1,6 +1,6 @@
 import { QueryFailedError, type DataSource, type EntityManager } from 'typeorm';
 import { lotDateProblems } from '../../shared/acceptance/rules';
-import { HELD_STATUSES } from '../../shared/dock/lot-status';
+import { HELD_STATUSES } from '../../shared/contract/lot-status';
 import { holdReasonOf, type FitForVerdict, type LotVerdict } from '../../shared/dock/verdict';
 import { conflict, fieldError, notFound, ValidationFailed } from '../common/errors';
 import { ChangeOut, HardwareWarning, ReceivingCheck, Supplier } from '../entities';

@@ -12,12 +12,8 @@ import { parseListQuery, type FilterRule, type ListFilter, type ListQuery } from
 /** Versions are PostgreSQL integers. */
 export const MAX_VERSION = 2_147_483_647;
 
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
+export type { Page } from '../../shared/contract/records';
+import type { Page } from '../../shared/contract/records';
 
 export interface WriteContext {
   manager: EntityManager;

@@ -3,7 +3,7 @@ import { describeThread } from '../../shared/fit/rules';
 import { judgeDrum, selectTubes, type PoolDrum, type PoolRow } from '../../shared/fit/search';
 import type { FitSettings } from '../../shared/fit/types';
 import { recommendDipTubeLength } from '../../shared/recommend-length';
-import type { OrderLine, StationNeed } from '../../shared/api-types';
+import type { OrderLine, StationNeed } from '../../shared/contract/records';
 import { Pairing, Station, TubeSet } from '../entities';
 
 export type { OrderLine, StationNeed };

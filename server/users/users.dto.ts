@@ -1,6 +1,6 @@
 import { ArrayMaxSize, IsArray, IsBoolean, IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
 import { Optional } from '../common/fields';
-import { ROLES, type Role } from '../../shared/roles';
+import { ROLES, type Role } from '../../shared/contract/roles';
 import { THEME_CHOICES, type ThemeChoice } from '../../shared/themes';
 import { MAIL_KINDS } from '../mail/outbox';
 

@@ -1,7 +1,7 @@
 // The lot acceptance rules, one pure function each, tagged like shared/fit/rules.ts: [practice] is common
 // practice of the trade, [pub] a published source. A rule whose input is missing says "not checked" and
 // never turns into a pass.
-import { DOCK_ROLES, ENGINEER_ROLES } from '../roles';
+import { DOCK_ROLES, ENGINEER_ROLES } from '../contract/roles';
 import { addDays, daysBetween, dayNumber, formatDay, type IsoDate } from '../dates';
 import type { AcceptanceEvaluation, AcceptanceNotChecked, AcceptanceResult, LotAcceptanceInput } from './types';
 

@@ -1,7 +1,8 @@
+import type { RuleOutcome } from '../contract/verdicts';
 // Inputs and outputs of the lot acceptance rules: whether a lot's slurry may be received, beside whether the
 // site's hardware fits its drums (shared/fit). Plain objects, complete: the server, the phone (offline) and
 // the tests pass everything a rule reads, "today" included.
-import type { Role } from '../roles';
+import type { Role } from '../contract/roles';
 import type { IsoDate } from '../dates';
 
 export const ACCEPTANCE_RULE_NAMES = ['shelf-life', 'temperature', 'certificate'] as const;
@@ -48,7 +49,7 @@ export type ReleasePath = 'engineer' | 'certificate';
 
 export interface AcceptanceResult {
   rule: AcceptanceRuleName;
-  outcome: 'pass' | 'caution' | 'fail';
+  outcome: RuleOutcome;
   /** One plain sentence a clerk understands. */
   message: string;
   /** For a fail: hold or quarantine, the clause the verdict sentence uses, and who lifts it. */

@@ -1,2 +1,2 @@
-export * from './lot-status';
+export * from '../contract/lot-status';
 export * from './verdict';

@@ -4,7 +4,7 @@ import type { SlurryAcceptance, TemperatureIndicator } from '../acceptance/types
 import { localDate } from '../dates';
 import type { FitSettings, StationInput } from '../fit/types';
 import { judgeDrum, selectPool, type FitAnswer, type JudgedDrum, type JudgedTubeSet, type PoolRow } from '../fit/search';
-import type { Region } from '../api-types';
+import type { Region } from '../contract/records';
 import type { DrumHead } from '../packaging-code';
 import { decideLot, type LotVerdict } from './verdict';
 

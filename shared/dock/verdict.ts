@@ -3,14 +3,14 @@
 import type { AcceptanceEvaluation, AcceptanceResult, AcceptanceRuleName, LotAcceptanceInput, ReleasePath } from '../acceptance/types';
 import { evaluateAcceptance } from '../acceptance/rules';
 import { describeThread } from '../fit/rules';
-import { ENGINEER_ROLES, type Role } from '../roles';
+import { ENGINEER_ROLES, type Role } from '../contract/roles';
+import type { LotDecision, RuleOutcome, Verdict } from '../contract/verdicts';
 
-export const LOT_DECISIONS = ['accept', 'caution', 'hold', 'quarantine'] as const;
-export type LotDecision = (typeof LOT_DECISIONS)[number];
+export { LOT_DECISIONS, type LotDecision } from '../contract/verdicts';
 
 /** The parts of a fit-check answer the verdict reads (POST /api/fit-checks; stored with each dock check). */
 export interface FitForVerdict {
-  verdict: 'fits' | 'caution' | 'no-fit';
+  verdict: Verdict;
   drum: { insideDepthMm: number; openings: Array<{ threadCode: string | null }> };
   station: { name?: string } | null;
   candidates: Array<{
@@ -19,8 +19,8 @@ export interface FitForVerdict {
     dipTubeThreadCode?: string | null;
     dipTubeLengthMm?: number | null;
     installedAtStation: boolean;
-    verdict: 'fits' | 'caution' | 'no-fit';
-    rules: Array<{ rule: string; outcome: 'pass' | 'caution' | 'fail'; message: string; numbers?: Record<string, number> }>;
+    verdict: Verdict;
+    rules: Array<{ rule: string; outcome: RuleOutcome; message: string; numbers?: Record<string, number> }>;
   }>;
 }
 

@@ -1,10 +1,11 @@
 // Inputs and outputs of the fit check. Plain objects so the server can pass entities and the client can
 // pass form state; all lengths in mm.
+import type { RuleOutcome, Verdict } from '../contract/verdicts';
 
 import type { DrumHead } from '../packaging-code';
 import type { RuleName } from './registry';
 
-export type RuleOutcome = 'pass' | 'caution' | 'fail';
+export type { RuleOutcome, Verdict } from '../contract/verdicts';
 
 export interface RuleResult {
   rule: RuleName;
@@ -109,8 +110,6 @@ export interface CandidateInput {
   /** Partial settings are merged over DEFAULT_SETTINGS. */
   settings?: Partial<FitSettings>;
 }
-
-export type Verdict = 'fits' | 'caution' | 'no-fit';
 
 export type HandlingTopic = 'ppe' | 'sds' | 'spills' | 'pressure' | 'codes';
 

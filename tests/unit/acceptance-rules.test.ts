@@ -13,7 +13,7 @@ import {
   type LotAcceptanceInput,
   type SlurryAcceptance,
 } from '../../shared/acceptance';
-import { DOCK_ROLES, ENGINEER_ROLES } from '../../shared/roles';
+import { DOCK_ROLES, ENGINEER_ROLES } from '../../shared/contract/roles';
 
 // Fixed dates: "today" is an input, never the clock.
 const TODAY = '2026-11-20';

@@ -1,4 +1,5 @@
 // The JSON shapes the registry API answers with, shared by the server's serialisers and the client.
+import type { RuleOutcome, Verdict } from './verdicts';
 
 export type Region = 'NA' | 'EU' | 'JP' | 'TW' | 'KR' | 'CN' | 'SG' | 'other';
 export const REGION_LABELS: Record<Region, string> = {
@@ -209,7 +210,7 @@ export interface SettingsRecord {
 
 export interface FitRuleRecord {
   rule: string;
-  outcome: 'pass' | 'caution' | 'fail';
+  outcome: RuleOutcome;
   message: string;
   numbers?: Record<string, number>;
 }
@@ -225,13 +226,13 @@ export interface FitCandidateRecord {
   pairingId: string | null;
   pairingStatus: PairingStatus | null;
   installedAtStation: boolean;
-  verdict: 'fits' | 'caution' | 'no-fit';
+  verdict: Verdict;
   rules: FitRuleRecord[];
   notChecked: Array<{ rule: string; reason: string }>;
 }
 
 export interface FitCheckResult {
-  verdict: 'fits' | 'caution' | 'no-fit';
+  verdict: Verdict;
   summary: string;
   drum: {
     id: string | null;
@@ -263,7 +264,7 @@ export interface OrderLine {
 export interface StationNeed {
   stationId: string;
   stationName: string;
-  verdict: 'fits' | 'caution' | 'no-fit';
+  verdict: Verdict;
   summary: string;
   order: OrderLine[];
 }

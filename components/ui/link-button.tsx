@@ -2,8 +2,8 @@ import { Link } from 'expo-router';
 import { StyleSheet, Text } from 'react-native';
 import { colors, fonts, minTouch, radius, space } from '../theme';
 
-/** A link that looks like a button: it goes somewhere (a form, another page) rather than doing something here. */
-export function LinkButton({ href, label, variant = 'primary', testID }: { href: string; label: string; variant?: 'primary' | 'secondary'; testID?: string }) {
+/** A link that looks like a button: it goes somewhere (a form, another page) rather than doing something here. The one LinkButton. */
+export function LinkButton({ href, label, variant = 'secondary', testID }: { href: string; label: string; variant?: 'primary' | 'secondary'; testID?: string }) {
   return (
     <Link href={href as never} testID={testID} style={[styles.base, variant === 'primary' ? styles.primary : styles.secondary]}>
       <Text style={[styles.text, { color: variant === 'primary' ? colors.onPrimary : colors.primary }]}>{label}</Text>
