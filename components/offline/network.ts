@@ -29,7 +29,10 @@ function backOnline(): void {
 /** A request found no server: count as offline (paused queries and queued checks wait) until it answers. */
 export function reportUnreachable(base: string): void {
   onlineManager.setOnline(false);
-  if (!probing) probing = setInterval(() => void probe(base), PROBE_EVERY_MS);
+  if (probing) return;
+  probing = setInterval(() => void probe(base), PROBE_EVERY_MS);
+  // In Node (the unit tests) the probe must not keep the process alive; browsers have no unref.
+  (probing as { unref?: () => void }).unref?.();
 }
 
 export const isOnline = (): boolean => onlineManager.isOnline();
