@@ -1,7 +1,7 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { addDays, localDate } from '../../shared/dates';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, seen, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, pickRecord, seen, signInAs, type Viewport, VIEWPORTS } from '../support/browser';
 
 // Lot acceptance at the dock, at a phone and a wide screen: an expired lot held, a frozen lot quarantined,
 // a lot without its certificate held, then released by attaching it. Dates are relative to the site's
@@ -18,19 +18,6 @@ afterEach(async () => {
 });
 
 const PDF = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n', 'latin1');
-
-async function pick(page: Page, testID: string, search: string) {
-  const change = page.getByTestId(`${testID}-change`);
-  if (await change.count()) await change.click();
-  await page.getByTestId(`${testID}-search`).fill(search);
-  const option = page
-    .getByTestId(new RegExp(`^${testID}-option-`))
-    .filter({ hasText: search })
-    .first();
-  await option.waitFor();
-  await option.click();
-  await page.getByTestId(`${testID}-selected`).waitFor();
-}
 
 async function siteToday(): Promise<string> {
   const zone = ((await harness.ds.query(`SELECT time_zone FROM site_settings LIMIT 1`)) as Array<{ time_zone: string }>)[0]?.time_zone ?? 'UTC';
@@ -70,9 +57,9 @@ async function recordLot(page: Page, lot: { number: string; slurry: string; drum
   await page.goto(`${harness.baseUrl}/receive`);
   await page.getByTestId('dock-lot').fill(lot.number);
   await page.getByTestId('dock-count').fill('2');
-  await pick(page, 'dock-slurry', lot.slurry);
+  await pickRecord(page, 'dock-slurry', lot.slurry);
   await page.getByTestId('dock-drum-selected').waitFor();
-  await pick(page, 'dock-station', lot.station);
+  await pickRecord(page, 'dock-station', lot.station);
   if (lot.production) await page.getByTestId('dock-production').fill(lot.production);
   if (lot.expiry) await page.getByTestId('dock-expiry').fill(lot.expiry);
   await page.getByTestId(`dock-indicator-${lot.indicator}`).click();

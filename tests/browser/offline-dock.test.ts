@@ -1,7 +1,7 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { addDays, localDate } from '../../shared/dates';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, seen, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, pickRecord, seen, signInAs, type Viewport, VIEWPORTS } from '../support/browser';
 
 // The dock with no network, at a phone and a wide screen: after one visit the app opens offline, a lot is
 // judged on the phone (marked provisional) and waits, the app is closed and opened again with the check
@@ -45,19 +45,6 @@ async function waitKept(page: Page, text: string): Promise<void> {
   throw new Error(`the device never kept ${text}`);
 }
 
-async function pick(page: Page, testID: string, search: string) {
-  const change = page.getByTestId(`${testID}-change`);
-  if (await change.count()) await change.click();
-  await page.getByTestId(`${testID}-search`).fill(search);
-  const option = page
-    .getByTestId(new RegExp(`^${testID}-option-`))
-    .filter({ hasText: search })
-    .first();
-  await option.waitFor();
-  await option.click();
-  await page.getByTestId(`${testID}-selected`).waitFor();
-}
-
 const recorded = async (lot: string) => Number(((await harness.ds.query(`SELECT count(*) AS n FROM receiving_checks WHERE lot_number = $1`, [lot])) as Array<{ n: string }>)[0].n);
 
 describe.each(VIEWPORTS)('the dock offline at $name width ($width px)', (viewport: Viewport) => {
@@ -90,9 +77,9 @@ describe.each(VIEWPORTS)('the dock offline at $name width ($width px)', (viewpor
     expect(res?.fromServiceWorker()).toBe(true);
     await offline.getByTestId('dock-lot').fill(lot);
     await offline.getByTestId('dock-count').fill('2');
-    await pick(offline, 'dock-slurry', demo.shelfLifeSlurry);
+    await pickRecord(offline, 'dock-slurry', demo.shelfLifeSlurry);
     await offline.getByTestId('dock-drum-selected').waitFor();
-    await pick(offline, 'dock-station', demo.fittingStation);
+    await pickRecord(offline, 'dock-station', demo.fittingStation);
     await offline.getByTestId('dock-expiry').fill(addDays(today, 300));
     await offline.getByTestId('dock-indicator-intact').click();
     await offline.getByTestId('dock-submit').click();

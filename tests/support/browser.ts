@@ -134,3 +134,17 @@ export async function seen(page: Page, testID: string, pattern: RegExp | string,
     throw new Error(`${testID} never showed ${re}; it shows "${await textOf(page, testID).catch(() => '(nothing)')}"`);
   }
 }
+
+/** Picks a record in a RecordPicker: opens it again if one is picked, searches, and takes the first match. */
+export async function pickRecord(page: Page, testID: string, search: string) {
+  const change = page.getByTestId(`${testID}-change`);
+  if (await change.count()) await change.click();
+  await page.getByTestId(`${testID}-search`).fill(search);
+  const option = page
+    .getByTestId(new RegExp(`^${testID}-option-`))
+    .filter({ hasText: search })
+    .first();
+  await option.waitFor();
+  await option.click();
+  await page.getByTestId(`${testID}-selected`).waitFor();
+}
