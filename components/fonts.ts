@@ -3,7 +3,7 @@ import { fonts } from './theme';
 
 // The three weights the theme uses, as Latin-subset woff2 (about 16 KB each instead of 380 KB TTFs).
 // `swap`: text shows at once in the system font instead of staying invisible while a font loads; the
-// export step also preloads these files from index.html, so the swap rarely shows on a first visit.
+// export step does not preload them (on a slow link they would hold back the first screen's scripts).
 const file = (uri: number): FontSource => ({ uri, display: FontDisplay.SWAP });
 
 /* eslint-disable @typescript-eslint/no-require-imports -- Metro gives an asset's module id only through require() */

@@ -195,7 +195,7 @@ const webDir = path.resolve(root, env.BUNGWISE_WEB_EXPORT_DIR ?? path.join('dist
 // the service worker and the brotli/gzip twins. The hash covers the inputs of both halves.
 function exportWeb() {
   const hashFile = `${webDir}.source-hash`;
-  const sourceHash = hashFiles(['app', 'components', 'shared', 'assets', 'scripts/web', 'app.json', 'babel.config.js', 'package-lock.json', 'metro.config.js']);
+  const sourceHash = hashFiles(['app', 'components', 'shared', 'assets', 'scripts/web', 'index.ts', 'package.json', 'app.json', 'babel.config.js', 'package-lock.json', 'metro.config.js']);
   const current = fs.existsSync(hashFile) ? fs.readFileSync(hashFile, 'utf8') : '';
   if (current === sourceHash && fs.existsSync(path.join(webDir, 'index.html'))) return;
   log('Exporting the web app (first time or sources changed)...');

@@ -5,6 +5,8 @@
 export const SERVICE_WORKER_FILE = 'sw.js';
 /** The web app manifest the export step writes beside index.html. */
 export const MANIFEST_FILE = 'manifest.webmanifest';
+/** Route file to chunk URL (`scripts/web/route-chunks.ts`), read by the server for its preload headers. */
+export const ROUTE_CHUNKS_FILE = 'route-chunks.json';
 /** Where the export step puts the app's icons, each named with a hash of its bytes. */
 export const ICONS_DIR = 'icons';
 

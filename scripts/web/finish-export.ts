@@ -1,5 +1,5 @@
 // The second half of the web export (run by scripts/launch.mjs after `expo export`): the app's icons and
-// web app manifest, font preloads in index.html, the service worker that keeps the app shell for offline
+// web app manifest, its links in index.html, the route-chunk map the server's preload headers come from, the service worker that keeps the app shell for offline
 // starts (Workbox generateSW), and brotli/gzip twins of every compressible file.
 //   node dist/server/scripts/web/finish-export.js <export folder>
 import { createHash } from 'node:crypto';
@@ -7,8 +7,9 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { generateSW } from 'workbox-build';
 import { colors } from '../../components/theme';
-import { ICONS_DIR, MANIFEST_FILE, SERVICE_WORKER_FILE, isHashedFile } from '../../shared/web-delivery';
+import { ICONS_DIR, MANIFEST_FILE, ROUTE_CHUNKS_FILE, SERVICE_WORKER_FILE, isHashedFile } from '../../shared/web-delivery';
 import { precompress } from './precompress';
+import { readRouteChunks } from './route-chunks';
 
 const root = path.resolve(__dirname, '..', '..', '..', '..');
 
@@ -61,20 +62,6 @@ function writeManifest(webDir: string, web: WebConfig, icons: Map<string, string
   fs.writeFileSync(path.join(webDir, MANIFEST_FILE), `${JSON.stringify(manifest, null, 2)}\n`);
 }
 
-/** The exported woff2 files, by URL: preloaded so they download beside the JavaScript, not after it runs. */
-function fontUrls(webDir: string): string[] {
-  const out: string[] = [];
-  const walk = (dir: string) => {
-    for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-      const p = path.join(dir, entry.name);
-      if (entry.isDirectory()) walk(p);
-      else if (entry.name.endsWith('.woff2')) out.push(`/${path.relative(webDir, p).split(path.sep).join('/')}`);
-    }
-  };
-  walk(path.join(webDir, 'assets'));
-  return out.sort();
-}
-
 function patchIndexHtml(webDir: string, icons: Map<string, string>): void {
   const file = path.join(webDir, 'index.html');
   const html = fs.readFileSync(file, 'utf8');
@@ -82,7 +69,8 @@ function patchIndexHtml(webDir: string, icons: Map<string, string>): void {
     `<link rel="manifest" href="/${MANIFEST_FILE}" />`,
     `<link rel="apple-touch-icon" href="${icons.get('apple-touch-icon-180.png')}" />`,
     `<link rel="icon" type="image/png" sizes="32x32" href="${icons.get('favicon-32.png')}" />`,
-    ...fontUrls(webDir).map((url) => `<link rel="preload" href="${url}" as="font" type="font/woff2" crossorigin />`),
+    // No font preloads: on a slow link the three woff2 files took bandwidth from the scripts the first screen
+    // waits for. The fonts load once the app runs (components/fonts.ts, `swap`: the system font until then).
     // The page colour before the first frame, so a cold start does not flash white.
     `<style>html,body{background:${colors.paper}}</style>`,
   ];
@@ -123,6 +111,9 @@ async function main(): Promise<void> {
   const icons = copyIcons(webDir);
   writeManifest(webDir, web, icons);
   patchIndexHtml(webDir, icons);
+  const chunks = readRouteChunks(webDir);
+  if (Object.keys(chunks).length === 0) console.warn('[export] no route chunks found in the entry bundle: the server sends no preload headers (see scripts/web/route-chunks.ts)');
+  fs.writeFileSync(path.join(webDir, ROUTE_CHUNKS_FILE), `${JSON.stringify(chunks, null, 2)}\n`);
   const sw = await writeServiceWorker(webDir);
   const packed = precompress(webDir);
   console.log(

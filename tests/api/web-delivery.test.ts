@@ -13,7 +13,7 @@ import { colors } from '../../components/theme';
 import { ChangeFeed } from '../../server/db/change-feed';
 import { precompress } from '../../scripts/web/precompress';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { MANIFEST_FILE, SERVICE_WORKER_FILE } from '../../shared/web-delivery';
+import { MANIFEST_FILE, ROUTE_CHUNKS_FILE, SERVICE_WORKER_FILE } from '../../shared/web-delivery';
 import { makeTestApp, tokenFor } from '../support/app';
 import { openTestDataSource, resetDatabase } from '../support/db';
 
@@ -60,6 +60,19 @@ function exchange(base: string, urlPath: string, init: { method?: string; header
   });
 }
 
+/** The woff2 files in the export, as URLs. */
+function woff2Files(): string[] {
+  const out: string[] = [];
+  const walk = (dir: string) => {
+    for (const e of fs.readdirSync(dir, { withFileTypes: true })) {
+      if (e.isDirectory()) walk(path.join(dir, e.name));
+      else if (e.name.endsWith('.woff2')) out.push(`/${path.relative(WEB_DIR, path.join(dir, e.name)).split(path.sep).join('/')}`);
+    }
+  };
+  walk(path.join(WEB_DIR, 'assets'));
+  return out.sort();
+}
+
 let base: string;
 let bundlePath: string;
 let fontPath: string;
@@ -72,8 +85,9 @@ beforeAll(async () => {
   await feed.start();
   base = await listen(makeTestApp(ds, { webDir: WEB_DIR, changes: feed }));
   const html = fs.readFileSync(path.join(WEB_DIR, 'index.html'), 'utf8');
-  bundlePath = html.match(/<script src="([^"]+\.js)"/)![1];
-  fontPath = html.match(/<link rel="preload" href="([^"]+\.woff2)"/)![1];
+  // The largest script index.html starts (the entry; async routes put the runtime and common chunk beside it).
+  bundlePath = [...html.matchAll(/<script src="([^"]+\.js)"/g)].map((m) => m[1]).sort((a, b) => fs.statSync(path.join(WEB_DIR, b)).size - fs.statSync(path.join(WEB_DIR, a)).size)[0];
+  fontPath = woff2Files()[0];
 });
 
 afterAll(async () => {
@@ -129,8 +143,32 @@ describe('the web build', () => {
     expect(res.headers['cache-control']).toBe(IMMUTABLE);
     expect(res.headers['content-encoding']).toBeUndefined();
     expect(res.wire.length).toBeLessThan(40_000);
+    expect(woff2Files()).toHaveLength(3); // the theme's 400, 600 and 700
+    // Not preloaded: on a slow link they would take bandwidth from the first screen's scripts.
     const html = fs.readFileSync(path.join(WEB_DIR, 'index.html'), 'utf8');
-    expect(html.match(/rel="preload" href="[^"]+\.woff2"/g)).toHaveLength(3); // the theme's 400, 600 and 700
+    expect(html).not.toMatch(/rel="preload"[^>]+\.woff2/);
+  });
+
+  it("a page address names its layouts' and screen's chunks in a Link preload header; each is a real, year-kept script", async () => {
+    const chunks = JSON.parse(fs.readFileSync(path.join(WEB_DIR, ROUTE_CHUNKS_FILE), 'utf8')) as Record<string, string>;
+    // Read from the entry bundle at export (scripts/web/route-chunks.ts): every route file of app/ is found.
+    expect(Object.keys(chunks)).toEqual(expect.arrayContaining(['./_layout.tsx', './(app)/_layout.tsx', './(app)/receive/index.tsx', './(app)/receive/[id].tsx']));
+    const res = await exchange(base, '/receive', { headers: BR });
+    expect(res.status).toBe(200);
+    const links = String(res.headers.link ?? '')
+      .split(', ')
+      .map((l) => l.match(/^<([^>]+)>; rel=preload; as=script$/)?.[1]);
+    expect(links).toEqual(expect.arrayContaining([chunks['./_layout.tsx'], chunks['./(app)/_layout.tsx'], chunks['./(app)/receive/index.tsx']]));
+    expect(links).not.toContain(chunks['./(app)/receive/history.tsx']);
+    for (const url of links) {
+      const chunk = await exchange(base, url!, { headers: BR });
+      expect(chunk.status).toBe(200);
+      expect(chunk.headers['cache-control']).toBe(IMMUTABLE);
+    }
+    // A lot's page preloads the lot screen; files and the API get no such header.
+    expect(String((await exchange(base, '/receive/0b6f3c1e-5c1a-4d7e-9f00-000000000000')).headers.link)).toContain(chunks['./(app)/receive/[id].tsx']);
+    expect((await exchange(base, bundlePath)).headers.link).toBeUndefined();
+    expect((await exchange(base, '/api/health')).headers.link).toBeUndefined();
   });
 
   it('the manifest makes the app installable: names, start URL, scope, standalone, the theme colours, icons that load', async () => {
