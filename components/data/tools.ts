@@ -1,3 +1,4 @@
+import type { ThreadSide } from '@/shared/threads/thread-table';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import type { PortFlowResult } from '@/shared/flow';
 import type { PackagingFinding, ParsedPackagingCode } from '@/shared/packaging-code';
@@ -19,6 +20,8 @@ export interface ThreadMatchInput {
   pitchMm?: number;
   flankAngleDeg?: number;
   taper?: 'tapered' | 'parallel';
+  /** A drum opening's thread is internal: ISO 7-1 R (external only) is then never offered. */
+  side?: ThreadSide;
 }
 
 export interface FlowInput {

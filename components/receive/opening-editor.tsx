@@ -78,6 +78,8 @@ export function OpeningEditor({ index, value, onChange, onRemove, error, testID 
         ...(t !== null ? { threadsPerInch: t } : {}),
         ...(flank !== 'none' ? { flankAngleDeg: Number(flank) } : {}),
         ...(taper !== 'none' ? { taper } : {}),
+        // A bung is cut inside the drum's opening.
+        side: 'internal',
       },
       {
         onSuccess: (res) => {

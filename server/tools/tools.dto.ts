@@ -1,6 +1,7 @@
 import { Type } from 'class-transformer';
 import { IsDefined, IsIn, IsNumber, Max, Min, ValidateIf, ValidateNested } from 'class-validator';
 import { Optional } from '../common/fields';
+import { THREAD_SIDES, type ThreadSide } from '../../shared/threads/thread-table';
 import { FLOW_UNITS, LENGTH_UNITS } from '../../shared/units';
 
 const num = { allowNaN: false, allowInfinity: false };
@@ -21,6 +22,7 @@ export class ThreadMatchDto {
   @Optional() @IsNumber(num, { message: 'must be a number' }) @Min(0.2, { message: 'must be at least 0.2 mm' }) @Max(20, { message: 'must be at most 20 mm' }) pitchMm?: number;
   @Optional() @IsNumber(num, { message: 'must be a number' }) @Min(20, { message: 'must be at least 20 degrees' }) @Max(90, { message: 'must be at most 90 degrees' }) flankAngleDeg?: number;
   @Optional() @IsIn(['tapered', 'parallel'], { message: 'must be tapered or parallel' }) taper?: 'tapered' | 'parallel';
+  @Optional() @IsIn(THREAD_SIDES, { message: `must be ${THREAD_SIDES.join(' or ')}` }) side?: ThreadSide;
 }
 
 export class FlowDto {

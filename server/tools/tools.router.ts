@@ -32,6 +32,7 @@ export function toolsRouter(ds: DataSource): Router {
         ...(dto.threadsPerInch !== undefined ? { threadsPerInch: dto.threadsPerInch } : {}),
         ...(dto.flankAngleDeg !== undefined ? { flankAngleDeg: dto.flankAngleDeg } : {}),
         ...(dto.taper !== undefined ? { taper: dto.taper } : {}),
+        ...(dto.side !== undefined ? { side: dto.side } : {}),
       },
       table,
       { diameterToleranceMm: settings.threadMatchToleranceMm },

@@ -3,7 +3,7 @@
 // different standards are the trap here, so the answer says when the measurements cannot separate them.
 
 import { MM_PER_IN } from '../units';
-import { THREAD_TABLE, type ThreadFamily, type ThreadForm, type ThreadSpecRow } from './thread-table';
+import { FAMILY_SIDES, THREAD_TABLE, type ThreadFamily, type ThreadForm, type ThreadSide, type ThreadSpecRow } from './thread-table';
 
 export interface ThreadMeasurement {
   /** Caliper reading across the crests; on a tapered thread, at the large end. */
@@ -13,6 +13,8 @@ export interface ThreadMeasurement {
   flankAngleDeg?: number;
   /** Result of measuring the diameter at two points along the thread, when done. */
   taper?: ThreadForm;
+  /** The side the measured thread is on, when known (a drum opening's is internal): rows never made on it are left out. */
+  side?: ThreadSide;
 }
 
 export interface IdentifyOptions {
@@ -120,6 +122,7 @@ export function identifyThread(input: ThreadMeasurement, table: readonly ThreadS
     }
 
     if (input.taper !== undefined && input.taper !== row.form) continue;
+    if (input.side !== undefined && !FAMILY_SIDES[row.family].includes(input.side)) continue;
 
     matches.push({
       code: row.code,

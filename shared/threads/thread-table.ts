@@ -4,6 +4,25 @@
 import { MM_PER_IN } from '../units';
 
 export type ThreadFamily = 'NPS' | 'NPT' | 'G' | 'R' | 'Rc' | 'Rp' | 'buttress' | 'other';
+
+/** Which side of a joint a thread is cut on: a drum's bung is internal, a dip tube's plug external. */
+export type ThreadSide = 'internal' | 'external';
+export const THREAD_SIDES: readonly ThreadSide[] = ['internal', 'external'];
+
+/**
+ * The sides each family is made on. ISO 7-1 names the side in the family: R is external only, Rc and Rp
+ * internal only [mem, ISO 7-1 clause 1]; G, NPT, NPS and buttress bungs are made both ways (common practice).
+ */
+export const FAMILY_SIDES: Record<ThreadFamily, readonly ThreadSide[]> = {
+  NPS: THREAD_SIDES,
+  NPT: THREAD_SIDES,
+  G: THREAD_SIDES,
+  R: ['external'],
+  Rc: ['internal'],
+  Rp: ['internal'],
+  buttress: THREAD_SIDES,
+  other: THREAD_SIDES,
+};
 export type ThreadForm = 'tapered' | 'parallel';
 
 export interface ThreadSpecRow {

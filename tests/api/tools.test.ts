@@ -55,6 +55,16 @@ describe('POST /api/tools/thread-match', () => {
     const negative = await match({ majorDiameter: { value: -2, unit: 'in' } });
     expect(negative.body.error.details[0].field).toBe('majorDiameter.value');
   });
+
+  it('an internal thread (a bung) is never R, which ISO 7-1 cuts outside only; an unknown side is a 400 naming the field', async () => {
+    const reading = { majorDiameter: { value: 59.6, unit: 'mm' }, threadsPerInch: 11, flankAngleDeg: 55 };
+    const codes = async (body: object) => ((await match(body)).body.matches as Array<{ code: string }>).map((m) => m.code).sort();
+    expect(await codes(reading)).toEqual(['G-2', 'R-2', 'Rc-2', 'Rp-2']);
+    expect(await codes({ ...reading, side: 'internal' })).toEqual(['G-2', 'Rc-2', 'Rp-2']);
+    const bad = await match({ ...reading, side: 'inside' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.details[0].field).toBe('side');
+  });
 });
 
 describe('POST /api/tools/flow', () => {

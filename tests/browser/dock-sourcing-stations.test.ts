@@ -127,9 +127,10 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await page.getByTestId('dock-opening-0-tpi').fill('11');
     await page.getByTestId('dock-opening-0-flank-55').click();
     await page.getByTestId('dock-opening-0-identify').click();
-    // Pitch and flank rule out NPS; G 2 and the ISO 7-1 threads of the same size (R, Rc, Rp) stay, with the
+    // Pitch and flank rule out NPS; G 2 and the internal ISO 7-1 threads of the same size (Rc, Rp; R is cut
+    // outside only, so a bung is never one) stay, with the
     // taper measurement that tells them apart, and the clerk picks the one the drum's label names.
-    await seen(page, 'dock-opening-0-answer', /threads fit.*G 2, R 2, Rc 2, Rp 2.*taper/);
+    await seen(page, 'dock-opening-0-answer', /threads fit.*G 2, Rc 2, Rp 2.*taper/);
     await page.getByTestId('dock-opening-0-match-G-2').click();
     await expect(page.getByTestId('dock-opening-0-match-G-2').getAttribute('aria-checked')).resolves.toBe('true');
     await page.getByTestId('dock-depth').fill('818');

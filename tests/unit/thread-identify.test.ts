@@ -269,6 +269,27 @@ describe('ISO 7-1 taper threads R, Rc and Rp', () => {
     expect(untested.advice).toMatch(/taper .*R 1 or Rc 1.* changes by about 1\.6 mm/);
   });
 
+  it('a drum opening (an internal thread) is never taken for R, which ISO 7-1 cuts outside only; a plug never for Rc or Rp', () => {
+    // ISO 7-1 clause 1 [mem]: R external taper, Rc internal taper, Rp internal parallel
+    const reading = { majorDiameterMm: 59.6, threadsPerInch: 11, flankAngleDeg: 55 };
+    expect(
+      identifyThread(reading)
+        .matches.map((m) => m.code)
+        .sort(),
+    ).toEqual(['G-2', 'R-2', 'Rc-2', 'Rp-2']);
+    expect(
+      identifyThread({ ...reading, side: 'internal' })
+        .matches.map((m) => m.code)
+        .sort(),
+    ).toEqual(['G-2', 'Rc-2', 'Rp-2']);
+    expect(
+      identifyThread({ ...reading, side: 'external' })
+        .matches.map((m) => m.code)
+        .sort(),
+    ).toEqual(['G-2', 'R-2']);
+    expect(identifyThread({ ...reading, side: 'internal', taper: 'tapered' }).matches.map((m) => m.code)).toEqual(['Rc-2']);
+  });
+
   it('never matches R and G on the same code', () => {
     // ISO 7-1 vs ISO 228-1: a tapered R does not seal in a parallel G [mem]
     expect(threadSpecEquals('R-2', 'G-2')).toBe(false);
