@@ -1,3 +1,3 @@
-import { ConnectorListScreen } from '@/components/registry/connector-list-screen';
+import { lazyList } from '@/components/registry/lazy-lists';
 
-export default ConnectorListScreen;
+export default lazyList('ConnectorListScreen');

@@ -1,3 +1,3 @@
-import { DipTubeListScreen } from '@/components/registry/dip-tube-list-screen';
+import { lazyList } from '@/components/registry/lazy-lists';
 
-export default DipTubeListScreen;
+export default lazyList('DipTubeListScreen');

@@ -1,3 +1,3 @@
-import { DrumTypeListScreen } from '@/components/registry/drum-type-list-screen';
+import { lazyList } from '@/components/registry/lazy-lists';
 
-export default DrumTypeListScreen;
+export default lazyList('DrumTypeListScreen');

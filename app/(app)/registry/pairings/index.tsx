@@ -1,3 +1,3 @@
-import { PairingListScreen } from '@/components/registry/pairing-list-screen';
+import { lazyList } from '@/components/registry/lazy-lists';
 
-export default PairingListScreen;
+export default lazyList('PairingListScreen');

@@ -1,3 +1,3 @@
-import { SlurryListScreen } from '@/components/registry/slurry-list-screen';
+import { lazyList } from '@/components/registry/lazy-lists';
 
-export default SlurryListScreen;
+export default lazyList('SlurryListScreen');

@@ -1,3 +1,3 @@
-import { SupplierListScreen } from '@/components/registry/supplier-list-screen';
+import { lazyList } from '@/components/registry/lazy-lists';
 
-export default SupplierListScreen;
+export default lazyList('SupplierListScreen');
