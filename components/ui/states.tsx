@@ -1,9 +1,20 @@
 import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 import { ApiError } from '../api/client';
+import { useOnline } from '../offline/use-online';
 import { colors, radius, space, type } from '../theme';
 import { Button } from './button';
 
 export function LoadingState({ label = 'Loading…' }: { label?: string }) {
+  // With the server out of reach, queries wait (TanStack Query pauses them): say so instead of spinning.
+  const online = useOnline();
+  if (!online) {
+    return (
+      <View style={styles.box} accessibilityLiveRegion="polite" testID="state-waiting-network">
+        <Text style={type.label}>Waiting for the network</Text>
+        <Text style={type.body}>This fills in as soon as the server can be reached again.</Text>
+      </View>
+    );
+  }
   return (
     <View style={styles.box} accessibilityLiveRegion="polite" testID="state-loading">
       <ActivityIndicator color={colors.primary} />

@@ -65,6 +65,8 @@ describe.each(VIEWPORTS)('route chunks on a plain-http address at $name width ($
     harness.allowConsoleError(/ERR_INTERNET_DISCONNECTED|Failed to load resource/);
     await page.getByTestId('nav-registry').click();
     await seen(page, 'registry-drum-types', /Drum types/);
+    // Its list cannot load: it says it waits for the network instead of spinning.
+    await seen(page, 'state-waiting-network', /Waiting for the network/);
     await harness.shot(page, 'offline-http-registry', viewport);
   });
 });
