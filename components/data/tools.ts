@@ -1,8 +1,8 @@
-import type { ThreadSide } from '@/shared/threads/thread-table';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import type { PortFlowResult } from '@/shared/flow';
 import type { PackagingFinding, ParsedPackagingCode } from '@/shared/packaging-code';
 import type { PackagingMark } from '@/shared/packaging-mark';
+import type { ThreadSide } from '@/shared/threads/thread-table';
 import type { LengthRecommendation } from '@/shared/recommend-length';
 import type { ThreadIdentification } from '@/shared/threads/identify';
 import type { FlowUnit, LengthUnit } from '@/shared/units';

@@ -1,6 +1,7 @@
 // The second half of the web export (run by scripts/launch.mjs after `expo export`): the app's icons and
-// web app manifest, its links in index.html, the route-chunk map the server's preload headers come from, the service worker that keeps the app shell for offline
-// starts (Workbox generateSW), and brotli/gzip twins of every compressible file.
+// web app manifest and their links in index.html, the route-chunk map the server's preload headers come
+// from, the service worker that keeps the app shell for offline starts (Workbox generateSW), and
+// brotli/gzip twins of every compressible file.
 //   node dist/server/scripts/web/finish-export.js <export folder>
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';

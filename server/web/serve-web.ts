@@ -60,7 +60,7 @@ export function serveWeb(app: Express, webDir: string): void {
 }
 
 /**
- * A page address (not a file, not the API) is answered with index.html and a `Link: rel=preload` header
+ * A page address (not a file by the same rule as the index.html fallback below, not the API) is answered with index.html and a `Link: rel=preload` header
  * naming the chunks of its layouts and screen (from the export's route-chunks.json), so they download
  * beside the entry bundle instead of one after another once it has run. Without the file, no header.
  */
@@ -73,7 +73,7 @@ function routePreloads(webDir: string): RequestHandler {
   }
   const keys = Object.keys(chunks);
   return (req, res, next) => {
-    if (keys.length > 0 && (req.method === 'GET' || req.method === 'HEAD') && !req.path.startsWith('/api/') && !path.extname(req.path)) {
+    if (keys.length > 0 && (req.method === 'GET' || req.method === 'HEAD') && !req.path.startsWith('/api/') && !FILE_REQUEST.test(req.path)) {
       // A few dozen route files against one address: microseconds, so worked out each time.
       const link = [...new Set(routeFilesFor(req.path, keys).map((k) => chunks[k]))].map((url) => `<${url}>; rel=preload; as=script`).join(', ');
       if (link) res.setHeader('Link', link);
