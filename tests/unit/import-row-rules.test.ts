@@ -120,7 +120,7 @@ describe('import row rules', () => {
   }
 
   test('rules across fields are reported after the field rules', () => {
-    expect(rowProblem('dip-tubes', { ...BASE['dip-tubes'], boreMm: 30 })).toEqual({ field: 'boreMm', message: 'bore must be smaller than the outside diameter', cross: true });
+    expect(rowProblem('dip-tubes', { ...BASE['dip-tubes'], boreMm: 30 })).toEqual({ field: 'boreMm', message: 'must be smaller than the outside diameter', cross: true });
     expect(rowProblem('connectors', { ...BASE.connectors, returnPath: 'none' })).toEqual({ field: 'returnBoreMm', message: 'must be empty when the head has no return path', cross: true });
     expect(rowProblem('drum-types', { ...BASE['drum-types'], insideDepthMm: 900 })).toEqual({ field: 'insideDepthMm', message: 'must be less than the outside height', cross: true });
   });
