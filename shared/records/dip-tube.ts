@@ -1,7 +1,7 @@
 import type { FieldProblem } from './field';
 
 // One home for a dip tube's limits, labels and cross-field rules, read by the API's DTO (server/registry/registry.dto.ts,
-// dip-tubes/dip-tube.def.ts), the import (server/imports/read-rows.ts) and the form (components/forms/dip-tube-form.tsx).
+// dip-tubes/dip-tube.def.ts), the import (server/imports/row-rules.ts) and the form (components/forms/dip-tube-form.tsx).
 // Lengths are mm; the upper bounds reject absurd values [practice].
 export const DIP_TUBE_LIMITS = {
   partNumberChars: 60,

@@ -1,7 +1,7 @@
 import type { FieldProblem } from './field';
 
 // One home for a drum type's limits, labels and cross-field rules: the API's DTO (server/registry/registry.dto.ts
-// and drum-types/drum-type.def.ts), the import (server/imports/read-rows.ts) and the form (components/forms/drum-type-form.tsx)
+// and drum-types/drum-type.def.ts), the import (server/imports/row-rules.ts) and the form (components/forms/drum-type-form.tsx)
 // all read them. Lengths are mm; the upper bounds reject absurd values (a drum is not 3 m deep) [practice].
 export const DRUM_TYPE_LIMITS = {
   partNumberChars: 60,
