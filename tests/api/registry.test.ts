@@ -186,64 +186,32 @@ describe('registry writes', () => {
   });
 
   it("refuses what breaks a record's rule across fields (shared/records), naming the field in the record's words, and writes nothing", async () => {
-    const first = async (resource: string, q = '') => (await request(app).get(`/api/${resource}?pageSize=1${q}`).set(bearer(clerk))).body.items[0];
-    const refused = (res: request.Response, field: string, says: string) => {
-      expect({ status: res.status, details: res.body.error?.details }).toEqual({ status: 400, details: [{ field, messages: [says] }] });
-    };
-    const drumTypeId = (await first('drum-types')).id;
+    const list = async (resource: string) => (await request(app).get(`/api/${resource}?pageSize=100`).set(bearer(clerk))).body.items;
+    const drumTypeId = (await list('drum-types'))[0].id;
     const slurry = { name: 'Rule slurry', supplierId, region: 'NA', drumTypeId, foams: false, shearSensitive: false, solidsWtPct: 12 };
-    refused(
-      await request(app)
-        .post('/api/slurries')
-        .set(bearer(engineer))
-        .send({ ...slurry, shelfLifeDays: 30, minRemainingDays: 31 }),
-      'minRemainingDays',
-      'must be at most the shelf life',
-    );
-    refused(
-      await request(app)
-        .post('/api/slurries')
-        .set(bearer(engineer))
-        .send({ ...slurry, storageMinC: 5, storageMaxC: 5 }),
-      'storageMaxC',
-      'must be above the lowest storage temperature',
-    );
-    expect((await request(app).get('/api/slurries?q=Rule%20slurry').set(bearer(clerk))).body.total).toBe(0);
-    // An edit is judged with the stored values: a head with a return port cannot lose its return path alone.
-    const heads = (await request(app).get('/api/connectors?pageSize=100').set(bearer(clerk))).body.items as Array<{ id: string; version: number; returnPath: string }>;
+    const heads: Array<{ id: string; version: number; returnPath: string }> = await list('connectors');
     const open = heads.find((c) => c.returnPath !== 'none')!;
     const none = heads.find((c) => c.returnPath === 'none')!;
-    refused(
-      await request(app).patch(`/api/connectors/${open.id}`).set(bearer(engineer)).send({ version: open.version, returnPath: 'none' }),
-      'returnBoreMm',
-      'must be empty when the head has no return path',
-    );
-    refused(
-      await request(app).patch(`/api/connectors/${none.id}`).set(bearer(engineer)).send({ version: none.version, returnPath: 'open' }),
-      'returnBoreMm',
-      'is required when the head has a return path',
-    );
-    const pairing = await first('pairings');
-    refused(
-      await request(app).patch(`/api/pairings/${pairing.id}`).set(bearer(engineer)).send({ version: pairing.version, connectorId: open.id }),
-      'connectorId',
-      'cannot change; retire this pairing and create a new one',
-    );
-    const set = (await request(app).get('/api/tube-sets?pageSize=100').set(bearer(clerk))).body.items.find((t: { state: string }) => t.state !== 'cleaning');
-    refused(
-      await request(app).patch(`/api/tube-sets/${set.id}`).set(bearer(engineer)).send({ version: set.version, state: 'cleaning' }),
-      'state',
-      'changes through the rotation: rinse, standby and change-out',
-    );
+    const pairing = (await list('pairings'))[0];
+    const set = (await list('tube-sets')).find((t: { state: string }) => t.state !== 'cleaning');
     const settings = (await request(app).get('/api/settings').set(bearer(clerk))).body;
-    const narrow = { version: settings.version, tipClearanceMinMm: 20, tipClearanceMaxMm: 20 };
-    refused(await request(app).patch('/api/settings').set(bearer(engineer)).send(narrow), 'tipClearanceMaxMm', 'must be more than the minimum clearance');
-    refused(
-      await request(app).patch('/api/settings').set(bearer(engineer)).send({ version: settings.version, timeZone: 'Mars/Olympus' }),
-      'timeZone',
-      'must be a time zone name, like Europe/Berlin or America/Phoenix',
-    );
-    // Nothing changed: the versions are the ones read.
+    // [method, path, body, the field named, what it says]; an edit is judged with the stored values.
+    const cases: Array<['post' | 'patch', string, object, string, string]> = [
+      ['post', '/api/slurries', { ...slurry, shelfLifeDays: 30, minRemainingDays: 31 }, 'minRemainingDays', 'must be at most the shelf life'],
+      ['post', '/api/slurries', { ...slurry, storageMinC: 5, storageMaxC: 5 }, 'storageMaxC', 'must be above the lowest storage temperature'],
+      ['patch', `/api/connectors/${open.id}`, { version: open.version, returnPath: 'none' }, 'returnBoreMm', 'must be empty when the head has no return path'],
+      ['patch', `/api/connectors/${none.id}`, { version: none.version, returnPath: 'open' }, 'returnBoreMm', 'is required when the head has a return path'],
+      ['patch', `/api/pairings/${pairing.id}`, { version: pairing.version, connectorId: open.id }, 'connectorId', 'cannot change; retire this pairing and create a new one'],
+      ['patch', `/api/tube-sets/${set.id}`, { version: set.version, state: 'cleaning' }, 'state', 'changes through the rotation: rinse, standby and change-out'],
+      ['patch', '/api/settings', { version: settings.version, tipClearanceMinMm: 20, tipClearanceMaxMm: 20 }, 'tipClearanceMaxMm', 'must be more than the minimum clearance'],
+      ['patch', '/api/settings', { version: settings.version, timeZone: 'Mars/Olympus' }, 'timeZone', 'must be a time zone name, like Europe/Berlin or America/Phoenix'],
+    ];
+    for (const [method, path, body, field, says] of cases) {
+      const res = await request(app)[method](path).set(bearer(engineer)).send(body);
+      expect({ path, status: res.status, details: res.body.error?.details }).toEqual({ path, status: 400, details: [{ field, messages: [says] }] });
+    }
+    // Nothing was written: no slurry, and the versions are the ones read.
+    expect((await request(app).get('/api/slurries?q=Rule%20slurry').set(bearer(clerk))).body.total).toBe(0);
     expect((await request(app).get(`/api/connectors/${open.id}`).set(bearer(clerk))).body).toMatchObject({ version: open.version, returnPath: open.returnPath });
     expect((await request(app).get(`/api/tube-sets/${set.id}`).set(bearer(clerk))).body).toMatchObject({ version: set.version, state: set.state });
     expect((await request(app).get('/api/settings').set(bearer(clerk))).body.version).toBe(settings.version);

@@ -1,8 +1,7 @@
-import { rowProblem } from '../../server/imports/row-rules';
-import { CONNECTOR_LIMITS, CONNECTOR_SAYS, connectorProblem } from '../../shared/records/connector';
+import { CONNECTOR_SAYS, connectorProblem } from '../../shared/records/connector';
 import { dipTubeProblem, DIP_TUBE_SAYS } from '../../shared/records/dip-tube';
 import { drumTypeLabelOf, drumTypeProblem } from '../../shared/records/drum-type';
-import { FIELD_SAYS, sentence } from '../../shared/records/field';
+import { sentence } from '../../shared/records/field';
 import { pairingEditProblem, PAIRING_SAYS } from '../../shared/records/pairing';
 import { settingsProblem, SETTINGS_LIMITS, SETTINGS_SAYS } from '../../shared/records/settings';
 import { SLURRY_LIMITS, SLURRY_SAYS, slurryProblem } from '../../shared/records/slurry';
@@ -113,36 +112,5 @@ describe('site settings record', () => {
     expect(settingsProblem({ timeZone: 'Mars/Olympus', tipClearanceMinMm: 5, tipClearanceMaxMm: 20 })).toEqual({ field: 'timeZone', says: SETTINGS_SAYS.timeZone });
     expect(settingsProblem({ timeZone: '', tipClearanceMinMm: 5, tipClearanceMaxMm: 5 })?.field).toBe('timeZone');
     expect(settingsProblem({ tipClearanceMinMm: 5, tipClearanceMaxMm: 20 })).toBeNull();
-  });
-});
-
-describe('the import runs on the records rules', () => {
-  const SUPPLIER = '6f1c2a9e-3b4d-4c5e-8f70-123456789abc';
-  const head = {
-    partNumber: 'DH-1',
-    supplierId: SUPPLIER,
-    keyCode: null,
-    feedBoreMm: 19.05,
-    feedNominal: '3/4 in',
-    returnBoreMm: 12.7,
-    returnNominal: '1/2 in',
-    returnPath: 'open',
-    suitedTo: 'both',
-    wettedMaterials: 'PFA',
-  };
-  const tube = { partNumber: 'DT-1', supplierId: SUPPLIER, threadCode: 'NPS-2', lengthMm: 836, boreMm: 19, odMm: 25.4, material: 'PFA', keyCode: null, channels: 'feed' };
-  it("reports each record's cross-field rule with its words", () => {
-    expect(rowProblem('connectors', { ...head, returnBoreMm: null })).toEqual({ field: 'returnBoreMm', message: CONNECTOR_SAYS.returnBoreWith, cross: true });
-    expect(rowProblem('dip-tubes', { ...tube, boreMm: 25.4 })).toEqual({ field: 'boreMm', message: DIP_TUBE_SAYS.boreMm, cross: true });
-    expect(rowProblem('dip-tubes', { ...tube, boreMm: 25.3 })).toBeNull();
-  });
-  it('reads the limits of the records', () => {
-    expect(rowProblem('connectors', { ...head, feedBoreMm: CONNECTOR_LIMITS.feedBoreMaxMm })).toBeNull();
-    expect(rowProblem('connectors', { ...head, feedBoreMm: CONNECTOR_LIMITS.feedBoreMaxMm + 0.01 })).toEqual({
-      field: 'feedBoreMm',
-      message: FIELD_SAYS.atMost(CONNECTOR_LIMITS.feedBoreMaxMm, 'mm'),
-      cross: false,
-    });
-    expect(rowProblem('connectors', { ...head, wettedMaterials: 'x'.repeat(CONNECTOR_LIMITS.wettedMaterialsChars + 1) })?.message).toBe('must be at most 200 characters');
   });
 });
