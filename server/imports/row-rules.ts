@@ -1,6 +1,6 @@
-import { CONNECTOR_LIMITS as HEAD, connectorProblem } from '../../shared/records/connector';
-import { DIP_TUBE_LIMITS as TUBE, dipTubeProblem } from '../../shared/records/dip-tube';
-import { DRUM_TYPE_LIMITS as DRUM, drumTypeProblem } from '../../shared/records/drum-type';
+import { CONNECTOR_LIMITS as HEAD, connectorProblem, RETURN_PATHS } from '../../shared/records/connector';
+import { DIP_TUBE_LIMITS as TUBE, dipTubeProblem, TUBE_CHANNELS } from '../../shared/records/dip-tube';
+import { DRUM_HEADS, DRUM_MATERIALS, DRUM_TYPE_LIMITS as DRUM, drumTypeProblem, OPENING_POSITIONS } from '../../shared/records/drum-type';
 import { CODE_CHARS, FIELD_SAYS as SAYS, type FieldProblem as RecordProblem } from '../../shared/records/field';
 import { REGIONS, SUITED_TO, type ImportKind } from '../entities';
 
@@ -55,7 +55,7 @@ const DIP_TUBE: Rules = [
   ['odMm', mm(TUBE.odMaxMm)],
   ['material', name(TUBE.materialChars)],
   ['keyCode', nullable(code)],
-  ['channels', oneOf(['feed', 'feed-return'])],
+  ['channels', oneOf(TUBE_CHANNELS)],
 ];
 const CONNECTOR: Rules = [
   ['partNumber', name(HEAD.partNumberChars)],
@@ -65,7 +65,7 @@ const CONNECTOR: Rules = [
   ['feedNominal', name(HEAD.nominalChars)],
   ['returnBoreMm', nullable(mm(HEAD.returnBoreMaxMm))],
   ['returnNominal', nullable(name(HEAD.nominalChars))],
-  ['returnPath', oneOf(['none', 'restricted', 'open'])],
+  ['returnPath', oneOf(RETURN_PATHS)],
   ['suitedTo', oneOf(SUITED_TO)],
   ['wettedMaterials', name(HEAD.wettedMaterialsChars)],
 ];
@@ -75,8 +75,8 @@ const DRUM_TYPE: Rules = [
   ['name', name(DRUM.nameChars)],
   ['partNumber', name(DRUM.partNumberChars)],
   ['nominalCapacityL', capacity],
-  ['material', oneOf(['steel', 'plastic', 'fibre', 'aluminium', 'other'])],
-  ['head', oneOf(['tight', 'open'])],
+  ['material', oneOf(DRUM_MATERIALS)],
+  ['head', oneOf(DRUM_HEADS)],
   ['unPackagingCode', unCode],
   ['outsideHeightMm', mm(DRUM.outsideHeightMaxMm)],
   ['insideDepthMm', mm(DRUM.insideDepthMaxMm)],
@@ -88,7 +88,7 @@ const OPENING: Rules = [
   ['openingThread', code],
   ['openingBoreMm', mm(DRUM.openingBoreMaxMm)],
   ['openingKey', nullable(code)],
-  ['openingPosition', oneOf(['large', 'small', 'center', 'other'])],
+  ['openingPosition', oneOf(OPENING_POSITIONS)],
 ];
 
 type Across = (v: Record<string, unknown>) => RecordProblem | null;

@@ -19,14 +19,14 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { Optional } from '../common/fields';
-import { CONNECTOR_LIMITS as HEAD } from '../../shared/records/connector';
-import { DIP_TUBE_LIMITS as TUBE } from '../../shared/records/dip-tube';
-import { DRUM_TYPE_LIMITS as DRUM } from '../../shared/records/drum-type';
+import { CONNECTOR_LIMITS as HEAD, RETURN_PATHS } from '../../shared/records/connector';
+import { DIP_TUBE_LIMITS as TUBE, TUBE_CHANNELS } from '../../shared/records/dip-tube';
+import { DRUM_HEADS, DRUM_MATERIALS, DRUM_TYPE_LIMITS as DRUM, OPENING_POSITIONS } from '../../shared/records/drum-type';
 import { CODE_CHARS, FIELD_SAYS as SAYS } from '../../shared/records/field';
 import { PAIRING_LIMITS as PAIRING } from '../../shared/records/pairing';
 import { SETTINGS_LIMITS as SETTINGS } from '../../shared/records/settings';
 import { SLURRY_LIMITS as SLURRY, SLURRY_SAYS } from '../../shared/records/slurry';
-import { STATION_LIMITS as STATION } from '../../shared/records/station';
+import { AGITATIONS, STATION_LIMITS as STATION, TAPPINGS } from '../../shared/records/station';
 import { SUPPLIER_LIMITS as SUPPLIER } from '../../shared/records/supplier';
 import { TUBE_SET_LIMITS as TUBE_SET } from '../../shared/records/tube-set';
 import { REGIONS, SUITED_TO, THREAD_FAMILIES } from '../entities/registry';
@@ -98,7 +98,7 @@ export class OpeningDto {
   @Code threadCode: string;
   @Mm(DRUM.openingBoreMaxMm) boreMm: number;
   @IsOptional() @NullableCode keyCode?: string | null;
-  @OneOf(['large', 'small', 'center', 'other']) position: string;
+  @OneOf(OPENING_POSITIONS) position: string;
 }
 
 export class DrumTypeDto {
@@ -110,8 +110,8 @@ export class DrumTypeDto {
   @Min(0.1, { message: 'must be more than 0 L' })
   @Max(DRUM.nominalCapacityMaxL, { message: `must be at most ${DRUM.nominalCapacityMaxL} L` })
   nominalCapacityL: number;
-  @OneOf(['steel', 'plastic', 'fibre', 'aluminium', 'other']) material: string;
-  @OneOf(['tight', 'open']) head: string;
+  @OneOf(DRUM_MATERIALS) material: string;
+  @OneOf(DRUM_HEADS) head: string;
   @IsOptional() @ValidateIf((_o, v) => v !== null) @IsString() @MaxLength(DRUM.unPackagingCodeChars) unPackagingCode?: string | null;
   @Mm(DRUM.outsideHeightMaxMm) outsideHeightMm: number;
   @Mm(DRUM.insideDepthMaxMm) insideDepthMm: number;
@@ -132,7 +132,7 @@ export class DipTubeDto {
   @Mm(TUBE.odMaxMm) odMm: number;
   @Name(TUBE.materialChars) material: string;
   @IsOptional() @NullableCode keyCode?: string | null;
-  @OneOf(['feed', 'feed-return']) channels: string;
+  @OneOf(TUBE_CHANNELS) channels: string;
 }
 
 export class ConnectorDto {
@@ -143,7 +143,7 @@ export class ConnectorDto {
   @Name(HEAD.nominalChars) feedNominal: string;
   @IsOptional() @ValidateIf((_o, v) => v !== null) @Mm(HEAD.returnBoreMaxMm) returnBoreMm?: number | null;
   @IsOptional() @ValidateIf((_o, v) => v !== null) @Name(HEAD.nominalChars) returnNominal?: string | null;
-  @OneOf(['none', 'restricted', 'open']) returnPath: string;
+  @OneOf(RETURN_PATHS) returnPath: string;
   @OneOf(SUITED_TO) suitedTo: string;
   @Name(HEAD.wettedMaterialsChars) wettedMaterials: string;
 }
@@ -203,8 +203,8 @@ export class SlurryDto {
 export class StationDto {
   @Name(STATION.nameChars) name: string;
   @Name(STATION.bayChars) bay: string;
-  @OneOf(['two-opening', 'one-opening']) tapping: string;
-  @OneOf(['pump', 'mechanical']) agitation: string;
+  @OneOf(TAPPINGS) tapping: string;
+  @OneOf(AGITATIONS) agitation: string;
   @IsOptional() @ValidateIf((_o, v) => v !== null) @IsUUID('all', { message: 'must be an id' }) connectorId?: string | null;
   @IsNumber(num, { message: NUMBER })
   @Min(STATION.flowMinLpm, { message: SAYS.moreThanZero('L/min') })

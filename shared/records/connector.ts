@@ -11,6 +11,8 @@ export const CONNECTOR_LIMITS = {
   returnBoreMaxMm: 200,
 } as const;
 
+export const RETURN_PATHS = ['none', 'restricted', 'open'] as const;
+
 export const CONNECTOR_SAYS = {
   returnBoreWithout: 'must be empty when the head has no return path',
   returnBoreWith: 'is required when the head has a return path',

@@ -11,6 +11,9 @@ export const DIP_TUBE_LIMITS = {
   odMaxMm: 250,
 } as const;
 
+/** Feed only, or feed and return through the one tube. */
+export const TUBE_CHANNELS = ['feed', 'feed-return'] as const;
+
 export const DIP_TUBE_SAYS = { boreMm: 'must be smaller than the outside diameter' } as const;
 
 /** The rules across a dip tube's fields: the bore is inside the tube, so below its outside diameter. */

@@ -17,6 +17,11 @@ export const DRUM_TYPE_LIMITS = {
   openingBoreMaxMm: 500,
 } as const;
 
+/** The choices of a drum type's fields. */
+export const DRUM_MATERIALS = ['steel', 'plastic', 'fibre', 'aluminium', 'other'] as const;
+export const DRUM_HEADS = ['tight', 'open'] as const;
+export const OPENING_POSITIONS = ['large', 'small', 'center', 'other'] as const;
+
 export const DRUM_TYPE_LABELS: Record<string, string> = {
   partNumber: 'Part number',
   name: 'Name',

@@ -8,3 +8,6 @@ export const STATION_LIMITS = {
   /** A recirculation loop, not a transfer pump [practice]. */
   flowMaxLpm: 2000,
 } as const;
+
+export const TAPPINGS = ['two-opening', 'one-opening'] as const;
+export const AGITATIONS = ['pump', 'mechanical'] as const;
