@@ -1,5 +1,5 @@
 // Field checks run in the browser on blur and on submit, so a person hears about a problem before the round
-// trip. They follow the limits in server/registry/registry.dto.ts; the server checks again and has the
+// trip. They take the limits and rules of shared/records/<record>.ts, as the API does; the server checks again and has the
 // last word (its messages land on the same fields).
 import { lengthDraftMm, parseNumber, type LengthDraft } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';

@@ -6,6 +6,8 @@ import { ChoiceChips } from '../ui/choice-chips';
 import { lengthDraft, LengthField, type LengthDraft } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
+import { CONNECTOR_LIMITS as H, connectorProblem } from '@/shared/records/connector';
+import { sentence } from '@/shared/records/field';
 import { Checks, mmOf } from './checks';
 import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
 import { optionLabel, RETURN_PATH_OPTIONS, SUITED_OPTIONS } from './options';
@@ -72,16 +74,19 @@ export const connectorSpec: FormSpec<ConnectorRecord, ConnectorDraft> = {
   }),
   check: (d) => {
     const c = new Checks();
-    c.text('partNumber', 'Part number', d.partNumber, { max: 60 });
+    c.text('partNumber', 'Part number', d.partNumber, { max: H.partNumberChars });
     c.pick('supplierId', 'Supplier', d.supplierId, 'the supplier who sells it');
     c.choice('suitedTo', 'Suited to', d.suitedTo);
-    c.text('wettedMaterials', 'Wetted materials', d.wettedMaterials, { max: 200 });
-    c.length('feedBoreMm', 'Feed port bore', d.feedBoreMm, { maxMm: 200 });
-    c.text('feedNominal', 'Feed port size', d.feedNominal, { max: 20 });
+    c.text('wettedMaterials', 'Wetted materials', d.wettedMaterials, { max: H.wettedMaterialsChars });
+    c.length('feedBoreMm', 'Feed port bore', d.feedBoreMm, { maxMm: H.feedBoreMaxMm });
+    c.text('feedNominal', 'Feed port size', d.feedNominal, { max: H.nominalChars });
     c.choice('returnPath', 'Return path', d.returnPath);
     if (hasReturn(d)) {
-      c.length('returnBoreMm', 'Return port bore', d.returnBoreMm, { maxMm: 200 });
-      c.text('returnNominal', 'Return port size', d.returnNominal, { max: 20 });
+      const bore = c.length('returnBoreMm', 'Return port bore', d.returnBoreMm, { maxMm: H.returnBoreMaxMm, optional: true });
+      // Whether the bore is required is the record's rule (the form sends none when there is no return path).
+      const across = connectorProblem({ returnPath: d.returnPath, returnBoreMm: bore });
+      if (across) c.rule(across.field, false, sentence(LABELS[across.field], across.says));
+      c.text('returnNominal', 'Return port size', d.returnNominal, { max: H.nominalChars });
     }
     return c.errors;
   },

@@ -9,6 +9,7 @@ import { FitPreview } from '../pairings/fit-preview';
 import { space, type } from '../theme';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
+import { PAIRING_LIMITS } from '@/shared/records/pairing';
 import { Checks, trimOrNull } from './checks';
 import { FormFrame, FormSection } from './form-frame';
 import { ConnectorPicker, connectorLabel, DipTubePicker, dipTubeLabel } from './pickers';
@@ -34,7 +35,7 @@ export const pairingSpec: FormSpec<PairingRecord, PairingDraft> = {
     const c = new Checks();
     c.pick('dipTubeId', 'Dip tube', d.dipTubeId, 'the tube');
     c.pick('connectorId', 'Dispense head', d.connectorId, 'the head it goes with');
-    c.text('notes', 'Notes', d.notes, { max: 2000, optional: true });
+    c.text('notes', 'Notes', d.notes, { max: PAIRING_LIMITS.notesChars, optional: true });
     return c.errors;
   },
   // Tube and head are fixed once a pairing exists: an edit only changes the notes.

@@ -5,6 +5,8 @@ import { ChoiceChips } from '../ui/choice-chips';
 import { NumberField, numberText } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
+import { sentence } from '@/shared/records/field';
+import { SLURRY_LIMITS as S, SLURRY_SAYS, slurryProblem } from '@/shared/records/slurry';
 import { Checks } from './checks';
 import { FormFrame, FormSection } from './form-frame';
 import { optionLabel, REGION_OPTIONS, YES_NO_OPTIONS } from './options';
@@ -79,21 +81,26 @@ export const slurrySpec: FormSpec<SlurryRecord, SlurryDraft> = {
   }),
   check: (d) => {
     const c = new Checks();
-    c.text('name', 'Name', d.name, { max: 120 });
+    c.text('name', 'Name', d.name, { max: S.nameChars });
     c.pick('supplierId', 'Supplier', d.supplierId, 'the supplier who makes it');
     c.choice('region', 'Region', d.region);
     c.pick('drumTypeId', 'Drum type', d.drumTypeId, 'the drum it arrives in');
     c.choice('foams', 'Foams', d.foams);
     c.choice('shearSensitive', 'Shear-sensitive', d.shearSensitive);
-    c.number('solidsWtPct', 'Solids', d.solidsWtPct, { min: 0, max: 100, unit: '%' });
-    // Receiving: each optional; the limits are the server's (server/registry/registry.dto.ts).
-    const shelf = d.shelfLifeDays.trim() ? c.number('shelfLifeDays', 'Shelf life', d.shelfLifeDays, { min: 1, max: 3650, unit: 'days' }) : null;
-    const left = d.minRemainingDays.trim() ? c.number('minRemainingDays', 'Minimum remaining life', d.minRemainingDays, { min: 0, max: 3650, unit: 'days' }) : null;
-    if (shelf !== null) c.rule('shelfLifeDays', Number.isInteger(shelf), 'Shelf life must be a whole number of days.');
-    if (left !== null) c.rule('minRemainingDays', Number.isInteger(left) && (shelf === null || left <= shelf), 'Minimum remaining life must be whole days, at most the shelf life.');
-    const lo = d.storageMinC.trim() ? c.number('storageMinC', 'Lowest storage temperature', d.storageMinC, { min: -50, max: 80, unit: '°C' }) : null;
-    const hi = d.storageMaxC.trim() ? c.number('storageMaxC', 'Highest storage temperature', d.storageMaxC, { min: -50, max: 80, unit: '°C' }) : null;
-    if (lo !== null && hi !== null) c.rule('storageMaxC', hi > lo, 'Highest storage temperature must be above the lowest.');
+    c.number('solidsWtPct', 'Solids', d.solidsWtPct, { min: S.solidsMinPct, max: S.solidsMaxPct, unit: '%' });
+    // Receiving: each optional; the limits and the rules across them are the record's (shared/records/slurry.ts).
+    const across = (v: Parameters<typeof slurryProblem>[0]) => {
+      const p = slurryProblem(v);
+      if (p) c.rule(p.field, false, sentence(LABELS[p.field], p.says));
+    };
+    const shelf = d.shelfLifeDays.trim() ? c.number('shelfLifeDays', 'Shelf life', d.shelfLifeDays, { min: S.shelfLifeMinDays, max: S.daysMax, unit: 'days' }) : null;
+    const left = d.minRemainingDays.trim() ? c.number('minRemainingDays', 'Minimum remaining life', d.minRemainingDays, { min: S.remainingMinDays, max: S.daysMax, unit: 'days' }) : null;
+    if (shelf !== null) c.rule('shelfLifeDays', Number.isInteger(shelf), sentence(LABELS.shelfLifeDays, SLURRY_SAYS.wholeDays));
+    if (left !== null) c.rule('minRemainingDays', Number.isInteger(left), sentence(LABELS.minRemainingDays, SLURRY_SAYS.wholeDays));
+    across({ shelfLifeDays: shelf, minRemainingDays: left });
+    const lo = d.storageMinC.trim() ? c.number('storageMinC', 'Lowest storage temperature', d.storageMinC, { min: S.storageMinC, max: S.storageMaxC, unit: '°C' }) : null;
+    const hi = d.storageMaxC.trim() ? c.number('storageMaxC', 'Highest storage temperature', d.storageMaxC, { min: S.storageMinC, max: S.storageMaxC, unit: '°C' }) : null;
+    across({ storageMinC: lo, storageMaxC: hi });
     c.choice('certificateRequired', 'Certificate required', d.certificateRequired);
     return c.errors;
   },

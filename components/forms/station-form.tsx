@@ -4,6 +4,7 @@ import { ChoiceChips } from '../ui/choice-chips';
 import { NumberField, numberText } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
+import { STATION_LIMITS as L } from '@/shared/records/station';
 import { Checks } from './checks';
 import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
 import { AGITATION_OPTIONS, optionLabel, TAPPING_OPTIONS } from './options';
@@ -41,11 +42,11 @@ export const stationSpec: FormSpec<StationRecord, StationDraft> = {
   }),
   check: (d) => {
     const c = new Checks();
-    c.text('name', 'Name', d.name, { max: 120 });
-    c.text('bay', 'Bay', d.bay, { max: 60 });
+    c.text('name', 'Name', d.name, { max: L.nameChars });
+    c.text('bay', 'Bay', d.bay, { max: L.bayChars });
     c.choice('tapping', 'Tapping', d.tapping);
     c.choice('agitation', 'Agitation', d.agitation);
-    c.number('flowLpm', 'Recirculation flow', d.flowLpm, { min: 0, above: true, max: 2000, unit: 'L/min' });
+    c.number('flowLpm', 'Recirculation flow', d.flowLpm, { min: 0, above: true, max: L.flowMaxLpm, unit: 'L/min' });
     return c.errors;
   },
   toBody: (d) => ({

@@ -1,10 +1,13 @@
+import { CONNECTOR_LIMITS as HEAD, connectorProblem, RETURN_PATHS } from '../../shared/records/connector';
+import { DIP_TUBE_LIMITS as TUBE, dipTubeProblem, TUBE_CHANNELS } from '../../shared/records/dip-tube';
+import { DRUM_HEADS, DRUM_MATERIALS, DRUM_TYPE_LIMITS as DRUM, drumTypeProblem, OPENING_POSITIONS } from '../../shared/records/drum-type';
+import { CODE_CHARS, FIELD_SAYS as SAYS, type FieldProblem as RecordProblem } from '../../shared/records/field';
 import { REGIONS, SUITED_TO, type ImportKind } from '../entities';
 
-// The API's field rules (server/registry/registry.dto.ts) as plain functions, for the import's rows: the
-// same limits and the same messages as the DTOs, without building a class instance per row. Until one
-// validator per record exists (shared/records/<resource>.ts), this file is the import's only entry to
-// them: `rowProblem` is the one function to point there. tests/unit/import-row-rules.test.ts compares
-// it with the DTOs on a corpus of good and bad rows.
+// The API's field rules (server/registry/registry.dto.ts) as plain functions, for the import's rows: the same
+// limits (shared/records/<record>.ts), the same words (FIELD_SAYS) and the same cross-field rules as the API,
+// without building a class instance per row. tests/unit/import-row-rules.test.ts compares it with the DTOs on a
+// corpus of good and bad rows; scripts/time-row-rules.ts times it.
 
 export interface FieldProblem {
   field: string;
@@ -13,83 +16,87 @@ export interface FieldProblem {
 
 type Rule = (v: unknown) => string | null;
 
-const NUMBER = 'must be a number';
 const isNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 const mm =
   (max: number): Rule =>
   (v) =>
-    !isNumber(v) ? NUMBER : v < 0.1 ? 'must be more than 0 mm' : v > max ? `must be at most ${max} mm` : null;
+    !isNumber(v) ? SAYS.number : v < 0.1 ? SAYS.moreThanZero('mm') : v > max ? SAYS.atMost(max, 'mm') : null;
 const name =
-  (max = 120): Rule =>
+  (max: number): Rule =>
   (v) =>
-    typeof v !== 'string' ? 'must be text' : v.length < 1 ? 'is required' : v.length > max ? `must be at most ${max} characters` : null;
-const code: Rule = (v) => (typeof v !== 'string' ? 'must be text' : v.length > 40 ? 'must be at most 40 characters' : null);
+    typeof v !== 'string' ? SAYS.text : v.length < 1 ? SAYS.required : v.length > max ? SAYS.atMost(max, 'characters') : null;
+const code: Rule = (v) => (typeof v !== 'string' ? SAYS.text : v.length > CODE_CHARS ? SAYS.atMost(CODE_CHARS, 'characters') : null);
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-const id: Rule = (v) => (typeof v === 'string' && UUID.test(v) ? null : 'must be an id');
-const oneOf =
-  (values: readonly string[]): Rule =>
-  (v) =>
-    typeof v === 'string' && values.includes(v) ? null : `must be one of ${values.join(', ')}`;
+const id: Rule = (v) => (typeof v === 'string' && UUID.test(v) ? null : SAYS.id);
+const oneOf = (values: readonly string[]): Rule => {
+  const says = SAYS.oneOf(values);
+  return (v) => (typeof v === 'string' && values.includes(v) ? null : says);
+};
 /** Absent or null passes (IsOptional, ValidateIf(v !== null)); otherwise the rule. */
 const nullable =
   (rule: Rule): Rule =>
   (v) =>
     v === null || v === undefined ? null : rule(v);
 // DrumTypeDto stacks these decorators bottom-up, so the DTO reports the maximum first (also for a non-number or non-text).
-const capacity: Rule = (v) => (!isNumber(v) || v > 3000 ? 'must be at most 3000 L' : v < 0.1 ? 'must be more than 0 L' : null);
+const capacity: Rule = (v) => (!isNumber(v) || v > DRUM.nominalCapacityMaxL ? SAYS.atMost(DRUM.nominalCapacityMaxL, 'L') : v < 0.1 ? SAYS.moreThanZero('L') : null);
 // class-validator's own wording, as DrumTypeDto gives no message here.
-const unCode: Rule = nullable((v) => (typeof v !== 'string' || v.length > 40 ? 'unPackagingCode must be shorter than or equal to 40 characters' : null));
+const unCode: Rule = nullable((v) =>
+  typeof v !== 'string' || v.length > DRUM.unPackagingCodeChars ? `unPackagingCode must be shorter than or equal to ${DRUM.unPackagingCodeChars} characters` : null,
+);
 
 /** Field rules in the DTOs' declaration order: the first problem found is the one reported, as with the DTOs. */
 type Rules = Array<[string, Rule]>;
 const DIP_TUBE: Rules = [
-  ['partNumber', name(60)],
+  ['partNumber', name(TUBE.partNumberChars)],
   ['supplierId', id],
   ['threadCode', code],
-  ['lengthMm', mm(3000)],
-  ['boreMm', mm(200)],
-  ['odMm', mm(250)],
-  ['material', name(40)],
+  ['lengthMm', mm(TUBE.lengthMaxMm)],
+  ['boreMm', mm(TUBE.boreMaxMm)],
+  ['odMm', mm(TUBE.odMaxMm)],
+  ['material', name(TUBE.materialChars)],
   ['keyCode', nullable(code)],
-  ['channels', oneOf(['feed', 'feed-return'])],
+  ['channels', oneOf(TUBE_CHANNELS)],
 ];
 const CONNECTOR: Rules = [
-  ['partNumber', name(60)],
+  ['partNumber', name(HEAD.partNumberChars)],
   ['supplierId', id],
   ['keyCode', nullable(code)],
-  ['feedBoreMm', mm(200)],
-  ['feedNominal', name(20)],
-  ['returnBoreMm', nullable(mm(200))],
-  ['returnNominal', nullable(name(20))],
-  ['returnPath', oneOf(['none', 'restricted', 'open'])],
+  ['feedBoreMm', mm(HEAD.feedBoreMaxMm)],
+  ['feedNominal', name(HEAD.nominalChars)],
+  ['returnBoreMm', nullable(mm(HEAD.returnBoreMaxMm))],
+  ['returnNominal', nullable(name(HEAD.nominalChars))],
+  ['returnPath', oneOf(RETURN_PATHS)],
   ['suitedTo', oneOf(SUITED_TO)],
-  ['wettedMaterials', name(200)],
+  ['wettedMaterials', name(HEAD.wettedMaterialsChars)],
 ];
 const DRUM_TYPE: Rules = [
   ['supplierId', id],
   ['region', oneOf(REGIONS)],
-  ['name', name()],
-  ['partNumber', name(60)],
+  ['name', name(DRUM.nameChars)],
+  ['partNumber', name(DRUM.partNumberChars)],
   ['nominalCapacityL', capacity],
-  ['material', oneOf(['steel', 'plastic', 'fibre', 'aluminium', 'other'])],
-  ['head', oneOf(['tight', 'open'])],
+  ['material', oneOf(DRUM_MATERIALS)],
+  ['head', oneOf(DRUM_HEADS)],
   ['unPackagingCode', unCode],
-  ['outsideHeightMm', mm(3000)],
-  ['insideDepthMm', mm(3000)],
-  ['outsideDiameterMm', mm(2000)],
+  ['outsideHeightMm', mm(DRUM.outsideHeightMaxMm)],
+  ['insideDepthMm', mm(DRUM.insideDepthMaxMm)],
+  ['outsideDiameterMm', mm(DRUM.outsideDiameterMaxMm)],
 ];
 /** A drum-type row's one opening, as the row's opening* fields (OpeningDto's rules). */
 const OPENING: Rules = [
-  ['openingLabel', name(40)],
+  ['openingLabel', name(DRUM.openingLabelChars)],
   ['openingThread', code],
-  ['openingBoreMm', mm(500)],
+  ['openingBoreMm', mm(DRUM.openingBoreMaxMm)],
   ['openingKey', nullable(code)],
-  ['openingPosition', oneOf(['large', 'small', 'center', 'other'])],
+  ['openingPosition', oneOf(OPENING_POSITIONS)],
 ];
-const RULES = new Map<ImportKind, Rules>([
-  ['dip-tubes', DIP_TUBE],
-  ['connectors', CONNECTOR],
-  ['drum-types', [...DRUM_TYPE, ...OPENING]],
+
+type Across = (v: Record<string, unknown>) => RecordProblem | null;
+/** Each kind's field rules, then its record's rule across fields (shared/records), the API's own. */
+const KINDS = new Map<ImportKind, { rules: Rules; across: Across }>([
+  ['dip-tubes', { rules: DIP_TUBE, across: dipTubeProblem }],
+  ['connectors', { rules: CONNECTOR, across: connectorProblem }],
+  ['drum-types', { rules: [...DRUM_TYPE, ...OPENING], across: drumTypeProblem }],
 ]);
 
 function firstOf(rules: Rules, values: Record<string, unknown>): FieldProblem | null {
@@ -100,24 +107,14 @@ function firstOf(rules: Rules, values: Record<string, unknown>): FieldProblem | 
   return null;
 }
 
-/** The checks across fields that the API makes beside the field rules. */
-function crossFieldProblem(kind: ImportKind, v: Record<string, unknown>): FieldProblem | null {
-  if (kind === 'dip-tubes' && Number(v.boreMm) >= Number(v.odMm)) return { field: 'boreMm', message: 'bore must be smaller than the outside diameter' };
-  if (kind === 'connectors') {
-    if (v.returnPath === 'none' && v.returnBoreMm != null) return { field: 'returnBoreMm', message: 'must be empty when the head has no return path' };
-    if (v.returnPath !== 'none' && v.returnBoreMm == null) return { field: 'returnBoreMm', message: 'is required when the head has a return path' };
-  }
-  if (kind === 'drum-types' && Number(v.insideDepthMm) >= Number(v.outsideHeightMm)) return { field: 'insideDepthMm', message: 'must be less than the outside height' };
-  return null;
-}
-
 /**
  * The first problem of one import row (its fields named as the row's values name them), or null. `cross`
  * says whether it is a rule across fields (reported without the field's name in front).
  */
 export function rowProblem(kind: ImportKind, values: Record<string, unknown>): (FieldProblem & { cross: boolean }) | null {
-  const field = firstOf(RULES.get(kind)!, values);
+  const { rules, across } = KINDS.get(kind)!;
+  const field = firstOf(rules, values);
   if (field) return { ...field, cross: false };
-  const cross = crossFieldProblem(kind, values);
-  return cross ? { ...cross, cross: true } : null;
+  const cross = across(values);
+  return cross ? { field: cross.field, message: cross.says, cross: true } : null;
 }

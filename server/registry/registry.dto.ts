@@ -19,13 +19,21 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { Optional } from '../common/fields';
-import { DIP_TUBE_LIMITS as TUBE } from '../../shared/records/dip-tube';
-import { DRUM_TYPE_LIMITS as DRUM } from '../../shared/records/drum-type';
+import { CONNECTOR_LIMITS as HEAD, RETURN_PATHS } from '../../shared/records/connector';
+import { DIP_TUBE_LIMITS as TUBE, TUBE_CHANNELS } from '../../shared/records/dip-tube';
+import { DRUM_HEADS, DRUM_MATERIALS, DRUM_TYPE_LIMITS as DRUM, OPENING_POSITIONS } from '../../shared/records/drum-type';
+import { CODE_CHARS, FIELD_SAYS as SAYS } from '../../shared/records/field';
+import { PAIRING_LIMITS as PAIRING } from '../../shared/records/pairing';
+import { SETTINGS_LIMITS as SETTINGS } from '../../shared/records/settings';
+import { SLURRY_LIMITS as SLURRY, SLURRY_SAYS } from '../../shared/records/slurry';
+import { AGITATIONS, STATION_LIMITS as STATION, TAPPINGS } from '../../shared/records/station';
+import { SUPPLIER_LIMITS as SUPPLIER } from '../../shared/records/supplier';
+import { TUBE_SET_LIMITS as TUBE_SET } from '../../shared/records/tube-set';
 import { REGIONS, SUITED_TO, THREAD_FAMILIES } from '../entities/registry';
 
-// Shared field rules. Lengths are mm; the upper bounds reject absurd values (a drum is not 10 m deep).
+// Shared field rules; each record's limits are in shared/records/<record>.ts, the rules' words in shared/records/field.ts.
 const num = { allowNaN: false, allowInfinity: false };
-const NUMBER = 'must be a number';
+const NUMBER = SAYS.number;
 /** What a thread code and a key code may hold; the list filters check the same forms. */
 export const THREAD_CODE_PATTERN = /^[A-Za-z0-9][A-Za-z0-9/.\-x ]*$/;
 export const THREAD_CODE_SAYS = 'may hold letters, digits, / . - and x';
@@ -33,27 +41,27 @@ export const KEY_CODE_PATTERN = /^[A-Za-z0-9][A-Za-z0-9\-_]*$/;
 export const KEY_CODE_SAYS = 'may hold letters, digits, - and _';
 const Mm = (max: number) => (target: object, key: string) => {
   IsNumber(num, { message: NUMBER })(target, key);
-  Min(0.1, { message: 'must be more than 0 mm' })(target, key);
-  Max(max, { message: `must be at most ${max} mm` })(target, key);
+  Min(0.1, { message: SAYS.moreThanZero('mm') })(target, key);
+  Max(max, { message: SAYS.atMost(max, 'mm') })(target, key);
 };
 const Name =
   (max = 120) =>
   (target: object, key: string) => {
-    IsString({ message: 'must be text' })(target, key);
-    MinLength(1, { message: 'is required' })(target, key);
-    MaxLength(max, { message: `must be at most ${max} characters` })(target, key);
+    IsString({ message: SAYS.text })(target, key);
+    MinLength(1, { message: SAYS.required })(target, key);
+    MaxLength(max, { message: SAYS.atMost(max, 'characters') })(target, key);
   };
 const Code = (target: object, key: string) => {
-  IsString({ message: 'must be text' })(target, key);
-  MaxLength(40, { message: 'must be at most 40 characters' })(target, key);
+  IsString({ message: SAYS.text })(target, key);
+  MaxLength(CODE_CHARS, { message: SAYS.atMost(CODE_CHARS, 'characters') })(target, key);
 };
-const Notes = (target: object, key: string) => {
+const Notes = (max: number) => (target: object, key: string) => {
   IsOptional()(target, key);
-  IsString({ message: 'must be text' })(target, key);
-  MaxLength(2000, { message: 'must be at most 2000 characters' })(target, key);
+  IsString({ message: SAYS.text })(target, key);
+  MaxLength(max, { message: SAYS.atMost(max, 'characters') })(target, key);
 };
-const Id = (target: object, key: string) => IsUUID('all', { message: 'must be an id' })(target, key);
-const OneOf = (values: readonly string[]) => IsIn(values, { message: `must be one of ${values.join(', ')}` });
+const Id = (target: object, key: string) => IsUUID('all', { message: SAYS.id })(target, key);
+const OneOf = (values: readonly string[]) => IsIn(values, { message: SAYS.oneOf(values) });
 /** A nullable reference by code: null clears it, a string must be a known code (checked by the service). */
 const NullableCode = (target: object, key: string) => {
   ValidateIf((_o, v) => v !== null)(target, key);
@@ -61,10 +69,10 @@ const NullableCode = (target: object, key: string) => {
 };
 
 export class SupplierDto {
-  @Name() name: string;
+  @Name(SUPPLIER.nameChars) name: string;
   @OneOf(REGIONS) region: string;
   @IsOptional() @IsEmail({}, { message: 'must be an e-mail address' }) contactEmail?: string | null;
-  @Notes notes?: string | null;
+  @Notes(SUPPLIER.notesChars) notes?: string | null;
 }
 
 export class ThreadSpecDto {
@@ -90,7 +98,7 @@ export class OpeningDto {
   @Code threadCode: string;
   @Mm(DRUM.openingBoreMaxMm) boreMm: number;
   @IsOptional() @NullableCode keyCode?: string | null;
-  @OneOf(['large', 'small', 'center', 'other']) position: string;
+  @OneOf(OPENING_POSITIONS) position: string;
 }
 
 export class DrumTypeDto {
@@ -102,8 +110,8 @@ export class DrumTypeDto {
   @Min(0.1, { message: 'must be more than 0 L' })
   @Max(DRUM.nominalCapacityMaxL, { message: `must be at most ${DRUM.nominalCapacityMaxL} L` })
   nominalCapacityL: number;
-  @OneOf(['steel', 'plastic', 'fibre', 'aluminium', 'other']) material: string;
-  @OneOf(['tight', 'open']) head: string;
+  @OneOf(DRUM_MATERIALS) material: string;
+  @OneOf(DRUM_HEADS) head: string;
   @IsOptional() @ValidateIf((_o, v) => v !== null) @IsString() @MaxLength(DRUM.unPackagingCodeChars) unPackagingCode?: string | null;
   @Mm(DRUM.outsideHeightMaxMm) outsideHeightMm: number;
   @Mm(DRUM.insideDepthMaxMm) insideDepthMm: number;
@@ -124,26 +132,26 @@ export class DipTubeDto {
   @Mm(TUBE.odMaxMm) odMm: number;
   @Name(TUBE.materialChars) material: string;
   @IsOptional() @NullableCode keyCode?: string | null;
-  @OneOf(['feed', 'feed-return']) channels: string;
+  @OneOf(TUBE_CHANNELS) channels: string;
 }
 
 export class ConnectorDto {
-  @Name(60) partNumber: string;
+  @Name(HEAD.partNumberChars) partNumber: string;
   @Id supplierId: string;
   @IsOptional() @NullableCode keyCode?: string | null;
-  @Mm(200) feedBoreMm: number;
-  @Name(20) feedNominal: string;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @Mm(200) returnBoreMm?: number | null;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @Name(20) returnNominal?: string | null;
-  @OneOf(['none', 'restricted', 'open']) returnPath: string;
+  @Mm(HEAD.feedBoreMaxMm) feedBoreMm: number;
+  @Name(HEAD.nominalChars) feedNominal: string;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @Mm(HEAD.returnBoreMaxMm) returnBoreMm?: number | null;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @Name(HEAD.nominalChars) returnNominal?: string | null;
+  @OneOf(RETURN_PATHS) returnPath: string;
   @OneOf(SUITED_TO) suitedTo: string;
-  @Name(200) wettedMaterials: string;
+  @Name(HEAD.wettedMaterialsChars) wettedMaterials: string;
 }
 
 export class PairingDto {
   @Id dipTubeId: string;
   @Id connectorId: string;
-  @Notes notes?: string | null;
+  @Notes(PAIRING.notesChars) notes?: string | null;
 }
 
 export class ReviewDto {
@@ -154,60 +162,76 @@ export class RequiredCommentDto {
   @IsString({ message: 'must be text' }) @MinLength(3, { message: 'must say why (at least 3 characters)' }) @MaxLength(2000) comment: string;
 }
 
+/** An optional slurry temperature in °C; null clears it. Registered in the order a stack of decorators would be (bottom first). */
+const StorageC = (target: object, key: string) => {
+  Max(SLURRY.storageMaxC, { message: SAYS.atMost(SLURRY.storageMaxC, '°C') })(target, key);
+  Min(SLURRY.storageMinC, { message: `must be ${SLURRY.storageMinC} °C or more` })(target, key);
+  IsNumber(num, { message: NUMBER })(target, key);
+  ValidateIf((_o, v) => v !== null)(target, key);
+  IsOptional()(target, key);
+};
+
 export class SlurryDto {
-  @Name() name: string;
+  @Name(SLURRY.nameChars) name: string;
   @Id supplierId: string;
   @OneOf(REGIONS) region: string;
   @Id drumTypeId: string;
   @IsBoolean({ message: 'must be true or false' }) foams: boolean;
   @IsBoolean({ message: 'must be true or false' }) shearSensitive: boolean;
-  @IsNumber(num, { message: NUMBER }) @Min(0, { message: 'must be 0 or more' }) @Max(100, { message: 'must be at most 100' }) solidsWtPct: number;
+  @IsNumber(num, { message: NUMBER })
+  @Min(SLURRY.solidsMinPct, { message: `must be ${SLURRY.solidsMinPct} or more` })
+  @Max(SLURRY.solidsMaxPct, { message: `must be at most ${SLURRY.solidsMaxPct}` })
+  solidsWtPct: number;
   // Receiving (shared/acceptance): optional; null clears a value.
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
-  @IsInt({ message: 'must be a whole number of days' })
-  @Min(1, { message: 'must be at least 1 day' })
-  @Max(3650, { message: 'must be at most 3650 days' })
+  @IsInt({ message: SLURRY_SAYS.wholeDays })
+  @Min(SLURRY.shelfLifeMinDays, { message: `must be at least ${SLURRY.shelfLifeMinDays} day` })
+  @Max(SLURRY.daysMax, { message: SAYS.atMost(SLURRY.daysMax, 'days') })
   shelfLifeDays?: number | null;
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
-  @IsInt({ message: 'must be a whole number of days' })
-  @Min(0, { message: 'must be 0 days or more' })
-  @Max(3650, { message: 'must be at most 3650 days' })
+  @IsInt({ message: SLURRY_SAYS.wholeDays })
+  @Min(SLURRY.remainingMinDays, { message: `must be ${SLURRY.remainingMinDays} days or more` })
+  @Max(SLURRY.daysMax, { message: SAYS.atMost(SLURRY.daysMax, 'days') })
   minRemainingDays?: number | null;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: NUMBER }) @Min(-50, { message: 'must be -50 °C or more' }) @Max(80, { message: 'must be at most 80 °C' }) storageMinC?:
-    number | null;
-  @IsOptional() @ValidateIf((_o, v) => v !== null) @IsNumber(num, { message: NUMBER }) @Min(-50, { message: 'must be -50 °C or more' }) @Max(80, { message: 'must be at most 80 °C' }) storageMaxC?:
-    number | null;
+  @StorageC storageMinC?: number | null;
+  @StorageC storageMaxC?: number | null;
   @IsOptional() @IsBoolean({ message: 'must be true or false' }) certificateRequired?: boolean;
 }
 
 export class StationDto {
-  @Name() name: string;
-  @Name(60) bay: string;
-  @OneOf(['two-opening', 'one-opening']) tapping: string;
-  @OneOf(['pump', 'mechanical']) agitation: string;
+  @Name(STATION.nameChars) name: string;
+  @Name(STATION.bayChars) bay: string;
+  @OneOf(TAPPINGS) tapping: string;
+  @OneOf(AGITATIONS) agitation: string;
   @IsOptional() @ValidateIf((_o, v) => v !== null) @IsUUID('all', { message: 'must be an id' }) connectorId?: string | null;
-  @IsNumber(num, { message: NUMBER }) @Min(0.01, { message: 'must be more than 0 L/min' }) @Max(2000, { message: 'must be at most 2000 L/min' }) flowLpm: number;
+  @IsNumber(num, { message: NUMBER })
+  @Min(STATION.flowMinLpm, { message: SAYS.moreThanZero('L/min') })
+  @Max(STATION.flowMaxLpm, { message: SAYS.atMost(STATION.flowMaxLpm, 'L/min') })
+  flowLpm: number;
 }
 
 export class TubeSetDto {
   @Id stationId: string;
-  @Name(40) label: string;
+  @Name(TUBE_SET.labelChars) label: string;
   @Id dipTubeId: string;
   /** New sets start in cleaning (they are rinsed before their first drum); later moves go through the rotation. */
   @Optional() @OneOf(['cleaning']) state?: string;
 }
 
 export class SettingsDto {
-  @Optional() @Name() siteName?: string;
-  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(500) tipClearanceMinMm?: number;
-  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0.1) @Max(500) tipClearanceMaxMm?: number;
-  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(10) threadMatchToleranceMm?: number;
-  @Optional() @IsNumber(num, { message: NUMBER }) @Min(100) @Max(10000) laminarLimit?: number;
-  @Optional() @IsNumber(num, { message: NUMBER }) @Min(1) @Max(100) maxReturnVelocityRatio?: number;
-  /** IANA name, checked against the runtime's zone list in the service. */
-  @Optional() @IsString({ message: 'must be text' }) @MaxLength(64, { message: 'must be at most 64 characters' }) timeZone?: string;
+  @Optional() @Name(SETTINGS.siteNameChars) siteName?: string;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(SETTINGS.tipClearanceMinFromMm) @Max(SETTINGS.tipClearanceUpToMm) tipClearanceMinMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(SETTINGS.tipClearanceMaxFromMm) @Max(SETTINGS.tipClearanceUpToMm) tipClearanceMaxMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(0) @Max(SETTINGS.threadMatchToleranceUpToMm) threadMatchToleranceMm?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(SETTINGS.laminarLimitFrom) @Max(SETTINGS.laminarLimitUpTo) laminarLimit?: number;
+  @Optional() @IsNumber(num, { message: NUMBER }) @Min(SETTINGS.returnVelocityRatioFrom) @Max(SETTINGS.returnVelocityRatioUpTo) maxReturnVelocityRatio?: number;
+  /** IANA name, checked against the runtime's zone list in the service (shared/records/settings.ts). */
+  @Optional()
+  @IsString({ message: SAYS.text })
+  @MaxLength(SETTINGS.timeZoneChars, { message: SAYS.atMost(SETTINGS.timeZoneChars, 'characters') })
+  timeZone?: string;
   @IsInt({ message: 'is required: the version you last read' })
   @Min(1, { message: 'must be the version you last read' })
   @Max(2147483647, { message: 'must be the version you last read' })

@@ -1,6 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import { isTimeZone } from '../../shared/dates';
 import { resolveSettings } from '../../shared/fit/rules';
+import { settingsProblem } from '../../shared/records/settings';
 import type { FitSettings } from '../../shared/fit/types';
 import { conflict, fieldError } from '../common/errors';
 import { SiteSettings } from '../entities';
@@ -42,8 +42,8 @@ export async function updateSettings(ds: DataSource, dto: SettingsDto, userId: s
     if (row.version !== dto.version) throw conflict('Someone else changed the site settings first; review them and save again.', { current: settingsJson(row) });
     const { version: _v, ...changes } = dto;
     Object.assign(row, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
-    if (dto.timeZone !== undefined && !isTimeZone(dto.timeZone)) throw fieldError('timeZone', 'must be a time zone name, like Europe/Berlin or America/Phoenix');
-    if (row.tipClearanceMaxMm <= row.tipClearanceMinMm) throw fieldError('tipClearanceMaxMm', 'must be more than the minimum clearance');
+    const problem = settingsProblem({ timeZone: dto.timeZone, tipClearanceMinMm: row.tipClearanceMinMm, tipClearanceMaxMm: row.tipClearanceMaxMm });
+    if (problem) throw fieldError(problem.field, problem.says);
     const before = settingsJson(await loadSettings(m));
     const saved = settingsJson(await m.save(row));
     await audit(m, { userId, action: 'update', entity: 'settings', entityId: row.id, summary: 'Site settings changed', before, after: saved });

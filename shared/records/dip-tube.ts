@@ -1,7 +1,7 @@
 import type { FieldProblem } from './field';
 
 // One home for a dip tube's limits, labels and cross-field rules, read by the API's DTO (server/registry/registry.dto.ts,
-// dip-tubes/dip-tube.def.ts), the import (server/imports/read-rows.ts) and the form (components/forms/dip-tube-form.tsx).
+// dip-tubes/dip-tube.def.ts), the import (server/imports/row-rules.ts) and the form (components/forms/dip-tube-form.tsx).
 // Lengths are mm; the upper bounds reject absurd values [practice].
 export const DIP_TUBE_LIMITS = {
   partNumberChars: 60,
@@ -10,6 +10,9 @@ export const DIP_TUBE_LIMITS = {
   boreMaxMm: 200,
   odMaxMm: 250,
 } as const;
+
+/** Feed only, or feed and return through the one tube. */
+export const TUBE_CHANNELS = ['feed', 'feed-return'] as const;
 
 export const DIP_TUBE_SAYS = { boreMm: 'must be smaller than the outside diameter' } as const;
 

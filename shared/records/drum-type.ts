@@ -1,7 +1,7 @@
 import type { FieldProblem } from './field';
 
 // One home for a drum type's limits, labels and cross-field rules: the API's DTO (server/registry/registry.dto.ts
-// and drum-types/drum-type.def.ts), the import (server/imports/read-rows.ts) and the form (components/forms/drum-type-form.tsx)
+// and drum-types/drum-type.def.ts), the import (server/imports/row-rules.ts) and the form (components/forms/drum-type-form.tsx)
 // all read them. Lengths are mm; the upper bounds reject absurd values (a drum is not 3 m deep) [practice].
 export const DRUM_TYPE_LIMITS = {
   partNumberChars: 60,
@@ -16,6 +16,11 @@ export const DRUM_TYPE_LIMITS = {
   openingLabelChars: 40,
   openingBoreMaxMm: 500,
 } as const;
+
+/** The choices of a drum type's fields. */
+export const DRUM_MATERIALS = ['steel', 'plastic', 'fibre', 'aluminium', 'other'] as const;
+export const DRUM_HEADS = ['tight', 'open'] as const;
+export const OPENING_POSITIONS = ['large', 'small', 'center', 'other'] as const;
 
 export const DRUM_TYPE_LABELS: Record<string, string> = {
   partNumber: 'Part number',

@@ -185,6 +185,38 @@ describe('registry writes', () => {
     expect(list.body.total).toBe(0);
   });
 
+  it("refuses what breaks a record's rule across fields (shared/records), naming the field in the record's words, and writes nothing", async () => {
+    const list = async (resource: string) => (await request(app).get(`/api/${resource}?pageSize=100`).set(bearer(clerk))).body.items;
+    const drumTypeId = (await list('drum-types'))[0].id;
+    const slurry = { name: 'Rule slurry', supplierId, region: 'NA', drumTypeId, foams: false, shearSensitive: false, solidsWtPct: 12 };
+    const heads: Array<{ id: string; version: number; returnPath: string }> = await list('connectors');
+    const open = heads.find((c) => c.returnPath !== 'none')!;
+    const none = heads.find((c) => c.returnPath === 'none')!;
+    const pairing = (await list('pairings'))[0];
+    const set = (await list('tube-sets')).find((t: { state: string }) => t.state !== 'cleaning');
+    const settings = (await request(app).get('/api/settings').set(bearer(clerk))).body;
+    // [method, path, body, the field named, what it says]; an edit is judged with the stored values.
+    const cases: Array<['post' | 'patch', string, object, string, string]> = [
+      ['post', '/api/slurries', { ...slurry, shelfLifeDays: 30, minRemainingDays: 31 }, 'minRemainingDays', 'must be at most the shelf life'],
+      ['post', '/api/slurries', { ...slurry, storageMinC: 5, storageMaxC: 5 }, 'storageMaxC', 'must be above the lowest storage temperature'],
+      ['patch', `/api/connectors/${open.id}`, { version: open.version, returnPath: 'none' }, 'returnBoreMm', 'must be empty when the head has no return path'],
+      ['patch', `/api/connectors/${none.id}`, { version: none.version, returnPath: 'open' }, 'returnBoreMm', 'is required when the head has a return path'],
+      ['patch', `/api/pairings/${pairing.id}`, { version: pairing.version, connectorId: open.id }, 'connectorId', 'cannot change; retire this pairing and create a new one'],
+      ['patch', `/api/tube-sets/${set.id}`, { version: set.version, state: 'cleaning' }, 'state', 'changes through the rotation: rinse, standby and change-out'],
+      ['patch', '/api/settings', { version: settings.version, tipClearanceMinMm: 20, tipClearanceMaxMm: 20 }, 'tipClearanceMaxMm', 'must be more than the minimum clearance'],
+      ['patch', '/api/settings', { version: settings.version, timeZone: 'Mars/Olympus' }, 'timeZone', 'must be a time zone name, like Europe/Berlin or America/Phoenix'],
+    ];
+    for (const [method, path, body, field, says] of cases) {
+      const res = await request(app)[method](path).set(bearer(engineer)).send(body);
+      expect({ path, status: res.status, details: res.body.error?.details }).toEqual({ path, status: 400, details: [{ field, messages: [says] }] });
+    }
+    // Nothing was written: no slurry, and the versions are the ones read.
+    expect((await request(app).get('/api/slurries?q=Rule%20slurry').set(bearer(clerk))).body.total).toBe(0);
+    expect((await request(app).get(`/api/connectors/${open.id}`).set(bearer(clerk))).body).toMatchObject({ version: open.version, returnPath: open.returnPath });
+    expect((await request(app).get(`/api/tube-sets/${set.id}`).set(bearer(clerk))).body).toMatchObject({ version: set.version, state: set.state });
+    expect((await request(app).get('/api/settings').set(bearer(clerk))).body.version).toBe(settings.version);
+  });
+
   it('creates a drum type with its openings in one transaction and replaces them on update', async () => {
     const created = await request(app)
       .post('/api/drum-types')

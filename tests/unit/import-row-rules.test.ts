@@ -4,6 +4,9 @@ import { validateSync, type ValidationError } from 'class-validator';
 import { ConnectorDto, DipTubeDto, DrumTypeDto } from '../../server/registry/registry.dto';
 import { rowProblem } from '../../server/imports/row-rules';
 import type { ImportKind } from '../../server/entities';
+import { CONNECTOR_LIMITS, CONNECTOR_SAYS } from '../../shared/records/connector';
+import { DIP_TUBE_SAYS } from '../../shared/records/dip-tube';
+import { FIELD_SAYS } from '../../shared/records/field';
 
 // The import's plain row rules beside the API's DTOs: for every row of a corpus of good and bad values,
 // both name the same first field and the same message.
@@ -120,8 +123,20 @@ describe('import row rules', () => {
   }
 
   test('rules across fields are reported after the field rules', () => {
-    expect(rowProblem('dip-tubes', { ...BASE['dip-tubes'], boreMm: 30 })).toEqual({ field: 'boreMm', message: 'bore must be smaller than the outside diameter', cross: true });
+    expect(rowProblem('dip-tubes', { ...BASE['dip-tubes'], boreMm: 30 })).toEqual({ field: 'boreMm', message: 'must be smaller than the outside diameter', cross: true });
     expect(rowProblem('connectors', { ...BASE.connectors, returnPath: 'none' })).toEqual({ field: 'returnBoreMm', message: 'must be empty when the head has no return path', cross: true });
     expect(rowProblem('drum-types', { ...BASE['drum-types'], insideDepthMm: 900 })).toEqual({ field: 'insideDepthMm', message: 'must be less than the outside height', cross: true });
+  });
+
+  test("the rules across fields are the records' own (shared/records), with their words", () => {
+    expect(rowProblem('connectors', { ...BASE.connectors, returnBoreMm: null })).toEqual({ field: 'returnBoreMm', message: CONNECTOR_SAYS.returnBoreWith, cross: true });
+    expect(rowProblem('dip-tubes', { ...BASE['dip-tubes'], boreMm: 25.4 })).toEqual({ field: 'boreMm', message: DIP_TUBE_SAYS.boreMm, cross: true });
+    expect(rowProblem('dip-tubes', { ...BASE['dip-tubes'], boreMm: 25.3 })).toBeNull();
+  });
+
+  test("the field rules read the records' limits", () => {
+    const max = CONNECTOR_LIMITS.feedBoreMaxMm;
+    expect(rowProblem('connectors', { ...BASE.connectors, feedBoreMm: max })).toBeNull();
+    expect(rowProblem('connectors', { ...BASE.connectors, feedBoreMm: max + 0.01 })).toEqual({ field: 'feedBoreMm', message: FIELD_SAYS.atMost(max, 'mm'), cross: false });
   });
 });

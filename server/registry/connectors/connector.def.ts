@@ -1,3 +1,4 @@
+import { connectorProblem } from '../../../shared/records/connector';
 import { fieldError } from '../../common/errors';
 import { Connector, Pairing, Station, Supplier } from '../../entities';
 import { SUITED_TO } from '../../entities/registry';
@@ -43,10 +44,8 @@ export const connectorDef: ResourceDef<Connector> = {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
     const cols: Partial<Connector> = pick<Connector>(dto, ['partNumber', 'supplierId', 'feedBoreMm', 'feedNominal', 'returnBoreMm', 'returnNominal', 'returnPath', 'suitedTo', 'wettedMaterials']);
     if (dto.keyCode !== undefined) cols.keyCodeId = await resolveKey(manager, dto.keyCode, 'keyCode');
-    const returnPath = cols.returnPath ?? (existing as Connector | undefined)?.returnPath;
-    const returnBore = 'returnBoreMm' in cols ? cols.returnBoreMm : (existing as Connector | undefined)?.returnBoreMm;
-    if (returnPath === 'none' && returnBore != null) throw fieldError('returnBoreMm', 'must be empty when the head has no return path');
-    if (returnPath !== 'none' && returnBore == null) throw fieldError('returnBoreMm', 'is required when the head has a return path');
+    const problem = connectorProblem({ ...(existing as Connector | undefined), ...cols });
+    if (problem) throw fieldError(problem.field, problem.says);
     return cols;
   },
   detailExtras: async (c, m) => ({

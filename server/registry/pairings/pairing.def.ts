@@ -1,3 +1,4 @@
+import { pairingEditProblem } from '../../../shared/records/pairing';
 import { fieldError } from '../../common/errors';
 import { Connector, DipTube, Pairing, PairingReview } from '../../entities';
 import { PAIRING_STATUSES } from '../../entities/registry';
@@ -49,8 +50,8 @@ export const pairingDef: ResourceDef<Pairing> = {
   toJson: pairingJson,
   toColumns: async (dto, { manager, user, existing }) => {
     if (existing) {
-      if (dto.dipTubeId !== undefined || dto.connectorId !== undefined)
-        throw fieldError(dto.dipTubeId !== undefined ? 'dipTubeId' : 'connectorId', 'cannot change; retire this pairing and create a new one');
+      const problem = pairingEditProblem(dto);
+      if (problem) throw fieldError(problem.field, problem.says);
       return pick<Pairing>(dto, ['notes']);
     }
     await ensureExists(manager, DipTube, dto.dipTubeId, 'dipTubeId', 'dip tube');

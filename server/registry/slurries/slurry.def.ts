@@ -1,3 +1,5 @@
+import { slurryProblem } from '../../../shared/records/slurry';
+import { fieldError } from '../../common/errors';
 import { DrumType, Slurry, Supplier } from '../../entities';
 import { filter, region, stamps } from '../common';
 import { anId } from '../list-query';
@@ -36,10 +38,10 @@ export const slurryDef: ResourceDef<Slurry> = {
     storageMaxC: s.storageMaxC,
     certificateRequired: s.certificateRequired,
   }),
-  toColumns: async (dto, { manager }) => {
+  toColumns: async (dto, { manager, existing }) => {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
     if (dto.drumTypeId !== undefined) await ensureExists(manager, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
-    return pick<Slurry>(dto, [
+    const cols = pick<Slurry>(dto, [
       'name',
       'supplierId',
       'region',
@@ -53,5 +55,8 @@ export const slurryDef: ResourceDef<Slurry> = {
       'storageMaxC',
       'certificateRequired',
     ]);
+    const problem = slurryProblem({ ...(existing as Slurry | undefined), ...cols });
+    if (problem) throw fieldError(problem.field, problem.says);
+    return cols;
   },
 };

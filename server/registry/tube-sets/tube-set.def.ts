@@ -1,3 +1,4 @@
+import { tubeSetEditProblem } from '../../../shared/records/tube-set';
 import { fieldError } from '../../common/errors';
 import { DipTube, Station, TubeSet } from '../../entities';
 import { TUBE_SET_STATES } from '../../entities/registry';
@@ -42,8 +43,8 @@ export const tubeSetDef: ResourceDef<TubeSet> = {
     if (dto.dipTubeId !== undefined) await ensureExists(manager, DipTube, dto.dipTubeId, 'dipTubeId', 'dip tube');
     const cols = pick<TubeSet>(dto, ['stationId', 'label', 'dipTubeId']);
     if (existing) {
-      if (dto.state !== undefined && dto.state !== (existing as TubeSet).state) throw fieldError('state', 'changes through the rotation: rinse, standby and change-out');
-      if (dto.stationId !== undefined && dto.stationId !== (existing as TubeSet).stationId) throw fieldError('stationId', 'cannot change; register a new set at the other station');
+      const problem = tubeSetEditProblem(dto, existing as TubeSet);
+      if (problem) throw fieldError(problem.field, problem.says);
       return cols;
     }
     return { ...cols, state: 'cleaning', lastRinsedAt: null, lastUsedAt: null };
