@@ -7,7 +7,10 @@ import type { OrderLine, StationNeed } from '../../shared/contract/records';
 import { Pairing, Station, TubeSet } from '../entities';
 
 export type { OrderLine, StationNeed };
-import type { FitCheckService } from '../fit/fit-check.service';
+import { NEXT_TUBE_SET_ORDER, NEXT_TUBE_SET_STATE, type FitCheckService } from '../fit/fit-check.service';
+
+/** Fit checks a plan runs at once, on the prepared-statement connections (server/db/prepared.ts: at least 2 per process). */
+const CHECKS_AT_ONCE = 2;
 
 /** Three sets per drum position: one online, one standby, one being cleaned [practice]. */
 export const SETS_PER_POSITION = 3;
@@ -24,26 +27,32 @@ interface SlurryFlags {
  * One fit check per station, through the fit service; the hypothetical pairs are searched once for all of them.
  */
 export async function needsForStations(m: EntityManager, fit: FitCheckService, drumTypeId: string, stations: Station[], slurry: SlurryFlags | null): Promise<StationNeed[]> {
-  const sets = stations.length ? await m.find(TubeSet, { where: { stationId: In(stations.map((s) => s.id)) } }) : [];
+  // Every set of these stations in one read, in the order the fit service picks the next set by.
+  const sets = stations.length ? await m.find(TubeSet, { where: { stationId: In(stations.map((s) => s.id)) }, order: NEXT_TUBE_SET_ORDER }) : [];
   const searches = new Map<string, Promise<PairSearch>>();
-  const needs: StationNeed[] = [];
-  for (const station of stations) {
-    const result = await fit.checkFor(m, { drumTypeId, stationId: station.id, slurry });
-    needs.push(
-      await needAt(
-        m,
-        station,
-        result,
-        sets.filter((s) => s.stationId === station.id),
-        () => {
-          // The same for every station of the plan unless the drum or the settings changed in between.
-          const key = JSON.stringify([result.drum, result.settings]);
-          if (!searches.has(key)) searches.set(key, pairSearch(m, result, slurry));
-          return searches.get(key)!;
-        },
-      ),
-    );
-  }
+  const needOf = async (station: Station): Promise<StationNeed> => {
+    const own = sets.filter((s) => s.stationId === station.id);
+    const nextTubeSet = own.find((s) => s.state === NEXT_TUBE_SET_STATE) ?? null;
+    const result = await fit.checkFor(m, { drumTypeId, slurry, at: { station, nextTubeSet } });
+    const search = () => {
+      // The same for every station of the plan unless the drum or the settings changed in between.
+      const key = JSON.stringify([result.drum, result.settings]);
+      if (!searches.has(key)) searches.set(key, pairSearch(m, result, slurry));
+      return searches.get(key)!;
+    };
+    return needAt(m, station, result, own, search);
+  };
+  // The checks are independent reads: a few at once (the database waits dominate), in station order. A
+  // transaction has one connection, so there one at a time.
+  const needs: StationNeed[] = new Array(stations.length);
+  let next = 0;
+  const worker = async () => {
+    while (next < stations.length) {
+      const i = next++;
+      needs[i] = await needOf(stations[i]);
+    }
+  };
+  await Promise.all(Array.from({ length: Math.min(m.queryRunner?.isTransactionActive ? 1 : CHECKS_AT_ONCE, stations.length) }, worker));
   return needs;
 }
 

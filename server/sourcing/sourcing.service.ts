@@ -62,28 +62,29 @@ export class SourcingService {
   }
 
   async create(dto: SourcingPlanDto, userId: string) {
-    let impact: Impact | undefined;
+    // Read and judged before the transaction, so that the fit checks run as prepared statements (inside a
+    // transaction each would be planned afresh); the plan, its warning and the notices are written together.
+    const r = this.ds.manager;
+    const supplier = await ensureExists(r, Supplier, dto.supplierId, 'supplierId', 'supplier');
+    const drum = await ensureExists(r, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
+    const stationIds = dto.stationIds ?? (await r.find(Station, { select: { id: true } })).map((s) => s.id);
+    const found = await stationsByIds(r, stationIds);
+    if (found.length !== new Set(stationIds).size) throw fieldError('stationIds', 'names a station that does not exist');
+    const fields = {
+      slurryName: dto.slurryName.trim(),
+      supplierId: supplier.id,
+      drumTypeId: drum.id,
+      startDate: dto.startDate,
+      drumsPerMonth: dto.drumsPerMonth,
+      stationIds: [...new Set(stationIds)],
+      foams: dto.foams ?? false,
+      shearSensitive: dto.shearSensitive ?? false,
+      notes: dto.notes?.trim() || null,
+      createdById: userId,
+    };
+    const impact = await this.impactOf(r, fields);
     const id = await this.ds.transaction(async (m) => {
-      const supplier = await ensureExists(m, Supplier, dto.supplierId, 'supplierId', 'supplier');
-      const drum = await ensureExists(m, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
-      const stationIds = dto.stationIds ?? (await m.find(Station, { select: { id: true } })).map((s) => s.id);
-      const found = await stationsByIds(m, stationIds);
-      if (found.length !== new Set(stationIds).size) throw fieldError('stationIds', 'names a station that does not exist');
-      const plan = await m.save(
-        m.create(SourcingPlan, {
-          slurryName: dto.slurryName.trim(),
-          supplierId: supplier.id,
-          drumTypeId: drum.id,
-          startDate: dto.startDate,
-          drumsPerMonth: dto.drumsPerMonth,
-          stationIds: [...new Set(stationIds)],
-          foams: dto.foams ?? false,
-          shearSensitive: dto.shearSensitive ?? false,
-          notes: dto.notes?.trim() || null,
-          createdById: userId,
-        }),
-      );
-      impact = await this.impactOf(m, plan);
+      const plan = await m.save(m.create(SourcingPlan, fields));
       // A warning and the buyers' notices are written with the plan: all or nothing.
       if (impact.lacking.length) {
         const summary = `${plan.slurryName} from ${supplier.name} (${supplier.region}) from ${plan.startDate} arrives in ${drum.name}: ${impact.lacking.length} of ${impact.stations.length} station(s) need hardware.`;
