@@ -14,6 +14,7 @@ import { SignInCounters1764648000000 } from './1764648000000-sign-in-counters';
 import { LotAcceptance1764655200000 } from './1764655200000-lot-acceptance';
 import { UserTheme1764662400000 } from './1764662400000-user-theme';
 import { OfflineDockChecks1764666000000 } from './1764666000000-offline-dock-checks';
+import { StationChangeNotify1764846000000 } from './1764846000000-station-change-notify';
 
 export const MIGRATIONS = [
   CreateUsers1764612000000,
@@ -30,4 +31,5 @@ export const MIGRATIONS = [
   UserTheme1764662400000,
   OfflineDockChecks1764666000000,
   Iso7ThreadFamilies1764759600000,
+  StationChangeNotify1764846000000,
 ];

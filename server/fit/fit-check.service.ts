@@ -18,6 +18,12 @@ interface ResolvedDrum extends JudgedDrum {
   threadSpecIds: string[];
 }
 
+/** Which of a station's tube sets goes into the next drum: the first ready one by label. */
+export const NEXT_TUBE_SET_STATE = 'ready';
+export const NEXT_TUBE_SET_ORDER = { label: 'ASC' } as const;
+
+const stationOf = (row: Station): { station: StationInput; stationRow: Station } => ({ station: { tapping: row.tapping, agitation: row.agitation, flowLpm: row.flowLpm }, stationRow: row });
+
 /** A drum to check: a registered drum type by id, or one described by hand (already resolved to thread ids). */
 interface AdHocDrum {
   input: DrumInput;
@@ -61,9 +67,9 @@ export class FitCheckService {
   }
 
   /**
-   * The answer as UTF-8 JSON, from the kept answers when the question is about the registry alone (a
-   * drum type, with a slurry or a described station at most). With a registered station or tube set the
-   * answer depends on the station's rotation, which the kept answers do not follow, so those are always computed.
+   * The answer as UTF-8 JSON, from the kept answers when the question names a registered drum type (with a
+   * slurry, a registered or described station, a tube set). Stations and tube sets notify changes like the
+   * registry's tables (migration 1764846000000), so an answer naming them is kept too; a described drum is computed.
    */
   async answer(q: FitQuestion): Promise<{ json: Buffer; cache: 'hit' | 'miss' | 'bypass'; stored: boolean }> {
     return this.kept(this.keyOf(q), () => this.compute(q));
@@ -77,19 +83,23 @@ export class FitCheckService {
   }
 
   private keyOf(q: FitQuestion): string | null {
-    if (!q.drumTypeId || q.stationId || q.tubeSetId) return null;
-    return JSON.stringify([q.drumTypeId.toLowerCase(), q.slurryId?.toLowerCase() ?? null, q.tapping ?? null, q.agitation ?? null, q.flowLpm ?? null]);
+    if (!q.drumTypeId) return null;
+    const id = (v: string | undefined) => v?.toLowerCase() ?? null;
+    return JSON.stringify([id(q.drumTypeId), id(q.slurryId), q.tapping ?? null, q.agitation ?? null, q.flowLpm ?? null, id(q.stationId), id(q.tubeSetId)]);
   }
 
-  /** A registered drum type at a registered station with a slurry by its properties (sourcing plans, hold notices). */
-  async checkFor(m: EntityManager, args: { drumTypeId: string; stationId?: string | null; slurry?: SlurryFlags | null }): Promise<FitAnswer> {
+  /**
+   * A registered drum type at a registered station with a slurry by its properties (sourcing plans, hold notices).
+   * `at` hands over the station's row and its next tube set when the caller has read them for many stations.
+   */
+  async checkFor(m: EntityManager, args: { drumTypeId: string; stationId?: string | null; slurry?: SlurryFlags | null; at?: { station: Station; nextTubeSet: TubeSet | null } }): Promise<FitAnswer> {
     const compute = async () => {
-      const { station, stationRow } = await this.station(m, { stationId: args.stationId ?? undefined });
-      const tubeSet = await this.nextTubeSet(m, {}, stationRow);
+      const { station, stationRow } = args.at ? stationOf(args.at.station) : await this.station(m, { stationId: args.stationId ?? undefined });
+      const tubeSet = args.at ? args.at.nextTubeSet : await this.nextTubeSet(m, {}, stationRow);
       return this.run(m, { drum: { id: args.drumTypeId }, station, stationRow, slurry: args.slurry ?? null, tubeSet, fieldForDrum: 'drumTypeId' });
     };
     const s = args.slurry;
-    const key = args.stationId ? null : JSON.stringify(['flags', args.drumTypeId.toLowerCase(), s ? [s.name, s.foams, s.shearSensitive] : null]);
+    const key = args.stationId || args.at ? null : JSON.stringify(['flags', args.drumTypeId.toLowerCase(), s ? [s.name, s.foams, s.shearSensitive] : null]);
     if (!key || !this.answers) return compute();
     return JSON.parse((await this.kept(key, compute)).json.toString('utf8')) as FitAnswer;
   }
@@ -164,7 +174,7 @@ export class FitCheckService {
     if (dto.stationId) {
       const row = await m.findOneBy(Station, { id: dto.stationId });
       if (!row) throw fieldError('stationId', 'does not name an existing station');
-      return { station: { tapping: row.tapping, agitation: row.agitation, flowLpm: row.flowLpm }, stationRow: row };
+      return stationOf(row);
     }
     if (dto.tapping || dto.agitation || dto.flowLpm !== undefined) {
       if (!dto.tapping) throw fieldError('tapping', 'is required with agitation or flowLpm');
@@ -174,8 +184,8 @@ export class FitCheckService {
   }
 
   /**
-   * The tube set that would go into this drum: the one named, or the station's clean and ready set. The sets
-   * online and in standby are already in drums; one still being cleaned is not a candidate yet.
+   * The tube set that would go into this drum: the one named, or the station's clean and ready set (the first by
+   * label; `NEXT_TUBE_SET_ORDER`). The sets online and in standby are already in drums; one still being cleaned is not a candidate yet.
    */
   private async nextTubeSet(m: EntityManager, dto: FitQuestion, station: Station | null): Promise<TubeSet | null> {
     if (dto.tubeSetId) {
@@ -184,7 +194,7 @@ export class FitCheckService {
       return set;
     }
     if (!station) return null;
-    return m.findOne(TubeSet, { where: { stationId: station.id, state: 'ready' }, order: { label: 'ASC' } });
+    return m.findOne(TubeSet, { where: { stationId: station.id, state: NEXT_TUBE_SET_STATE }, order: NEXT_TUBE_SET_ORDER });
   }
 
   /**

@@ -3,7 +3,7 @@ import { DrumType, HardwareWarning, type ReceivingCheck, Slurry, Station } from 
 import type { FitCheckService } from '../fit/fit-check.service';
 import { notifyRoles, notifyUser } from '../notifications/notifications.service';
 import type { LotDecision, LotVerdict } from '../../shared/dock/verdict';
-import { needsForStation, orderLines, totalOrder, type StationNeed } from '../sourcing/hardware-needs';
+import { needsForStations, orderLines, totalOrder, type StationNeed } from '../sourcing/hardware-needs';
 
 /** "Lot X (2 drums, 55 gal steel…)": how notices and warnings name a lot. */
 export async function lotWords(m: EntityManager, r: ReceivingCheck): Promise<string> {
@@ -23,8 +23,7 @@ export async function raiseHoldNotices(m: EntityManager, fit: FitCheckService, r
   if (r.drumTypeId) {
     const stations = r.stationId ? await m.find(Station, { where: { id: r.stationId } }) : await m.find(Station, { order: { name: 'ASC' } });
     const slurry = slurryRow ? { name: slurryRow.name, foams: slurryRow.foams, shearSensitive: slurryRow.shearSensitive } : null;
-    for (const s of stations) needs.push(await needsForStation(m, fit, r.drumTypeId, s, slurry));
-    needs = needs.filter((n) => n.verdict !== 'fits' || n.order.length > 0);
+    needs = (await needsForStations(m, fit, r.drumTypeId, stations, slurry)).filter((n) => n.verdict !== 'fits' || n.order.length > 0);
   }
   const state = r.status === 'quarantined' ? 'in quarantine' : 'on hold';
   const hardware = r.verdict === 'no-fit' ? 'no fitting hardware' : r.verdict === 'caution' ? 'fits only with caution' : 'the hardware fits';

@@ -1,13 +1,16 @@
 import { In, type EntityManager } from 'typeorm';
+import { PairSearch, type HeadRow, type TubeRow } from '../../shared/fit/pair-search';
 import { describeThread } from '../../shared/fit/rules';
-import { judgeDrum, selectTubes, type PoolDrum, type PoolRow } from '../../shared/fit/search';
-import type { FitSettings } from '../../shared/fit/types';
+import { selectTubes, type PoolDrum } from '../../shared/fit/search';
 import { recommendDipTubeLength } from '../../shared/recommend-length';
 import type { OrderLine, StationNeed } from '../../shared/contract/records';
 import { Pairing, Station, TubeSet } from '../entities';
 
 export type { OrderLine, StationNeed };
-import type { FitCheckService } from '../fit/fit-check.service';
+import { NEXT_TUBE_SET_ORDER, NEXT_TUBE_SET_STATE, type FitCheckService } from '../fit/fit-check.service';
+
+/** Fit checks a plan runs at once, on the prepared-statement connections (server/db/prepared.ts: at least 2 per process). */
+const CHECKS_AT_ONCE = 2;
 
 /** Three sets per drum position: one online, one standby, one being cleaned [practice]. */
 export const SETS_PER_POSITION = 3;
@@ -19,12 +22,43 @@ interface SlurryFlags {
 }
 
 /**
- * What one station needs to run a drum type: nothing when an approved pair fits with the sets it has;
+ * What each station needs to run a drum type: nothing when an approved pair fits with the sets it has;
  * otherwise the registered parts that would fit (and the approval they need), or a specification to buy to.
+ * One fit check per station, through the fit service; the hypothetical pairs are searched once for all of them.
  */
-export async function needsForStation(m: EntityManager, fit: FitCheckService, drumTypeId: string, station: Station, slurry: SlurryFlags | null): Promise<StationNeed> {
-  const result = await fit.checkFor(m, { drumTypeId, stationId: station.id, slurry });
-  const sets = await m.find(TubeSet, { where: { stationId: station.id } });
+export async function needsForStations(m: EntityManager, fit: FitCheckService, drumTypeId: string, stations: Station[], slurry: SlurryFlags | null): Promise<StationNeed[]> {
+  // Every set of these stations in one read, in the order the fit service picks the next set by.
+  const sets = stations.length ? await m.find(TubeSet, { where: { stationId: In(stations.map((s) => s.id)) }, order: NEXT_TUBE_SET_ORDER }) : [];
+  const searches = new Map<string, Promise<PairSearch>>();
+  const needOf = async (station: Station): Promise<StationNeed> => {
+    const own = sets.filter((s) => s.stationId === station.id);
+    const nextTubeSet = own.find((s) => s.state === NEXT_TUBE_SET_STATE) ?? null;
+    const result = await fit.checkFor(m, { drumTypeId, slurry, at: { station, nextTubeSet } });
+    const search = () => {
+      // The same for every station of the plan unless the drum or the settings changed in between.
+      const key = JSON.stringify([result.drum, result.settings]);
+      if (!searches.has(key)) searches.set(key, pairSearch(m, result, slurry));
+      return searches.get(key)!;
+    };
+    return needAt(m, station, result, own, search);
+  };
+  // The checks are independent reads: a few at once (the database waits dominate), in station order. A
+  // transaction has one connection, so there one at a time.
+  const needs: StationNeed[] = new Array(stations.length);
+  let next = 0;
+  const worker = async () => {
+    while (next < stations.length) {
+      const i = next++;
+      needs[i] = await needOf(stations[i]);
+    }
+  };
+  await Promise.all(Array.from({ length: Math.min(m.queryRunner?.isTransactionActive ? 1 : CHECKS_AT_ONCE, stations.length) }, worker));
+  return needs;
+}
+
+type Checked = Awaited<ReturnType<FitCheckService['checkFor']>>;
+
+async function needAt(m: EntityManager, station: Station, result: Checked, sets: TubeSet[], search: () => Promise<PairSearch>): Promise<StationNeed> {
   const tubeOrder = (tubeId: string, partNumber: string): OrderLine[] => {
     const have = sets.filter((s) => s.dipTubeId === tubeId).length;
     const count = Math.max(0, SETS_PER_POSITION - have);
@@ -47,20 +81,9 @@ export async function needsForStation(m: EntityManager, fit: FitCheckService, dr
 
   // Nothing approved fits: the registered tubes the search picks for this drum with every head, judged and
   // ranked as if paired and approved, by the same search, rules and ranking as a fit check.
-  const { id, name, partNumber, ...input } = result.drum;
-  const settings = result.settings;
-  const pool = await hypotheticalPool(m, { insideDepthMm: input.insideDepthMm, threadCodes: input.openings.flatMap((o) => (o.threadCode ? [o.threadCode] : [])) }, settings);
-  const judged = judgeDrum({
-    drum: { id, name, partNumber, input },
-    pool,
-    station: { tapping: station.tapping, agitation: station.agitation, flowLpm: station.flowLpm },
-    stationRow: { id: station.id, name: station.name, connectorId: station.connectorId },
-    slurry,
-    tubeSet: null,
-    settings,
-  });
-  const pick = judged.candidates[0];
-  if (pick && pick.verdict !== 'no-fit') {
+  const { drum: input, settings } = result;
+  const pick = (await search()).best({ tapping: station.tapping, agitation: station.agitation, flowLpm: station.flowLpm }, { id: station.id, name: station.name, connectorId: station.connectorId });
+  if (pick) {
     const [tube, head] = [pick.dipTubePartNumber, pick.connectorPartNumber];
     const approved = await m.findOneBy(Pairing, { dipTubeId: pick.dipTubeId, connectorId: pick.connectorId, status: 'approved' });
     const order: OrderLine[] = [...tubeOrder(pick.dipTubeId, tube), ...headOrder(pick.connectorId, head)];
@@ -98,25 +121,29 @@ export async function needsForStation(m: EntityManager, fit: FitCheckService, dr
   };
 }
 
-type TubeRow = Pick<PoolRow, 'dip_tube_id' | 'tube_part' | 'thread_code' | 'length_mm' | 'tube_key' | 'channels'>;
-type HeadRow = Omit<PoolRow, keyof TubeRow | 'pairing_id' | 'status'>;
-
 const TUBES_SQL = `SELECT t.id AS dip_tube_id, t.part_number AS tube_part, th.code AS thread_code, t.length_mm, tk.code AS tube_key, t.channels
   FROM dip_tubes t JOIN thread_specs th ON th.id = t.thread_spec_id LEFT JOIN key_codes tk ON tk.id = t.key_code_id
   WHERE th.code = ANY($1::text[]) ORDER BY t.part_number COLLATE "C"`;
 const HEADS_SQL = `SELECT c.id AS connector_id, c.part_number AS head_part, ck.code AS head_key, c.feed_bore_mm, c.feed_nominal, c.return_bore_mm, c.return_nominal, c.return_path, c.suited_to
   FROM connectors c LEFT JOIN key_codes ck ON ck.id = c.key_code_id ORDER BY c.part_number COLLATE "C" LIMIT 500`;
 
-/** Every head with each tube `selectTubes` picks for the drum, as pool rows of approved pairings (hypothetical ones). */
-async function hypotheticalPool(m: EntityManager, drum: PoolDrum, settings: FitSettings): Promise<PoolRow[]> {
+/** Every head with each tube `selectTubes` picks for the drum, as approved pairings (hypothetical ones), ready to search. */
+async function pairSearch(m: EntityManager, result: Checked, slurry: SlurryFlags | null): Promise<PairSearch> {
+  const { id, name, partNumber, ...input } = result.drum;
+  const drum: PoolDrum = { insideDepthMm: input.insideDepthMm, threadCodes: input.openings.flatMap((o) => (o.threadCode ? [o.threadCode] : [])) };
   const tubes: TubeRow[] = drum.threadCodes.length ? await m.query(TUBES_SQL, [[...new Set(drum.threadCodes)]]) : [];
   const picked = selectTubes(
     tubes.map((t) => ({ id: t.dip_tube_id, threadCode: t.thread_code, lengthMm: t.length_mm })),
     drum,
-    settings,
+    result.settings,
   );
   const heads: HeadRow[] = picked.size ? await m.query(HEADS_SQL) : [];
-  return tubes.filter((t) => picked.has(t.dip_tube_id)).flatMap((t) => heads.map((h) => ({ ...t, ...h, pairing_id: `${t.dip_tube_id}+${h.connector_id}`, status: 'approved' as const })));
+  const ctx = { drum: { id, name, partNumber, input }, slurry, settings: result.settings };
+  return new PairSearch(
+    ctx,
+    tubes.filter((t) => picked.has(t.dip_tube_id)),
+    heads,
+  );
 }
 
 /** Adds up order lines across stations (the same part for two stations is one line). */

@@ -4,7 +4,7 @@ import { DrumType, HardwareWarning, SourcingPlan, Station, Supplier } from '../e
 import type { FitCheckService } from '../fit/fit-check.service';
 import { notifyRoles } from '../notifications/notifications.service';
 import { ensureExists } from '../registry/refs';
-import { needsForStation, orderLines, stationsByIds, totalOrder, type StationNeed } from './hardware-needs';
+import { needsForStations, orderLines, stationsByIds, totalOrder } from './hardware-needs';
 import type { SourcingPlanDto } from './sourcing.dto';
 
 export const planJson = (p: SourcingPlan) => ({
@@ -45,6 +45,8 @@ export const warningJson = (w: HardwareWarning) => ({
   createdAt: w.createdAt,
 });
 
+type Impact = Awaited<ReturnType<SourcingService['impactOf']>>;
+
 /** Buying from a new source: which stations the new drum would reach, whether they fit, what to order. */
 export class SourcingService {
   constructor(
@@ -55,33 +57,34 @@ export class SourcingService {
   private async impactOf(m: EntityManager, plan: Pick<SourcingPlan, 'drumTypeId' | 'stationIds' | 'slurryName' | 'foams' | 'shearSensitive'>) {
     const stations = await stationsByIds(m, plan.stationIds);
     const slurry = { name: plan.slurryName, foams: plan.foams, shearSensitive: plan.shearSensitive };
-    const needs: StationNeed[] = [];
-    for (const s of stations) needs.push(await needsForStation(m, this.fit, plan.drumTypeId, s, slurry));
+    const needs = await needsForStations(m, this.fit, plan.drumTypeId, stations, slurry);
     return { stations: needs, order: totalOrder(needs), lacking: needs.filter((n) => n.verdict !== 'fits' || n.order.length > 0) };
   }
 
   async create(dto: SourcingPlanDto, userId: string) {
+    // Read and judged before the transaction, so that the fit checks run as prepared statements (inside a
+    // transaction each would be planned afresh); the plan, its warning and the notices are written together.
+    const r = this.ds.manager;
+    const supplier = await ensureExists(r, Supplier, dto.supplierId, 'supplierId', 'supplier');
+    const drum = await ensureExists(r, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
+    const stationIds = dto.stationIds ?? (await r.find(Station, { select: { id: true } })).map((s) => s.id);
+    const found = await stationsByIds(r, stationIds);
+    if (found.length !== new Set(stationIds).size) throw fieldError('stationIds', 'names a station that does not exist');
+    const fields = {
+      slurryName: dto.slurryName.trim(),
+      supplierId: supplier.id,
+      drumTypeId: drum.id,
+      startDate: dto.startDate,
+      drumsPerMonth: dto.drumsPerMonth,
+      stationIds: [...new Set(stationIds)],
+      foams: dto.foams ?? false,
+      shearSensitive: dto.shearSensitive ?? false,
+      notes: dto.notes?.trim() || null,
+      createdById: userId,
+    };
+    const impact = await this.impactOf(r, fields);
     const id = await this.ds.transaction(async (m) => {
-      const supplier = await ensureExists(m, Supplier, dto.supplierId, 'supplierId', 'supplier');
-      const drum = await ensureExists(m, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
-      const stationIds = dto.stationIds ?? (await m.find(Station, { select: { id: true } })).map((s) => s.id);
-      const found = await stationsByIds(m, stationIds);
-      if (found.length !== new Set(stationIds).size) throw fieldError('stationIds', 'names a station that does not exist');
-      const plan = await m.save(
-        m.create(SourcingPlan, {
-          slurryName: dto.slurryName.trim(),
-          supplierId: supplier.id,
-          drumTypeId: drum.id,
-          startDate: dto.startDate,
-          drumsPerMonth: dto.drumsPerMonth,
-          stationIds: [...new Set(stationIds)],
-          foams: dto.foams ?? false,
-          shearSensitive: dto.shearSensitive ?? false,
-          notes: dto.notes?.trim() || null,
-          createdById: userId,
-        }),
-      );
-      const impact = await this.impactOf(m, plan);
+      const plan = await m.save(m.create(SourcingPlan, fields));
       // A warning and the buyers' notices are written with the plan: all or nothing.
       if (impact.lacking.length) {
         const summary = `${plan.slurryName} from ${supplier.name} (${supplier.region}) from ${plan.startDate} arrives in ${drum.name}: ${impact.lacking.length} of ${impact.stations.length} station(s) need hardware.`;
@@ -98,7 +101,8 @@ export class SourcingService {
       }
       return plan.id;
     });
-    return this.detail(id);
+    // The answer shows the impact just worked out, not worked out again.
+    return this.detail(id, impact);
   }
 
   async list() {
@@ -106,10 +110,10 @@ export class SourcingService {
     return { items: plans.map(planJson), total: plans.length, page: 1, pageSize: plans.length };
   }
 
-  async detail(id: string) {
+  async detail(id: string, known?: Impact) {
     const plan = await this.ds.getRepository(SourcingPlan).findOne({ where: { id }, relations: { supplier: true, drumType: true, createdBy: true } });
     if (!plan) throw notFound('Sourcing plan');
-    const impact = await this.impactOf(this.ds.manager, plan);
+    const impact = known ?? (await this.impactOf(this.ds.manager, plan));
     const warnings = await this.ds.getRepository(HardwareWarning).find({ where: { sourcingPlanId: id }, order: { createdAt: 'DESC' } });
     return { ...planJson(plan), impact: { stations: impact.stations, order: impact.order }, warnings: warnings.map(warningJson) };
   }

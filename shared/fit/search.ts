@@ -131,33 +131,41 @@ function summaryOf(verdict: Verdict, drum: JudgedDrum, best: FitCandidate | unde
   return `${what} does not fit any of the ${count} pairing(s) checked. Closest: ${pair}. ${firstProblem?.message ?? ''}`.trim();
 }
 
-/** Every candidate of the pool judged by every rule, ranked, and the answer a fit check gives. */
-export function judgeDrum({ drum, pool, station, stationRow, slurry, tubeSet, settings }: JudgeArgs) {
+/** What every candidate of one check shares: the drum, the station, the slurry, the tube set and the settings. */
+export type CandidateContext = Omit<JudgeArgs, 'pool'>;
+
+/** One pool row judged by every rule, as a candidate of the answer. */
+export function judgeCandidate(p: PoolRow, { drum, station, stationRow, slurry, tubeSet, settings }: CandidateContext): FitCandidate {
   const slurryInput: SlurryInput | null = slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null;
   const tubeSetInput: TubeSetInput | null = tubeSet ? { lastRinsedAt: tubeSet.lastRinsedAt, lastUsedAt: tubeSet.lastUsedAt } : null;
-  const candidates = rankCandidates(
-    pool.map((p) => ({
-      dipTubeId: p.dip_tube_id,
-      dipTubePartNumber: p.tube_part,
-      connectorId: p.connector_id,
-      connectorPartNumber: p.head_part,
-      dipTubeThreadCode: p.thread_code,
-      dipTubeLengthMm: p.length_mm,
-      pairingId: p.pairing_id,
-      pairingStatus: p.status,
-      installedAtStation: !!stationRow && stationRow.connectorId === p.connector_id,
-      ...evaluateCandidate({
-        drum: drum.input,
-        tube: tubeInputOf(p),
-        connector: connectorInputOf(p),
-        station,
-        slurry: slurryInput,
-        pairing: { status: p.status },
-        tubeSet: tubeSet && tubeSet.dipTubeId === p.dip_tube_id ? tubeSetInput : null,
-        settings,
-      }),
-    })),
-  );
+  return {
+    dipTubeId: p.dip_tube_id,
+    dipTubePartNumber: p.tube_part,
+    connectorId: p.connector_id,
+    connectorPartNumber: p.head_part,
+    dipTubeThreadCode: p.thread_code,
+    dipTubeLengthMm: p.length_mm,
+    pairingId: p.pairing_id,
+    pairingStatus: p.status,
+    installedAtStation: !!stationRow && stationRow.connectorId === p.connector_id,
+    ...evaluateCandidate({
+      drum: drum.input,
+      tube: tubeInputOf(p),
+      connector: connectorInputOf(p),
+      station,
+      slurry: slurryInput,
+      pairing: { status: p.status },
+      tubeSet: tubeSet && tubeSet.dipTubeId === p.dip_tube_id ? tubeSetInput : null,
+      settings,
+    }),
+  };
+}
+
+/** Every candidate of the pool judged by every rule, ranked, and the answer a fit check gives. */
+export function judgeDrum(args: JudgeArgs) {
+  const { drum, pool, station, stationRow, slurry, tubeSet, settings } = args;
+  const slurryInput: SlurryInput | null = slurry ? { foams: slurry.foams, shearSensitive: slurry.shearSensitive } : null;
+  const candidates = rankCandidates(pool.map((p) => judgeCandidate(p, args)));
   const verdict = drumVerdict(candidates);
   return {
     verdict,

@@ -5,6 +5,7 @@ import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { CHANGE_CHANNELS } from '../../migrations/1764637200000-change-notify';
+import { STATION_TABLES } from '../../migrations/1764846000000-station-change-notify';
 import { ChangeFeed } from '../../server/db/change-feed';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
 import { bearer, makeTestApp, tokenFor } from '../support/app';
@@ -79,12 +80,60 @@ describe('kept fit answers', () => {
     expect(second.body).toEqual((await ask(plain)).body);
   });
 
-  it('always computes an answer for a registered station, whose rinse rule depends on the clock', async () => {
-    const [{ id: stationId }] = await ds.query(`SELECT id FROM stations WHERE name = $1`, [demo.fittingStation]);
-    const a = await ask(app, { drumTypeId: drumId, stationId });
-    const b = await ask(app, { drumTypeId: drumId, stationId });
-    expect([a.status, b.status]).toEqual([200, 200]);
-    expect(b.headers['cache-status']).toBe('bungwise; fwd=bypass');
+  it('keeps an answer naming a registered station, and drops it when another process changes the station', async () => {
+    await until(
+      'the shared feed to listen',
+      async () => feed.isListening,
+      (v) => v,
+    );
+    const [{ id: stationId, tapping }] = await ds.query(`SELECT id, tapping FROM stations WHERE name = $1`, [demo.fittingStation]);
+    const atStation = { drumTypeId: drumId, stationId };
+    const first = await ask(app, atStation);
+    const second = await ask(app, atStation);
+    expect([first.status, second.status]).toEqual([200, 200]);
+    expect(second.headers['cache-status']).toBe('bungwise; hit');
+    expect(second.body).toEqual(first.body);
+    expect(second.body.station.tapping).toBe(tapping);
+    // Plain SQL, as another process would: only the database's notice can tell this process.
+    const other = tapping === 'two-opening' ? 'one-opening' : 'two-opening';
+    await ds.query(`UPDATE stations SET tapping = $2, version = version + 1 WHERE id = $1`, [stationId, other]);
+    onCleanup(() => ds.query(`UPDATE stations SET tapping = $2, version = version + 1 WHERE id = $1`, [stationId, tapping]));
+    const after = await until(
+      'the stations notice',
+      () => ask(app, atStation),
+      (r) => r.headers['cache-status'] !== 'bungwise; hit',
+    );
+    expect(after.body.station.tapping).toBe(other);
+    expect(after.body).toEqual((await ask(plain, atStation)).body);
+  });
+
+  it("drops a kept answer naming a station when another process changes the station's tube sets", async () => {
+    await until(
+      'the shared feed to listen',
+      async () => feed.isListening,
+      (v) => v,
+    );
+    // A station with a ready set: the set an answer names (the next one into a drum).
+    const [{ id: setId, station_id: stationId, state }] = await ds.query(`SELECT id, station_id, state FROM tube_sets ORDER BY label LIMIT 1`);
+    await ds.query(`UPDATE tube_sets SET state = 'ready' WHERE id = $1`, [setId]);
+    onCleanup(() => ds.query(`UPDATE tube_sets SET state = $2 WHERE id = $1`, [setId, state]));
+    const atStation = { drumTypeId: drumId, stationId };
+    await ask(app, atStation);
+    const kept = await ask(app, atStation);
+    expect(kept.headers['cache-status']).toBe('bungwise; hit');
+    const set = kept.body.tubeSet as { id: string; lastUsedAt: string | null };
+    expect(set).not.toBeNull();
+    // Used after its last rinse: the rinse rule now refuses it.
+    const [{ last_used_at: usedBefore }] = await ds.query(`SELECT last_used_at FROM tube_sets WHERE id = $1`, [set.id]);
+    await ds.query(`UPDATE tube_sets SET last_used_at = coalesce(last_rinsed_at, now()) + interval '1 hour', version = version + 1 WHERE id = $1`, [set.id]);
+    onCleanup(() => ds.query(`UPDATE tube_sets SET last_used_at = $2, version = version + 1 WHERE id = $1`, [set.id, usedBefore]));
+    const after = await until(
+      'the tube_sets notice',
+      () => ask(app, atStation),
+      (r) => r.headers['cache-status'] !== 'bungwise; hit',
+    );
+    expect(after.body.tubeSet.lastUsedAt).not.toBe(set.lastUsedAt);
+    expect(after.body).toEqual((await ask(plain, atStation)).body);
   });
 
   it('does not keep bad questions', async () => {
@@ -153,7 +202,7 @@ describe('kept fit answers', () => {
     expect((await ask(slowApp)).headers['cache-status']).toBe('bungwise; hit');
   });
 
-  it.each(CHANGE_CHANNELS.bungwise_registry)('drops kept answers on any statement on %s', async (table) => {
+  it.each([...CHANGE_CHANNELS.bungwise_registry, ...STATION_TABLES])('drops kept answers on any statement on %s', async (table) => {
     await until(
       'the shared feed to listen',
       async () => feed.isListening,
