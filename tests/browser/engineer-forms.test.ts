@@ -1,14 +1,7 @@
 import type { Page } from 'playwright-core';
-import { BrowserHarness, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, signInAs, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 
-const harness = new BrowserHarness();
-
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-afterEach(() => {
-  // Any console error in the page fails the test that caused it.
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
+const harness = useHarness(new BrowserHarness());
 
 // Invented part numbers, unique per run and viewport so the two viewports never collide.
 const RUN = Date.now().toString(36).toUpperCase();
