@@ -99,15 +99,12 @@ describe('bad input answers a 4xx naming the field, never a 500', () => {
   });
 
   it('bounds page and pageSize, and reads them in digits only', async () => {
+    await expectGetsRefused(['1e20', '100000000', '-0', '0x10'].map((page) => [`/api/suppliers?page=${page}`, 'page']));
     await expectGetsRefused([
-      ['/api/suppliers?page=1e20', 'page'],
       ['/api/suppliers?pageSize=1e20', 'pageSize'],
-      ['/api/suppliers?page=100000000', 'page'],
       ['/api/exports/suppliers?page=1e20', 'page'],
       ['/api/receiving-checks?page=99999999999999999999', 'page'],
       ['/api/audit?page=1e20', 'page', t.admin],
-      ['/api/suppliers?page=-0', 'page'],
-      ['/api/suppliers?page=0x10', 'page'],
     ]);
     const last = await get('/api/suppliers?page=100000&pageSize=200');
     expect(last.status).toBe(200);
@@ -115,11 +112,9 @@ describe('bad input answers a 4xx naming the field, never a 500', () => {
   });
 
   it('refuses a filter id that is not an id', async () => {
-    await expectGetsRefused([
-      ['/api/drum-types?supplierId=acme', 'supplierId'],
-      ['/api/slurries?supplierId=1%20OR%201%3D1', 'supplierId'],
-      ['/api/tube-sets?stationId=bay-3', 'stationId'],
-    ]);
+    expectRefused(await get('/api/drum-types?supplierId=acme'), 'supplierId');
+    expectRefused(await get('/api/slurries?supplierId=1%20OR%201%3D1'), 'supplierId');
+    expectRefused(await get('/api/tube-sets?stationId=bay-3'), 'stationId');
     expect((await get(`/api/drum-types?supplierId=${id.supplier}`)).status).toBe(200);
   });
 
@@ -140,11 +135,9 @@ describe('bad input answers a 4xx naming the field, never a 500', () => {
   });
 
   it('answers a malformed %-escape in the path with a 400', async () => {
-    await expectGetsRefused([
-      ['/api/suppliers/%E0%A4%A', 'path'],
-      ['/api/exports/%FF', 'path'],
-      ['/api/suppliers?q=%E0%A4%A', 'q'],
-    ]);
+    expectRefused(await get('/api/suppliers/%E0%A4%A'), 'path');
+    expectRefused(await get('/api/exports/%FF'), 'path');
+    expectRefused(await get('/api/suppliers?q=%E0%A4%A'), 'q');
     // Outside the API too: the web app's fallback route decodes its path the same way.
     const web = makeTestApp(ds, { webDir: process.env.BUNGWISE_WEB_DIR ?? path.resolve(__dirname, '..', '..', 'dist', 'web') });
     expectRefused(await request(web).get('/registry/%E0%A4%A'), 'path');
