@@ -8,6 +8,12 @@ import { resetDatabase } from '../support/db';
 
 const harness = useHarness(new BrowserHarness());
 
+/** Follows a navigation link and waits for the screen it leads to. */
+async function follow(page: Page, link: string, ready: string) {
+  await page.getByTestId(link).click();
+  await page.getByTestId(ready).waitFor();
+}
+
 async function go(page: Page, path: string, ready: string) {
   await page.goto(`${harness.baseUrl}${path}`);
   await page.getByTestId(ready).waitFor();
@@ -44,10 +50,8 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
   }, 60_000);
 
   it('a clerk checks a fitting lot (FITS) and a measured foreign drum (NO FIT), holds it, and an engineer is told', async () => {
-    const { context, page } = await harness.open(viewport);
-    await harness.signIn(page, 'clerk');
-    await page.getByTestId('nav-receive').click();
-    await page.getByTestId('dock-lot').waitFor();
+    const { context, page } = await harness.openAs(viewport, 'clerk');
+    await follow(page, 'nav-receive', 'dock-lot');
     await page.getByTestId('handling-caution').waitFor();
     await harness.shot(page, 'dock-form', viewport);
 
@@ -125,8 +129,7 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await context.close();
 
     // The engineer sees the notice, opens the lot from it, and it is marked read.
-    const eng = await harness.open(viewport);
-    await harness.signIn(eng.page, 'engineer');
+    const eng = await harness.openAs(viewport, 'engineer');
     // A bell with the count in the phone's top bar; "1 new" beside Notices in the wide side bar.
     await seen(eng.page, 'notices-unread', /^1( new)?$/);
     await eng.page.getByTestId('notices-indicator').click();
@@ -149,10 +152,8 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
   }, 180_000);
 
   it('a buyer plans slurry from a new region: each station, what to order, and the warning to follow', async () => {
-    const { context, page } = await harness.open(viewport);
-    await harness.signIn(page, 'buyer');
-    await page.getByTestId('nav-sourcing').click();
-    await page.getByTestId('plan-form').waitFor();
+    const { context, page } = await harness.openAs(viewport, 'buyer');
+    await follow(page, 'nav-sourcing', 'plan-form');
 
     // An empty plan is refused field by field, and a field's message goes as soon as it is filled.
     await page.getByTestId('plan-submit').click();
@@ -205,12 +206,10 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
   }, 180_000);
 
   it("a station's tube sets rotate: a dirty set is refused, rinsed, put into standby with a lot, changed out; the lot shows the set", async () => {
-    const { context, page } = await harness.open(viewport);
-    await harness.signIn(page, 'clerk');
+    const { context, page } = await harness.openAs(viewport, 'clerk');
     await recordFittingLot(page, rotationLot, '1');
 
-    await page.getByTestId('nav-stations').click();
-    await page.getByTestId('stations-list').waitFor();
+    await follow(page, 'nav-stations', 'stations-list');
     await seen(page, `station-${demo.fittingStation}-set-${demo.dirtyTubeSet}`, /Cleaning/);
     await page.getByTestId('handling-caution').waitFor();
     await harness.shot(page, 'stations-list', viewport);

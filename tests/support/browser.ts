@@ -101,6 +101,13 @@ export class BrowserHarness {
     return opened;
   }
 
+  /** `open`, with the demo person of a role signed in (`signIn`). */
+  async openAs(viewport: Viewport, role: string): Promise<{ context: BrowserContext; page: Page }> {
+    const opened = await this.open(viewport);
+    await this.signIn(opened.page, role);
+    return opened;
+  }
+
   /** Closes every context `open` gave, so a page left open cannot log errors into the next test. */
   async closePages(): Promise<void> {
     await Promise.all(this.opened.splice(0).map((c) => c.close().catch(() => undefined)));
