@@ -1,7 +1,7 @@
 import nodemailer from 'nodemailer';
 import type { Page } from 'playwright-core';
 import { MailSender } from '../../server/mail/sender';
-import { BrowserHarness, seen, signInAs, useHarness, VIEWPORTS } from '../support/browser';
+import { BrowserHarness, seen, signInAs, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 import { inbox, smtpUrl } from '../support/services';
 
 // The password journeys, end to end at both widths: changing one's own, the forced change of a temporary
@@ -29,6 +29,14 @@ async function api(method: string, path: string, body?: unknown, token = adminTo
 
 /** A person added by the admin: on a temporary password until they change it. */
 const addPerson = (email: string, name: string, temporaryPassword: string) => api('POST', '/users', { email, name, role: 'clerk', temporaryPassword });
+
+/** A fresh page on which a person signed in with a temporary password: the app has sent them to change it. */
+async function openOnTemporary(viewport: Viewport, email: string, temporaryPassword: string) {
+  const opened = await harness.open(viewport);
+  await signInAs(opened.page, harness.baseUrl, email, temporaryPassword);
+  await opened.page.getByTestId('password-screen').waitFor();
+  return opened;
+}
 
 /** Every button and text field on the page is at least 48 px high (and buttons as wide): gloved fingers. */
 async function expectBigTargets(page: Page) {
@@ -109,9 +117,7 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
   it('sends an admin-created person to the password change right after sign-in, and nowhere else until done', async () => {
     const email = `new.${tag}@bungwise.example`;
     await addPerson(email, `Rosa Ferreira ${tag}`, 'tundra-willow-38');
-    const { page } = await harness.open(viewport);
-    await signInAs(page, harness.baseUrl, email, 'tundra-willow-38');
-    await page.getByTestId('password-screen').waitFor();
+    const { page } = await openOnTemporary(viewport, email, 'tundra-willow-38');
     expect(new URL(page.url()).pathname).toBe('/password');
     // No navigation while forced; another address comes back here.
     expect(await page.getByTestId('nav-home').count()).toBe(0);
@@ -151,9 +157,7 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
     expect(await page.getByTestId(`user-reset-${email}-password`).count()).toBe(0);
     await seen(page, `user-row-${email}`, 'on a temporary password');
 
-    const person = await harness.open(viewport);
-    await signInAs(person.page, harness.baseUrl, email, temporary);
-    await person.page.getByTestId('password-screen').waitFor();
+    const person = await openOnTemporary(viewport, email, temporary);
     await fillChange(person.page, temporary, 'juniper-socket-plain');
     await person.page.getByTestId('home-clerk').waitFor();
   }, 60_000);
