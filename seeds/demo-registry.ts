@@ -28,6 +28,7 @@
 //   (cleaning) came off a drum after its last rinse, so it is dirty and fails the rinse rule.
 
 import type { EntityManager } from 'typeorm';
+import type { ConnectorRecord, DrumTypeRecord, OpeningRecord, StationRecord } from '../shared/contract';
 import { Connector, DipTube, DrumOpening, DrumType, KeyCode, Pairing, PairingReview, Slurry, Station, Supplier, ThreadSpec, TubeSet, type Region } from '../server/entities/registry';
 
 /** The scenario's "now": every date below is a fixed offset from it, so the data is deterministic. */
@@ -43,26 +44,15 @@ const IN = 25.4; // mm per inch
 
 type SupplierRef = 'cobaltMesa' | 'auenfeld' | 'kumoyama' | 'hsinpu' | 'seoripul' | 'ridgeback' | 'aarvik';
 
-const SUPPLIERS: Array<{ ref: SupplierRef; name: string; region: Region; contactEmail: string | null; notes: string }> = [
-  { ref: 'cobaltMesa', name: 'Cobalt Mesa Abrasives', region: 'NA', contactEmail: 'orders@cobaltmesa.example', notes: 'Oxide and tungsten slurries; ships in lined steel or HDPE 55 gal drums.' },
-  {
-    ref: 'auenfeld',
-    name: 'Auenfeld Fasswerk',
-    region: 'EU',
-    contactEmail: 'service@auenfeld.example',
-    notes: 'Lined steel drum maker; the G-2 dip tubes were bought for its drums. No slurry currently on contract.',
-  },
-  { ref: 'kumoyama', name: 'Kumoyama Fine Chemical', region: 'JP', contactEmail: 'export@kumoyama.example', notes: 'Ceria slurries in 200 L HDPE drums with buttress bungs.' },
-  { ref: 'hsinpu', name: 'Hsinpu Polishing Materials', region: 'TW', contactEmail: 'cs@hsinpu.example', notes: 'Copper barrier slurry in 20 L containers.' },
-  {
-    ref: 'seoripul',
-    name: 'Seoripul Surface Chemistry',
-    region: 'KR',
-    contactEmail: 'global@seoripul.example',
-    notes: 'Second-source STI slurry under qualification; drums arrive without site key collars.',
-  },
-  { ref: 'ridgeback', name: 'Ridgeback Fluid Hardware', region: 'NA', contactEmail: 'quotes@ridgeback.example', notes: 'Dip tubes and dispense heads for NPS and buttress bungs.' },
-  { ref: 'aarvik', name: 'Aarvik Fluid Components', region: 'EU', contactEmail: 'sales@aarvik.example', notes: 'Dip tubes and dispense heads for G-thread bungs.' },
+// Each supplier's contact address is a mailbox at its own made-up domain, <ref in lower case>.example.
+const SUPPLIERS: Array<{ ref: SupplierRef; name: string; region: Region; mailbox: string; notes: string }> = [
+  { ref: 'cobaltMesa', name: 'Cobalt Mesa Abrasives', region: 'NA', mailbox: 'orders', notes: 'Oxide and tungsten slurries; ships in lined steel or HDPE 55 gal drums.' },
+  { ref: 'auenfeld', name: 'Auenfeld Fasswerk', region: 'EU', mailbox: 'service', notes: 'Lined steel drum maker; the G-2 dip tubes were bought for its drums. No slurry currently on contract.' },
+  { ref: 'kumoyama', name: 'Kumoyama Fine Chemical', region: 'JP', mailbox: 'export', notes: 'Ceria slurries in 200 L HDPE drums with buttress bungs.' },
+  { ref: 'hsinpu', name: 'Hsinpu Polishing Materials', region: 'TW', mailbox: 'cs', notes: 'Copper barrier slurry in 20 L containers.' },
+  { ref: 'seoripul', name: 'Seoripul Surface Chemistry', region: 'KR', mailbox: 'global', notes: 'Second-source STI slurry under qualification; drums arrive without site key collars.' },
+  { ref: 'ridgeback', name: 'Ridgeback Fluid Hardware', region: 'NA', mailbox: 'quotes', notes: 'Dip tubes and dispense heads for NPS and buttress bungs.' },
+  { ref: 'aarvik', name: 'Aarvik Fluid Components', region: 'EU', mailbox: 'sales', notes: 'Dip tubes and dispense heads for G-thread bungs.' },
 ];
 
 // ---------------------------------------------------------------------------------------------------
@@ -81,127 +71,47 @@ const KEY_CODES: Array<{ ref: KeyRef; code: string; label: string; marking: stri
 
 type DrumRef = 'naSteel' | 'euSteel' | 'jpPlastic' | 'twSmall' | 'naPlasticTwin' | 'krSteel';
 
-interface DrumRow {
+/** Nominal capacity in litres, then outside height, inside depth and outside diameter in mm. */
+type DrumSize = [nominalCapacityL: number, outsideHeightMm: number, insideDepthMm: number, outsideDiameterMm: number];
+
+interface DrumRow extends Pick<DrumTypeRecord, 'name' | 'partNumber'> {
   ref: DrumRef;
   supplier: SupplierRef;
-  region: Region;
-  name: string;
-  partNumber: string;
-  nominalCapacityL: number;
   material: 'steel' | 'plastic';
-  unPackagingCode: string;
-  outsideHeightMm: number;
-  insideDepthMm: number;
-  outsideDiameterMm: number;
-  openings: Array<{ label: string; thread: string; boreMm: number; key: KeyRef | null; position: 'large' | 'small' | 'center' | 'other' }>;
+  size: DrumSize;
 }
 
+// Every demo drum is a tight head, made by its supplier in the supplier's region.
 const DRUMS: DrumRow[] = [
-  {
-    // 55 US gal steel drum: inside about 33.5 in (851 mm), 2 in + 3/4 in straight pipe thread bungs.
-    ref: 'naSteel',
-    supplier: 'cobaltMesa',
-    region: 'NA',
-    name: '55 gal lined steel tight head, 2 in + 3/4 in NPS',
-    partNumber: 'CMA-D208-SL',
-    nominalCapacityL: 208,
-    material: 'steel',
-    unPackagingCode: '1A1',
-    outsideHeightMm: 880,
-    insideDepthMm: 851,
-    outsideDiameterMm: 585,
-    openings: [
-      { label: 'large bung', thread: 'NPS-2', boreMm: 50, key: 'oxide', position: 'large' },
-      { label: 'small bung', thread: 'NPS-3/4', boreMm: 19, key: null, position: 'small' },
-    ],
-  },
-  {
-    // European steel drum, G 2 and G 3/4 closures to ISO 228-1.
-    ref: 'euSteel',
-    supplier: 'auenfeld',
-    region: 'EU',
-    name: '216.5 L lined steel tight head, G 2 + G 3/4',
-    partNumber: 'AFW-216-G2G34',
-    nominalCapacityL: 216.5,
-    material: 'steel',
-    unPackagingCode: '1A1',
-    outsideHeightMm: 874,
-    insideDepthMm: 845,
-    outsideDiameterMm: 584,
-    openings: [
-      { label: 'G 2 bung', thread: 'G-2', boreMm: 52, key: 'metal', position: 'large' },
-      { label: 'G 3/4 bung', thread: 'G-3/4', boreMm: 19, key: null, position: 'small' },
-    ],
-  },
-  {
-    // HDPE drum with buttress bungs; the head goes in the 56x4 bung, the stirrer in the 70x6 bung.
-    ref: 'jpPlastic',
-    supplier: 'kumoyama',
-    region: 'JP',
-    name: '200 L HDPE tight head, 56x4 + 70x6 buttress',
-    partNumber: 'KFC-P200-B5670',
-    nominalCapacityL: 200,
-    material: 'plastic',
-    unPackagingCode: '1H1',
-    outsideHeightMm: 935,
-    insideDepthMm: 880,
-    outsideDiameterMm: 581,
-    openings: [
-      { label: '56x4 bung', thread: 'BT-56x4', boreMm: 48, key: 'ceria', position: 'large' },
-      { label: '70x6 bung', thread: 'BT-70x6', boreMm: 60, key: null, position: 'small' },
-    ],
-  },
-  {
-    // Small round HDPE container with a single centre bung.
-    ref: 'twSmall',
-    supplier: 'hsinpu',
-    region: 'TW',
-    name: '20 L HDPE tight head, single 56x4 buttress',
-    partNumber: 'HPM-C20-B56',
-    nominalCapacityL: 20,
-    material: 'plastic',
-    unPackagingCode: '1H1',
-    outsideHeightMm: 400,
-    insideDepthMm: 380,
-    outsideDiameterMm: 290,
-    openings: [{ label: 'centre bung', thread: 'BT-56x4', boreMm: 48, key: 'metal', position: 'center' }],
-  },
-  {
-    // 55 gal HDPE drum with two 2 in bungs: the only NPS-2 drum that two-opening tapping can use.
-    ref: 'naPlasticTwin',
-    supplier: 'cobaltMesa',
-    region: 'NA',
-    name: '55 gal HDPE tight head, twin 2 in NPS',
-    partNumber: 'CMA-D208-PT',
-    nominalCapacityL: 208,
-    material: 'plastic',
-    unPackagingCode: '1H1',
-    outsideHeightMm: 915,
-    insideDepthMm: 870,
-    outsideDiameterMm: 584,
-    openings: [
-      { label: 'bung A', thread: 'NPS-2', boreMm: 50, key: 'metal', position: 'large' },
-      { label: 'bung B', thread: 'NPS-2', boreMm: 50, key: 'metal', position: 'large' },
-    ],
-  },
-  {
-    // Same G 2 + G 3/4 bungs as the European drum but shallower, and no key collars.
-    ref: 'krSteel',
-    supplier: 'seoripul',
-    region: 'KR',
-    name: '200 L steel tight head, G 2 + G 3/4',
-    partNumber: 'SSC-D200-G2',
-    nominalCapacityL: 200,
-    material: 'steel',
-    unPackagingCode: '1A1',
-    outsideHeightMm: 850,
-    insideDepthMm: 818,
-    outsideDiameterMm: 571,
-    openings: [
-      { label: 'G 2 bung', thread: 'G-2', boreMm: 52, key: null, position: 'large' },
-      { label: 'G 3/4 bung', thread: 'G-3/4', boreMm: 19, key: null, position: 'small' },
-    ],
-  },
+  // 55 US gal steel drum: inside about 33.5 in (851 mm), 2 in + 3/4 in straight pipe thread bungs.
+  { ref: 'naSteel', supplier: 'cobaltMesa', name: '55 gal lined steel tight head, 2 in + 3/4 in NPS', partNumber: 'CMA-D208-SL', material: 'steel', size: [208, 880, 851, 585] },
+  // European steel drum, G 2 and G 3/4 closures to ISO 228-1.
+  { ref: 'euSteel', supplier: 'auenfeld', name: '216.5 L lined steel tight head, G 2 + G 3/4', partNumber: 'AFW-216-G2G34', material: 'steel', size: [216.5, 874, 845, 584] },
+  // HDPE drum with buttress bungs; the head goes in the 56x4 bung, the stirrer in the 70x6 bung.
+  { ref: 'jpPlastic', supplier: 'kumoyama', name: '200 L HDPE tight head, 56x4 + 70x6 buttress', partNumber: 'KFC-P200-B5670', material: 'plastic', size: [200, 935, 880, 581] },
+  // Small round HDPE container with a single centre bung.
+  { ref: 'twSmall', supplier: 'hsinpu', name: '20 L HDPE tight head, single 56x4 buttress', partNumber: 'HPM-C20-B56', material: 'plastic', size: [20, 400, 380, 290] },
+  // 55 gal HDPE drum with two 2 in bungs: the only NPS-2 drum that two-opening tapping can use.
+  { ref: 'naPlasticTwin', supplier: 'cobaltMesa', name: '55 gal HDPE tight head, twin 2 in NPS', partNumber: 'CMA-D208-PT', material: 'plastic', size: [208, 915, 870, 584] },
+  // Same G 2 + G 3/4 bungs as the European drum but shallower, and no key collars.
+  { ref: 'krSteel', supplier: 'seoripul', name: '200 L steel tight head, G 2 + G 3/4', partNumber: 'SSC-D200-G2', material: 'steel', size: [200, 850, 818, 571] },
+];
+
+/** UN packaging code of a tight-head drum by material: drum (1), steel (A) or plastic (H), non-removable head (1). */
+const TIGHT_HEAD_UN_CODE: Record<DrumRow['material'], string> = { steel: '1A1', plastic: '1H1' };
+
+const OPENINGS: Array<{ drum: DrumRef; label: string; thread: string; boreMm: number; key: KeyRef | null; position: OpeningRecord['position'] }> = [
+  { drum: 'naSteel', label: 'large bung', thread: 'NPS-2', boreMm: 50, key: 'oxide', position: 'large' },
+  { drum: 'naSteel', label: 'small bung', thread: 'NPS-3/4', boreMm: 19, key: null, position: 'small' },
+  { drum: 'euSteel', label: 'G 2 bung', thread: 'G-2', boreMm: 52, key: 'metal', position: 'large' },
+  { drum: 'euSteel', label: 'G 3/4 bung', thread: 'G-3/4', boreMm: 19, key: null, position: 'small' },
+  { drum: 'jpPlastic', label: '56x4 bung', thread: 'BT-56x4', boreMm: 48, key: 'ceria', position: 'large' },
+  { drum: 'jpPlastic', label: '70x6 bung', thread: 'BT-70x6', boreMm: 60, key: null, position: 'small' },
+  { drum: 'twSmall', label: 'centre bung', thread: 'BT-56x4', boreMm: 48, key: 'metal', position: 'center' },
+  { drum: 'naPlasticTwin', label: 'bung A', thread: 'NPS-2', boreMm: 50, key: 'metal', position: 'large' },
+  { drum: 'naPlasticTwin', label: 'bung B', thread: 'NPS-2', boreMm: 50, key: 'metal', position: 'large' },
+  { drum: 'krSteel', label: 'G 2 bung', thread: 'G-2', boreMm: 52, key: null, position: 'large' },
+  { drum: 'krSteel', label: 'G 3/4 bung', thread: 'G-3/4', boreMm: 19, key: null, position: 'small' },
 ];
 
 // ---------------------------------------------------------------------------------------------------
@@ -246,48 +156,32 @@ const TUBES: TubeRow[] = [
 ];
 
 // ---------------------------------------------------------------------------------------------------
-// Dispense heads. Bores from the nominal: 3/4 in = 19.05 mm, 5/8 in = 15.875 mm, 1/2 in = 12.7 mm.
+// Dispense heads. Every demo head feeds through 3/4 in; a bore is its nominal in mm (3/4 in = 19.05 mm,
+// 5/8 in = 15.875 mm, 1/2 in = 12.7 mm) unless the row gives a worn one.
 
 type HeadRef = 'combinedOxide' | 'split' | 'feedOnlyMetal' | 'combinedEu' | 'combinedCeria' | 'reducedReturn' | 'combinedUnkeyed' | 'legacyNarrow';
 
-interface HeadRow {
+const BORE_MM = { '3/4 in': 0.75 * IN, '5/8 in': 0.625 * IN, '1/2 in': 0.5 * IN, '3/8 in': 0.375 * IN } as const;
+type BoreNominal = keyof typeof BORE_MM;
+const HEAD_FEED: BoreNominal = '3/4 in';
+
+interface HeadRow extends Pick<ConnectorRecord, 'partNumber' | 'returnPath' | 'suitedTo' | 'wettedMaterials'> {
   ref: HeadRef;
-  partNumber: string;
   supplier: SupplierRef;
   key: KeyRef | null;
-  feedBoreMm: number;
-  feedNominal: string;
-  returnBoreMm: number | null;
-  returnNominal: string | null;
-  returnPath: 'none' | 'restricted' | 'open';
-  suitedTo: 'two-opening' | 'one-opening' | 'both';
-  wettedMaterials: string;
+  returnNominal: BoreNominal | null;
+  wornReturnBoreMm?: number;
 }
 
 const HEADS: HeadRow[] = [
   // Equal 3/4 + 3/4 in ports: return no faster than feed; fine in one opening.
-  {
-    ref: 'combinedOxide',
-    partNumber: 'RFH-DH-C1919-OX',
-    supplier: 'ridgeback',
-    key: 'oxide',
-    feedBoreMm: 0.75 * IN,
-    feedNominal: '3/4 in',
-    returnBoreMm: 0.75 * IN,
-    returnNominal: '3/4 in',
-    returnPath: 'open',
-    suitedTo: 'both',
-    wettedMaterials: 'PFA, PTFE, FFKM seals',
-  },
+  { ref: 'combinedOxide', partNumber: 'RFH-DH-C1919-OX', supplier: 'ridgeback', key: 'oxide', returnNominal: '3/4 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PTFE, FFKM seals' },
   // Feed 3/4 in with a separate 1/2 in return, built for two-opening tapping: (19.05/12.7)^2 = 2.25.
   {
     ref: 'split',
     partNumber: 'RFH-DH-S1913-CE',
     supplier: 'ridgeback',
     key: 'ceria',
-    feedBoreMm: 0.75 * IN,
-    feedNominal: '3/4 in',
-    returnBoreMm: 0.5 * IN,
     returnNominal: '1/2 in',
     returnPath: 'restricted',
     suitedTo: 'two-opening',
@@ -299,9 +193,6 @@ const HEADS: HeadRow[] = [
     partNumber: 'RFH-DH-F19-MT',
     supplier: 'ridgeback',
     key: 'metal',
-    feedBoreMm: 0.75 * IN,
-    feedNominal: '3/4 in',
-    returnBoreMm: null,
     returnNominal: null,
     returnPath: 'none',
     suitedTo: 'two-opening',
@@ -312,64 +203,23 @@ const HEADS: HeadRow[] = [
     partNumber: 'AFC-KH-1919-MT',
     supplier: 'aarvik',
     key: 'metal',
-    feedBoreMm: 0.75 * IN,
-    feedNominal: '3/4 in',
-    returnBoreMm: 0.75 * IN,
     returnNominal: '3/4 in',
     returnPath: 'open',
     suitedTo: 'one-opening',
     wettedMaterials: 'PVDF, PTFE, FFKM seals',
   },
-  {
-    ref: 'combinedCeria',
-    partNumber: 'RFH-DH-C1919-CE',
-    supplier: 'ridgeback',
-    key: 'ceria',
-    feedBoreMm: 0.75 * IN,
-    feedNominal: '3/4 in',
-    returnBoreMm: 0.75 * IN,
-    returnNominal: '3/4 in',
-    returnPath: 'open',
-    suitedTo: 'both',
-    wettedMaterials: 'PFA, PTFE, FFKM seals',
-  },
+  { ref: 'combinedCeria', partNumber: 'RFH-DH-C1919-CE', supplier: 'ridgeback', key: 'ceria', returnNominal: '3/4 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PTFE, FFKM seals' },
   // 3/4 in feed, 5/8 in return, open: (19.05/15.875)^2 = 1.44, a caution in one opening. Unkeyed.
-  {
-    ref: 'reducedReturn',
-    partNumber: 'AFC-KH-1916',
-    supplier: 'aarvik',
-    key: null,
-    feedBoreMm: 0.75 * IN,
-    feedNominal: '3/4 in',
-    returnBoreMm: 0.625 * IN,
-    returnNominal: '5/8 in',
-    returnPath: 'open',
-    suitedTo: 'both',
-    wettedMaterials: 'PFA, PVDF, FFKM seals',
-  },
-  {
-    ref: 'combinedUnkeyed',
-    partNumber: 'RFH-DH-C1919-U',
-    supplier: 'ridgeback',
-    key: null,
-    feedBoreMm: 0.75 * IN,
-    feedNominal: '3/4 in',
-    returnBoreMm: 0.75 * IN,
-    returnNominal: '3/4 in',
-    returnPath: 'open',
-    suitedTo: 'both',
-    wettedMaterials: 'PFA, PTFE, FFKM seals',
-  },
+  { ref: 'reducedReturn', partNumber: 'AFC-KH-1916', supplier: 'aarvik', key: null, returnNominal: '5/8 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PVDF, FFKM seals' },
+  { ref: 'combinedUnkeyed', partNumber: 'RFH-DH-C1919-U', supplier: 'ridgeback', key: null, returnNominal: '3/4 in', returnPath: 'open', suitedTo: 'both', wettedMaterials: 'PFA, PTFE, FFKM seals' },
   // Legacy head, 3/8 in return worn to 9.4 mm: (19.05/9.4)^2 = 4.1, above the site limit of 4.
   {
     ref: 'legacyNarrow',
     partNumber: 'RFH-DH-C1909-OX',
     supplier: 'ridgeback',
     key: 'oxide',
-    feedBoreMm: 0.75 * IN,
-    feedNominal: '3/4 in',
-    returnBoreMm: 9.4,
     returnNominal: '3/8 in',
+    wornReturnBoreMm: 9.4,
     returnPath: 'open',
     suitedTo: 'both',
     wettedMaterials: 'PFA, PTFE, Viton seals',
@@ -538,76 +388,34 @@ const SLURRIES: SlurryRow[] = [
 
 type Rinser = 'clerk' | 'engineer';
 
-interface StationRow {
-  name: string;
-  bay: string;
-  tapping: 'two-opening' | 'one-opening';
-  agitation: 'pump' | 'mechanical';
+interface StationRow extends Pick<StationRecord, 'name' | 'bay' | 'tapping' | 'agitation' | 'flowLpm'> {
   head: HeadRef;
-  flowLpm: number;
   /** The drum the station normally runs; its tube sets fit it. */
   usualDrum: DrumRef;
-  sets: Array<{ label: string; tube: TubeRef; state: 'online' | 'standby' | 'cleaning'; usedHoursAgo: number; rinsedHoursAgo: number; rinsedBy: Rinser }>;
 }
 
 const STATIONS: StationRow[] = [
-  {
-    name: 'Oxide CMP feed A',
-    bay: 'Subfab bay 2 west',
-    tapping: 'one-opening',
-    agitation: 'pump',
-    head: 'combinedOxide',
-    flowLpm: 20,
-    usualDrum: 'naSteel',
-    sets: [
-      { label: 'Set A', tube: 'n836', state: 'online', usedHoursAgo: 50, rinsedHoursAgo: 47, rinsedBy: 'clerk' },
-      { label: 'Set B', tube: 'n836', state: 'standby', usedHoursAgo: 122, rinsedHoursAgo: 118, rinsedBy: 'clerk' },
-      { label: 'Set C', tube: 'n841', state: 'cleaning', usedHoursAgo: 3, rinsedHoursAgo: 98, rinsedBy: 'clerk' },
-    ],
-  },
-  {
-    name: 'Tungsten CMP feed B',
-    bay: 'Subfab bay 3 east',
-    tapping: 'two-opening',
-    agitation: 'pump',
-    head: 'feedOnlyMetal',
-    flowLpm: 18,
-    usualDrum: 'naPlasticTwin',
-    sets: [
-      { label: 'Set A', tube: 'n855', state: 'online', usedHoursAgo: 30, rinsedHoursAgo: 27, rinsedBy: 'clerk' },
-      { label: 'Set B', tube: 'n855', state: 'standby', usedHoursAgo: 100, rinsedHoursAgo: 96, rinsedBy: 'engineer' },
-      { label: 'Set C', tube: 'n855', state: 'cleaning', usedHoursAgo: 2, rinsedHoursAgo: 76, rinsedBy: 'clerk' },
-    ],
-  },
-  {
-    name: 'Ceria STI feed C',
-    bay: 'Subfab bay 3 west',
-    tapping: 'one-opening',
-    agitation: 'mechanical',
-    head: 'split',
-    flowLpm: 12,
-    usualDrum: 'jpPlastic',
-    sets: [
-      { label: 'Set A', tube: 'b56x865', state: 'online', usedHoursAgo: 70, rinsedHoursAgo: 66, rinsedBy: 'engineer' },
-      { label: 'Set B', tube: 'b56x865', state: 'standby', usedHoursAgo: 150, rinsedHoursAgo: 146, rinsedBy: 'clerk' },
-      { label: 'Set C', tube: 'b56x865', state: 'cleaning', usedHoursAgo: 5, rinsedHoursAgo: 140, rinsedBy: 'clerk' },
-    ],
-  },
-  {
-    name: 'Cu barrier feed D',
-    bay: 'Subfab bay 4',
-    tapping: 'one-opening',
-    agitation: 'pump',
-    head: 'reducedReturn',
-    flowLpm: 8,
-    usualDrum: 'twSmall',
-    sets: [
-      { label: 'Set A', tube: 'b56x368', state: 'online', usedHoursAgo: 20, rinsedHoursAgo: 18, rinsedBy: 'clerk' },
-      { label: 'Set B', tube: 'b56x372', state: 'standby', usedHoursAgo: 44, rinsedHoursAgo: 42, rinsedBy: 'clerk' },
-      { label: 'Set C', tube: 'b56x368', state: 'cleaning', usedHoursAgo: 1, rinsedHoursAgo: 26, rinsedBy: 'clerk' },
-    ],
-  },
+  { name: 'Oxide CMP feed A', bay: 'Subfab bay 2 west', tapping: 'one-opening', agitation: 'pump', head: 'combinedOxide', flowLpm: 20, usualDrum: 'naSteel' },
+  { name: 'Tungsten CMP feed B', bay: 'Subfab bay 3 east', tapping: 'two-opening', agitation: 'pump', head: 'feedOnlyMetal', flowLpm: 18, usualDrum: 'naPlasticTwin' },
+  { name: 'Ceria STI feed C', bay: 'Subfab bay 3 west', tapping: 'one-opening', agitation: 'mechanical', head: 'split', flowLpm: 12, usualDrum: 'jpPlastic' },
+  { name: 'Cu barrier feed D', bay: 'Subfab bay 4', tapping: 'one-opening', agitation: 'pump', head: 'reducedReturn', flowLpm: 8, usualDrum: 'twSmall' },
 ];
+
+type SetRow = [tube: TubeRef, usedHoursAgo: number, rinsedHoursAgo: number, rinsedBy: Rinser];
+const SET_STATES = [
+  { label: 'Set A', state: 'online' },
+  { label: 'Set B', state: 'standby' },
+  { label: 'Set C', state: 'cleaning' },
+] as const;
+/** A station's three sets, in this order: Set A online, Set B standby, Set C cleaning. */
+const sets = (...rows: [SetRow, SetRow, SetRow]) => rows.map(([tube, usedHoursAgo, rinsedHoursAgo, rinsedBy], i) => ({ ...SET_STATES[i], tube, usedHoursAgo, rinsedHoursAgo, rinsedBy }));
+
+const TUBE_SETS: Record<string, ReturnType<typeof sets>> = {
+  'Oxide CMP feed A': sets(['n836', 50, 47, 'clerk'], ['n836', 122, 118, 'clerk'], ['n841', 3, 98, 'clerk']),
+  'Tungsten CMP feed B': sets(['n855', 30, 27, 'clerk'], ['n855', 100, 96, 'engineer'], ['n855', 2, 76, 'clerk']),
+  'Ceria STI feed C': sets(['b56x865', 70, 66, 'engineer'], ['b56x865', 150, 146, 'clerk'], ['b56x865', 5, 140, 'clerk']),
+  'Cu barrier feed D': sets(['b56x368', 20, 18, 'clerk'], ['b56x372', 44, 42, 'clerk'], ['b56x368', 1, 26, 'clerk']),
+};
 
 // ---------------------------------------------------------------------------------------------------
 
@@ -692,7 +500,8 @@ export async function seedDemoRegistry(m: EntityManager, people: { engineerId: s
 
   const suppliers = new Map<SupplierRef, Supplier>();
   for (const s of SUPPLIERS) {
-    suppliers.set(s.ref, await m.save(m.create(Supplier, { name: s.name, region: s.region, contactEmail: s.contactEmail, notes: s.notes })));
+    const contactEmail = `${s.mailbox}@${s.ref.toLowerCase()}.example`;
+    suppliers.set(s.ref, await m.save(m.create(Supplier, { name: s.name, region: s.region, contactEmail, notes: s.notes })));
   }
   const supplierId = (ref: SupplierRef): string => suppliers.get(ref)!.id;
 
@@ -702,73 +511,42 @@ export async function seedDemoRegistry(m: EntityManager, people: { engineerId: s
   }
   const keyId = (ref: KeyRef | null): string | null => (ref === null ? null : keys.get(ref)!);
 
+  const regionOf = new Map(SUPPLIERS.map((s) => [s.ref, s.region] as const));
   const drums = new Map<DrumRef, string>();
-  for (const d of DRUMS) {
+  for (const { ref, supplier, size, ...d } of DRUMS) {
+    const [nominalCapacityL, outsideHeightMm, insideDepthMm, outsideDiameterMm] = size;
     const drum = await m.save(
       m.create(DrumType, {
-        supplierId: supplierId(d.supplier),
-        region: d.region,
-        name: d.name,
-        partNumber: d.partNumber,
-        nominalCapacityL: d.nominalCapacityL,
-        material: d.material,
+        ...d,
+        supplierId: supplierId(supplier),
+        region: regionOf.get(supplier)!,
         head: 'tight',
-        unPackagingCode: d.unPackagingCode,
-        outsideHeightMm: d.outsideHeightMm,
-        insideDepthMm: d.insideDepthMm,
-        outsideDiameterMm: d.outsideDiameterMm,
+        unPackagingCode: TIGHT_HEAD_UN_CODE[d.material],
+        nominalCapacityL,
+        outsideHeightMm,
+        insideDepthMm,
+        outsideDiameterMm,
       }),
     );
-    drums.set(d.ref, drum.id);
-    for (const o of d.openings) {
-      await m.save(
-        m.create(DrumOpening, {
-          drumTypeId: drum.id,
-          label: o.label,
-          threadSpecId: await thread(o.thread),
-          boreMm: o.boreMm,
-          keyCodeId: keyId(o.key),
-          position: o.position,
-        }),
-      );
+    drums.set(ref, drum.id);
+    for (const { drum: _drum, thread: code, key, ...o } of OPENINGS.filter((o) => o.drum === ref)) {
+      await m.save(m.create(DrumOpening, { ...o, drumTypeId: drum.id, threadSpecId: await thread(code), keyCodeId: keyId(key) }));
     }
   }
 
   const tubes = new Map<TubeRef, string>();
-  for (const t of TUBES) {
-    const tube = await m.save(
-      m.create(DipTube, {
-        partNumber: t.partNumber,
-        supplierId: supplierId(t.supplier),
-        threadSpecId: await thread(t.thread),
-        lengthMm: t.lengthMm,
-        boreMm: t.boreMm,
-        odMm: t.odMm,
-        material: t.material,
-        keyCodeId: keyId(t.key),
-        channels: t.channels,
-      }),
-    );
-    tubes.set(t.ref, tube.id);
+  for (const { ref, supplier, thread: code, key, ...t } of TUBES) {
+    const tube = await m.save(m.create(DipTube, { ...t, supplierId: supplierId(supplier), threadSpecId: await thread(code), keyCodeId: keyId(key) }));
+    tubes.set(ref, tube.id);
   }
 
   const heads = new Map<HeadRef, string>();
-  for (const h of HEADS) {
+  for (const { ref, supplier, key, returnNominal, wornReturnBoreMm, ...h } of HEADS) {
+    const returnBoreMm = wornReturnBoreMm ?? (returnNominal === null ? null : BORE_MM[returnNominal]);
     const head = await m.save(
-      m.create(Connector, {
-        partNumber: h.partNumber,
-        supplierId: supplierId(h.supplier),
-        keyCodeId: keyId(h.key),
-        feedBoreMm: h.feedBoreMm,
-        feedNominal: h.feedNominal,
-        returnBoreMm: h.returnBoreMm,
-        returnNominal: h.returnNominal,
-        returnPath: h.returnPath,
-        suitedTo: h.suitedTo,
-        wettedMaterials: h.wettedMaterials,
-      }),
+      m.create(Connector, { ...h, supplierId: supplierId(supplier), keyCodeId: keyId(key), feedBoreMm: BORE_MM[HEAD_FEED], feedNominal: HEAD_FEED, returnBoreMm, returnNominal }),
     );
-    heads.set(h.ref, head.id);
+    heads.set(ref, head.id);
   }
 
   for (const p of PAIRINGS) {
@@ -796,39 +574,14 @@ export async function seedDemoRegistry(m: EntityManager, people: { engineerId: s
     }
   }
 
-  const regionOf = new Map(SUPPLIERS.map((s) => [s.ref, s.region] as const));
-  for (const s of SLURRIES) {
-    await m.save(
-      m.create(Slurry, {
-        name: s.name,
-        supplierId: supplierId(s.supplier),
-        region: regionOf.get(s.supplier)!,
-        drumTypeId: drums.get(s.drum)!,
-        foams: s.foams,
-        shearSensitive: s.shearSensitive,
-        solidsWtPct: s.solidsWtPct,
-        shelfLifeDays: s.shelfLifeDays,
-        minRemainingDays: s.minRemainingDays,
-        storageMinC: s.storageMinC,
-        storageMaxC: s.storageMaxC,
-        certificateRequired: s.certificateRequired,
-      }),
-    );
+  for (const { ref: _ref, supplier, drum, ...s } of SLURRIES) {
+    await m.save(m.create(Slurry, { ...s, supplierId: supplierId(supplier), region: regionOf.get(supplier)!, drumTypeId: drums.get(drum)! }));
   }
 
   const rinserId = (r: Rinser): string => (r === 'clerk' ? people.clerkId : people.engineerId);
-  for (const st of STATIONS) {
-    const station = await m.save(
-      m.create(Station, {
-        name: st.name,
-        bay: st.bay,
-        tapping: st.tapping,
-        agitation: st.agitation,
-        connectorId: heads.get(st.head)!,
-        flowLpm: st.flowLpm,
-      }),
-    );
-    for (const set of st.sets) {
+  for (const { head, usualDrum: _usualDrum, ...st } of STATIONS) {
+    const station = await m.save(m.create(Station, { ...st, connectorId: heads.get(head)! }));
+    for (const set of TUBE_SETS[st.name]) {
       await m.save(
         m.create(TubeSet, {
           stationId: station.id,

@@ -88,30 +88,19 @@ export function checkTemperature(input: LotAcceptanceInput): Check {
         message: 'The temperature indicator shows the lot froze: frozen slurry flocculates and does not recover on thawing. Keep the drums apart, unopened.',
       };
     case 'tripped':
-      return {
-        rule: 'temperature',
-        outcome: 'fail',
-        action: 'hold',
-        release: 'engineer',
-        releasedBy: ENGINEER_ROLES,
-        headline: 'the temperature indicator tripped',
-        message: `The temperature indicator tripped: the lot left${within} in transit, so an engineer must check it before use.`,
-      };
+      return engineerHold('the temperature indicator tripped', `The temperature indicator tripped: the lot left${within} in transit, so an engineer must check it before use.`);
     case 'intact':
       return { rule: 'temperature', outcome: 'pass', message: `The temperature indicator is intact: the lot stayed within${within}.` };
     case 'not-fitted':
       // Many lots ship without one; its absence is said, not held [practice].
       return { rule: 'temperature', outcome: 'pass', message: `No temperature indicator was fitted; look for frost or settled, separated slurry before use${range ? ` (storage ${range})` : ''}.` };
   }
-  return {
-    rule: 'temperature',
-    outcome: 'fail',
-    action: 'hold',
-    release: 'engineer',
-    releasedBy: ENGINEER_ROLES,
-    headline: 'the temperature indicator reading is not known',
-    message: 'The temperature indicator reading is not one Bungwise knows, so an engineer must check the lot.',
-  };
+  return engineerHold('the temperature indicator reading is not known', 'The temperature indicator reading is not one Bungwise knows, so an engineer must check the lot.');
+}
+
+/** A temperature reading that holds the lot until an engineer has looked at it. */
+function engineerHold(headline: string, message: string): Check {
+  return { rule: 'temperature', outcome: 'fail', action: 'hold', release: 'engineer', releasedBy: ENGINEER_ROLES, headline, message };
 }
 
 /** A slurry that needs its certificate of analysis at the dock is held until the certificate is attached [practice]. */

@@ -64,6 +64,17 @@ function plainText(body: string): DrumLabelResult {
   return { ok: true, kind: 'text', gtin: null, batch: trimmed, productionDate: null, expiryDate: null, serial: null };
 }
 
+/** The dated elements and the label field each fills: production date (11) and expiry date (17). */
+const DATE_FIELDS = [
+  ['11', 'productionDate'],
+  ['17', 'expiryDate'],
+] as const;
+/** The variable-length text elements and the label field each fills: batch or lot (10) and serial (21). */
+const TEXT_FIELDS = [
+  ['10', 'batch'],
+  ['21', 'serial'],
+] as const;
+
 const NAMES: Record<Element['ai'], string> = {
   '01': 'GTIN (01)',
   '10': 'batch or lot (10)',
@@ -88,20 +99,14 @@ function fromElements(elements: Element[], today: Date): DrumLabelResult {
     if (!hasValidCheckDigit(gtin)) return fail(`The ${NAMES['01']} ${gtin} fails its check digit: with these first 13 digits the last one would be ${gs1CheckDigit(gtin.slice(0, 13))}`);
     label.gtin = gtin;
   }
-  for (const [ai, key] of [
-    ['11', 'productionDate'],
-    ['17', 'expiryDate'],
-  ] as const) {
+  for (const [ai, key] of DATE_FIELDS) {
     const raw = seen.get(ai);
     if (raw === undefined) continue;
     const date = parseGs1Date(raw, today);
     if (!date.ok) return fail(`The ${NAMES[ai]} is not a real date: ${date.error}`);
     label[key] = date.iso;
   }
-  for (const [ai, key] of [
-    ['10', 'batch'],
-    ['21', 'serial'],
-  ] as const) {
+  for (const [ai, key] of TEXT_FIELDS) {
     const value = seen.get(ai);
     if (value === undefined) continue;
     const problem = variableProblem(NAMES[ai], value);

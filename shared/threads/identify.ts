@@ -149,6 +149,12 @@ export function identifyThread(input: ThreadMeasurement, table: readonly ThreadS
   return { matches, ambiguous, advice };
 }
 
+/** For each value, the matches that have it: "11.5 for 2 in NPS or 2 in NPT, 11 for G 2". */
+function whichHas<V>(values: Set<V>, of: (m: ThreadMatch) => V, say: (v: V) => string, matches: ThreadMatch[]): string {
+  const labelsWith = (v: V) => matches.filter((m) => of(m) === v).map((m) => m.nominalLabel);
+  return [...values].map((v) => `${say(v)} for ${labelsWith(v).join(' or ')}`).join(', ');
+}
+
 function adviceFor(input: ThreadMeasurement, matches: ThreadMatch[], o: Required<IdentifyOptions>): string {
   if (matches.length === 0) {
     return (
@@ -180,28 +186,17 @@ function adviceFor(input: ThreadMeasurement, matches: ThreadMatch[], o: Required
   }
 
   if (tpis.size > 1) {
-    const byTpi = [...tpis]
-      .map(
-        (tpi) =>
-          `${formatTpi(tpi)} for ${matches
-            .filter((m) => m.threadsPerInch === tpi)
-            .map((m) => m.nominalLabel)
-            .join(' or ')}`,
-      )
-      .join(', ');
-    steps.push(`Count threads per inch with a thread gauge: ${byTpi}.`);
+    steps.push(`Count threads per inch with a thread gauge: ${whichHas(tpis, (m) => m.threadsPerInch, formatTpi, matches)}.`);
   }
   if (flanks.size > 1) {
-    const byFlank = [...flanks]
-      .map(
-        (deg) =>
-          `${deg} degrees for ${matches
-            .filter((m) => m.flankAngleDeg === deg)
-            .map((m) => m.nominalLabel)
-            .join(' or ')}`,
-      )
-      .join(', ');
-    steps.push(`Check the flank angle with a thread gauge: ${byFlank}.`);
+    steps.push(
+      `Check the flank angle with a thread gauge: ${whichHas(
+        flanks,
+        (m) => m.flankAngleDeg,
+        (deg) => `${deg} degrees`,
+        matches,
+      )}.`,
+    );
   }
   if (forms.size > 1) {
     // 1:16 taper on diameter (ASME B1.20.1 for NPT, ISO 7-1 for R and Rc): 25 mm along changes it by about 1.6 mm.

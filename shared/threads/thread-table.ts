@@ -73,31 +73,25 @@ const ISO_228: Array<{ size: PipeSize; tpi: number; pitchMm: number; majorMm: nu
   { size: SIZE_2, tpi: 11, pitchMm: 2.309, majorMm: 59.614 },
 ];
 
-const NPT_ROWS: ThreadSpecRow[] = ASME_PIPE.map(({ size, odIn, tpi }): ThreadSpecRow => ({
-  code: `NPT-${size.codePart}`,
-  family: 'NPT',
-  nominalLabel: `${size.label} in NPT`,
-  majorDiameterMm: odIn * MM_PER_IN,
-  pitchMm: MM_PER_IN / tpi,
-  threadsPerInch: tpi,
-  flankAngleDeg: 60,
-  form: 'tapered',
-  standard: 'ASME B1.20.1',
-}));
+/** The ASME B1.20.1 pipe sizes in one family: NPT tapered, NPS straight. */
+const asmePipeRows = (family: 'NPT' | 'NPS', form: ThreadForm, standard: string): ThreadSpecRow[] =>
+  ASME_PIPE.map(({ size, odIn, tpi }): ThreadSpecRow => ({
+    code: `${family}-${size.codePart}`,
+    family,
+    nominalLabel: `${size.label} in ${family}`,
+    majorDiameterMm: odIn * MM_PER_IN,
+    pitchMm: MM_PER_IN / tpi,
+    threadsPerInch: tpi,
+    flankAngleDeg: 60,
+    form,
+    standard,
+  }));
+
+const NPT_ROWS = asmePipeRows('NPT', 'tapered', 'ASME B1.20.1');
 
 // Straight pipe threads share the NPT form, pitch and OD of the same nominal size [mem]: which is
 // exactly why NPS and NPT can only be told apart by checking for taper.
-const NPS_ROWS: ThreadSpecRow[] = ASME_PIPE.map(({ size, odIn, tpi }): ThreadSpecRow => ({
-  code: `NPS-${size.codePart}`,
-  family: 'NPS',
-  nominalLabel: `${size.label} in NPS`,
-  majorDiameterMm: odIn * MM_PER_IN,
-  pitchMm: MM_PER_IN / tpi,
-  threadsPerInch: tpi,
-  flankAngleDeg: 60,
-  form: 'parallel',
-  standard: 'ASME B1.20.1 (straight pipe thread)',
-}));
+const NPS_ROWS = asmePipeRows('NPS', 'parallel', 'ASME B1.20.1 (straight pipe thread)');
 
 const G_ROWS: ThreadSpecRow[] = ISO_228.map(({ size, tpi, pitchMm, majorMm }): ThreadSpecRow => ({
   code: `G-${size.codePart}`,

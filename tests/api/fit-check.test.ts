@@ -2,22 +2,12 @@ import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, idsOf, openTestApp, tokenFor } from '../support/app';
 
 let ds: DataSource;
 let app: Express;
 let clerk: string;
 const ids: Record<string, string> = {};
-
-async function idOf(resource: string, field: string, value: string): Promise<string> {
-  const res = await request(app)
-    .get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`)
-    .set(bearer(clerk));
-  const row = res.body.items.find((r: Record<string, string>) => r[field] === value);
-  if (!row) throw new Error(`${resource} ${value} not in the demo data`);
-  return row.id;
-}
 
 const check = (body: object) => request(app).post('/api/fit-checks').set(bearer(clerk)).send(body);
 type Rule = { rule: string; outcome: string; message: string; numbers?: Record<string, number> };
@@ -25,22 +15,14 @@ type Candidate = { dipTubePartNumber: string; connectorPartNumber: string; verdi
 const ruleOf = (c: Candidate, name: string) => c.rules.find((r) => r.rule === name);
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds);
+  ({ ds, app } = await openTestApp());
   clerk = await tokenFor(app, 'clerk@bungwise.example');
-  ids.fittingDrum = await idOf('drum-types', 'partNumber', demo.fittingDrum);
-  ids.foreignDrum = await idOf('drum-types', 'partNumber', demo.foreignDrum);
-  ids.fittingStation = await idOf('stations', 'name', demo.fittingStation);
-  ids.splitStation = await idOf('stations', 'name', demo.oneOpeningStationWithSplitHead);
-  ids.cautionStation = await idOf('stations', 'name', demo.cautionStation);
-  ids.foamingSlurry = await idOf('slurries', 'name', demo.foamingSlurry);
-  ids.foreignSlurry = await idOf('slurries', 'name', demo.foreignSlurry);
+  Object.assign(ids, await idsOf(app, clerk, 'drum-types', 'partNumber', { fittingDrum: demo.fittingDrum, foreignDrum: demo.foreignDrum }));
+  Object.assign(ids, await idsOf(app, clerk, 'stations', 'name', { fittingStation: demo.fittingStation, splitStation: demo.oneOpeningStationWithSplitHead, cautionStation: demo.cautionStation }));
+  Object.assign(ids, await idsOf(app, clerk, 'slurries', 'name', { foamingSlurry: demo.foamingSlurry, foreignSlurry: demo.foreignSlurry }));
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 describe('POST /api/fit-checks', () => {
   it('a drum the site is equipped for fits, naming the approved pairing, with handling cautions', async () => {

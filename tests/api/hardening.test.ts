@@ -4,8 +4,7 @@ import { parse } from 'csv-parse/sync';
 import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, makeTestApp, openTestApp, tokensFor } from '../support/app';
 import { testStorage } from '../support/services';
 
 // One regression test per defect found by attacking a running instance (issue 10, input hardening). Each
@@ -18,25 +17,25 @@ const t: Record<string, string> = {};
 const id: Record<string, string> = {};
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds, { storage: testStorage() });
-  for (const role of ['clerk', 'engineer', 'buyer', 'admin']) t[role] = await tokenFor(app, `${role}@bungwise.example`);
+  ({ ds, app } = await openTestApp({ storage: testStorage() }));
+  Object.assign(t, await tokensFor(app, ['clerk', 'engineer', 'buyer', 'admin']));
   id.supplier = (await request(app).get('/api/suppliers?pageSize=1').set(bearer(t.admin))).body.items[0].id;
   id.drumType = (await request(app).get('/api/drum-types?sort=insideDepthMm&order=desc&pageSize=1').set(bearer(t.admin))).body.items[0].id;
   const check = await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ lotNumber: 'HARD-1', drumCount: 1, drumTypeId: id.drumType });
   id.check = check.body.id;
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 const get = (path: string, token = t.clerk) => request(app).get(path).set(bearer(token));
-/** A 400 (or the given status) in the one error shape, naming the field. */
-function expectRefused(res: request.Response, field: string, status = 400): void {
-  expect({ status: res.status, fields: (res.body.error?.details ?? []).map((d: { field: string }) => d.field) }).toEqual({ status, fields: expect.arrayContaining([field]) });
+/** A 400 (or the given status) in the one error shape, naming the field; `what` names the request in a failure. */
+function expectRefused(res: request.Response, field: string, status = 400, what?: string): void {
+  expect({ what, status: res.status, fields: (res.body.error?.details ?? []).map((d: { field: string }) => d.field) }).toEqual({ what, status, fields: expect.arrayContaining([field]) });
   expect(typeof res.body.error.message).toBe('string');
+}
+/** Each GET refused with a 400 naming its field: `[path, field]`, or `[path, field, token]` for someone other than the clerk. */
+async function expectGetsRefused(cases: Array<[path: string, field: string, token?: string]>): Promise<void> {
+  for (const [path, field, token] of cases) expectRefused(await get(path, token), field, 400, path);
 }
 
 describe('a client-supplied key is never looked up in a plain object', () => {
@@ -56,20 +55,22 @@ describe('a client-supplied key is never looked up in a plain object', () => {
   });
 
   it('checks each list parameter against the values it takes, and refuses parameters a list does not take', async () => {
-    expectRefused(await get('/api/suppliers?region=Atlantis'), 'region');
-    expectRefused(await get('/api/drum-types?region=__proto__'), 'region');
-    expectRefused(await get('/api/pairings?status=pending'), 'status');
-    expectRefused(await get('/api/connectors?status=draft'), 'status');
-    expectRefused(await get('/api/tube-sets?status=broken'), 'status');
-    expectRefused(await get('/api/dip-tubes?thread=%3Bdrop'), 'thread');
-    expectRefused(await get('/api/thread-specs?thread=NPS-2'), 'thread');
-    expectRefused(await get('/api/dip-tubes?key=a%20b'), 'key');
-    expectRefused(await get('/api/suppliers?colour=red'), 'colour');
-    expectRefused(await get('/api/thread-specs?region=NA'), 'region');
-    expectRefused(await get('/api/suppliers?region=NA&region=EU'), 'region');
-    expectRefused(await get('/api/users?role=admin', t.admin), 'role');
-    expectRefused(await get('/api/notifications?unread=1'), 'unread');
-    expectRefused(await get('/api/sourcing-plans?status=open'), 'status');
+    await expectGetsRefused([
+      ['/api/suppliers?region=Atlantis', 'region'],
+      ['/api/drum-types?region=__proto__', 'region'],
+      ['/api/pairings?status=pending', 'status'],
+      ['/api/connectors?status=draft', 'status'],
+      ['/api/tube-sets?status=broken', 'status'],
+      ['/api/dip-tubes?thread=%3Bdrop', 'thread'],
+      ['/api/thread-specs?thread=NPS-2', 'thread'],
+      ['/api/dip-tubes?key=a%20b', 'key'],
+      ['/api/suppliers?colour=red', 'colour'],
+      ['/api/thread-specs?region=NA', 'region'],
+      ['/api/suppliers?region=NA&region=EU', 'region'],
+      ['/api/users?role=admin', 'role', t.admin],
+      ['/api/notifications?unread=1', 'unread'],
+      ['/api/sourcing-plans?status=open', 'status'],
+    ]);
     // What the client sends still works: a known value, and an empty one meaning "any".
     expect((await get('/api/thread-specs?thread=NPS&sort=code')).status).toBe(200);
     expect((await get('/api/drum-types?region=NA&thread=NPS-2&key=')).status).toBe(200);
@@ -79,10 +80,12 @@ describe('a client-supplied key is never looked up in a plain object', () => {
 
 describe('bad input answers a 4xx naming the field, never a 500', () => {
   it('refuses a NUL byte or another control character in query, path and body text', async () => {
-    expectRefused(await get('/api/suppliers?q=%00'), 'q');
-    expectRefused(await get('/api/receiving-checks?q=lot%00'), 'q');
-    expectRefused(await get('/api/audit?entity=%00', t.admin), 'entity');
-    expectRefused(await get('/api/tools/packaging-codes/1A1%00'), 'path');
+    await expectGetsRefused([
+      ['/api/suppliers?q=%00', 'q'],
+      ['/api/receiving-checks?q=lot%00', 'q'],
+      ['/api/audit?entity=%00', 'entity', t.admin],
+      ['/api/tools/packaging-codes/1A1%00', 'path'],
+    ]);
     const hold = await request(app).post(`/api/receiving-checks/${id.check}/hold`).set(bearer(t.clerk)).send({ reason: 'does not\u0000 fit' });
     expectRefused(hold, 'reason');
     const nested = await request(app)
@@ -96,14 +99,13 @@ describe('bad input answers a 4xx naming the field, never a 500', () => {
   });
 
   it('bounds page and pageSize, and reads them in digits only', async () => {
-    expectRefused(await get('/api/suppliers?page=1e20'), 'page');
-    expectRefused(await get('/api/suppliers?pageSize=1e20'), 'pageSize');
-    expectRefused(await get('/api/suppliers?page=100000000'), 'page');
-    expectRefused(await get('/api/exports/suppliers?page=1e20'), 'page');
-    expectRefused(await get('/api/receiving-checks?page=99999999999999999999'), 'page');
-    expectRefused(await get('/api/audit?page=1e20', t.admin), 'page');
-    expectRefused(await get('/api/suppliers?page=-0'), 'page');
-    expectRefused(await get('/api/suppliers?page=0x10'), 'page');
+    await expectGetsRefused(['1e20', '100000000', '-0', '0x10'].map((page) => [`/api/suppliers?page=${page}`, 'page']));
+    await expectGetsRefused([
+      ['/api/suppliers?pageSize=1e20', 'pageSize'],
+      ['/api/exports/suppliers?page=1e20', 'page'],
+      ['/api/receiving-checks?page=99999999999999999999', 'page'],
+      ['/api/audit?page=1e20', 'page', t.admin],
+    ]);
     const last = await get('/api/suppliers?page=100000&pageSize=200');
     expect(last.status).toBe(200);
     expect(last.body.items).toEqual([]);
@@ -117,10 +119,12 @@ describe('bad input answers a 4xx naming the field, never a 500', () => {
   });
 
   it('refuses dates that do not exist on the calendar', async () => {
-    expectRefused(await get('/api/receiving-checks?from=2024-02-30'), 'from');
-    expectRefused(await get('/api/receiving-checks?to=2023-02-29'), 'to');
-    expectRefused(await get('/api/audit?from=2024-02-30', t.admin), 'from');
-    expectRefused(await get('/api/audit?to=0000-01-01T00:00Z', t.admin), 'to');
+    await expectGetsRefused([
+      ['/api/receiving-checks?from=2024-02-30', 'from'],
+      ['/api/receiving-checks?to=2023-02-29', 'to'],
+      ['/api/audit?from=2024-02-30', 'from', t.admin],
+      ['/api/audit?to=0000-01-01T00:00Z', 'to', t.admin],
+    ]);
     expect((await get('/api/receiving-checks?from=2024-02-29')).status).toBe(200);
     expect((await get('/api/audit?from=2026-05-14T08:30:00%2B02:00', t.admin)).status).toBe(200);
     const plan = (startDate: string) =>

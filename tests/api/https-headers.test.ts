@@ -2,7 +2,7 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { trustProxyFromEnv } from '../../server/common/security-headers';
 import { makeTestApp } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { openResetDatabase } from '../support/db';
 
 // upgrade-insecure-requests (and the other HTTPS-only headers) only where the deployment is HTTPS: over
 // plain HTTP on an intranet address it made the browser fetch the app's scripts over HTTPS, and the
@@ -10,13 +10,10 @@ import { openTestDataSource, resetDatabase } from '../support/db';
 let ds: DataSource;
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
+  ds = await openResetDatabase();
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 const headersOf = async (app: ReturnType<typeof makeTestApp>, set: Record<string, string> = {}) => (await request(app).get('/api/health').set(set)).headers;
 

@@ -3,8 +3,7 @@ import iconv from 'iconv-lite';
 import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, makeTestApp, openTestApp, tokenFor } from '../support/app';
 import { AttachmentsService } from '../../server/attachments/attachments.service';
 import { storedKeys, testStorage, unreachableStorage } from '../support/services';
 import { TUBE_HEADER } from '../support/spec-sheets';
@@ -27,18 +26,14 @@ const tubeCount = async () => Number((await ds.query(`SELECT count(*) AS n FROM 
 const importCount = async () => Number((await ds.query(`SELECT count(*) AS n FROM imports`))[0].n);
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds, { storage: testStorage() });
+  ({ ds, app } = await openTestApp({ storage: testStorage() }));
   engineer = await tokenFor(app, 'engineer@bungwise.example');
   clerk = await tokenFor(app, 'clerk@bungwise.example');
   const suppliers = await request(app).get('/api/suppliers?region=NA').set(bearer(clerk));
   supplierName = suppliers.body.items[0].name;
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 const cleanFile = () =>
   [

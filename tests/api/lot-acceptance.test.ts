@@ -2,8 +2,7 @@ import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, idsOf, makeTestApp, openTestApp, setSiteTimeZone, tokensFor } from '../support/app';
 import { testStorage } from '../support/services';
 
 // Lot acceptance through POST /api/receiving-checks, on a fixed clock: the site's date is 20 Nov 2026 (UTC).
@@ -15,31 +14,16 @@ let app: Express;
 const t: Record<string, string> = {};
 const ids: Record<string, string> = {};
 
-async function idOf(resource: string, field: string, value: string): Promise<string> {
-  const res = await request(app)
-    .get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`)
-    .set(bearer(t.clerk));
-  return res.body.items.find((r: Record<string, string>) => r[field] === value).id;
-}
-
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds, { storage: testStorage(), clock: () => NOW });
-  for (const role of ['clerk', 'engineer', 'buyer']) t[role] = await tokenFor(app, `${role}@bungwise.example`);
-  const settings = await request(app).get('/api/settings').set(bearer(t.engineer));
-  await request(app).patch('/api/settings').set(bearer(t.engineer)).send({ version: settings.body.version, timeZone: 'UTC' }).expect(200);
-  ids.fittingDrum = await idOf('drum-types', 'partNumber', demo.fittingDrum);
-  ids.twinDrum = await idOf('drum-types', 'partNumber', demo.twinBungDrum);
-  ids.fittingStation = await idOf('stations', 'name', demo.fittingStation);
-  ids.twoOpeningStation = await idOf('stations', 'name', demo.twoOpeningStation);
-  ids.oxide = await idOf('slurries', 'name', demo.shelfLifeSlurry);
-  ids.tungsten = await idOf('slurries', 'name', demo.certificateSlurry);
+  ({ ds, app } = await openTestApp({ storage: testStorage(), clock: () => NOW }));
+  Object.assign(t, await tokensFor(app, ['clerk', 'engineer', 'buyer']));
+  await setSiteTimeZone(app, t.engineer, 'UTC');
+  Object.assign(ids, await idsOf(app, t.clerk, 'drum-types', 'partNumber', { fittingDrum: demo.fittingDrum, twinDrum: demo.twinBungDrum }));
+  Object.assign(ids, await idsOf(app, t.clerk, 'stations', 'name', { fittingStation: demo.fittingStation, twoOpeningStation: demo.twoOpeningStation }));
+  Object.assign(ids, await idsOf(app, t.clerk, 'slurries', 'name', { oxide: demo.shelfLifeSlurry, tungsten: demo.certificateSlurry }));
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 const check = (body: Record<string, unknown>, token = t.clerk) =>
   request(app)

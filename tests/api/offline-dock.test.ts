@@ -3,8 +3,7 @@ import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { provisionalCheck, type DockQuestion, type DockSnapshot } from '../../shared/dock/snapshot';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, openTestApp, setSiteTimeZone, tokensFor } from '../support/app';
 import { testStorage } from '../support/services';
 
 // The offline dock: the registry snapshot a phone keeps, the verdict it works out from it (compared here
@@ -17,18 +16,13 @@ const t: Record<string, string> = {};
 let snap: DockSnapshot;
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds, { storage: testStorage(), clock: () => NOW });
-  for (const role of ['clerk', 'engineer', 'buyer']) t[role] = await tokenFor(app, `${role}@bungwise.example`);
-  const settings = await request(app).get('/api/settings').set(bearer(t.engineer));
-  await request(app).patch('/api/settings').set(bearer(t.engineer)).send({ version: settings.body.version, timeZone: 'UTC' }).expect(200);
+  ({ ds, app } = await openTestApp({ storage: testStorage(), clock: () => NOW }));
+  Object.assign(t, await tokensFor(app, ['clerk', 'engineer', 'buyer']));
+  await setSiteTimeZone(app, t.engineer, 'UTC');
   snap = (await request(app).get('/api/dock-snapshot').set(bearer(t.clerk)).expect(200)).body;
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 /** What a verdict is made of, for comparing the phone's with the server's. */
 const shapeOfFit = (r: {

@@ -2,39 +2,24 @@ import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, idOf, idsOf, openTestApp, tokensFor } from '../support/app';
 
 let ds: DataSource;
 let app: Express;
 const t: Record<string, string> = {};
 const ids: Record<string, string> = {};
 
-async function idOf(resource: string, field: string, value: string): Promise<string> {
-  const res = await request(app)
-    .get(`/api/${resource}?q=${encodeURIComponent(value)}&pageSize=50`)
-    .set(bearer(t.clerk));
-  const row = res.body.items.find((r: Record<string, string>) => r[field] === value);
-  if (!row) throw new Error(`${resource} ${value} not in the demo data`);
-  return row.id;
-}
-
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds);
-  for (const role of ['clerk', 'engineer', 'engineer2', 'buyer', 'admin']) t[role] = await tokenFor(app, `${role}@bungwise.example`);
-  ids.fittingDrum = await idOf('drum-types', 'partNumber', demo.fittingDrum);
-  ids.foreignDrum = await idOf('drum-types', 'partNumber', demo.foreignDrum);
-  ids.fittingStation = await idOf('stations', 'name', demo.fittingStation);
-  ids.foreignSlurry = await idOf('slurries', 'name', demo.foreignSlurry);
+  ({ ds, app } = await openTestApp());
+  Object.assign(t, await tokensFor(app, ['clerk', 'engineer', 'engineer2', 'buyer', 'admin']));
+  Object.assign(ids, await idsOf(app, t.clerk, 'drum-types', 'partNumber', { fittingDrum: demo.fittingDrum, foreignDrum: demo.foreignDrum }));
+  Object.assign(ids, await idsOf(app, t.clerk, 'stations', 'name', { fittingStation: demo.fittingStation }));
+  Object.assign(ids, await idsOf(app, t.clerk, 'slurries', 'name', { foreignSlurry: demo.foreignSlurry }));
   const suppliers = await request(app).get('/api/suppliers?region=KR').set(bearer(t.clerk));
   ids.krSupplier = suppliers.body.items[0].id;
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 const notices = async (token: string) => (await request(app).get('/api/notifications').set(bearer(token))).body;
 
@@ -83,8 +68,8 @@ describe('dock checks', () => {
 
   it('a lot that fits with caution is recorded as checked and held by hand with a reason, which raises the same warning and notices', async () => {
     const before = (await notices(t.engineer)).unread;
-    const cautionStation = await idOf('stations', 'name', demo.cautionStation);
-    const drum = await idOf('drum-types', 'partNumber', 'HPM-C20-B56');
+    const cautionStation = await idOf(app, t.clerk, 'stations', 'name', demo.cautionStation);
+    const drum = await idOf(app, t.clerk, 'drum-types', 'partNumber', 'HPM-C20-B56');
     const check = await request(app).post('/api/receiving-checks').set(bearer(t.clerk)).send({ lotNumber: 'CU-0402', drumCount: 1, drumTypeId: drum, stationId: cautionStation });
     expect(check.body).toMatchObject({ verdict: 'caution', decision: 'caution', status: 'checked' });
     const held = await request(app).post(`/api/receiving-checks/${check.body.id}/hold`).set(bearer(t.clerk)).send({ reason: 'Return port too small for this flow' });

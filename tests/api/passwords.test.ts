@@ -6,8 +6,7 @@ import type { DataSource } from 'typeorm';
 import { OPEN_DURING_PASSWORD_CHANGE } from '../../server/auth/password-gate';
 import { POLICY } from '../../server/auth/policy';
 import { passwordProblem } from '../../shared/passwords';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, makeTestApp, openTestApp, tokenFor } from '../support/app';
 import { apiRoutes } from '../support/routes';
 
 let ds: DataSource;
@@ -20,15 +19,11 @@ beforeEach(async () => {
 });
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds);
+  ({ ds, app } = await openTestApp());
   admin = await tokenFor(app, 'admin@bungwise.example');
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 const changePassword = (token: string, currentPassword: unknown, newPassword: unknown, on = app) => request(on).post('/api/me/password').set(bearer(token)).send({ currentPassword, newPassword });
 const me = (token: string) => request(app).get('/api/me').set(bearer(token));

@@ -3,7 +3,7 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { DEFAULT_SIGN_IN_LIMITS } from '../../server/auth/sign-in-limits';
 import { makeTestApp } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { openResetDatabase } from '../support/db';
 import { ServerProcess } from '../support/server-process';
 
 // Failed sign-ins are counted in PostgreSQL: they must hold across server processes that share nothing
@@ -12,13 +12,10 @@ import { ServerProcess } from '../support/server-process';
 let ds: DataSource;
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
+  ds = await openResetDatabase();
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 beforeEach(async () => {
   await ds.query('DELETE FROM sign_in_counters');

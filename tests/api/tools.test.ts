@@ -1,23 +1,18 @@
 import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, openTestApp, tokenFor } from '../support/app';
 
 let ds: DataSource;
 let app: Express;
 let clerk: string;
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds);
+  ({ ds, app } = await openTestApp());
   clerk = await tokenFor(app, 'clerk@bungwise.example');
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 describe('POST /api/tools/thread-match', () => {
   const match = (body: object) => request(app).post('/api/tools/thread-match').set(bearer(clerk)).send(body);

@@ -1,23 +1,18 @@
 import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
-import { bearer, makeTestApp, tokenFor } from '../support/app';
-import { openTestDataSource, resetDatabase } from '../support/db';
+import { bearer, openTestApp, tokenFor } from '../support/app';
 
 let ds: DataSource;
 let app: Express;
 let admin: string;
 
 beforeAll(async () => {
-  ds = await openTestDataSource();
-  await resetDatabase(ds);
-  app = makeTestApp(ds);
+  ({ ds, app } = await openTestApp());
   admin = await tokenFor(app, 'admin@bungwise.example');
 });
 
-afterAll(async () => {
-  await ds.destroy();
-});
+afterAll(() => ds.destroy());
 
 describe('people, managed by admins', () => {
   it('lists the demo people: one per role and a second engineer', async () => {

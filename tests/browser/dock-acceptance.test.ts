@@ -1,21 +1,13 @@
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { addDays, localDate } from '../../shared/dates';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, pickRecord, seen, signInAs, type Viewport, VIEWPORTS } from '../support/browser';
+import { BrowserHarness, pickRecord, seen, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 
 // Lot acceptance at the dock, at a phone and a wide screen: an expired lot held, a frozen lot quarantined,
 // a lot without its certificate held, then released by attaching it. Dates are relative to the site's
 // today (the demo site keeps the server's zone), so the cases hold on any day.
 
-const harness = new BrowserHarness();
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-
-const contexts: BrowserContext[] = [];
-afterEach(async () => {
-  await Promise.all(contexts.splice(0).map((c) => c.close().catch(() => undefined)));
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
+const harness = useHarness(new BrowserHarness());
 
 const PDF = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n', 'latin1');
 
@@ -71,11 +63,9 @@ describe.each(VIEWPORTS)('lot acceptance at the dock at $name width ($width px)'
   const tag = viewport.name === 'phone' ? 'P' : 'W';
 
   it('an expired lot is held, a frozen lot quarantined, each saying why and who releases it', async () => {
-    const { context, page } = await harness.page(viewport);
-    contexts.push(context);
+    const { page } = await harness.open(viewport);
     const today = await siteToday();
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
+    await harness.signIn(page, 'clerk');
 
     // The form asks for the indicator: without it the field says so and nothing is recorded.
     await page.goto(`${harness.baseUrl}/receive`);
@@ -117,11 +107,9 @@ describe.each(VIEWPORTS)('lot acceptance at the dock at $name width ($width px)'
   }, 180_000);
 
   it('a lot without its certificate is held until it is attached from the bottom bar', async () => {
-    const { context, page } = await harness.page(viewport);
-    contexts.push(context);
+    const { page } = await harness.open(viewport);
     const today = await siteToday();
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
+    await harness.signIn(page, 'clerk');
     await recordLot(page, { number: `W-${tag}-COA`, slurry: demo.certificateSlurry, drum: demo.twinBungDrum, station: demo.twoOpeningStation, production: addDays(today, -10), indicator: 'intact' });
     await seen(page, 'lot-verdict-sentence', 'Hold until the certificate of analysis is attached: this slurry needs it at the dock.');
     await seen(page, 'verdict-word', 'FITS');

@@ -1,48 +1,17 @@
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, seen, signInAs, textOf, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, pickRecord, seen, textOf, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 import { resetDatabase } from '../support/db';
 
 // The operations journeys: a clerk at the dock, a buyer planning a new source, a station's tube-set rotation,
 // and the notices they raise. Lot numbers are invented and differ per viewport.
 
-const harness = new BrowserHarness();
+const harness = useHarness(new BrowserHarness());
 
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-
-// Every context a test opens is closed after it, even when it failed half-way, so a page left open cannot
-// log errors into the next test (the wide run resets the database under it).
-const contexts: BrowserContext[] = [];
-async function open(viewport: Viewport) {
-  const opened = await harness.page(viewport);
-  contexts.push(opened.context);
-  return opened;
-}
-
-afterEach(async () => {
-  await Promise.all(contexts.splice(0).map((c) => c.close().catch(() => undefined)));
-  // Any console error in the page fails the test that caused it.
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
-
-/** Searches a record picker (components/ui/record-picker) and takes the first match. */
-async function pick(page: Page, testID: string, search: string, opened = true) {
-  if (!opened) await page.getByTestId(`${testID}-change`).click();
-  await page.getByTestId(`${testID}-search`).fill(search);
-  const option = page
-    .getByTestId(new RegExp(`^${testID}-option-`))
-    .filter({ hasText: search })
-    .first();
-  await option.waitFor();
-  await option.click();
-  await page.getByTestId(`${testID}-selected`).waitFor();
-}
-
-/** Screens scroll inside the app, so a full-page shot shows one screenful: scroll the part to look at into view. */
-async function shotOf(page: Page, testID: string, name: string, viewport: Viewport) {
-  await page.getByTestId(testID).first().scrollIntoViewIfNeeded();
-  await harness.shot(page, name, viewport);
+/** Follows a navigation link and waits for the screen it leads to. */
+async function follow(page: Page, link: string, ready: string) {
+  await page.getByTestId(link).click();
+  await page.getByTestId(ready).waitFor();
 }
 
 async function go(page: Page, path: string, ready: string) {
@@ -56,8 +25,8 @@ async function recordFittingLot(page: Page, lot: string, drums: string) {
   await page.getByTestId('dock-lot').fill(lot);
   await page.getByTestId('dock-count').fill(drums);
   await page.getByTestId('dock-indicator-intact').click();
-  await pick(page, 'dock-drum', demo.fittingDrum);
-  await pick(page, 'dock-station', demo.fittingStation, false);
+  await pickRecord(page, 'dock-drum', demo.fittingDrum);
+  await pickRecord(page, 'dock-station', demo.fittingStation);
   await page.getByTestId('dock-submit').click();
   await page.getByTestId('verdict-word').waitFor();
 }
@@ -81,11 +50,8 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
   }, 60_000);
 
   it('a clerk checks a fitting lot (FITS) and a measured foreign drum (NO FIT), holds it, and an engineer is told', async () => {
-    const { context, page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
-    await page.getByTestId('nav-receive').click();
-    await page.getByTestId('dock-lot').waitFor();
+    const { context, page } = await harness.openAs(viewport, 'clerk');
+    await follow(page, 'nav-receive', 'dock-lot');
     await page.getByTestId('handling-caution').waitFor();
     await harness.shot(page, 'dock-form', viewport);
 
@@ -93,8 +59,8 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await page.getByTestId('dock-lot').fill(fitLot);
     await page.getByTestId('dock-count').fill('4');
     await page.getByTestId('dock-indicator-intact').click();
-    await pick(page, 'dock-drum', demo.fittingDrum);
-    await pick(page, 'dock-station', demo.fittingStation, false);
+    await pickRecord(page, 'dock-drum', demo.fittingDrum);
+    await pickRecord(page, 'dock-station', demo.fittingStation);
     await page.getByTestId('dock-submit').click();
     await seen(page, 'verdict-word', 'FITS');
     // The sentence first: what to use and where, in words.
@@ -110,7 +76,7 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     expect(await page.getByTestId('dock-hold').count()).toBe(0);
     await page.getByTestId('handling-caution').waitFor();
     await harness.shot(page, 'dock-fits', viewport);
-    await shotOf(page, 'drum-section', 'dock-fits-drawing', viewport);
+    await harness.shotOf(page, 'drum-section', 'dock-fits-drawing', viewport);
 
     // Foreign lot: no label to go by, so the bung is measured and the thread identified.
     await page.getByTestId('dock-new').click();
@@ -145,7 +111,7 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await openDetails(page, viewport);
     await seen(page, 'drum-section-tip', /bottoms out/);
     await harness.shot(page, 'dock-no-fit', viewport);
-    await shotOf(page, 'drum-section', 'dock-no-fit-drawing', viewport);
+    await harness.shotOf(page, 'drum-section', 'dock-no-fit-drawing', viewport);
 
     // History: both lots, filtered by verdict, each linking to its lot page.
     await page.getByTestId('dock-history-link').click();
@@ -163,9 +129,7 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await context.close();
 
     // The engineer sees the notice, opens the lot from it, and it is marked read.
-    const eng = await open(viewport);
-    await signInAs(eng.page, harness.baseUrl, 'engineer@bungwise.example');
-    await eng.page.getByTestId('home-engineer').waitFor();
+    const eng = await harness.openAs(viewport, 'engineer');
     // A bell with the count in the phone's top bar; "1 new" beside Notices in the wide side bar.
     await seen(eng.page, 'notices-unread', /^1( new)?$/);
     await eng.page.getByTestId('notices-indicator').click();
@@ -188,11 +152,8 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
   }, 180_000);
 
   it('a buyer plans slurry from a new region: each station, what to order, and the warning to follow', async () => {
-    const { context, page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, 'buyer@bungwise.example');
-    await page.getByTestId('home-buyer').waitFor();
-    await page.getByTestId('nav-sourcing').click();
-    await page.getByTestId('plan-form').waitFor();
+    const { context, page } = await harness.openAs(viewport, 'buyer');
+    await follow(page, 'nav-sourcing', 'plan-form');
 
     // An empty plan is refused field by field, and a field's message goes as soon as it is filled.
     await page.getByTestId('plan-submit').click();
@@ -200,8 +161,8 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await page.getByTestId('plan-slurry').fill(planName);
     await page.getByTestId('plan-slurry-error').waitFor({ state: 'detached' });
     await seen(page, 'plan-start-error', 'Enter the first delivery date');
-    await pick(page, 'plan-supplier', 'Seoripul');
-    await pick(page, 'plan-drum', demo.foreignDrum);
+    await pickRecord(page, 'plan-supplier', 'Seoripul');
+    await pickRecord(page, 'plan-drum', demo.foreignDrum);
     await page.getByTestId('plan-start').fill('2027-02-01');
     await page.getByTestId('plan-drums').fill('12');
     await seen(page, 'plan-sentence', new RegExp(`${planName} from .*\\(Korea\\) from 1 Feb 2027, 12 drums a month`));
@@ -216,7 +177,7 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await seen(page, `plan-station-${demo.fittingStation}`, 'NO FIT');
     await page.getByTestId('plan-warning-open').waitFor();
     await harness.shot(page, 'sourcing-impact', viewport);
-    await shotOf(page, 'plan-stations', 'sourcing-stations', viewport);
+    await harness.shotOf(page, 'plan-stations', 'sourcing-stations', viewport);
 
     // The warning: acknowledged, then resolved; the status filter follows it.
     await page.getByTestId('plan-warnings-link').click();
@@ -245,13 +206,10 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
   }, 180_000);
 
   it("a station's tube sets rotate: a dirty set is refused, rinsed, put into standby with a lot, changed out; the lot shows the set", async () => {
-    const { context, page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
+    const { context, page } = await harness.openAs(viewport, 'clerk');
     await recordFittingLot(page, rotationLot, '1');
 
-    await page.getByTestId('nav-stations').click();
-    await page.getByTestId('stations-list').waitFor();
+    await follow(page, 'nav-stations', 'stations-list');
     await seen(page, `station-${demo.fittingStation}-set-${demo.dirtyTubeSet}`, /Cleaning/);
     await page.getByTestId('handling-caution').waitFor();
     await harness.shot(page, 'stations-list', viewport);
@@ -295,8 +253,8 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     await seen(page, 'set-Set C-state', /Online/);
     await seen(page, 'change-outs', /Set C went online in lot/);
     await harness.shot(page, 'stations-board', viewport);
-    await shotOf(page, 'set-Set C', 'stations-sets', viewport);
-    await shotOf(page, 'change-outs', 'stations-logs', viewport);
+    await harness.shotOf(page, 'set-Set C', 'stations-sets', viewport);
+    await harness.shotOf(page, 'change-outs', 'stations-logs', viewport);
 
     // The lot's page lists the hardware that touched it.
     await page.getByTestId(`change-out-lot-${rotationLot}`).click();
@@ -307,7 +265,7 @@ describe.each(VIEWPORTS)('dock, sourcing and stations at $name width ($width px)
     expect(history).toContain('Tube set Set C');
     expect(history).toContain(demo.fittingHead);
     expect(history).toContain('D-7731');
-    await shotOf(page, 'lot-history', 'lot-history', viewport);
+    await harness.shotOf(page, 'lot-history', 'lot-history', viewport);
     await context.close();
   }, 180_000);
 });

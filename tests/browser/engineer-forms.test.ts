@@ -1,14 +1,7 @@
 import type { Page } from 'playwright-core';
-import { BrowserHarness, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, signInAs, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 
-const harness = new BrowserHarness();
-
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-afterEach(() => {
-  // Any console error in the page fails the test that caused it.
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
+const harness = useHarness(new BrowserHarness());
 
 // Invented part numbers, unique per run and viewport so the two viewports never collide.
 const RUN = Date.now().toString(36).toUpperCase();
@@ -18,6 +11,21 @@ const UUID = '[0-9a-f-]{36}';
 async function signIn(page: Page, email: string): Promise<void> {
   await signInAs(page, harness.baseUrl, email);
   await page.getByTestId('current-user').waitFor();
+}
+
+/** A fresh page with that person signed in. */
+async function openAs(viewport: Viewport, email: string) {
+  const opened = await harness.page(viewport);
+  await signIn(opened.page, email);
+  return opened;
+}
+
+/** A fresh page, signed in, on the screen at `path` once `ready` shows. */
+async function openAt(viewport: Viewport, email: string, path: string, ready: string) {
+  const opened = await openAs(viewport, email);
+  await opened.page.goto(`${harness.baseUrl}${path}`);
+  await opened.page.getByTestId(ready).waitFor();
+  return opened;
 }
 
 /** A bearer token for the API, as another person working at the same time. */
@@ -87,8 +95,7 @@ async function fillDipTube(page: Page, partNumber: string): Promise<void> {
 describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport) => {
   it('registers a dip tube and a pairing with a live fit preview; the author cannot approve; a second engineer approves', async () => {
     const tubePart = part('DT', viewport);
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer@bungwise.example');
+    const { context, page } = await openAs(viewport, 'engineer@bungwise.example');
 
     // 1. The dip tube, through the form.
     await page.goto(`${harness.baseUrl}/registry/dip-tubes/new`);
@@ -136,10 +143,7 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
     await context.close();
 
     // 4. A second engineer rejects without a reason (refused in the form), then approves with a comment.
-    const second = await harness.page(viewport);
-    await signIn(second.page, 'engineer2@bungwise.example');
-    await second.page.goto(`${harness.baseUrl}/registry/pairings/${pairingId}`);
-    await second.page.getByTestId('pairing-comment').waitFor();
+    const second = await openAt(viewport, 'engineer2@bungwise.example', `/registry/pairings/${pairingId}`, 'pairing-comment');
     await second.page.getByTestId('pairing-reject').click();
     await expect(second.page.getByTestId('pairing-comment-error').textContent()).resolves.toMatch(/Say why you reject it/);
     await second.page.getByTestId('pairing-comment').fill('Tip gap checked on a sample drum: 15 mm.');
@@ -155,10 +159,7 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
     await second.context.close();
 
     // 5. A clerk reads the same page without any review controls.
-    const clerk = await harness.page(viewport);
-    await signIn(clerk.page, 'clerk@bungwise.example');
-    await clerk.page.goto(`${harness.baseUrl}/registry/pairings/${pairingId}`);
-    await clerk.page.getByTestId('pairing-read-only').waitFor();
+    const clerk = await openAt(viewport, 'clerk@bungwise.example', `/registry/pairings/${pairingId}`, 'pairing-read-only');
     expect(await clerk.page.getByTestId('pairing-retire').count()).toBe(0);
     expect(await clerk.page.getByTestId('pairing-edit').count()).toBe(0);
     await expect(clerk.page.getByTestId('pairing-history-1').textContent()).resolves.toMatch(/Approved by Mirela Sandoval/);
@@ -166,10 +167,7 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
   }, 90_000);
 
   it('names each problem on blur and on save, and puts the server’s answer on its field', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer@bungwise.example');
-    await page.goto(`${harness.baseUrl}/registry/dip-tubes/new`);
-    await page.getByTestId('dip-tube-form').waitFor();
+    const { context, page } = await openAt(viewport, 'engineer@bungwise.example', '/registry/dip-tubes/new', 'dip-tube-form');
 
     // On blur: a negative length is refused with the value that was typed.
     await page.getByTestId('form-lengthMm').fill('-5');
@@ -201,34 +199,33 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
   }, 60_000);
 
   it('can be filled from the keyboard: Tab between fields, Enter picks a match or a chip, Space a unit', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer@bungwise.example');
+    const { context, page } = await openAs(viewport, 'engineer@bungwise.example');
     await page.goto(`${harness.baseUrl}/registry/dip-tubes/new`);
     await page.getByTestId('form-partNumber').focus();
     const active = () => page.evaluate(() => document.activeElement?.getAttribute('data-testid'));
+    /** Tab moves the keyboard on to that field. */
+    const tabTo = async (testID: string) => {
+      await page.keyboard.press('Tab');
+      expect(await active()).toBe(testID);
+    };
+    /** Types into the field's picker, takes its one match with Enter, and the keyboard is then on the picker's Change button. */
+    const pickWithEnter = async (field: string, typed: string, picked: string) => {
+      await page.keyboard.type(typed);
+      await until(() => page.locator(`[data-testid^="form-${field}-option-"]`).count(), 1);
+      await page.keyboard.press('Enter');
+      await expect(page.getByTestId(`form-${field}-selected`).textContent()).resolves.toBe(picked);
+      await until(active, `form-${field}-change`);
+    };
     await page.keyboard.type(part('DTK', viewport));
-    await page.keyboard.press('Tab');
-    expect(await active()).toBe('form-supplierId-search');
-    await page.keyboard.type('Ridge');
-    await until(() => page.locator('[data-testid^="form-supplierId-option-"]').count(), 1);
-    await page.keyboard.press('Enter');
-    await expect(page.getByTestId('form-supplierId-selected').textContent()).resolves.toBe('Ridgeback Fluid Hardware');
+    await tabTo('form-supplierId-search');
     // The keyboard stays on the picker (its Change button), then moves on in reading order.
-    await until(active, 'form-supplierId-change');
-    await page.keyboard.press('Tab');
-    expect(await active()).toBe('form-material');
+    await pickWithEnter('supplierId', 'Ridge', 'Ridgeback Fluid Hardware');
+    await tabTo('form-material');
     await page.keyboard.type('PVDF');
-    await page.keyboard.press('Tab');
-    expect(await active()).toBe('form-threadCode-search');
-    await page.keyboard.type('G-2');
-    await until(() => page.locator('[data-testid^="form-threadCode-option-"]').count(), 1);
-    await page.keyboard.press('Enter');
-    await expect(page.getByTestId('form-threadCode-selected').textContent()).resolves.toBe('G-2');
-    await until(active, 'form-threadCode-change');
-    await page.keyboard.press('Tab');
-    expect(await active()).toBe('form-keyCode-change');
-    await page.keyboard.press('Tab');
-    expect(await active()).toBe('form-channels-feed');
+    await tabTo('form-threadCode-search');
+    await pickWithEnter('threadCode', 'G-2', 'G-2');
+    await tabTo('form-keyCode-change');
+    await tabTo('form-channels-feed');
     await page.keyboard.press('Enter');
     await expect(page.getByTestId('form-channels-feed').getAttribute('aria-checked')).resolves.toBe('true');
     // A chip group is one tab stop: the arrow keys move inside it, Tab leaves it.
@@ -236,14 +233,11 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
     await expect(page.getByTestId('form-channels-feed-return').getAttribute('aria-checked')).resolves.toBe('true');
     await page.keyboard.press('ArrowLeft');
     await expect(page.getByTestId('form-channels-feed').getAttribute('aria-checked')).resolves.toBe('true');
-    await page.keyboard.press('Tab');
-    expect(await active()).toBe('form-lengthMm');
+    await tabTo('form-lengthMm');
     await page.keyboard.type('33');
     // The unit selector follows its input; Space picks inches and the typed length is kept as a length.
-    await page.keyboard.press('Tab');
-    expect(await active()).toBe('form-lengthMm-unit-mm');
-    await page.keyboard.press('Tab');
-    expect(await active()).toBe('form-lengthMm-unit-in');
+    await tabTo('form-lengthMm-unit-mm');
+    await tabTo('form-lengthMm-unit-in');
     await page.keyboard.press('Space');
     await expect(page.getByTestId('form-lengthMm-unit-in').getAttribute('aria-checked')).resolves.toBe('true');
     await expect(page.getByTestId('form-lengthMm').inputValue()).resolves.toBe('1.2992');
@@ -251,8 +245,7 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
   }, 60_000);
 
   it('says when someone else saved first and re-applies the change on top of their version', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer@bungwise.example');
+    const { context, page } = await openAs(viewport, 'engineer@bungwise.example');
     const token = await tokenFor(page, 'engineer@bungwise.example');
     const other = await tokenFor(page, 'engineer2@bungwise.example');
     const supplier = (await apiGet(page, token, '/suppliers?q=Ridgeback')).items[0];
@@ -289,8 +282,7 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
   }, 60_000);
 
   it('registers a slurry and a station, edits a pairing’s notes, and shows a clerk the forms read-only', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer@bungwise.example');
+    const { context, page } = await openAs(viewport, 'engineer@bungwise.example');
     const token = await tokenFor(page, 'engineer@bungwise.example');
 
     await page.goto(`${harness.baseUrl}/registry/slurries/new`);
@@ -338,19 +330,13 @@ describe.each(VIEWPORTS)('engineer forms at $name width ($width px)', (viewport)
     await expect(page.getByTestId('pairing-notes').textContent()).resolves.toBe(`Checked again on ${viewport.name}.`);
     await context.close();
 
-    const clerk = await harness.page(viewport);
-    await signIn(clerk.page, 'clerk@bungwise.example');
-    await clerk.page.goto(`${harness.baseUrl}/registry/dip-tubes/new`);
-    await clerk.page.getByTestId('form-read-only').waitFor();
+    const clerk = await openAt(viewport, 'clerk@bungwise.example', '/registry/dip-tubes/new', 'form-read-only');
     expect(await clerk.page.getByTestId('form-submit').count()).toBe(0);
     await clerk.context.close();
   }, 90_000);
 
   it('registers a drum type with two openings and hides a connector’s return port when it has none', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer@bungwise.example');
-    await page.goto(`${harness.baseUrl}/registry/drum-types/new`);
-    await page.getByTestId('drum-type-form').waitFor();
+    const { context, page } = await openAt(viewport, 'engineer@bungwise.example', '/registry/drum-types/new', 'drum-type-form');
     const drumPart = part('DRUM', viewport);
     await page.getByTestId('form-partNumber').fill(drumPart);
     await page.getByTestId('form-name').fill('55 gal test drum, 2 in + 3/4 in NPS');

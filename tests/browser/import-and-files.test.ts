@@ -1,34 +1,12 @@
 import fs from 'node:fs';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, seen, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, seen, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 
 // Spec-sheet imports (a file with a bad row, then a clean one), files kept with a lot at the dock, and the
 // e-mail choices on the notices screen. Part and lot numbers differ per viewport: both runs share one database.
 
-const harness = new BrowserHarness();
-
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-
-const contexts: BrowserContext[] = [];
-async function open(viewport: Viewport) {
-  const opened = await harness.page(viewport);
-  contexts.push(opened.context);
-  return opened;
-}
-
-afterEach(async () => {
-  await Promise.all(contexts.splice(0).map((c) => c.close().catch(() => undefined)));
-  // Any console error in the page fails the test that caused it.
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
-
-/** Screens scroll inside the app, so a full-page shot shows one screenful: scroll the part to look at into view. */
-async function shotOf(page: Page, testID: string, name: string, viewport: Viewport) {
-  await page.getByTestId(testID).first().scrollIntoViewIfNeeded();
-  await harness.shot(page, name, viewport);
-}
+const harness = useHarness(new BrowserHarness());
 
 /** Presses a button that opens the browser's file dialog and answers it with the given file. */
 async function chooseFile(page: Page, buttonTestID: string, file: { name: string; mimeType: string; buffer: Buffer }) {
@@ -70,9 +48,8 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     const bad = [header, row(1, '836'), row(2, 'long'), row(3, '845.5')].join('\n');
     const clean = [header, row(1, '836'), row(2, '840'), row(3, '845.5')].join('\n');
 
-    const { context, page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, 'engineer@bungwise.example');
-    await page.getByTestId('home-engineer').waitFor();
+    const { context, page } = await harness.open(viewport);
+    await harness.signIn(page, 'engineer');
     await page.goto(`${harness.baseUrl}/registry/import`);
     await page.getByTestId('import-step-kind').waitFor();
     await page.getByTestId('import-history').waitFor();
@@ -92,7 +69,7 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     await seen(page, 'import-read-as', 'Notes');
     expect(await page.getByTestId('import-commit').getAttribute('aria-disabled')).toBe('true');
     await seen(page, 'import-commit-note', /1 row rejected/);
-    await shotOf(page, 'import-result', 'import-rejected', viewport);
+    await harness.shotOf(page, 'import-result', 'import-rejected', viewport);
 
     // The clean sheet, over an emulated slow link so the progress shows long enough to see. Chromium's emulation
     // delays the request as a whole, so the bar may already stand at 100% ("Checking…") when it is first seen.
@@ -102,7 +79,7 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     await chooseFile(page, 'import-choose', { name: `tubes-${tag}.csv`, mimeType: 'text/csv', buffer: Buffer.from(clean) });
     await page.getByTestId('import-progress').waitFor();
     await seen(page, 'import-progress-text', /Uploading tubes-.+\.csv: \d+%|Checking every row/);
-    await shotOf(page, 'import-progress', 'import-uploading', viewport);
+    await harness.shotOf(page, 'import-progress', 'import-uploading', viewport);
     await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
 
     await seen(page, 'import-count-new', /3\s*new/);
@@ -111,7 +88,7 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     expect(await page.getByTestId('import-rejected').count()).toBe(0);
     await seen(page, 'import-commit', 'Import 3 rows');
     expect(await page.getByTestId('import-commit').getAttribute('aria-disabled')).not.toBe('true');
-    await shotOf(page, 'import-result', 'import-dry-run', viewport);
+    await harness.shotOf(page, 'import-result', 'import-dry-run', viewport);
 
     await page.getByTestId('import-commit').click();
     await seen(page, 'import-done-summary', /3 new, 0 changed and 0 unchanged dip tubes/);
@@ -134,8 +111,8 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     const saved = await download;
     expect(saved.suggestedFilename()).toBe(`tubes-${tag}.csv`);
     expect(fs.readFileSync(await saved.path()).toString('utf8')).toContain(`IMP-${tag}-002`);
-    await shotOf(page, 'import-done', 'import-done', viewport);
-    await shotOf(page, 'import-history', 'import-history', viewport);
+    await harness.shotOf(page, 'import-done', 'import-done', viewport);
+    await harness.shotOf(page, 'import-history', 'import-history', viewport);
 
     // The rows are in the registry.
     const tubes = await clerkApi<{ items: Array<{ partNumber: string; lengthMm: number }> }>(`/dip-tubes?q=IMP-${tag}-00`);
@@ -144,9 +121,8 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
   }, 60_000);
 
   it('a clerk sees that imports are for engineers', async () => {
-    const { context, page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
+    const { context, page } = await harness.open(viewport);
+    await harness.signIn(page, 'clerk');
     await page.goto(`${harness.baseUrl}/registry/import`);
     await seen(page, 'import-not-allowed', 'Engineers import spec sheets');
     await context.close();
@@ -157,15 +133,14 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     const drums = await clerkApi<{ items: Array<{ id: string }> }>(`/drum-types?q=${encodeURIComponent(demo.fittingDrum)}`);
     const check = await clerkApi<{ id: string }>('/receiving-checks', { method: 'POST', body: { lotNumber: lot, drumCount: 2, drumTypeId: drums.items[0].id } });
 
-    const { page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
+    const { page } = await harness.open(viewport);
+    await harness.signIn(page, 'clerk');
     await page.goto(`${harness.baseUrl}/receive/${check.id}`);
     // On a phone the files sit in the details under the verdict, closed at first.
     if (viewport.name === 'phone') await page.getByTestId('check-details-toggle').click();
     await page.getByTestId('files-panel').waitFor();
     await seen(page, 'files-empty', /No files yet/);
-    await shotOf(page, 'files-panel', 'files-empty', viewport);
+    await harness.shotOf(page, 'files-panel', 'files-empty', viewport);
 
     // A name beyond ASCII, as a phone names its photos: stored as sent, and saved under it again.
     const photoName = `drum-label-${tag}-Ümlaut-東京.png`;
@@ -173,7 +148,7 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     await seen(page, 'files-list', photoName);
     await seen(page, 'files-list', /PNG photo · \d+ B · added by Noor Halvorsen/);
     await seen(page, 'files-added', `Added ${photoName}`);
-    await shotOf(page, 'files-panel', 'files-listed', viewport);
+    await harness.shotOf(page, 'files-panel', 'files-listed', viewport);
     const download = page.waitForEvent('download');
     await page
       .getByTestId(/^files-item-.+-download$/)
@@ -187,16 +162,15 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     harness.allowConsoleError(/status of 415/);
     await chooseFile(page, 'files-add', { name: 'delivery-note.pdf', mimeType: 'application/pdf', buffer: Buffer.from('not really a PDF') });
     await seen(page, 'files-error', /attach a PDF or a JPEG, PNG, WebP or HEIC photo/);
-    await shotOf(page, 'files-panel', 'files-refused', viewport);
+    await harness.shotOf(page, 'files-panel', 'files-refused', viewport);
     const files = await clerkApi<{ items: Array<{ fileName: string }> }>(`/attachments?ownerKind=receiving-check&ownerId=${check.id}`);
     expect(files.items.map((f) => f.fileName)).toEqual([photoName]);
   }, 45_000);
 
   it('mail choices toggle, are saved on the account, and stay after a reload', async () => {
     const engineerApi = await apiAs('engineer@bungwise.example');
-    const { page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, 'engineer@bungwise.example');
-    await page.getByTestId('home-engineer').waitFor();
+    const { page } = await harness.open(viewport);
+    await harness.signIn(page, 'engineer');
     await page.goto(`${harness.baseUrl}/notices`);
     await page.getByTestId('mailprefs').waitFor();
     const box = page.getByTestId('mailprefs-pairing-review');
@@ -206,7 +180,7 @@ describe.each(VIEWPORTS)('imports, files and mail choices at $name width ($width
     await seen(page, 'mailprefs-status', 'Saved.');
     expect(await box.getAttribute('aria-checked')).toBe('false');
     expect((await engineerApi<{ user: { mailOff: string[] } }>('/me')).user.mailOff).toEqual(['pairing-review']);
-    await shotOf(page, 'mailprefs', 'mailprefs-off', viewport);
+    await harness.shotOf(page, 'mailprefs', 'mailprefs-off', viewport);
 
     await page.reload();
     await page.getByTestId('mailprefs').waitFor();

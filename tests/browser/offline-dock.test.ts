@@ -1,21 +1,13 @@
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { addDays, localDate } from '../../shared/dates';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
-import { BrowserHarness, pickRecord, seen, signInAs, type Viewport, VIEWPORTS } from '../support/browser';
+import { BrowserHarness, pickRecord, seen, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 
 // The dock with no network, at a phone and a wide screen: after one visit the app opens offline, a lot is
 // judged on the phone (marked provisional) and waits, the app is closed and opened again with the check
 // still waiting, and when the network is back it is sent once and recorded once.
 
-const harness = new BrowserHarness();
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-
-const contexts: BrowserContext[] = [];
-afterEach(async () => {
-  await Promise.all(contexts.splice(0).map((c) => c.close().catch(() => undefined)));
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
+const harness = useHarness(new BrowserHarness());
 
 // With no network, the app's own requests to the API fail, and the browser logs each one.
 const OFFLINE_REQUEST = /ERR_INTERNET_DISCONNECTED|Failed to load resource/;
@@ -51,15 +43,13 @@ describe.each(VIEWPORTS)('the dock offline at $name width ($width px)', (viewpor
   const tag = viewport.name === 'phone' ? 'P' : 'W';
 
   it('judges a lot on the phone, keeps it through a closed app, and sends it once when the network is back', async () => {
-    const { context, page } = await harness.page(viewport);
-    contexts.push(context);
+    const { context, page } = await harness.open(viewport);
     const zone = ((await harness.ds.query(`SELECT time_zone FROM site_settings LIMIT 1`)) as Array<{ time_zone: string }>)[0]?.time_zone ?? 'UTC';
     const today = localDate(new Date(), zone);
     const lot = `OFF-${tag}-${Date.now().toString(36).toUpperCase()}`;
 
     // One visit with the network: the shell and the registry snapshot are kept.
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
+    await harness.signIn(page, 'clerk');
     await page.goto(`${harness.baseUrl}/receive`);
     await page.getByTestId('dock-lot').waitFor();
     await page.evaluate(async () => {

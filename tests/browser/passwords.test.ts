@@ -1,36 +1,20 @@
 import nodemailer from 'nodemailer';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { MailSender } from '../../server/mail/sender';
-import { BrowserHarness, seen, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, seen, signInAs, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 import { inbox, smtpUrl } from '../support/services';
 
 // The password journeys, end to end at both widths: changing one's own, the forced change of a temporary
 // password, an administrator's reset, and "forgot password" with the link read from the local mail stand-in.
 // Each width uses its own people, so the two runs do not depend on each other.
 
-const harness = new BrowserHarness();
-const contexts: BrowserContext[] = [];
 let adminToken = '';
-
-beforeAll(async () => {
+const harness = useHarness(new BrowserHarness(), async () => {
   await harness.start();
   // Links in mail point at this test's server.
   process.env.BUNGWISE_PUBLIC_URL = harness.baseUrl;
   adminToken = (await api('POST', '/auth/sign-in', { email: 'admin@bungwise.example', password: 'bungwise-demo' })).token;
-}, 60_000);
-afterAll(() => harness.stop());
-
-afterEach(async () => {
-  await Promise.all(contexts.splice(0).map((c) => c.close().catch(() => undefined)));
-  // Any console error in the page fails the test that caused it.
-  expect(harness.takeConsoleErrors()).toEqual([]);
 });
-
-async function open(viewport: Viewport) {
-  const opened = await harness.page(viewport);
-  contexts.push(opened.context);
-  return opened;
-}
 
 async function api(method: string, path: string, body?: unknown, token = adminToken) {
   const res = await fetch(`${harness.baseUrl}/api${path}`, {
@@ -45,6 +29,14 @@ async function api(method: string, path: string, body?: unknown, token = adminTo
 
 /** A person added by the admin: on a temporary password until they change it. */
 const addPerson = (email: string, name: string, temporaryPassword: string) => api('POST', '/users', { email, name, role: 'clerk', temporaryPassword });
+
+/** A fresh page on which a person signed in with a temporary password: the app has sent them to change it. */
+async function openOnTemporary(viewport: Viewport, email: string, temporaryPassword: string) {
+  const opened = await harness.open(viewport);
+  await signInAs(opened.page, harness.baseUrl, email, temporaryPassword);
+  await opened.page.getByTestId('password-screen').waitFor();
+  return opened;
+}
 
 /** Every button and text field on the page is at least 48 px high (and buttons as wide): gloved fingers. */
 async function expectBigTargets(page: Page) {
@@ -83,11 +75,11 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
 
   it('changes one’s own password from the settings under Notices; other sessions end, this one goes on', async () => {
     const email = viewport.name === 'phone' ? 'buyer@bungwise.example' : 'engineer2@bungwise.example';
-    const elsewhere = await open(viewport);
+    const elsewhere = await harness.open(viewport);
     await signInAs(elsewhere.page, harness.baseUrl, email);
     await elsewhere.page.getByTestId('current-user').waitFor();
 
-    const { page } = await open(viewport);
+    const { page } = await harness.open(viewport);
     await signInAs(page, harness.baseUrl, email);
     await page.getByTestId('notices-indicator').click();
     await page.getByTestId('password-card').scrollIntoViewIfNeeded();
@@ -125,9 +117,7 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
   it('sends an admin-created person to the password change right after sign-in, and nowhere else until done', async () => {
     const email = `new.${tag}@bungwise.example`;
     await addPerson(email, `Rosa Ferreira ${tag}`, 'tundra-willow-38');
-    const { page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, email, 'tundra-willow-38');
-    await page.getByTestId('password-screen').waitFor();
+    const { page } = await openOnTemporary(viewport, email, 'tundra-willow-38');
     expect(new URL(page.url()).pathname).toBe('/password');
     // No navigation while forced; another address comes back here.
     expect(await page.getByTestId('nav-home').count()).toBe(0);
@@ -146,9 +136,8 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
     const email = `reset.${tag}@bungwise.example`;
     const name = `Idris Kovacs ${tag}`;
     await addPerson(email, name, 'cobalt-meadow-55');
-    const { page } = await open(viewport);
-    await signInAs(page, harness.baseUrl, 'admin@bungwise.example');
-    await page.getByTestId('home-admin').waitFor();
+    const { page } = await harness.open(viewport);
+    await harness.signIn(page, 'admin');
     await page.goto(`${harness.baseUrl}/admin/users`);
     await page.getByTestId(`user-reset-${email}`).click();
     await page.getByTestId(`user-reset-${email}-confirm`).scrollIntoViewIfNeeded();
@@ -168,9 +157,7 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
     expect(await page.getByTestId(`user-reset-${email}-password`).count()).toBe(0);
     await seen(page, `user-row-${email}`, 'on a temporary password');
 
-    const person = await open(viewport);
-    await signInAs(person.page, harness.baseUrl, email, temporary);
-    await person.page.getByTestId('password-screen').waitFor();
+    const person = await openOnTemporary(viewport, email, temporary);
     await fillChange(person.page, temporary, 'juniper-socket-plain');
     await person.page.getByTestId('home-clerk').waitFor();
   }, 60_000);
@@ -178,7 +165,7 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
   it('“Forgot password?” mails a link; following it sets a new password to sign in with', async () => {
     const email = `forgot.${tag}@bungwise.example`;
     await addPerson(email, `Mei Adeyemi ${tag}`, 'harbor-pewter-61');
-    const { page } = await open(viewport);
+    const { page } = await harness.open(viewport);
     await page.goto(`${harness.baseUrl}/sign-in`);
     await page.getByTestId('sign-in-forgot').click();
     await page.getByTestId('forgot-email').waitFor();
@@ -214,7 +201,7 @@ describe.each(VIEWPORTS)('passwords at $name width ($width px)', (viewport) => {
     await page.getByTestId('home-clerk').waitFor();
 
     // The same link again: spent.
-    const again = await open(viewport);
+    const again = await harness.open(viewport);
     harness.allowConsoleError(/status of 400 \(Bad Request\)/);
     await again.page.goto(link);
     await again.page.getByTestId('reset-new').fill('another-fine-phrase');

@@ -1,5 +1,5 @@
 import os from 'node:os';
-import { BrowserHarness, seen, signInAs, VIEWPORTS } from '../support/browser';
+import { BrowserHarness, seen, useHarness, VIEWPORTS } from '../support/browser';
 
 // The clerk's phone at the dock loads the app over plain HTTP from the server's intranet address, not from
 // localhost (which browsers treat as secure). Served bound to every interface and loaded from this
@@ -14,13 +14,7 @@ function networkAddress(): string {
   return found.address;
 }
 
-const harness = new BrowserHarness({ bind: '0.0.0.0', host: networkAddress() });
-
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-afterEach(() => {
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
+const harness = useHarness(new BrowserHarness({ bind: '0.0.0.0', host: networkAddress() }));
 
 describe.each(VIEWPORTS)('the app over plain HTTP on an intranet address at $name width ($width px)', (viewport) => {
   it('loads, is not asked to upgrade to HTTPS, and signs the clerk in', async () => {
@@ -34,8 +28,7 @@ describe.each(VIEWPORTS)('the app over plain HTTP on an intranet address at $nam
     await page.getByTestId('sign-in-submit').waitFor({ timeout: 10_000 });
     expect(doc?.headers()['content-security-policy']).not.toContain('upgrade-insecure-requests');
     await harness.shot(page, 'plain-http-sign-in', viewport);
-    await signInAs(page, harness.baseUrl, 'clerk@bungwise.example');
-    await page.getByTestId('home-clerk').waitFor();
+    await harness.signIn(page, 'clerk');
     await seen(page, 'current-role', /clerk/i);
     await harness.shot(page, 'plain-http-home-clerk', viewport);
     await context.close();

@@ -1,14 +1,7 @@
 import type { Page } from 'playwright-core';
-import { BrowserHarness, signInAs, VIEWPORTS, type Viewport } from '../support/browser';
+import { BrowserHarness, useHarness, type Viewport, VIEWPORTS } from '../support/browser';
 
-const harness = new BrowserHarness();
-
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-afterEach(() => {
-  // Any console error in the page fails the test that caused it.
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
+const harness = useHarness(new BrowserHarness());
 
 const ROW_PREFIX = 'registry-row-';
 
@@ -29,14 +22,16 @@ async function waitForRows(page: Page, ok: (ids: string[]) => boolean, what: str
   throw new Error(`rows never became ${what}; last seen: ${ids.join(', ')}`);
 }
 
-async function signIn(page: Page, role: string): Promise<void> {
-  await signInAs(page, harness.baseUrl, `${role}@bungwise.example`);
-  await page.getByTestId(`home-${role}`).waitFor();
-}
-
 async function open(page: Page, path: string, testID: string): Promise<void> {
   await page.goto(`${harness.baseUrl}${path}`);
   await page.getByTestId(testID).waitFor();
+}
+
+/** A fresh page with the role signed in, on the screen at `path` once `testID` shows. */
+async function openAt(viewport: Viewport, role: string, path: string, testID: string) {
+  const opened = await harness.openAs(viewport, role);
+  await open(opened.page, path, testID);
+  return opened;
 }
 
 /** Opens a row's detail page: the name link in the row on a wide screen, the whole card on a phone. */
@@ -90,9 +85,7 @@ async function shot(page: Page, name: string, viewport: Viewport): Promise<void>
 
 describe.each(VIEWPORTS)('registry at $name width ($width px)', (viewport) => {
   it('searches, sorts, filters and pages the dip tubes and pairings', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer');
-    await open(page, '/registry/dip-tubes', 'registry-table');
+    const { context, page } = await openAt(viewport, 'engineer', '/registry/dip-tubes', 'registry-table');
     // The demo registry has ten dip tubes: one full page.
     const all = await waitForRows(page, (ids) => ids.length === 10, 'ten dip tubes');
     expect(all).toContain('RFH-DT-N2-836');
@@ -144,9 +137,7 @@ describe.each(VIEWPORTS)('registry at $name width ($width px)', (viewport) => {
   }, 90_000);
 
   it('filters drum types by region and shows a drum type with its relations, checks and lengths in mm or in', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer');
-    await open(page, '/registry/drum-types', 'registry-table');
+    const { context, page } = await openAt(viewport, 'engineer', '/registry/drum-types', 'registry-table');
     await waitForRows(page, (ids) => ids.length === 6, 'the six drum types');
     await expect(page.getByTestId('registry-new').getAttribute('href')).resolves.toBe('/registry/drum-types/new');
     await shot(page, 'registry-drum-types', viewport);
@@ -192,9 +183,7 @@ describe.each(VIEWPORTS)('registry at $name width ($width px)', (viewport) => {
   }, 90_000);
 
   it('shows which drum types a tube threads into and which stations use a connector', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer');
-    await open(page, '/registry/dip-tubes', 'registry-table');
+    const { context, page } = await openAt(viewport, 'engineer', '/registry/dip-tubes', 'registry-table');
     await waitForRows(page, (ids) => ids.includes('RFH-DT-N2-836'), 'listed');
     await openRow(page, viewport, 'RFH-DT-N2-836');
     await page.getByTestId('tube-fits').waitFor();
@@ -224,9 +213,7 @@ describe.each(VIEWPORTS)('registry at $name width ($width px)', (viewport) => {
   }, 90_000);
 
   it('offers no New or Edit to a receiving clerk', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'clerk');
-    await open(page, '/registry/slurries', 'registry-table');
+    const { context, page } = await openAt(viewport, 'clerk', '/registry/slurries', 'registry-table');
     await waitForRows(page, (ids) => ids.length === 5, 'the five slurries');
     expect(await page.getByTestId('registry-new').count()).toBe(0);
     await shot(page, 'registry-slurries-clerk', viewport);
@@ -239,9 +226,7 @@ describe.each(VIEWPORTS)('registry at $name width ($width px)', (viewport) => {
 
 describe.each(VIEWPORTS)('tools at $name width ($width px)', (viewport) => {
   it('identifies 2 in NPS and calls a 60 mm diameter-only reading ambiguous', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'clerk');
-    await open(page, '/tools/thread', 'thread-form');
+    const { context, page } = await openAt(viewport, 'clerk', '/tools/thread', 'thread-form');
     // ASME B1.20.1: 2 in pipe, OD 2.375 in, 11.5 threads per inch; straight (NPS) when there is no taper.
     await page.getByTestId('thread-diameter').fill('2.375');
     await page.getByTestId('thread-unit-in').click();
@@ -267,9 +252,7 @@ describe.each(VIEWPORTS)('tools at $name width ($width px)', (viewport) => {
   }, 60_000);
 
   it('gives the 2.25 velocity ratio for 19.05 / 12.7 mm ports and plots it', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'engineer');
-    await open(page, '/tools/flow', 'flow-form');
+    const { context, page } = await openAt(viewport, 'engineer', '/tools/flow', 'flow-form');
     await page.getByTestId('flow-value').fill('20');
     await page.getByTestId('flow-unit-L/min').click();
     await page.getByTestId('flow-feed-bore').fill('19.05');
@@ -289,9 +272,7 @@ describe.each(VIEWPORTS)('tools at $name width ($width px)', (viewport) => {
   }, 60_000);
 
   it('explains 1A1 and says plainly when a code is not a packaging code', async () => {
-    const { context, page } = await harness.page(viewport);
-    await signIn(page, 'buyer');
-    await open(page, '/tools/packaging-code', 'packaging-form');
+    const { context, page } = await openAt(viewport, 'buyer', '/tools/packaging-code', 'packaging-form');
     // UN Model Regulations 6.1.2 / 49 CFR 178.502: 1 drum, A steel, 1 non-removable head [pub]
     await page.getByTestId('packaging-code').fill('1A1');
     await page.getByTestId('packaging-submit').click();
@@ -318,9 +299,7 @@ describe('keyboard on a wide screen', () => {
   const wide = VIEWPORTS.find((v) => v.name === 'wide')!;
 
   it('sorts from a column header and opens a row with the keyboard alone', async () => {
-    const { context, page } = await harness.page(wide);
-    await signIn(page, 'engineer');
-    await open(page, '/registry/connectors', 'registry-table');
+    const { context, page } = await openAt(wide, 'engineer', '/registry/connectors', 'registry-table');
     const before = await waitForRows(page, (ids) => ids.length === 8, 'the eight connectors');
     await page.getByTestId('registry-table-sort-partNumber').focus();
     await page.keyboard.press('Enter');

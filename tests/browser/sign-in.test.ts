@@ -1,13 +1,6 @@
-import { BrowserHarness, signInAs, VIEWPORTS } from '../support/browser';
+import { BrowserHarness, signInAs, useHarness, VIEWPORTS } from '../support/browser';
 
-const harness = new BrowserHarness();
-
-beforeAll(() => harness.start(), 60_000);
-afterAll(() => harness.stop());
-afterEach(() => {
-  // Any console error in the page fails the test that caused it.
-  expect(harness.takeConsoleErrors()).toEqual([]);
-});
+const harness = useHarness(new BrowserHarness());
 
 describe.each(VIEWPORTS)('sign-in at $name width ($width px)', (viewport) => {
   it('shows field-level messages for empty fields and one message for a wrong password', async () => {
@@ -51,8 +44,7 @@ describe.each(VIEWPORTS)('sign-in at $name width ($width px)', (viewport) => {
 describe('a choice of chips from the keyboard', () => {
   it('reaches the chosen chip with Tab, moves and chooses with the arrow keys, and chooses with Space', async () => {
     const { context, page } = await harness.page(VIEWPORTS[1]);
-    await signInAs(page, harness.baseUrl, 'admin@bungwise.example');
-    await page.getByTestId('home-admin').waitFor();
+    await harness.signIn(page, 'admin');
     await page.goto(`${harness.baseUrl}/admin/users`);
     await page.getByTestId('user-role').waitFor();
     const checked = async () => page.locator('[data-testid="user-role"] [role="radio"][aria-checked="true"]').getAttribute('aria-label');

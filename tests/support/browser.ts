@@ -40,6 +40,7 @@ export class BrowserHarness {
   baseUrl = '';
   consoleErrors: string[] = [];
   private allowed: RegExp[] = [];
+  private opened: BrowserContext[] = [];
 
   /** A test that provokes an error answer on purpose (a wrong password) allows the browser's log line for it. */
   allowConsoleError(pattern: RegExp): void {
@@ -93,6 +94,25 @@ export class BrowserHarness {
     return { context, page };
   }
 
+  /** `page`, with the context closed after the test by `closePages` (see `useHarness`), even when the test failed half-way. */
+  async open(viewport: Viewport, options: BrowserContextOptions = {}): Promise<{ context: BrowserContext; page: Page }> {
+    const opened = await this.page(viewport, options);
+    this.opened.push(opened.context);
+    return opened;
+  }
+
+  /** `open`, with the demo person of a role signed in (`signIn`). */
+  async openAs(viewport: Viewport, role: string): Promise<{ context: BrowserContext; page: Page }> {
+    const opened = await this.open(viewport);
+    await this.signIn(opened.page, role);
+    return opened;
+  }
+
+  /** Closes every context `open` gave, so a page left open cannot log errors into the next test. */
+  async closePages(): Promise<void> {
+    await Promise.all(this.opened.splice(0).map((c) => c.close().catch(() => undefined)));
+  }
+
   /** Collects the page's console errors and page errors (for a further page opened in a context). */
   watch(page: Page, viewport: Viewport): Page {
     page.on('console', (msg) => {
@@ -105,6 +125,33 @@ export class BrowserHarness {
   async shot(page: Page, name: string, viewport: Viewport): Promise<void> {
     await page.screenshot({ path: path.join(SHOTS_DIR, `${name}-${viewport.name}.png`), fullPage: true });
   }
+
+  /** Screens scroll inside the app, so a full-page shot shows one screenful: scrolls the part to look at into view first. */
+  async shotOf(page: Page, testID: string, name: string, viewport: Viewport): Promise<void> {
+    await page.getByTestId(testID).first().scrollIntoViewIfNeeded();
+    await this.shot(page, name, viewport);
+  }
+
+  /** Signs the demo person of a role in (`<role>@bungwise.example`) and waits for their home screen. */
+  async signIn(page: Page, role: string): Promise<void> {
+    await signInAs(page, this.baseUrl, `${role}@bungwise.example`);
+    await page.getByTestId(`home-${role}`).waitFor();
+  }
+}
+
+/**
+ * The test file's hooks around its harness: `start` before the file's tests (the harness's own start unless the
+ * file needs more), stop after them, and after each test the pages `open` gave are closed and any console error
+ * in a page fails the test that caused it.
+ */
+export function useHarness(harness: BrowserHarness, start: () => Promise<void> = () => harness.start()): BrowserHarness {
+  beforeAll(start, 60_000);
+  afterAll(() => harness.stop());
+  afterEach(async () => {
+    await harness.closePages();
+    expect(harness.takeConsoleErrors()).toEqual([]);
+  });
+  return harness;
 }
 
 /**

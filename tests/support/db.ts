@@ -15,3 +15,10 @@ export async function resetDatabase(ds: DataSource, options: { demo?: boolean } 
   if (tables.length) await ds.query(`TRUNCATE ${tables.map((t) => `"${t.tablename}"`).join(', ')} RESTART IDENTITY CASCADE`);
   if (options.demo !== false) await seedIfEmpty(ds, { demo: true });
 }
+
+/** The test database, reset to the demo scenario (or left empty with `demo: false`); the caller destroys it. */
+export async function openResetDatabase(options: { demo?: boolean } = {}): Promise<DataSource> {
+  const ds = await openTestDataSource();
+  await resetDatabase(ds, options);
+  return ds;
+}

@@ -62,11 +62,25 @@ function run(rule: RuleFn, input: CandidateInput): RuleResult {
   return result;
 }
 
+/** The test that a rule passes the base candidate. */
+const passesBase = (rule: RuleFn) => () => expect(run(rule, base()).outcome).toBe('pass');
+
 function with_(patch: (c: CandidateInput) => void): CandidateInput {
   const c = base();
   patch(c);
   return c;
 }
+
+/** The rule's outcome, and what its message must say: a string it contains, or a pattern it matches. */
+function expectOutcome(r: RuleResult, outcome: RuleResult['outcome'], says: Array<string | RegExp>): void {
+  expect(r.outcome).toBe(outcome);
+  for (const s of says)
+    if (typeof s === 'string') expect(r.message).toContain(s);
+    else expect(r.message).toMatch(s);
+}
+
+/** One rule on the base candidate with one thing changed. */
+const runWith = (rule: RuleFn, patch: (c: CandidateInput) => void): RuleResult => run(rule, with_(patch));
 
 describe('the base candidate', () => {
   it('passes every rule and fits', () => {
@@ -79,28 +93,16 @@ describe('the base candidate', () => {
 });
 
 describe('thread', () => {
-  it('passes on the same spec code', () => {
-    expect(run(checkThread, base()).outcome).toBe('pass');
-  });
+  it('passes on the same spec code', passesBase(checkThread));
 
   it('fails on the same nominal size but a different spec, naming both', () => {
     // ISO 228-1 G 2 (11 TPI) vs ASME B1.20.1 2 in straight pipe thread (11.5 TPI) [pub]: same nominal, no match
-    const r = run(
-      checkThread,
-      with_((c) => (c.tube.threadCode = 'G-2')),
-    );
-    expect(r.outcome).toBe('fail');
-    expect(r.message).toContain('G 2');
-    expect(r.message).toContain('2 in NPS');
+    const r = runWith(checkThread, (c) => (c.tube.threadCode = 'G-2'));
+    expectOutcome(r, 'fail', ['G 2', '2 in NPS']);
   });
 
   it('fails on a drum with no openings recorded', () => {
-    expect(
-      run(
-        checkThread,
-        with_((c) => (c.drum.openings = [])),
-      ).outcome,
-    ).toBe('fail');
+    expect(runWith(checkThread, (c) => (c.drum.openings = [])).outcome).toBe('fail');
   });
 });
 
@@ -110,35 +112,23 @@ describe('key', () => {
   });
 
   it('passes with a note when nothing is keyed', () => {
-    const r = run(
-      checkKey,
-      with_((c) => {
-        c.drum.openings[0]!.keyCode = null;
-        c.tube.keyCode = null;
-        c.connector.keyCode = null;
-      }),
-    );
+    const r = runWith(checkKey, (c) => {
+      c.drum.openings[0]!.keyCode = null;
+      c.tube.keyCode = null;
+      c.connector.keyCode = null;
+    });
     expect(r.outcome).toBe('pass');
     expect(r.message).toMatch(/No keying is in use/);
   });
 
   it('cautions a mix of keyed and unkeyed', () => {
-    const r = run(
-      checkKey,
-      with_((c) => (c.connector.keyCode = null)),
-    );
-    expect(r.outcome).toBe('caution');
-    expect(r.message).toMatch(/the head is not keyed/);
+    const r = runWith(checkKey, (c) => (c.connector.keyCode = null));
+    expectOutcome(r, 'caution', [/the head is not keyed/]);
   });
 
   it('fails when keys disagree', () => {
-    const r = run(
-      checkKey,
-      with_((c) => (c.connector.keyCode = 'K2')),
-    );
-    expect(r.outcome).toBe('fail');
-    expect(r.message).toContain('K1');
-    expect(r.message).toContain('K2');
+    const r = runWith(checkKey, (c) => (c.connector.keyCode = 'K2'));
+    expectOutcome(r, 'fail', ['K1', 'K2']);
   });
 });
 
@@ -152,25 +142,12 @@ describe('reach', () => {
   });
 
   it('passes at both edges of the window', () => {
-    expect(
-      run(
-        checkReach,
-        with_((c) => (c.tube.lengthMm = DEPTH_55_GAL_MM - 25)),
-      ).outcome,
-    ).toBe('pass');
-    expect(
-      run(
-        checkReach,
-        with_((c) => (c.tube.lengthMm = DEPTH_55_GAL_MM - 5)),
-      ).outcome,
-    ).toBe('pass');
+    expect(runWith(checkReach, (c) => (c.tube.lengthMm = DEPTH_55_GAL_MM - 25)).outcome).toBe('pass');
+    expect(runWith(checkReach, (c) => (c.tube.lengthMm = DEPTH_55_GAL_MM - 5)).outcome).toBe('pass');
   });
 
   it('fails a tube that does not reach', () => {
-    const r = run(
-      checkReach,
-      with_((c) => (c.tube.lengthMm = DEPTH_55_GAL_MM - 25.5)),
-    );
+    const r = runWith(checkReach, (c) => (c.tube.lengthMm = DEPTH_55_GAL_MM - 25.5));
     expect(r.outcome).toBe('fail');
     expect(r.message).toMatch(/does not reach/);
     expect(r.message).toMatch(/undrawn/);
@@ -178,16 +155,10 @@ describe('reach', () => {
   });
 
   it('fails a tube that bottoms out', () => {
-    const close = run(
-      checkReach,
-      with_((c) => (c.tube.lengthMm = DEPTH_55_GAL_MM - 2)),
-    );
+    const close = runWith(checkReach, (c) => (c.tube.lengthMm = DEPTH_55_GAL_MM - 2));
     expect(close.outcome).toBe('fail');
     expect(close.message).toMatch(/bottoms out/);
-    const through = run(
-      checkReach,
-      with_((c) => (c.tube.lengthMm = DEPTH_55_GAL_MM + 10)),
-    );
+    const through = runWith(checkReach, (c) => (c.tube.lengthMm = DEPTH_55_GAL_MM + 10));
     expect(through.outcome).toBe('fail');
     expect(through.numbers!.gapMm).toBeCloseTo(-10, 9);
     expect(through.message).toMatch(/longer than the drum is deep/);
@@ -202,33 +173,20 @@ describe('reach', () => {
 describe('tapping', () => {
   it('passes a head suited to both, or to the station tapping', () => {
     expect(run(checkTapping, base()).outcome).toBe('pass');
-    expect(
-      run(
-        checkTapping,
-        with_((c) => (c.connector.suitedTo = 'one-opening')),
-      ).outcome,
-    ).toBe('pass');
+    expect(runWith(checkTapping, (c) => (c.connector.suitedTo = 'one-opening')).outcome).toBe('pass');
   });
 
   it('fails a two-opening-only head in one-opening tapping, giving the shear reason', () => {
     // common practice, no published source: its return runs through small openings, slurry sprays back and is sheared
-    const r = run(
-      checkTapping,
-      with_((c) => (c.connector.suitedTo = 'two-opening')),
-    );
-    expect(r.outcome).toBe('fail');
-    expect(r.message).toMatch(/sprays back at high velocity/);
-    expect(r.message).toMatch(/sheared/);
+    const r = runWith(checkTapping, (c) => (c.connector.suitedTo = 'two-opening'));
+    expectOutcome(r, 'fail', [/sprays back at high velocity/, /sheared/]);
   });
 
   it('fails a one-opening-only head at a two-opening station', () => {
-    const r = run(
-      checkTapping,
-      with_((c) => {
-        c.connector.suitedTo = 'one-opening';
-        c.station!.tapping = 'two-opening';
-      }),
-    );
+    const r = runWith(checkTapping, (c) => {
+      c.connector.suitedTo = 'one-opening';
+      c.station!.tapping = 'two-opening';
+    });
     expect(r.outcome).toBe('fail');
   });
 
@@ -248,13 +206,10 @@ describe('tapping', () => {
 describe('ports', () => {
   it('cautions a 3/4 in feed with a 1/2 in return in one-opening tapping, ratio 2.25', () => {
     // common practice, no published source: 3/4 in feed, 1/2 in return in one opening -> caution, (19.05/12.7)^2 = 2.25
-    const r = run(
-      checkPorts,
-      with_((c) => {
-        c.connector.returnBoreMm = 0.5 * IN;
-        c.connector.returnNominal = '1/2 in';
-      }),
-    );
+    const r = runWith(checkPorts, (c) => {
+      c.connector.returnBoreMm = 0.5 * IN;
+      c.connector.returnNominal = '1/2 in';
+    });
     expect(r.outcome).toBe('caution');
     expect(r.numbers!.velocityRatio).toBeCloseTo(2.25, 12);
     expect(r.message).toMatch(/2\.25 times faster/);
@@ -272,10 +227,7 @@ describe('ports', () => {
 
   it('fails a ratio beyond the site limit', () => {
     // (19.05 / 9)^2 = 4.48 > default limit 4
-    const r = run(
-      checkPorts,
-      with_((c) => (c.connector.returnBoreMm = 9)),
-    );
+    const r = runWith(checkPorts, (c) => (c.connector.returnBoreMm = 9));
     expect(r.outcome).toBe('fail');
     expect(r.numbers!.velocityRatio).toBeCloseTo((19.05 / 9) ** 2, 12);
     const strict = with_((c) => {
@@ -286,12 +238,7 @@ describe('ports', () => {
   });
 
   it('fails a restricted return path or no return in one-opening', () => {
-    expect(
-      run(
-        checkPorts,
-        with_((c) => (c.connector.returnPath = 'restricted')),
-      ).outcome,
-    ).toBe('fail');
+    expect(runWith(checkPorts, (c) => (c.connector.returnPath = 'restricted')).outcome).toBe('fail');
     const none = with_((c) => {
       c.connector.returnPath = 'none';
       c.connector.returnBoreMm = null;
@@ -300,22 +247,16 @@ describe('ports', () => {
   });
 
   it('passes in two-opening tapping, where the return uses the other opening', () => {
-    const r = run(
-      checkPorts,
-      with_((c) => {
-        c.station!.tapping = 'two-opening';
-        c.connector.returnPath = 'restricted';
-        c.connector.returnBoreMm = 6;
-      }),
-    );
+    const r = runWith(checkPorts, (c) => {
+      c.station!.tapping = 'two-opening';
+      c.connector.returnPath = 'restricted';
+      c.connector.returnBoreMm = 6;
+    });
     expect(r.outcome).toBe('pass');
   });
 
   it('leaves out velocities when no flow is known', () => {
-    const r = run(
-      checkPorts,
-      with_((c) => delete c.station!.flowLpm),
-    );
+    const r = runWith(checkPorts, (c) => delete c.station!.flowLpm);
     expect(r.numbers!.returnVelocityMs).toBeUndefined();
     expect(r.numbers!.velocityRatio).toBe(1);
   });
@@ -324,29 +265,16 @@ describe('ports', () => {
 describe('foam', () => {
   it('fails a foaming slurry with mechanical agitation', () => {
     // common practice, no published source: mechanical agitation is not for a foaming slurry
-    const r = run(
-      checkFoam,
-      with_((c) => {
-        c.slurry!.foams = true;
-        c.station!.agitation = 'mechanical';
-      }),
-    );
+    const r = runWith(checkFoam, (c) => {
+      c.slurry!.foams = true;
+      c.station!.agitation = 'mechanical';
+    });
     expect(r.outcome).toBe('fail');
   });
 
   it('passes a foaming slurry recirculated by pump and a non-foaming one stirred', () => {
-    expect(
-      run(
-        checkFoam,
-        with_((c) => (c.slurry!.foams = true)),
-      ).outcome,
-    ).toBe('pass');
-    expect(
-      run(
-        checkFoam,
-        with_((c) => (c.station!.agitation = 'mechanical')),
-      ).outcome,
-    ).toBe('pass');
+    expect(runWith(checkFoam, (c) => (c.slurry!.foams = true)).outcome).toBe('pass');
+    expect(runWith(checkFoam, (c) => (c.station!.agitation = 'mechanical')).outcome).toBe('pass');
   });
 
   it('is not checked without a slurry', () => {
@@ -369,27 +297,21 @@ describe('openings', () => {
   });
 
   it('fails two-opening tapping on a drum with one usable opening', () => {
-    const r = run(
-      checkOpenings,
-      with_((c) => (c.station!.tapping = 'two-opening')),
-    );
+    const r = runWith(checkOpenings, (c) => (c.station!.tapping = 'two-opening'));
     expect(r.outcome).toBe('fail');
     expect(r.numbers).toEqual({ usableOpenings: 1, neededOpenings: 2 });
   });
 
   it('passes two-opening tapping on a drum with two matching openings', () => {
     // Plastic drums with two 56x4 buttress bungs [pub, no dimension standard found]
-    const r = run(
-      checkOpenings,
-      with_((c) => {
-        c.station!.tapping = 'two-opening';
-        c.drum.openings = [
-          { threadCode: 'BT-56x4', keyCode: null },
-          { threadCode: 'BT-56x4', keyCode: null },
-        ];
-        c.tube.threadCode = 'BT-56x4';
-      }),
-    );
+    const r = runWith(checkOpenings, (c) => {
+      c.station!.tapping = 'two-opening';
+      c.drum.openings = [
+        { threadCode: 'BT-56x4', keyCode: null },
+        { threadCode: 'BT-56x4', keyCode: null },
+      ];
+      c.tube.threadCode = 'BT-56x4';
+    });
     expect(r.outcome).toBe('pass');
     expect(r.numbers!.usableOpenings).toBe(2);
   });
@@ -403,10 +325,7 @@ describe('approval', () => {
     [undefined, 'caution'],
     [{ status: 'retired' as const }, 'fail'],
   ])('%p -> %s', (pairing, outcome) => {
-    const r = run(
-      checkApproval,
-      with_((c) => (c.pairing = pairing)),
-    );
+    const r = runWith(checkApproval, (c) => (c.pairing = pairing));
     expect(r.outcome).toBe(outcome);
     if (outcome === 'caution') expect(r.message).toMatch(/not approved for use yet/);
   });
@@ -419,38 +338,18 @@ describe('approval', () => {
 });
 
 describe('rinse', () => {
-  it('passes a set rinsed after its last drum', () => {
-    expect(run(checkRinse, base()).outcome).toBe('pass');
-  });
+  it('passes a set rinsed after its last drum', passesBase(checkRinse));
 
   it('fails a set not rinsed since its last drum', () => {
-    const r = run(
-      checkRinse,
-      with_((c) => (c.tubeSet = { lastUsedAt: new Date('2026-03-02T08:00:00Z'), lastRinsedAt: new Date('2026-03-01T10:00:00Z') })),
-    );
+    const r = runWith(checkRinse, (c) => (c.tubeSet = { lastUsedAt: new Date('2026-03-02T08:00:00Z'), lastRinsedAt: new Date('2026-03-01T10:00:00Z') }));
     expect(r.outcome).toBe('fail');
     expect(r.message).toMatch(/large-particle/);
-    expect(
-      run(
-        checkRinse,
-        with_((c) => (c.tubeSet = { lastUsedAt: '2026-03-01', lastRinsedAt: null })),
-      ).outcome,
-    ).toBe('fail');
+    expect(runWith(checkRinse, (c) => (c.tubeSet = { lastUsedAt: '2026-03-01', lastRinsedAt: null })).outcome).toBe('fail');
   });
 
   it('cautions a new set with no rinse and fails an unreadable date', () => {
-    expect(
-      run(
-        checkRinse,
-        with_((c) => (c.tubeSet = { lastUsedAt: null, lastRinsedAt: null })),
-      ).outcome,
-    ).toBe('caution');
-    expect(
-      run(
-        checkRinse,
-        with_((c) => (c.tubeSet = { lastUsedAt: 'yesterday', lastRinsedAt: null })),
-      ).outcome,
-    ).toBe('fail');
+    expect(runWith(checkRinse, (c) => (c.tubeSet = { lastUsedAt: null, lastRinsedAt: null })).outcome).toBe('caution');
+    expect(runWith(checkRinse, (c) => (c.tubeSet = { lastUsedAt: 'yesterday', lastRinsedAt: null })).outcome).toBe('fail');
   });
 
   it('is not checked without a tube set', () => {

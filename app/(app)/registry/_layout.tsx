@@ -1,12 +1,6 @@
-import { Slot } from 'expo-router';
-import { View } from 'react-native';
 import { RegistryNav } from '@/components/registry/registry-nav';
+import { SectionLayout } from '@/components/ui/section-layout';
 
 export default function RegistryLayout() {
-  return (
-    <View style={{ flex: 1 }}>
-      <RegistryNav />
-      <Slot />
-    </View>
-  );
+  return <SectionLayout nav={<RegistryNav />} />;
 }

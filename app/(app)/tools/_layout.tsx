@@ -1,12 +1,6 @@
-import { Slot } from 'expo-router';
-import { View } from 'react-native';
 import { ToolsNav } from '@/components/tools/tools-nav';
+import { SectionLayout } from '@/components/ui/section-layout';
 
 export default function ToolsLayout() {
-  return (
-    <View style={{ flex: 1 }}>
-      <ToolsNav />
-      <Slot />
-    </View>
-  );
+  return <SectionLayout nav={<ToolsNav />} />;
 }
