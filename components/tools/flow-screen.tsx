@@ -9,10 +9,10 @@ import { colors, fonts, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ChoiceChips } from '../ui/choice-chips';
-import { ErrorState } from '../ui/states';
+import { parseNumber } from '../ui/number-field';
 import { TextField } from '../ui/text-field';
 import { FlowPlot } from './flow-plot';
-import { parseNumber, positiveProblem } from './parse-number';
+import { positiveProblem } from './positive-problem';
 import { ToolPage } from './tool-page';
 
 const FLOW_LABELS: Record<FlowUnit, string> = { 'L/min': 'L/min', 'gal/min': 'US gal/min', 'm3/h': 'm³/h' };
@@ -83,30 +83,19 @@ export function FlowScreen() {
     </Card>
   );
 
-  let result;
-  if (calc.isError && !(calc.error instanceof ApiError && calc.error.status === 400)) {
-    result = <ErrorState error={calc.error} onRetry={() => calc.variables && calc.mutate(calc.variables)} />;
-  } else if (calc.data && calc.variables) {
-    result = <FlowResult answer={calc.data} input={calc.variables} />;
-  } else {
-    result = (
-      <Card>
-        <Text style={type.label}>Nothing calculated yet</Text>
-        <Text style={type.body}>Enter the station's flow and the head's bores. A narrower return runs faster than the feed at the same flow, which can spray and shear slurry back in the drum.</Text>
-      </Card>
-    );
-  }
-
   return (
     <ToolPage
-      title={'Flow and shear'}
-      subtitle={"How fast slurry moves through a dispense head's ports, and how hard it is sheared at the wall."}
-      testID={'tools-flow'}
+      title="Flow and shear"
+      subtitle="How fast slurry moves through a dispense head's ports, and how hard it is sheared at the wall."
+      testID="tools-flow"
       form={form}
-      result={result}
-      answer={calc.data}
-      formFlex={4}
-      resultFlex={7}
+      calc={calc}
+      renderAnswer={(answer, input) => <FlowResult answer={answer} input={input} />}
+      empty={{
+        title: 'Nothing calculated yet',
+        body: "Enter the station's flow and the head's bores. A narrower return runs faster than the feed at the same flow, which can spray and shear slurry back in the drum.",
+      }}
+      flex={[4, 7]}
     />
   );
 }
