@@ -57,26 +57,15 @@ export function FlowScreen() {
       </Text>
       <TextField label="Flow" value={flow} onChangeText={setFlow} inputMode="decimal" placeholder="e.g. 20" error={errors.flow} onSubmitEditing={submit} testID="flow-value" />
       <ChoiceChips label="Flow unit" options={FLOW_UNITS.map((u) => ({ value: u, label: FLOW_LABELS[u] }))} value={unit} onChange={setUnit} testID="flow-unit" />
-      <TextField
-        label="Feed bore, mm"
-        hint="3/4 in is 19.05 mm."
-        value={feed}
-        onChangeText={setFeed}
-        inputMode="decimal"
-        placeholder="e.g. 19.05"
-        error={errors.feed}
-        onSubmitEditing={submit}
-        testID="flow-feed-bore"
-      />
-      <TextField
+      <BoreField label="Feed bore, mm" hint="3/4 in is 19.05 mm." value={feed} onChange={setFeed} placeholder="e.g. 19.05" error={errors.feed} onSubmit={submit} testID="flow-feed-bore" />
+      <BoreField
         label="Return bore, mm (optional)"
         hint="Leave empty for a feed-only head. 1/2 in is 12.7 mm."
         value={ret}
-        onChangeText={setRet}
-        inputMode="decimal"
+        onChange={setRet}
         placeholder="e.g. 12.7"
         error={errors.ret}
-        onSubmitEditing={submit}
+        onSubmit={submit}
         testID="flow-return-bore"
       />
       <Button label="Calculate" onPress={submit} busy={calc.isPending} testID="flow-submit" />
@@ -98,6 +87,22 @@ export function FlowScreen() {
       flex={[4, 7]}
     />
   );
+}
+
+interface BoreFieldProps {
+  label: string;
+  hint: string;
+  value: string;
+  onChange: (text: string) => void;
+  placeholder: string;
+  error: string | null | undefined;
+  onSubmit: () => void;
+  testID: string;
+}
+
+/** A port's bore in mm, typed as a decimal. */
+function BoreField({ label, hint, value, onChange, placeholder, error, onSubmit, testID }: BoreFieldProps) {
+  return <TextField label={label} hint={hint} value={value} onChangeText={onChange} inputMode="decimal" placeholder={placeholder} error={error} onSubmitEditing={onSubmit} testID={testID} />;
 }
 
 function FlowResult({ answer, input }: { answer: FlowAnswer; input: FlowInput }) {
