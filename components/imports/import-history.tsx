@@ -9,7 +9,7 @@ import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
 import { countsLine, KIND_LABELS, OUTCOME_WORDS } from './labels';
-import { Cell, HeadCell } from './table-cells';
+import { Cell, HeadRow } from './table-cells';
 
 /** Past imports, newest first: who ran which file, what it found, and the file itself as it was read. */
 export function ImportHistory() {
@@ -29,26 +29,18 @@ export function ImportHistory() {
         </Text>
       ) : wide ? (
         <View role="table" aria-label="Past imports" style={styles.table} testID="import-history-list">
-          <View role="row" style={[styles.tr, styles.thead]}>
-            <HeadCell flex={1.3} style={styles.td}>
-              When
-            </HeadCell>
-            <HeadCell flex={2} style={styles.td}>
-              File
-            </HeadCell>
-            <HeadCell flex={1.3} style={styles.td}>
-              By
-            </HeadCell>
-            <HeadCell flex={2.2} style={styles.td}>
-              Rows
-            </HeadCell>
-            <HeadCell flex={1} style={styles.td}>
-              Outcome
-            </HeadCell>
-            <HeadCell flex={1.2} style={styles.td}>
-              Kept file
-            </HeadCell>
-          </View>
+          <HeadRow
+            columns={[
+              ['When', 1.3],
+              ['File', 2],
+              ['By', 1.3],
+              ['Rows', 2.2],
+              ['Outcome', 1],
+              ['Kept file', 1.2],
+            ]}
+            rowStyle={[styles.tr, styles.thead]}
+            cellStyle={styles.td}
+          />
           {history.data.items.map((item, i) => (
             <HistoryRow key={item.id} item={item} wide alt={i % 2 === 1} />
           ))}

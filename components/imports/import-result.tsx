@@ -8,7 +8,7 @@ import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { useIsWide } from '../use-layout';
 import { plural } from './labels';
-import { Cell, HeadCell } from './table-cells';
+import { Cell, HeadRow } from './table-cells';
 
 const PLANNED_PREVIEW = 10;
 const ACTION_LOOK: Record<ImportPlannedRow['action'], { word: string; tone: 'primary' | 'caution' | 'muted' }> = {
@@ -71,17 +71,15 @@ function RejectedRows({ errors, rejected, wide }: { errors: ImportRowError[]; re
       </View>
       {wide ? (
         <View role="table" aria-label="Rejected rows" style={styles.table} testID="import-rejected">
-          <View role="row" style={[styles.tr, styles.thead]}>
-            <HeadCell flex={0.6} style={styles.td}>
-              Line
-            </HeadCell>
-            <HeadCell flex={1.2} style={styles.td}>
-              Column
-            </HeadCell>
-            <HeadCell flex={4} style={styles.td}>
-              Reason
-            </HeadCell>
-          </View>
+          <HeadRow
+            columns={[
+              ['Line', 0.6],
+              ['Column', 1.2],
+              ['Reason', 4],
+            ]}
+            rowStyle={[styles.tr, styles.thead]}
+            cellStyle={styles.td}
+          />
           {errors.map((e, i) => (
             <View role="row" key={`${e.line}-${i}`} style={[styles.tr, i % 2 === 1 && styles.trAlt]} testID={`import-rejected-line-${e.line}`}>
               <BodyCell flex={0.6} strong>
@@ -121,20 +119,16 @@ function PlannedRows({ rows, total, wide }: { rows: ImportPlannedRow[]; total: n
       </Text>
       {wide ? (
         <View role="table" aria-label="Planned rows" style={styles.table} testID="import-planned">
-          <View role="row" style={[styles.tr, styles.thead]}>
-            <HeadCell flex={0.6} style={styles.td}>
-              Line
-            </HeadCell>
-            <HeadCell flex={1.6} style={styles.td}>
-              Part number
-            </HeadCell>
-            <HeadCell flex={2} style={styles.td}>
-              Supplier
-            </HeadCell>
-            <HeadCell flex={1} style={styles.td}>
-              Action
-            </HeadCell>
-          </View>
+          <HeadRow
+            columns={[
+              ['Line', 0.6],
+              ['Part number', 1.6],
+              ['Supplier', 2],
+              ['Action', 1],
+            ]}
+            rowStyle={[styles.tr, styles.thead]}
+            cellStyle={styles.td}
+          />
           {shown.map((r, i) => (
             <View role="row" key={r.line} style={[styles.tr, i % 2 === 1 && styles.trAlt]} testID={`import-planned-line-${r.line}`}>
               <BodyCell flex={0.6}>{r.line}</BodyCell>

@@ -11,10 +11,23 @@ interface CellProps {
 }
 
 /** A column's heading in the import's small tables (the history, the rejected and the planned rows). */
-export function HeadCell({ children, flex, style }: CellProps) {
+function HeadCell({ children, flex, style }: CellProps) {
   return (
     <View role="columnheader" style={[style, { flex }]}>
       <Text style={styles.th}>{children}</Text>
+    </View>
+  );
+}
+
+/** A table's heading row: each column's label and its share of the width. */
+export function HeadRow({ columns, rowStyle, cellStyle }: { columns: [label: string, flex: number][]; rowStyle: StyleProp<ViewStyle>; cellStyle: StyleProp<ViewStyle> }) {
+  return (
+    <View role="row" style={rowStyle}>
+      {columns.map(([label, flex]) => (
+        <HeadCell key={label} flex={flex} style={cellStyle}>
+          {label}
+        </HeadCell>
+      ))}
     </View>
   );
 }
