@@ -5,29 +5,30 @@ import type { MigrationInterface, QueryRunner } from 'typeorm';
 const stamps = `created_at timestamptz NOT NULL DEFAULT now(), updated_at timestamptz NOT NULL DEFAULT now(), version integer NOT NULL`;
 const REGION = `CHECK (region IN ('NA','EU','JP','TW','KR','CN','SG','other'))`;
 
-export class CreateRegistry1764615600000 implements MigrationInterface {
-  name = 'CreateRegistry1764615600000';
-
-  async up(q: QueryRunner): Promise<void> {
-    await q.query(`CREATE EXTENSION IF NOT EXISTS pg_trgm`);
-    await q.query(`ALTER TABLE site_settings
+// The site settings the fit rules read, with the pg_trgm extension the search indexes use.
+async function addFitSettings(q: QueryRunner): Promise<void> {
+  await q.query(`CREATE EXTENSION IF NOT EXISTS pg_trgm`);
+  await q.query(`ALTER TABLE site_settings
       ADD COLUMN tip_clearance_min_mm double precision NOT NULL DEFAULT 5 CHECK (tip_clearance_min_mm >= 0),
       ADD COLUMN tip_clearance_max_mm double precision NOT NULL DEFAULT 25,
       ADD COLUMN thread_match_tolerance_mm double precision NOT NULL DEFAULT 0.6 CHECK (thread_match_tolerance_mm >= 0),
       ADD COLUMN laminar_limit double precision NOT NULL DEFAULT 2300 CHECK (laminar_limit > 0),
       ADD COLUMN max_return_velocity_ratio double precision NOT NULL DEFAULT 4 CHECK (max_return_velocity_ratio >= 1),
       ADD CONSTRAINT site_settings_clearance_window CHECK (tip_clearance_max_mm > tip_clearance_min_mm)`);
+}
 
-    await q.query(`CREATE TABLE suppliers (
+// Suppliers, thread specifications and key codes: what the hardware tables point at.
+async function createReferenceTables(q: QueryRunner): Promise<void> {
+  await q.query(`CREATE TABLE suppliers (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       name varchar(120) NOT NULL,
       region varchar(8) NOT NULL ${REGION},
       contact_email varchar(254),
       notes varchar(2000),
       ${stamps})`);
-    await q.query(`CREATE UNIQUE INDEX suppliers_name_key ON suppliers (lower(name))`);
+  await q.query(`CREATE UNIQUE INDEX suppliers_name_key ON suppliers (lower(name))`);
 
-    await q.query(`CREATE TABLE thread_specs (
+  await q.query(`CREATE TABLE thread_specs (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       code varchar(40) NOT NULL UNIQUE,
       family varchar(12) NOT NULL CHECK (family IN ('NPS','NPT','G','buttress','other')),
@@ -40,14 +41,17 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       standard varchar(200) NOT NULL,
       ${stamps})`);
 
-    await q.query(`CREATE TABLE key_codes (
+  await q.query(`CREATE TABLE key_codes (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       code varchar(40) NOT NULL UNIQUE,
       label varchar(120) NOT NULL,
       marking varchar(200),
       ${stamps})`);
+}
 
-    await q.query(`CREATE TABLE drum_types (
+// Drum types and their openings.
+async function createDrumTables(q: QueryRunner): Promise<void> {
+  await q.query(`CREATE TABLE drum_types (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       supplier_id uuid NOT NULL REFERENCES suppliers(id) ON DELETE RESTRICT,
       region varchar(8) NOT NULL ${REGION},
@@ -63,10 +67,10 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       ${stamps},
       CONSTRAINT drum_types_depth_below_height CHECK (inside_depth_mm < outside_height_mm),
       CONSTRAINT drum_types_part_key UNIQUE (supplier_id, part_number))`);
-    await q.query(`CREATE INDEX drum_types_region_idx ON drum_types (region)`);
-    await q.query(`CREATE INDEX drum_types_search_idx ON drum_types USING gin ((name || ' ' || part_number) gin_trgm_ops)`);
+  await q.query(`CREATE INDEX drum_types_region_idx ON drum_types (region)`);
+  await q.query(`CREATE INDEX drum_types_search_idx ON drum_types USING gin ((name || ' ' || part_number) gin_trgm_ops)`);
 
-    await q.query(`CREATE TABLE drum_openings (
+  await q.query(`CREATE TABLE drum_openings (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       drum_type_id uuid NOT NULL REFERENCES drum_types(id) ON DELETE CASCADE,
       label varchar(40) NOT NULL,
@@ -76,9 +80,12 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       position varchar(20) NOT NULL CHECK (position IN ('large','small','center','other')),
       ${stamps},
       CONSTRAINT drum_openings_label_key UNIQUE (drum_type_id, label))`);
-    await q.query(`CREATE INDEX drum_openings_thread_idx ON drum_openings (thread_spec_id)`);
+  await q.query(`CREATE INDEX drum_openings_thread_idx ON drum_openings (thread_spec_id)`);
+}
 
-    await q.query(`CREATE TABLE dip_tubes (
+// Dip tubes and connectors, and the reviewed pairings of the two.
+async function createHardwareTables(q: QueryRunner): Promise<void> {
+  await q.query(`CREATE TABLE dip_tubes (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       part_number varchar(60) NOT NULL,
       supplier_id uuid NOT NULL REFERENCES suppliers(id) ON DELETE RESTRICT,
@@ -92,10 +99,10 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       ${stamps},
       CONSTRAINT dip_tubes_bore_inside_od CHECK (bore_mm < od_mm),
       CONSTRAINT dip_tubes_part_key UNIQUE (supplier_id, part_number))`);
-    await q.query(`CREATE INDEX dip_tubes_thread_idx ON dip_tubes (thread_spec_id)`);
-    await q.query(`CREATE INDEX dip_tubes_search_idx ON dip_tubes USING gin ((part_number || ' ' || material) gin_trgm_ops)`);
+  await q.query(`CREATE INDEX dip_tubes_thread_idx ON dip_tubes (thread_spec_id)`);
+  await q.query(`CREATE INDEX dip_tubes_search_idx ON dip_tubes USING gin ((part_number || ' ' || material) gin_trgm_ops)`);
 
-    await q.query(`CREATE TABLE connectors (
+  await q.query(`CREATE TABLE connectors (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       part_number varchar(60) NOT NULL,
       supplier_id uuid NOT NULL REFERENCES suppliers(id) ON DELETE RESTRICT,
@@ -110,9 +117,9 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       ${stamps},
       CONSTRAINT connectors_return_consistent CHECK ((return_path = 'none') = (return_bore_mm IS NULL)),
       CONSTRAINT connectors_part_key UNIQUE (supplier_id, part_number))`);
-    await q.query(`CREATE INDEX connectors_search_idx ON connectors USING gin ((part_number || ' ' || wetted_materials) gin_trgm_ops)`);
+  await q.query(`CREATE INDEX connectors_search_idx ON connectors USING gin ((part_number || ' ' || wetted_materials) gin_trgm_ops)`);
 
-    await q.query(`CREATE TABLE pairings (
+  await q.query(`CREATE TABLE pairings (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       dip_tube_id uuid NOT NULL REFERENCES dip_tubes(id) ON DELETE RESTRICT,
       connector_id uuid NOT NULL REFERENCES connectors(id) ON DELETE RESTRICT,
@@ -125,19 +132,22 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       CONSTRAINT pairings_pair_key UNIQUE (dip_tube_id, connector_id),
       CONSTRAINT pairings_four_eyes CHECK (approver_id IS NULL OR approver_id <> author_id),
       CONSTRAINT pairings_approved_has_approver CHECK (status <> 'approved' OR approver_id IS NOT NULL))`);
-    await q.query(`CREATE INDEX pairings_connector_idx ON pairings (connector_id)`);
-    await q.query(`CREATE INDEX pairings_status_idx ON pairings (status)`);
+  await q.query(`CREATE INDEX pairings_connector_idx ON pairings (connector_id)`);
+  await q.query(`CREATE INDEX pairings_status_idx ON pairings (status)`);
 
-    await q.query(`CREATE TABLE pairing_reviews (
+  await q.query(`CREATE TABLE pairing_reviews (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       pairing_id uuid NOT NULL REFERENCES pairings(id) ON DELETE CASCADE,
       reviewer_id uuid NOT NULL REFERENCES users(id),
       decision varchar(10) NOT NULL CHECK (decision IN ('approved','rejected','retired')),
       comment varchar(2000) NOT NULL,
       ${stamps})`);
-    await q.query(`CREATE INDEX pairing_reviews_pairing_idx ON pairing_reviews (pairing_id, created_at)`);
+  await q.query(`CREATE INDEX pairing_reviews_pairing_idx ON pairing_reviews (pairing_id, created_at)`);
+}
 
-    await q.query(`CREATE TABLE slurries (
+// What the site holds: slurries, dispense stations and their tube sets.
+async function createSiteTables(q: QueryRunner): Promise<void> {
+  await q.query(`CREATE TABLE slurries (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       name varchar(120) NOT NULL,
       supplier_id uuid NOT NULL REFERENCES suppliers(id) ON DELETE RESTRICT,
@@ -147,9 +157,9 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       shear_sensitive boolean NOT NULL DEFAULT false,
       solids_wt_pct double precision NOT NULL CHECK (solids_wt_pct >= 0 AND solids_wt_pct <= 100),
       ${stamps})`);
-    await q.query(`CREATE UNIQUE INDEX slurries_name_key ON slurries (supplier_id, lower(name))`);
+  await q.query(`CREATE UNIQUE INDEX slurries_name_key ON slurries (supplier_id, lower(name))`);
 
-    await q.query(`CREATE TABLE stations (
+  await q.query(`CREATE TABLE stations (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       name varchar(120) NOT NULL UNIQUE,
       bay varchar(60) NOT NULL,
@@ -159,7 +169,7 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       flow_lpm double precision NOT NULL CHECK (flow_lpm > 0),
       ${stamps})`);
 
-    await q.query(`CREATE TABLE tube_sets (
+  await q.query(`CREATE TABLE tube_sets (
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       station_id uuid NOT NULL REFERENCES stations(id) ON DELETE CASCADE,
       label varchar(40) NOT NULL,
@@ -170,6 +180,17 @@ export class CreateRegistry1764615600000 implements MigrationInterface {
       last_used_at timestamptz,
       ${stamps},
       CONSTRAINT tube_sets_label_key UNIQUE (station_id, label))`);
+}
+
+export class CreateRegistry1764615600000 implements MigrationInterface {
+  name = 'CreateRegistry1764615600000';
+
+  async up(q: QueryRunner): Promise<void> {
+    await addFitSettings(q);
+    await createReferenceTables(q);
+    await createDrumTables(q);
+    await createHardwareTables(q);
+    await createSiteTables(q);
   }
 
   async down(q: QueryRunner): Promise<void> {

@@ -1,6 +1,8 @@
+import { useRouter } from 'expo-router';
 import type { ReactNode } from 'react';
 import { KeyboardAvoidingView, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '../theme';
+import { Button } from '../ui/button';
 import { Logo } from '../ui/logo';
 
 /** The one layout of the signed-out screens (sign-in, forgot, reset) and the forced password change: a centred card. */
@@ -29,6 +31,22 @@ export function FormMessage({ kind, children, testID }: { kind: 'problem' | 'don
     <Text role={kind === 'problem' ? 'alert' : 'status'} testID={testID} style={[styles.message, kind === 'problem' ? styles.problem : styles.done]}>
       {children}
     </Text>
+  );
+}
+
+/**
+ * The end of a signed-out flow: what the server said, and the way back to sign-in.
+ * Test ids: `<testID>-screen`, `<testID>-done`, and the button's own.
+ */
+export function DoneFrame({ title, message, testID, signIn }: { title: string; message: string; testID: string; signIn: { label: string; testID: string } }) {
+  const router = useRouter();
+  return (
+    <AuthFrame title={title} testID={`${testID}-screen`}>
+      <FormMessage kind="done" testID={`${testID}-done`}>
+        {message}
+      </FormMessage>
+      <Button label={signIn.label} onPress={() => router.replace('/sign-in')} testID={signIn.testID} />
+    </AuthFrame>
   );
 }
 

@@ -4,7 +4,7 @@ import { RESET_LINK_MINUTES } from '@/shared/passwords';
 import { useForgotPasswordMutation } from '../data/passwords';
 import { Button } from '../ui/button';
 import { TextField } from '../ui/text-field';
-import { AuthFrame, FormMessage } from './auth-frame';
+import { AuthFrame, DoneFrame, FormMessage } from './auth-frame';
 import { emailProblem } from './email';
 
 /** "Forgot password?": asks for the address and sends a link; the answer is the same whoever the address belongs to. */
@@ -21,16 +21,7 @@ export function ForgotPasswordScreen() {
     if (!problem) send.mutate(email.trim());
   };
 
-  if (send.isSuccess) {
-    return (
-      <AuthFrame title="Check your mail" testID="forgot-screen">
-        <FormMessage kind="done" testID="forgot-done">
-          {send.data.message}
-        </FormMessage>
-        <Button label="Back to sign-in" onPress={() => router.replace('/sign-in')} testID="forgot-back" />
-      </AuthFrame>
-    );
-  }
+  if (send.isSuccess) return <DoneFrame title="Check your mail" message={send.data.message} testID="forgot" signIn={{ label: 'Back to sign-in', testID: 'forgot-back' }} />;
   return (
     <AuthFrame
       title="Forgot your password?"

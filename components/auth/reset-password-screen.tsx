@@ -3,7 +3,7 @@ import { RESET_LINK_MINUTES } from '@/shared/passwords';
 import { useSession } from '../session';
 import { useResetPasswordMutation } from '../data/passwords';
 import { Button } from '../ui/button';
-import { AuthFrame, FormMessage } from './auth-frame';
+import { AuthFrame, DoneFrame, FormMessage } from './auth-frame';
 import { NewPasswordFields } from './new-password-fields';
 import { useResetToken } from './reset-token';
 import { useNewPassword } from './use-new-password';
@@ -42,16 +42,7 @@ export function ResetPasswordScreen() {
       </AuthFrame>
     );
   }
-  if (reset.isSuccess) {
-    return (
-      <AuthFrame title="New password set" testID="reset-screen">
-        <FormMessage kind="done" testID="reset-done">
-          {reset.data.message}
-        </FormMessage>
-        <Button label="Sign in" onPress={() => router.replace('/sign-in')} testID="reset-sign-in" />
-      </AuthFrame>
-    );
-  }
+  if (reset.isSuccess) return <DoneFrame title="New password set" message={reset.data.message} testID="reset" signIn={{ label: 'Sign in', testID: 'reset-sign-in' }} />;
   return (
     <AuthFrame title="Choose a new password" lead="Everywhere you are signed in, you will be signed out; then sign in with the new password." testID="reset-screen">
       <NewPasswordFields form={form} onSubmit={submit} testID="reset" />

@@ -1,4 +1,4 @@
-import { useState, type ReactNode } from 'react';
+import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { downloadAttachment } from '../data/attachments';
 import { useImportHistoryQuery, type ImportHistoryItem } from '../data/imports';
@@ -9,6 +9,7 @@ import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
 import { useIsWide } from '../use-layout';
 import { countsLine, KIND_LABELS, OUTCOME_WORDS } from './labels';
+import { Cell, HeadRow } from './table-cells';
 
 /** Past imports, newest first: who ran which file, what it found, and the file itself as it was read. */
 export function ImportHistory() {
@@ -28,14 +29,18 @@ export function ImportHistory() {
         </Text>
       ) : wide ? (
         <View role="table" aria-label="Past imports" style={styles.table} testID="import-history-list">
-          <View role="row" style={[styles.tr, styles.thead]}>
-            <Head flex={1.3}>When</Head>
-            <Head flex={2}>File</Head>
-            <Head flex={1.3}>By</Head>
-            <Head flex={2.2}>Rows</Head>
-            <Head flex={1}>Outcome</Head>
-            <Head flex={1.2}>Kept file</Head>
-          </View>
+          <HeadRow
+            columns={[
+              ['When', 1.3],
+              ['File', 2],
+              ['By', 1.3],
+              ['Rows', 2.2],
+              ['Outcome', 1],
+              ['Kept file', 1.2],
+            ]}
+            rowStyle={[styles.tr, styles.thead]}
+            cellStyle={styles.td}
+          />
           {history.data.items.map((item, i) => (
             <HistoryRow key={item.id} item={item} wide alt={i % 2 === 1} />
           ))}
@@ -78,23 +83,23 @@ function HistoryRow({ item, wide, alt }: { item: ImportHistoryItem; wide: boolea
   if (wide) {
     return (
       <View role="row" style={[styles.tr, alt && styles.trAlt]} testID={testID}>
-        <Cell flex={1.3}>
+        <Cell flex={1.3} style={styles.td}>
           <Text style={type.body}>{formatWhen(item.at)}</Text>
         </Cell>
-        <Cell flex={2}>
+        <Cell flex={2} style={styles.td}>
           <Text style={[type.body, styles.strong]}>{item.fileName}</Text>
           <Text style={type.small}>{KIND_LABELS[item.kind]}</Text>
         </Cell>
-        <Cell flex={1.3}>
+        <Cell flex={1.3} style={styles.td}>
           <Text style={type.body}>{item.byName ?? '—'}</Text>
         </Cell>
-        <Cell flex={2.2}>
+        <Cell flex={2.2} style={styles.td}>
           <Text style={type.body}>{countsLine(item.counts)}</Text>
         </Cell>
-        <Cell flex={1}>
+        <Cell flex={1} style={styles.td}>
           <Tag label={outcome.word} tone={outcome.tone} testID={`${testID}-outcome`} />
         </Cell>
-        <Cell flex={1.2}>
+        <Cell flex={1.2} style={styles.td}>
           {download}
           {problem}
         </Cell>
@@ -119,29 +124,12 @@ function HistoryRow({ item, wide, alt }: { item: ImportHistoryItem; wide: boolea
   );
 }
 
-function Head({ children, flex }: { children: ReactNode; flex: number }) {
-  return (
-    <View role="columnheader" style={[styles.td, { flex }]}>
-      <Text style={styles.th}>{children}</Text>
-    </View>
-  );
-}
-
-function Cell({ children, flex }: { children: ReactNode; flex: number }) {
-  return (
-    <View role="cell" style={[styles.td, { flex }]}>
-      {children}
-    </View>
-  );
-}
-
 const styles = StyleSheet.create({
   empty: { color: colors.inkMuted },
   table: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, overflow: 'hidden' },
   tr: { flexDirection: 'row', alignItems: 'center', borderBottomWidth: 1, borderBottomColor: colors.line, minHeight: 48 },
   trAlt: { backgroundColor: colors.paper },
   thead: { backgroundColor: colors.surfaceSunk, minHeight: 40 },
-  th: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
   td: { paddingHorizontal: space.sm, paddingVertical: space.xs, minWidth: 0, gap: 2, alignItems: 'flex-start' },
   strong: { fontFamily: fonts.semibold },
   cards: { gap: space.sm },

@@ -8,6 +8,7 @@ import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { useIsWide } from '../use-layout';
 import { plural } from './labels';
+import { Cell, HeadRow } from './table-cells';
 
 const PLANNED_PREVIEW = 10;
 const ACTION_LOOK: Record<ImportPlannedRow['action'], { word: string; tone: 'primary' | 'caution' | 'muted' }> = {
@@ -70,11 +71,15 @@ function RejectedRows({ errors, rejected, wide }: { errors: ImportRowError[]; re
       </View>
       {wide ? (
         <View role="table" aria-label="Rejected rows" style={styles.table} testID="import-rejected">
-          <View role="row" style={[styles.tr, styles.thead]}>
-            <HeadCell flex={0.6}>Line</HeadCell>
-            <HeadCell flex={1.2}>Column</HeadCell>
-            <HeadCell flex={4}>Reason</HeadCell>
-          </View>
+          <HeadRow
+            columns={[
+              ['Line', 0.6],
+              ['Column', 1.2],
+              ['Reason', 4],
+            ]}
+            rowStyle={[styles.tr, styles.thead]}
+            cellStyle={styles.td}
+          />
           {errors.map((e, i) => (
             <View role="row" key={`${e.line}-${i}`} style={[styles.tr, i % 2 === 1 && styles.trAlt]} testID={`import-rejected-line-${e.line}`}>
               <BodyCell flex={0.6} strong>
@@ -114,12 +119,16 @@ function PlannedRows({ rows, total, wide }: { rows: ImportPlannedRow[]; total: n
       </Text>
       {wide ? (
         <View role="table" aria-label="Planned rows" style={styles.table} testID="import-planned">
-          <View role="row" style={[styles.tr, styles.thead]}>
-            <HeadCell flex={0.6}>Line</HeadCell>
-            <HeadCell flex={1.6}>Part number</HeadCell>
-            <HeadCell flex={2}>Supplier</HeadCell>
-            <HeadCell flex={1}>Action</HeadCell>
-          </View>
+          <HeadRow
+            columns={[
+              ['Line', 0.6],
+              ['Part number', 1.6],
+              ['Supplier', 2],
+              ['Action', 1],
+            ]}
+            rowStyle={[styles.tr, styles.thead]}
+            cellStyle={styles.td}
+          />
           {shown.map((r, i) => (
             <View role="row" key={r.line} style={[styles.tr, i % 2 === 1 && styles.trAlt]} testID={`import-planned-line-${r.line}`}>
               <BodyCell flex={0.6}>{r.line}</BodyCell>
@@ -161,19 +170,11 @@ function PlannedRows({ rows, total, wide }: { rows: ImportPlannedRow[]; total: n
   );
 }
 
-function HeadCell({ children, flex }: { children: ReactNode; flex: number }) {
-  return (
-    <View role="columnheader" style={[styles.td, { flex }]}>
-      <Text style={styles.th}>{children}</Text>
-    </View>
-  );
-}
-
 function BodyCell({ children, flex, strong = false }: { children: ReactNode; flex: number; strong?: boolean }) {
   return (
-    <View role="cell" style={[styles.td, { flex }]}>
+    <Cell flex={flex} style={styles.td}>
       <Text style={[type.body, strong && styles.strong]}>{children}</Text>
-    </View>
+    </Cell>
   );
 }
 
@@ -204,7 +205,6 @@ const styles = StyleSheet.create({
   tr: { flexDirection: 'row', alignItems: 'center', borderBottomWidth: 1, borderBottomColor: colors.line, minHeight: 40 },
   trAlt: { backgroundColor: colors.paper },
   thead: { backgroundColor: colors.surfaceSunk },
-  th: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
   td: { paddingHorizontal: space.md, paddingVertical: space.xs, minWidth: 0 },
   strong: { fontFamily: fonts.semibold },
   cards: { gap: space.sm },

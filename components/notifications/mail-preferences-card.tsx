@@ -2,9 +2,9 @@ import { StyleSheet, Text, View } from 'react-native';
 import { MAIL_KINDS, useMailPreferences } from '../data/mail-preferences';
 import { SectionTitle } from '../receive/parts';
 import { Toggle } from '../sourcing/toggle';
-import { colors, fonts, space, type } from '../theme';
-import { Button } from '../ui/button';
+import { space, type } from '../theme';
 import { Card } from '../ui/card';
+import { SaveStatus } from '../ui/save-status';
 
 /** Which notices also come by e-mail; each choice is saved on the account as soon as it is made. */
 export function MailPreferencesCard() {
@@ -18,23 +18,11 @@ export function MailPreferencesCard() {
           <Toggle key={kind} label={label} value={prefs.isOn(kind)} onChange={(on) => prefs.set(kind, on)} testID={`mailprefs-${kind}`} />
         ))}
       </View>
-      {prefs.error ? (
-        <View role="alert" style={styles.problem} testID="mailprefs-error">
-          <Text style={styles.error}>Not saved: {prefs.error.message}</Text>
-          <Button label="Try again" variant="secondary" onPress={prefs.retry} testID="mailprefs-retry" />
-        </View>
-      ) : (
-        <Text style={[type.small, prefs.saved && !prefs.saving && styles.saved]} aria-live="polite" testID="mailprefs-status">
-          {prefs.saving ? 'Saving…' : prefs.saved ? 'Saved.' : ' '}
-        </Text>
-      )}
+      <SaveStatus state={prefs} testID="mailprefs" />
     </Card>
   );
 }
 
 const styles = StyleSheet.create({
   list: { gap: space.xs },
-  problem: { gap: space.sm, alignItems: 'flex-start' },
-  error: { fontFamily: fonts.semibold, fontSize: 15, color: colors.danger },
-  saved: { color: colors.fits, fontFamily: fonts.semibold },
 });

@@ -1,123 +1,29 @@
-import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { PairingRecord } from '@/shared/contract/records';
-import { ApiError } from '../api/client';
-import { usePairingActionMutation, type PairingAction } from '../data/pairing-actions';
 import { useCanEditRegistry } from '../registry/use-can-edit-registry';
 import { useSession } from '../session';
 import { colors, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { TextField } from '../ui/text-field';
-
-const DONE: Record<PairingAction, string> = {
-  approve: 'Approved. It can now be used at the dock.',
-  reject: 'Rejected. It stays a draft; the author can see your comment in the history.',
-  retire: 'Retired. It can no longer be used; the history stays.',
-};
+import { usePairingReview, type PairingReview } from './use-pairing-review';
 
 /** Four eyes: who may decide on this pairing, and the decision itself for those who may. */
 export function ReviewPanel({ pairing }: { pairing: PairingRecord }) {
-  const { session } = useSession();
-  const [comment, setComment] = useState('');
-  const [commentError, setCommentError] = useState<string | null>(null);
-  const [done, setDone] = useState<string | null>(null);
-  const approve = usePairingActionMutation('approve');
-  const reject = usePairingActionMutation('reject');
-  const retire = usePairingActionMutation('retire');
-  const busy = approve.isPending || reject.isPending || retire.isPending;
-  const failed = [approve, reject, retire].find((m) => m.isError)?.error;
-
-  const user = session?.user;
+  const review = usePairingReview(pairing);
   const reviewer = useCanEditRegistry();
-  const isAuthor = !!user && user.id === pairing.authorId;
-  const author = pairing.authorName ?? 'its author';
-
-  const act = (action: PairingAction) => {
-    // The buttons stay enabled while a decision is sent (a Button disabled while focused keeps a stale focus ring on the web).
-    if (busy) return;
-    setDone(null);
-    const needsReason = action !== 'approve';
-    if (needsReason && comment.trim().length < 3) {
-      setCommentError(action === 'reject' ? 'Say why you reject it: a comment of at least 3 characters.' : 'Say why you retire it: a comment of at least 3 characters.');
-      return;
-    }
-    setCommentError(null);
-    for (const m of [approve, reject, retire]) m.reset();
-    const mutation = action === 'approve' ? approve : action === 'reject' ? reject : retire;
-    mutation.mutate(
-      { id: pairing.id, comment },
-      {
-        onSuccess: () => {
-          setComment('');
-          setDone(DONE[action]);
-        },
-        onError: (err) => {
-          if (err instanceof ApiError && err.fieldMessages().comment) setCommentError(`Comment ${err.fieldMessages().comment}.`);
-        },
-      },
-    );
-  };
-
-  const commentField = (hint: string) => (
-    <TextField
-      label="Review comment"
-      hint={hint}
-      value={comment}
-      onChangeText={(v) => {
-        setComment(v);
-        if (commentError && v.trim().length >= 3) setCommentError(null);
-      }}
-      multiline
-      numberOfLines={3}
-      maxLength={2000}
-      error={commentError}
-      testID="pairing-comment"
-    />
-  );
+  const { done, failed, commentError } = review;
 
   let content;
   if (pairing.status === 'draft') {
-    content = (
-      <>
-        <View style={styles.who}>
-          <Text style={type.label}>Who may approve</Text>
-          <Text style={type.body} testID="pairing-who-may-approve">
-            Any engineer other than {author}. Administrators may approve too.
-          </Text>
-        </View>
-        {!reviewer ? (
-          <Text style={type.body} testID="pairing-read-only">
-            You can read this pairing; engineers review it.
-          </Text>
-        ) : isAuthor ? (
-          <>
-            <View style={styles.actions}>
-              <Button label="Approve" disabled testID="pairing-approve" />
-              <Button label="Reject" variant="secondary" disabled testID="pairing-reject" />
-            </View>
-            <Text style={styles.reason} testID="pairing-approve-reason">
-              You wrote this pairing, so you cannot approve or reject it: ask another engineer to review it.
-            </Text>
-          </>
-        ) : (
-          <>
-            {commentField('Optional to approve; required to reject.')}
-            <View style={styles.actions}>
-              <Button label={approve.isPending ? 'Approving…' : 'Approve'} onPress={() => act('approve')} testID="pairing-approve" />
-              <Button label={reject.isPending ? 'Rejecting…' : 'Reject'} variant="secondary" onPress={() => act('reject')} testID="pairing-reject" />
-            </View>
-          </>
-        )}
-      </>
-    );
+    content = <DraftReview pairing={pairing} review={review} reviewer={reviewer} />;
   } else if (pairing.status === 'approved') {
     content = reviewer ? (
       <>
         <Text style={type.body}>Retire it when the tube or head should no longer be used together. The pairing and its history stay on record.</Text>
-        {commentField('Required: why it is retired.')}
+        <CommentField review={review} hint="Required: why it is retired." />
         <View style={styles.actions}>
-          <Button label={retire.isPending ? 'Retiring…' : 'Retire pairing'} variant="danger" onPress={() => act('retire')} testID="pairing-retire" />
+          <Button label={review.pending.retire ? 'Retiring…' : 'Retire pairing'} variant="danger" onPress={() => review.act('retire')} testID="pairing-retire" />
         </View>
       </>
     ) : (
@@ -150,6 +56,63 @@ export function ReviewPanel({ pairing }: { pairing: PairingRecord }) {
         </View>
       ) : null}
     </Card>
+  );
+}
+
+/** A draft: who may approve it, and Approve / Reject for an engineer who did not write it. */
+function DraftReview({ pairing, review, reviewer }: { pairing: PairingRecord; review: PairingReview; reviewer: boolean }) {
+  const { session } = useSession();
+  const user = session?.user;
+  const isAuthor = !!user && user.id === pairing.authorId;
+  const author = pairing.authorName ?? 'its author';
+  return (
+    <>
+      <View style={styles.who}>
+        <Text style={type.label}>Who may approve</Text>
+        <Text style={type.body} testID="pairing-who-may-approve">
+          Any engineer other than {author}. Administrators may approve too.
+        </Text>
+      </View>
+      {!reviewer ? (
+        <Text style={type.body} testID="pairing-read-only">
+          You can read this pairing; engineers review it.
+        </Text>
+      ) : isAuthor ? (
+        <>
+          <View style={styles.actions}>
+            <Button label="Approve" disabled testID="pairing-approve" />
+            <Button label="Reject" variant="secondary" disabled testID="pairing-reject" />
+          </View>
+          <Text style={styles.reason} testID="pairing-approve-reason">
+            You wrote this pairing, so you cannot approve or reject it: ask another engineer to review it.
+          </Text>
+        </>
+      ) : (
+        <>
+          <CommentField review={review} hint="Optional to approve; required to reject." />
+          <View style={styles.actions}>
+            <Button label={review.pending.approve ? 'Approving…' : 'Approve'} onPress={() => review.act('approve')} testID="pairing-approve" />
+            <Button label={review.pending.reject ? 'Rejecting…' : 'Reject'} variant="secondary" onPress={() => review.act('reject')} testID="pairing-reject" />
+          </View>
+        </>
+      )}
+    </>
+  );
+}
+
+function CommentField({ review, hint }: { review: PairingReview; hint: string }) {
+  return (
+    <TextField
+      label="Review comment"
+      hint={hint}
+      value={review.comment}
+      onChangeText={review.changeComment}
+      multiline
+      numberOfLines={3}
+      maxLength={2000}
+      error={review.commentError}
+      testID="pairing-comment"
+    />
   );
 }
 

@@ -9,10 +9,10 @@ import { colors, fonts, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ChoiceChips } from '../ui/choice-chips';
-import { ErrorState } from '../ui/states';
+import { parseNumber } from '../ui/number-field';
 import { TextField } from '../ui/text-field';
 import { FlowPlot } from './flow-plot';
-import { parseNumber, positiveProblem } from './parse-number';
+import { positiveProblem } from './positive-problem';
 import { ToolPage } from './tool-page';
 
 const FLOW_LABELS: Record<FlowUnit, string> = { 'L/min': 'L/min', 'gal/min': 'US gal/min', 'm3/h': 'm³/h' };
@@ -57,58 +57,52 @@ export function FlowScreen() {
       </Text>
       <TextField label="Flow" value={flow} onChangeText={setFlow} inputMode="decimal" placeholder="e.g. 20" error={errors.flow} onSubmitEditing={submit} testID="flow-value" />
       <ChoiceChips label="Flow unit" options={FLOW_UNITS.map((u) => ({ value: u, label: FLOW_LABELS[u] }))} value={unit} onChange={setUnit} testID="flow-unit" />
-      <TextField
-        label="Feed bore, mm"
-        hint="3/4 in is 19.05 mm."
-        value={feed}
-        onChangeText={setFeed}
-        inputMode="decimal"
-        placeholder="e.g. 19.05"
-        error={errors.feed}
-        onSubmitEditing={submit}
-        testID="flow-feed-bore"
-      />
-      <TextField
+      <BoreField label="Feed bore, mm" hint="3/4 in is 19.05 mm." value={feed} onChange={setFeed} placeholder="e.g. 19.05" error={errors.feed} onSubmit={submit} testID="flow-feed-bore" />
+      <BoreField
         label="Return bore, mm (optional)"
         hint="Leave empty for a feed-only head. 1/2 in is 12.7 mm."
         value={ret}
-        onChangeText={setRet}
-        inputMode="decimal"
+        onChange={setRet}
         placeholder="e.g. 12.7"
         error={errors.ret}
-        onSubmitEditing={submit}
+        onSubmit={submit}
         testID="flow-return-bore"
       />
       <Button label="Calculate" onPress={submit} busy={calc.isPending} testID="flow-submit" />
     </Card>
   );
 
-  let result;
-  if (calc.isError && !(calc.error instanceof ApiError && calc.error.status === 400)) {
-    result = <ErrorState error={calc.error} onRetry={() => calc.variables && calc.mutate(calc.variables)} />;
-  } else if (calc.data && calc.variables) {
-    result = <FlowResult answer={calc.data} input={calc.variables} />;
-  } else {
-    result = (
-      <Card>
-        <Text style={type.label}>Nothing calculated yet</Text>
-        <Text style={type.body}>Enter the station's flow and the head's bores. A narrower return runs faster than the feed at the same flow, which can spray and shear slurry back in the drum.</Text>
-      </Card>
-    );
-  }
-
   return (
     <ToolPage
-      title={'Flow and shear'}
-      subtitle={"How fast slurry moves through a dispense head's ports, and how hard it is sheared at the wall."}
-      testID={'tools-flow'}
+      title="Flow and shear"
+      subtitle="How fast slurry moves through a dispense head's ports, and how hard it is sheared at the wall."
+      testID="tools-flow"
       form={form}
-      result={result}
-      answer={calc.data}
-      formFlex={4}
-      resultFlex={7}
+      calc={calc}
+      renderAnswer={(answer, input) => <FlowResult answer={answer} input={input} />}
+      empty={{
+        title: 'Nothing calculated yet',
+        body: "Enter the station's flow and the head's bores. A narrower return runs faster than the feed at the same flow, which can spray and shear slurry back in the drum.",
+      }}
+      flex={[4, 7]}
     />
   );
+}
+
+interface BoreFieldProps {
+  label: string;
+  hint: string;
+  value: string;
+  onChange: (text: string) => void;
+  placeholder: string;
+  error: string | null | undefined;
+  onSubmit: () => void;
+  testID: string;
+}
+
+/** A port's bore in mm, typed as a decimal. */
+function BoreField({ label, hint, value, onChange, placeholder, error, onSubmit, testID }: BoreFieldProps) {
+  return <TextField label={label} hint={hint} value={value} onChangeText={onChange} inputMode="decimal" placeholder={placeholder} error={error} onSubmitEditing={onSubmit} testID={testID} />;
 }
 
 function FlowResult({ answer, input }: { answer: FlowAnswer; input: FlowInput }) {

@@ -10,9 +10,9 @@ import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ChoiceChips } from '../ui/choice-chips';
-import { ErrorState } from '../ui/states';
+import { parseNumber } from '../ui/number-field';
 import { TextField } from '../ui/text-field';
-import { parseNumber, positiveProblem } from './parse-number';
+import { positiveProblem } from './positive-problem';
 import { ToolPage } from './tool-page';
 
 type CountKind = 'tpi' | 'pitch';
@@ -24,8 +24,43 @@ const UNIT_OPTIONS = [
   { value: 'in', label: 'in' },
 ] as const;
 
+const COUNT_KIND_OPTIONS = [
+  { value: 'tpi', label: 'Threads per inch' },
+  { value: 'pitch', label: 'Pitch in mm' },
+] as const;
+const FLANK_OPTIONS = [
+  { value: 'unknown', label: 'Not measured' },
+  { value: '55', label: '55°' },
+  { value: '60', label: '60°' },
+] as const;
+const TAPER_OPTIONS = [
+  { value: 'unknown', label: 'Not checked' },
+  { value: 'tapered', label: 'Tapered' },
+  { value: 'parallel', label: 'Parallel' },
+] as const;
+
 /** Identifies a bung or tube thread from what can be measured at the dock, and says what to measure next. */
 export function ThreadScreen() {
+  const reading = useThreadReading();
+  return (
+    <ToolPage
+      title="Thread identifier"
+      subtitle="Name a thread from a caliper reading and a gauge, before a dip tube is forced into the wrong bung."
+      testID="tools-thread"
+      form={<ThreadForm reading={reading} />}
+      calc={reading.match}
+      renderAnswer={(answer) => <ThreadResult answer={answer} />}
+      empty={{
+        title: 'No reading yet',
+        body: 'Enter at least the diameter. Each extra measurement — count, flank angle, taper — rules out look-alike threads from other standards.',
+      }}
+      flex={[5, 6]}
+    />
+  );
+}
+
+/** The measurements as typed, their messages, and the request that names the thread. */
+function useThreadReading() {
   const { unit: preferred } = useLengthUnit();
   const match = useThreadMatchMutation();
   const [diameter, setDiameter] = useState('');
@@ -58,7 +93,11 @@ export function ThreadScreen() {
     });
   };
 
-  const form = (
+  return { match, submit, errors, diameter, setDiameter, unit, setUnit, countKind, setCountKind, count, setCount, flank, setFlank, taper, setTaper };
+}
+
+function ThreadForm({ reading: r }: { reading: ReturnType<typeof useThreadReading> }) {
+  return (
     <Card testID="thread-form">
       <Text role="heading" aria-level={2} style={type.heading}>
         What you measured
@@ -68,89 +107,33 @@ export function ThreadScreen() {
           <TextField
             label="Major diameter (across the crests)"
             hint="Caliper reading; at the large end if the thread narrows."
-            value={diameter}
-            onChangeText={setDiameter}
+            value={r.diameter}
+            onChangeText={r.setDiameter}
             inputMode="decimal"
-            placeholder={unit === 'in' ? 'e.g. 2.375' : 'e.g. 60.3'}
-            error={errors.diameter}
-            onSubmitEditing={submit}
+            placeholder={r.unit === 'in' ? 'e.g. 2.375' : 'e.g. 60.3'}
+            error={r.errors.diameter}
+            onSubmitEditing={r.submit}
             testID="thread-diameter"
           />
         </View>
-        <ChoiceChips label="Unit" options={UNIT_OPTIONS} value={unit} onChange={setUnit} testID="thread-unit" />
+        <ChoiceChips label="Unit" options={UNIT_OPTIONS} value={r.unit} onChange={r.setUnit} testID="thread-unit" />
       </View>
-      <ChoiceChips
-        label="Thread count, if measured"
-        options={[
-          { value: 'tpi', label: 'Threads per inch' },
-          { value: 'pitch', label: 'Pitch in mm' },
-        ]}
-        value={countKind}
-        onChange={setCountKind}
-        testID="thread-count-kind"
-      />
+      <ChoiceChips label="Thread count, if measured" options={COUNT_KIND_OPTIONS} value={r.countKind} onChange={r.setCountKind} testID="thread-count-kind" />
       <TextField
-        label={countKind === 'tpi' ? 'Threads per inch (optional)' : 'Pitch, mm (optional)'}
+        label={r.countKind === 'tpi' ? 'Threads per inch (optional)' : 'Pitch, mm (optional)'}
         hint="From a thread gauge; leave empty if not measured."
-        value={count}
-        onChangeText={setCount}
+        value={r.count}
+        onChangeText={r.setCount}
         inputMode="decimal"
-        placeholder={countKind === 'tpi' ? 'e.g. 11.5' : 'e.g. 2.309'}
-        error={errors.count}
-        onSubmitEditing={submit}
+        placeholder={r.countKind === 'tpi' ? 'e.g. 11.5' : 'e.g. 2.309'}
+        error={r.errors.count}
+        onSubmitEditing={r.submit}
         testID="thread-count"
       />
-      <ChoiceChips
-        label="Flank angle (optional)"
-        options={[
-          { value: 'unknown', label: 'Not measured' },
-          { value: '55', label: '55°' },
-          { value: '60', label: '60°' },
-        ]}
-        value={flank}
-        onChange={setFlank}
-        testID="thread-flank"
-      />
-      <ChoiceChips
-        label="Taper (optional)"
-        options={[
-          { value: 'unknown', label: 'Not checked' },
-          { value: 'tapered', label: 'Tapered' },
-          { value: 'parallel', label: 'Parallel' },
-        ]}
-        value={taper}
-        onChange={setTaper}
-        testID="thread-taper"
-      />
-      <Button label="Identify the thread" onPress={submit} busy={match.isPending} testID="thread-submit" />
+      <ChoiceChips label="Flank angle (optional)" options={FLANK_OPTIONS} value={r.flank} onChange={r.setFlank} testID="thread-flank" />
+      <ChoiceChips label="Taper (optional)" options={TAPER_OPTIONS} value={r.taper} onChange={r.setTaper} testID="thread-taper" />
+      <Button label="Identify the thread" onPress={r.submit} busy={r.match.isPending} testID="thread-submit" />
     </Card>
-  );
-
-  let result = null;
-  if (match.isError && !(match.error instanceof ApiError && match.error.status === 400)) {
-    result = <ErrorState error={match.error} onRetry={() => match.variables && match.mutate(match.variables)} />;
-  } else if (match.data) {
-    result = <ThreadResult answer={match.data} />;
-  } else {
-    result = (
-      <Card>
-        <Text style={type.label}>No reading yet</Text>
-        <Text style={type.body}>Enter at least the diameter. Each extra measurement — count, flank angle, taper — rules out look-alike threads from other standards.</Text>
-      </Card>
-    );
-  }
-
-  return (
-    <ToolPage
-      title={'Thread identifier'}
-      subtitle={'Name a thread from a caliper reading and a gauge, before a dip tube is forced into the wrong bung.'}
-      testID={'tools-thread'}
-      form={form}
-      result={result}
-      answer={match.data}
-      formFlex={5}
-      resultFlex={6}
-    />
   );
 }
 

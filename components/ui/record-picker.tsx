@@ -1,23 +1,13 @@
 import type { UseQueryResult } from '@tanstack/react-query';
 import { forwardRef, useEffect, useId, useImperativeHandle, useRef, useState } from 'react';
-import { ActivityIndicator, Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
+import { StyleSheet, Text, TextInput, View } from 'react-native';
 import type { ListParams, Page } from '@/shared/contract/records';
 import { colors, fonts, minTouch, radius, space, type, field } from '../theme';
 import { Button } from './button';
 import { focusNativeId } from './focus';
+import { Matches, type PickedRef, type PickerOption } from './record-picker-matches';
 
-/** A picked record as a form keeps it: the value the API takes (an id or a code) and what to show. */
-export interface PickedRef {
-  id: string;
-  label: string;
-}
-
-export interface PickerOption {
-  /** The value the API takes: an id, or a code for thread specs and key codes. */
-  id: string;
-  label: string;
-  detail?: string;
-}
+export type { PickedRef, PickerOption } from './record-picker-matches';
 
 interface ListSource<T> {
   useList: (params: ListParams, options?: { enabled?: boolean }) => UseQueryResult<Page<T>, Error>;
@@ -57,6 +47,28 @@ function useDebounced<T>(value: T, ms: number): T {
 }
 
 /**
+ * Where the keyboard goes: to the search when asked to focus while open, else to Change, and back to
+ * Change after a choice (the search box it was in goes away).
+ */
+function usePickerFocus(ref: React.ForwardedRef<RecordPickerHandle>, open: boolean, changeId: string) {
+  const inputRef = useRef<TextInput>(null);
+  const focusChange = useRef(false);
+  useImperativeHandle(ref, () => ({ focus: () => (open ? inputRef.current?.focus() : focusNativeId(changeId)) }), [open, changeId]);
+  useEffect(() => {
+    if (!open && focusChange.current) {
+      focusChange.current = false;
+      focusNativeId(changeId);
+    }
+  }, [open, changeId]);
+  return {
+    inputRef,
+    focusChangeOnClose: () => {
+      focusChange.current = true;
+    },
+  };
+}
+
+/**
  * A searchable pick of one record from the API's list endpoint. Closed, it shows the choice and a Change
  * button; open, a search box and up to eight matches, each a button (Tab to it, Enter to choose).
  */
@@ -72,40 +84,27 @@ function RecordPickerInner<T>(
   const [q, setQ] = useState('');
   const query = useDebounced(q, 200);
   const list = source.useList({ q: query.trim() || undefined, pageSize: PAGE, ...filter }, { enabled: open && listing && !disabled });
-  const inputRef = useRef<TextInput>(null);
   const changeId = `${id}-change`;
-  const focusChange = useRef(false);
-
-  useImperativeHandle(ref, () => ({ focus: () => (open ? inputRef.current?.focus() : focusNativeId(changeId)) }), [open, changeId]);
-
-  // After a choice the search box goes away; keep the keyboard where the person was.
-  useEffect(() => {
-    if (!open && focusChange.current) {
-      focusChange.current = false;
-      focusNativeId(changeId);
-    }
-  }, [open, changeId]);
+  const { inputRef, focusChangeOnClose } = usePickerFocus(ref, open, changeId);
 
   // A value set from outside (a record loaded for editing) closes the search.
   useEffect(() => {
     if (value !== null) setOpen(false);
   }, [value]);
 
-  const choose = (record: T | null) => {
-    const option = record ? toOption(record) : null;
-    focusChange.current = true;
+  // Closing the search ("Keep", or after a choice) moves the keyboard to the Change button.
+  const keep = () => {
+    focusChangeOnClose();
     setOpen(false);
     setListing(false);
     setQ('');
-    onChange(option ? { id: option.id, label: option.label } : null, record);
-    onBlur?.();
   };
 
-  const keep = () => {
-    focusChange.current = true;
-    setOpen(false);
-    setListing(false);
-    setQ('');
+  const choose = (record: T | null) => {
+    const option = record ? toOption(record) : null;
+    keep();
+    onChange(option ? { id: option.id, label: option.label } : null, record);
+    onBlur?.();
   };
 
   const items = list.data?.items ?? [];
@@ -118,24 +117,18 @@ function RecordPickerInner<T>(
       </Text>
       {hint ? <Text style={type.small}>{hint}</Text> : null}
       {!open ? (
-        <View style={[styles.chosen, error ? styles.chosenError : null]}>
-          <Text style={[type.body, styles.chosenText]} testID={`${testID}-selected`}>
-            {value ? value.label : noneLabel}
-          </Text>
-          {!disabled ? (
-            <Button
-              nativeID={changeId}
-              label="Change"
-              variant="secondary"
-              accessibilityLabel={`Change ${label.toLowerCase()}`}
-              onPress={() => {
-                setOpen(true);
-                setTimeout(() => inputRef.current?.focus(), 0);
-              }}
-              testID={`${testID}-change`}
-            />
-          ) : null}
-        </View>
+        <ChosenRow
+          text={value ? value.label : noneLabel}
+          label={label}
+          changeId={changeId}
+          error={!!error}
+          disabled={disabled}
+          onChange={() => {
+            setOpen(true);
+            setTimeout(() => inputRef.current?.focus(), 0);
+          }}
+          testID={testID}
+        />
       ) : (
         <View style={styles.panel}>
           <View style={styles.searchRow}>
@@ -161,32 +154,7 @@ function RecordPickerInner<T>(
             />
             {hasChoice ? <Button label="Keep" variant="quiet" accessibilityLabel={`Keep the current ${label.toLowerCase()}`} onPress={keep} testID={`${testID}-keep`} /> : null}
           </View>
-          {listing ? (
-            <View role="group" aria-label={`${label} matches`} style={styles.options}>
-              {noneLabel !== undefined ? <OptionRow label={noneLabel} detail="None" onPress={() => choose(null)} testID={`${testID}-none`} /> : null}
-              {items.map((r) => {
-                const o = toOption(r);
-                return <OptionRow key={o.id} label={o.label} detail={o.detail} selected={value?.id === o.id} onPress={() => choose(r)} testID={`${testID}-option-${o.id}`} />;
-              })}
-              {list.isPending ? (
-                <View style={styles.note}>
-                  <ActivityIndicator color={colors.primary} />
-                  <Text style={type.small}>Searching…</Text>
-                </View>
-              ) : list.isError ? (
-                <View style={styles.note}>
-                  <Text style={[type.small, { color: colors.danger }]}>Could not search: {list.error.message}</Text>
-                  <Button label="Try again" variant="quiet" onPress={() => list.refetch()} />
-                </View>
-              ) : items.length === 0 ? (
-                <Text style={[type.small, styles.note]}>{q.trim() ? `Nothing matches "${q.trim()}". Try part of the name or code.` : 'Nothing to choose from yet.'}</Text>
-              ) : list.data && list.data.total > items.length ? (
-                <Text style={[type.small, styles.note]}>
-                  Showing {items.length} of {list.data.total}; type to narrow the list.
-                </Text>
-              ) : null}
-            </View>
-          ) : null}
+          {listing ? <Matches label={label} noneLabel={noneLabel} list={list} toOption={toOption} value={value} q={q} onChoose={choose} testID={testID} /> : null}
         </View>
       )}
       {error ? (
@@ -198,19 +166,25 @@ function RecordPickerInner<T>(
   );
 }
 
-function OptionRow({ label, detail, selected, onPress, testID }: { label: string; detail?: string; selected?: boolean; onPress: () => void; testID: string }) {
+interface ChosenRowProps {
+  text: string | undefined;
+  label: string;
+  changeId: string;
+  error: boolean;
+  disabled: boolean | undefined;
+  onChange: () => void;
+  testID: string;
+}
+
+/** The closed picker: the choice, and the Change button that opens the search. */
+function ChosenRow({ text, label, changeId, error, disabled, onChange, testID }: ChosenRowProps) {
   return (
-    <Pressable
-      role="button"
-      aria-label={`Choose ${label}`}
-      aria-current={selected ? true : undefined}
-      onPress={onPress}
-      testID={testID}
-      style={({ pressed, focused }: { pressed: boolean; focused?: boolean }) => [styles.option, selected && styles.optionOn, pressed && styles.optionPressed, focused && styles.focusRing]}
-    >
-      <Text style={styles.optionLabel}>{label}</Text>
-      {detail ? <Text style={type.small}>{detail}</Text> : null}
-    </Pressable>
+    <View style={[styles.chosen, error ? styles.chosenError : null]}>
+      <Text style={[type.body, styles.chosenText]} testID={`${testID}-selected`}>
+        {text}
+      </Text>
+      {!disabled ? <Button nativeID={changeId} label="Change" variant="secondary" accessibilityLabel={`Change ${label.toLowerCase()}`} onPress={onChange} testID={`${testID}-change`} /> : null}
+    </View>
   );
 }
 
@@ -237,12 +211,5 @@ const styles = StyleSheet.create({
   searchRow: { flexDirection: 'row', gap: space.sm, alignItems: 'center' },
   input: { ...field.input, flex: 1, minWidth: 0 },
   inputError: field.inputError,
-  options: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, backgroundColor: colors.surface, overflow: 'hidden' },
-  option: { minHeight: minTouch, justifyContent: 'center', paddingHorizontal: space.md, paddingVertical: space.xs, borderBottomWidth: 1, borderBottomColor: colors.line },
-  optionOn: { backgroundColor: colors.surfaceSunk },
-  optionPressed: { backgroundColor: colors.surfaceSunk },
-  optionLabel: { fontFamily: fonts.semibold, fontSize: 16, color: colors.primary },
-  focusRing: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: -3 } as object,
-  note: { flexDirection: 'row', alignItems: 'center', gap: space.sm, padding: space.md },
   error: field.error,
 });

@@ -1,4 +1,4 @@
-// The second half of the web export (run by scripts/launch.mjs after `expo export`): the app's icons and
+// The second half of the web export (run by scripts/lib/builds.mjs after `expo export`): the app's icons and
 // web app manifest and their links in index.html, the route-chunk map the server's preload headers come
 // from, the service worker that keeps the app shell for offline starts (Workbox generateSW), and
 // brotli/gzip twins of every compressible file.

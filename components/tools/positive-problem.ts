@@ -1,10 +1,3 @@
-/** A number typed in a field: a decimal comma is accepted; blank is null; anything else is NaN. */
-export function parseNumber(text: string): number | null {
-  const t = text.trim().replace(',', '.');
-  if (t === '') return null;
-  return /^[+-]?(\d+\.?\d*|\.\d+)$/.test(t) ? Number(t) : Number.NaN;
-}
-
 /** The message for a field that must hold a positive number, or null when it does. */
 export function positiveProblem(value: number | null, required: boolean): string | null {
   if (value === null) return required ? 'Enter a number.' : null;
