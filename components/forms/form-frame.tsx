@@ -112,25 +112,31 @@ export function FormFrame<R extends { id: string; version: number }, D extends D
   );
   const fields = <View style={[styles.fields, wide && styles.fieldsWide]}>{children}</View>;
 
-  return (
-    <Screen title={title} subtitle={subtitle} testID={testID}>
-      {aside && wide ? (
-        <View style={styles.columns}>
-          <View style={styles.main}>
+  // With an aside, a wide screen puts it in a column beside the form; a phone shows it before the buttons.
+  if (aside && wide) {
+    return (
+      <Screen
+        title={title}
+        subtitle={subtitle}
+        testID={testID}
+        columns={[
+          <>
             {fields}
             {status}
             {footer}
-          </View>
-          <View style={styles.aside}>{aside}</View>
-        </View>
-      ) : (
-        <>
-          {fields}
-          {aside}
-          {status}
-          {footer}
-        </>
-      )}
+          </>,
+          aside,
+        ]}
+        split={[3, 2]}
+      />
+    );
+  }
+  return (
+    <Screen title={title} subtitle={subtitle} testID={testID}>
+      {fields}
+      {aside}
+      {status}
+      {footer}
     </Screen>
   );
 }
@@ -144,9 +150,6 @@ const styles = StyleSheet.create({
   fieldRow: { flexDirection: 'row', gap: space.md, alignItems: 'flex-start' },
   fieldCol: { gap: space.md },
   cell: { flex: 1, minWidth: 0 },
-  columns: { flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' },
-  main: { flex: 3, gap: space.lg, minWidth: 0 },
-  aside: { flex: 2, gap: space.lg, minWidth: 0 },
   banner: { borderRadius: radius.md, padding: space.md, borderWidth: 1.5 },
   notice: { backgroundColor: colors.surface, borderColor: colors.primary },
   error: { backgroundColor: colors.dangerSoft, borderColor: colors.danger },

@@ -1,9 +1,10 @@
 import type { UseQueryResult } from '@tanstack/react-query';
-import type { ColumnDef } from '@tanstack/react-table';
+import { createColumnHelper, type ColumnDef, type ColumnHelper } from '@tanstack/react-table';
 import { useRouter } from 'expo-router';
-import { useEffect } from 'react';
+import { useEffect, useMemo } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { ListParams, Page } from '@/shared/contract/records';
+import { useLengthUnit } from '../data/me';
 import { Screen } from '../screen';
 import { colors, space, type } from '../theme';
 import { DataTable, type TableSort } from '../ui/data-table';
@@ -20,7 +21,10 @@ import { useListState } from './use-list-state';
 
 export type RegistryResource = 'drum-types' | 'dip-tubes' | 'connectors' | 'pairings' | 'slurries' | 'suppliers';
 
-interface RegistryListScreenProps<T extends { id: string }> {
+type Show = ReturnType<typeof useLengthUnit>['show'];
+
+/** One registry list's configuration: `registryList` makes its screen. */
+export interface RegistryListConfig<T extends { id: string }> {
   resource: RegistryResource;
   title: string;
   subtitle: string;
@@ -28,7 +32,8 @@ interface RegistryListScreenProps<T extends { id: string }> {
   /** What the search matches, as a placeholder: "Part number or material". */
   searchHint: string;
   useList: (params: ListParams) => UseQueryResult<Page<T>>;
-  columns: ColumnDef<T, unknown>[];
+  /** The table's columns, built with the record's column helper; lengths shown in the person's unit. */
+  columns: (col: ColumnHelper<T>, show: Show) => ColumnDef<T, never>[];
   defaultSort: TableSort;
   filters: readonly FilterKind[];
   /** The row's test id suffix: its part number or name. */
@@ -39,12 +44,23 @@ interface RegistryListScreenProps<T extends { id: string }> {
   firstHint: string;
 }
 
+/** A registry list screen from its configuration. */
+export function registryList<T extends { id: string }>(config: RegistryListConfig<T>) {
+  const col = createColumnHelper<T>();
+  return function ConfiguredList() {
+    return <RegistryListScreen<T> {...config} col={col} />;
+  };
+}
+
 /**
  * One registry list: debounced search, filters, server sorting and paging, a table on a wide screen and
  * cards on a phone, and its loading, error, empty and data states.
  */
-export function RegistryListScreen<T extends { id: string }>(props: RegistryListScreenProps<T>) {
-  const { resource, title, subtitle, noun, searchHint, useList, columns, defaultSort, filters, rowTestID, showsLengths, firstHint } = props;
+function RegistryListScreen<T extends { id: string }>(props: RegistryListConfig<T> & { col: ColumnHelper<T> }) {
+  const { resource, title, subtitle, noun, searchHint, useList, defaultSort, filters, rowTestID, showsLengths, firstHint, col } = props;
+  const { show } = useLengthUnit();
+  const makeColumns = props.columns;
+  const columns = useMemo(() => makeColumns(col, show) as ColumnDef<T, unknown>[], [makeColumns, col, show]);
   const wide = useIsWide();
   const router = useRouter();
   const canEdit = useCanEditRegistry();

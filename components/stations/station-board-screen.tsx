@@ -142,6 +142,7 @@ function Board({ board, wide, actions }: { board: StationBoard; wide: boolean; a
       subtitle={`${station.bay} · ${station.tapping === 'one-opening' ? 'one-opening' : 'two-opening'} tapping · ${station.agitation === 'pump' ? 'pump' : 'mechanical'} agitation · head ${station.connectorPartNumber ?? 'none'}`}
       actions={actions}
       testID="board-screen"
+      columns={[<ChangeOuts board={board} />, <RinseLog board={board} />]}
     >
       <HandlingCaution pressurised />
       <Text style={type.body}>Rotation: online → cleaning → rinsed, clean and ready → standby drum → online. A set goes into a drum only after a rinse since its last drum.</Text>
@@ -160,14 +161,6 @@ function Board({ board, wide, actions }: { board: StationBoard; wide: boolean; a
         )}
       </Card>
       {sets}
-      <View style={[styles.logs, wide && styles.logsWide]}>
-        <View style={wide ? styles.log : undefined}>
-          <ChangeOuts board={board} />
-        </View>
-        <View style={wide ? styles.log : undefined}>
-          <RinseLog board={board} />
-        </View>
-      </View>
     </Screen>
   );
 }
@@ -328,9 +321,6 @@ const styles = StyleSheet.create({
   strong: { fontFamily: fonts.semibold },
   rinse: { gap: 2, padding: space.sm, borderRadius: radius.md, borderWidth: 1.5 },
   actions: { gap: space.sm },
-  logs: { gap: space.lg },
-  logsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  log: { flex: 1, minWidth: 0 },
   entries: { gap: space.sm },
   entry: { gap: 2, paddingTop: space.sm, borderTopWidth: 1, borderTopColor: colors.line },
 });

@@ -2,7 +2,6 @@ import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Screen } from '../screen';
 import { space } from '../theme';
-import { useIsWide } from '../use-layout';
 import { useRevealOnPhone } from './use-reveal';
 
 interface ToolPageProps {
@@ -20,22 +19,23 @@ interface ToolPageProps {
 
 /** A calculator page: the form, then the answer; side by side on a wide screen. */
 export function ToolPage({ title, subtitle, testID, form, result, answer, formFlex, resultFlex }: ToolPageProps) {
-  const wide = useIsWide();
   const resultRef = useRevealOnPhone(answer);
   return (
-    <Screen title={title} subtitle={subtitle} testID={testID}>
-      <View style={[styles.cols, wide && styles.colsWide]}>
-        <View style={[styles.col, wide && { flex: formFlex, minWidth: 0 }]}>{form}</View>
-        <View ref={resultRef} style={[styles.col, wide && { flex: resultFlex, minWidth: 0 }]} aria-live="polite">
+    <Screen
+      title={title}
+      subtitle={subtitle}
+      testID={testID}
+      columns={[
+        form,
+        <View ref={resultRef} style={styles.result} aria-live="polite">
           {result}
-        </View>
-      </View>
-    </Screen>
+        </View>,
+      ]}
+      split={[formFlex, resultFlex]}
+    />
   );
 }
 
 const styles = StyleSheet.create({
-  cols: { gap: space.lg },
-  colsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  col: { gap: space.lg },
+  result: { gap: space.lg },
 });
