@@ -2,7 +2,7 @@ import { NOTICE_KIND_WORDS } from '@/shared/contract/notice-kinds';
 import { useRouter } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { useMarkAllNoticesReadMutation, useMarkNoticeReadMutation, useNotificationsQuery, type NoticeRecord } from '../data/notifications';
-import { formatWhen } from '../receive/parts';
+import { formatWhen } from '../ui/format';
 import { Screen } from '../screen';
 import { AppearanceCard } from '../settings/appearance-card';
 import { colors, fonts, radius, space, type } from '../theme';

@@ -12,7 +12,9 @@ import { Disclosure } from '../ui/disclosure';
 import { HandlingCaution } from '../ui/handling-caution';
 import { DrumSection } from './drum-section';
 import { LotVerdictBanner } from './lot-verdict';
-import { Fact, FactGrid, formatWhen, SectionTitle } from './parts';
+import { Fact, FactGrid } from '../ui/facts';
+import { formatWhen } from '../ui/format';
+import { SectionTitle } from '../ui/section-title';
 
 /** What drum the lot came in: the registry's drum type, or what the clerk described at the dock. */
 export function drumLabel(record: Pick<ReceivingCheckRecord, 'drumTypeName' | 'drumTypePartNumber' | 'drumDescription'>, show: (mm: number) => string): string {

@@ -10,7 +10,7 @@ import { HandlingCaution } from '../ui/handling-caution';
 import { DockDrumCard, DockStationCard } from './dock-drum-card';
 import { DockConditionCard, DockLotCard } from './dock-lot-card';
 import { DockResult, RESULT_ID } from './dock-result';
-import { LinkButton } from './parts';
+import { LinkButton } from '../ui/link-button';
 import { revealNativeId } from './reveal';
 import { useDockForm } from './use-dock-form';
 import { ProvisionalResult } from './provisional-result';

@@ -9,7 +9,7 @@ import { NumberField } from '../ui/number-field';
 import { RecordPicker } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { LotNumberField } from './lot-number-field';
-import { SectionTitle } from './parts';
+import { SectionTitle } from '../ui/section-title';
 import type { DockForm } from './use-dock-form';
 
 const INDICATOR_OPTIONS = TEMPERATURE_INDICATORS.map((value) => ({ value, label: TEMPERATURE_INDICATOR_LABELS[value] }));

@@ -9,7 +9,7 @@ import { CertificateButton, needsCertificate, useRole } from './certificate-butt
 import { CheckFiles } from './check-files';
 import { CheckResult } from './check-result';
 import { HoldPanel } from './hold-panel';
-import { LinkButton } from './parts';
+import { LinkButton } from '../ui/link-button';
 
 export const RESULT_ID = 'dock-result';
 

@@ -7,7 +7,9 @@ import { useSession } from '../session';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { TextField } from '../ui/text-field';
-import { formatWhen, LotStatusChip, SectionTitle } from './parts';
+import { LotStatusChip } from './lot-status-chip';
+import { formatWhen } from '../ui/format';
+import { SectionTitle } from '../ui/section-title';
 
 /**
  * A held or quarantined lot says why and who may release it; an engineer releases it with a comment. A lot

@@ -1,7 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { THEME_CHOICES, type ThemeChoice } from '@/shared/themes';
 import { useThemeChoice } from '../data/me';
-import { SectionTitle } from '../receive/parts';
+import { SectionTitle } from '../ui/section-title';
 import { colors, fonts, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
