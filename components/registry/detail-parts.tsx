@@ -11,7 +11,7 @@ import { colors, fonts, minTouch, space, type } from '../theme';
 import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
 import { LinkButton } from '../ui/link-button';
-import type { RegistryResource } from './registry-list-screen';
+import { queriesOf, REGISTRY_RESOURCES, type RecordOf, type RegistryResource } from './resources';
 import { StatusChip } from './status-chip';
 import { UnitToggle } from './unit-toggle';
 import { useCanEditRegistry } from './use-can-edit-registry';
@@ -23,23 +23,36 @@ export interface DetailContext {
   show: ReturnType<typeof useLengthUnit>['show'];
 }
 
-interface DetailScreenProps<T> {
-  resource: RegistryResource;
-  id: string;
-  /** "Drum type": the page title until the record arrives. */
-  kind: string;
-  useDetail: (id: string) => UseQueryResult<T>;
+/** One registry detail page's configuration: `registryDetail` makes its screen. */
+interface DetailConfig<T> {
   title: (record: T) => string;
   subtitle?: (record: T, context: DetailContext) => string;
-  showsLengths?: boolean;
   /** The record's facts, and what is related to it beside them on a wide screen (after them on a phone). */
   columns: (record: T, context: DetailContext) => ScreenColumns;
 }
 
+/** A registry detail screen (given the record's id) from its configuration. */
+export function registryDetail<R extends RegistryResource>(resource: R, config: DetailConfig<RecordOf<R>>) {
+  const { noun, showsLengths } = REGISTRY_RESOURCES[resource];
+  const kind = noun.one[0].toUpperCase() + noun.one.slice(1);
+  const { useDetail } = queriesOf(resource);
+  return function ConfiguredDetail({ id }: { id: string }) {
+    return <DetailScreen<RecordOf<R>> {...config} resource={resource} kind={kind} showsLengths={showsLengths} query={useDetail(id)} id={id} />;
+  };
+}
+
+interface DetailScreenProps<T> extends DetailConfig<T> {
+  resource: RegistryResource;
+  id: string;
+  /** "Drum type": the page title until the record arrives. */
+  kind: string;
+  query: UseQueryResult<T>;
+  showsLengths: boolean;
+}
+
 /** The frame of every registry detail page: its states, the mm / in switch and the Edit link for engineers. */
-export function DetailScreen<T>({ resource, id, kind, useDetail, title, subtitle, showsLengths, columns }: DetailScreenProps<T>) {
+function DetailScreen<T>({ resource, id, kind, query, title, subtitle, showsLengths, columns }: DetailScreenProps<T>) {
   const canEdit = useCanEditRegistry();
-  const query = useDetail(id);
   const { show } = useLengthUnit();
   const actions = (
     <>

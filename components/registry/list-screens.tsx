@@ -1,23 +1,14 @@
 // The registry's list screens, one chunk: with the table library (@tanstack/react-table) they are loaded
 // through `lazy-lists.tsx` only, so none of it weighs on the first load of another screen (the dock).
 // Each list is its configuration; `registryList` builds the screen (search, filters, table, states).
-import { connectorQueries, type ConnectorRecord } from '../data/connectors';
-import { dipTubeQueries, type DipTubeRecord } from '../data/dip-tubes';
-import { drumTypeQueries, type DrumTypeRecord } from '../data/drum-types';
-import { pairingQueries, type PairingRecord } from '../data/pairings';
-import { slurryQueries, type SlurryRecord } from '../data/slurries';
-import { supplierQueries, type SupplierRecord } from '../data/suppliers';
 import { CHANNEL_LABELS, formatDate, openingThreads, regionLabel, RETURN_PATH_LABELS, SUITED_TO_LABELS } from './labels';
 import { registryList } from './registry-list-screen';
 import { StatusChip } from './status-chip';
 
-export const DrumTypeListScreen = registryList<DrumTypeRecord>({
-  resource: 'drum-types',
+export const DrumTypeListScreen = registryList('drum-types', {
   title: 'Drum types',
   subtitle: 'The drums and containers slurry arrives in: depth, bungs, threads and key collars.',
-  noun: { one: 'drum type', many: 'drum types' },
   searchHint: 'Name, part number or supplier',
-  useList: drumTypeQueries.useList,
   columns: (col, show) => [
     col.accessor('name', { id: 'name', header: 'Name', enableSorting: true, meta: { primary: true, flex: 2.6 } }),
     col.accessor('partNumber', { id: 'partNumber', header: 'Part number', enableSorting: true, meta: { flex: 1.6 } }),
@@ -29,17 +20,13 @@ export const DrumTypeListScreen = registryList<DrumTypeRecord>({
   defaultSort: { key: 'name', order: 'asc' },
   filters: ['region', 'thread', 'key'],
   rowTestID: (d) => d.partNumber,
-  showsLengths: true,
   firstHint: 'with its inside depth and its openings',
 });
 
-export const DipTubeListScreen = registryList<DipTubeRecord>({
-  resource: 'dip-tubes',
+export const DipTubeListScreen = registryList('dip-tubes', {
   title: 'Dip tubes',
   subtitle: 'Tubes that thread into a bung and draw slurry from near the drum bottom.',
-  noun: { one: 'dip tube', many: 'dip tubes' },
   searchHint: 'Part number or material',
-  useList: dipTubeQueries.useList,
   columns: (col, show) => [
     col.accessor('partNumber', { id: 'partNumber', header: 'Part number', enableSorting: true, meta: { primary: true, flex: 1.8 } }),
     col.accessor('threadCode', { id: 'thread', header: 'Thread', enableSorting: true, meta: { flex: 1 } }),
@@ -53,17 +40,13 @@ export const DipTubeListScreen = registryList<DipTubeRecord>({
   defaultSort: { key: 'partNumber', order: 'asc' },
   filters: ['thread', 'key'],
   rowTestID: (t) => t.partNumber,
-  showsLengths: true,
   firstHint: 'with its thread, length and bore',
 });
 
-export const ConnectorListScreen = registryList<ConnectorRecord>({
-  resource: 'connectors',
+export const ConnectorListScreen = registryList('connectors', {
   title: 'Dispense heads',
   subtitle: 'Heads that lock onto a dip tube: feed and return ports, keying and tapping.',
-  noun: { one: 'dispense head', many: 'dispense heads' },
   searchHint: 'Part number or wetted material',
-  useList: connectorQueries.useList,
   columns: (col, show) => [
     col.accessor('partNumber', { id: 'partNumber', header: 'Part number', enableSorting: true, meta: { primary: true, flex: 1.8 } }),
     col.accessor('feedBoreMm', { id: 'feedBoreMm', header: 'Feed port', enableSorting: true, cell: (c) => `${c.row.original.feedNominal} (${show(c.getValue(), 2)})`, meta: { flex: 1.5 } }),
@@ -81,17 +64,13 @@ export const ConnectorListScreen = registryList<ConnectorRecord>({
   defaultSort: { key: 'partNumber', order: 'asc' },
   filters: ['key', 'suitedTo'],
   rowTestID: (c) => c.partNumber,
-  showsLengths: true,
   firstHint: 'with its feed and return bores',
 });
 
-export const PairingListScreen = registryList<PairingRecord>({
-  resource: 'pairings',
+export const PairingListScreen = registryList('pairings', {
   title: 'Pairings',
   subtitle: 'Which dip tube goes with which dispense head, as proposed by one engineer and reviewed by another.',
-  noun: { one: 'pairing', many: 'pairings' },
   searchHint: 'Tube or dispense head part number, notes',
-  useList: pairingQueries.useList,
   columns: (col) => [
     col.accessor('dipTubePartNumber', { id: 'dipTube', header: 'Dip tube', enableSorting: true, meta: { primary: true, flex: 1.7 } }),
     col.accessor('connectorPartNumber', { id: 'connector', header: 'Dispense head', enableSorting: true, meta: { flex: 1.7 } }),
@@ -107,13 +86,10 @@ export const PairingListScreen = registryList<PairingRecord>({
   firstHint: 'from a dip tube and a dispense head',
 });
 
-export const SlurryListScreen = registryList<SlurryRecord>({
-  resource: 'slurries',
+export const SlurryListScreen = registryList('slurries', {
   title: 'Slurries',
   subtitle: 'Polishing slurries on contract, the drum each arrives in, and how gently it must be handled.',
-  noun: { one: 'slurry', many: 'slurries' },
   searchHint: 'Name, supplier or drum',
-  useList: slurryQueries.useList,
   columns: (col) => [
     col.accessor('name', { id: 'name', header: 'Name', enableSorting: true, meta: { primary: true, flex: 2 } }),
     col.accessor('supplierName', { id: 'supplierName', header: 'Supplier', meta: { flex: 1.6 } }),
@@ -129,13 +105,10 @@ export const SlurryListScreen = registryList<SlurryRecord>({
   firstHint: 'with the drum type it arrives in',
 });
 
-export const SupplierListScreen = registryList<SupplierRecord>({
-  resource: 'suppliers',
+export const SupplierListScreen = registryList('suppliers', {
   title: 'Suppliers',
   subtitle: 'Who ships the slurry, the drums and the hardware, and from which region.',
-  noun: { one: 'supplier', many: 'suppliers' },
   searchHint: 'Name or e-mail',
-  useList: supplierQueries.useList,
   columns: (col) => [
     col.accessor('name', { id: 'name', header: 'Name', enableSorting: true, meta: { primary: true, flex: 1.8 } }),
     col.accessor('region', { id: 'region', header: 'Region', enableSorting: true, cell: (c) => regionLabel(c.getValue()), meta: { flex: 1 } }),

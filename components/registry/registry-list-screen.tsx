@@ -17,46 +17,48 @@ import { FilterBar, type FilterKind } from './filter-bar';
 import { LinkButton } from '../ui/link-button';
 import { UnitToggle } from './unit-toggle';
 import { useCanEditRegistry } from './use-can-edit-registry';
+import { queriesOf, REGISTRY_RESOURCES, type RecordOf, type RegistryResource } from './resources';
 import { useListState } from './use-list-state';
-
-export type RegistryResource = 'drum-types' | 'dip-tubes' | 'connectors' | 'pairings' | 'slurries' | 'suppliers';
 
 type Show = ReturnType<typeof useLengthUnit>['show'];
 
 /** One registry list's configuration: `registryList` makes its screen. */
-export interface RegistryListConfig<T extends { id: string }> {
-  resource: RegistryResource;
+export interface RegistryListConfig<T> {
   title: string;
   subtitle: string;
-  noun: { one: string; many: string };
   /** What the search matches, as a placeholder: "Part number or material". */
   searchHint: string;
-  useList: (params: ListParams) => UseQueryResult<Page<T>>;
   /** The table's columns, built with the record's column helper; lengths shown in the person's unit. */
   columns: (col: ColumnHelper<T>, show: Show) => ColumnDef<T, never>[];
   defaultSort: TableSort;
   filters: readonly FilterKind[];
   /** The row's test id suffix: its part number or name. */
   rowTestID: (row: T) => string;
-  /** Lists that show lengths get the mm / in switch. */
-  showsLengths?: boolean;
   /** What an engineer registers first, when the registry is empty: "with its thread, length and bore". */
   firstHint: string;
 }
 
 /** A registry list screen from its configuration. */
-export function registryList<T extends { id: string }>(config: RegistryListConfig<T>) {
-  const col = createColumnHelper<T>();
+export function registryList<R extends RegistryResource>(resource: R, config: RegistryListConfig<RecordOf<R>>) {
+  const col = createColumnHelper<RecordOf<R>>();
   return function ConfiguredList() {
-    return <RegistryListScreen<T> {...config} col={col} />;
+    return <RegistryListScreen<RecordOf<R>> {...config} {...REGISTRY_RESOURCES[resource]} useList={queriesOf(resource).useList} resource={resource} col={col} />;
   };
+}
+
+interface RegistryListScreenProps<T> extends RegistryListConfig<T> {
+  resource: RegistryResource;
+  noun: { one: string; many: string };
+  useList: (params: ListParams) => UseQueryResult<Page<T>>;
+  showsLengths: boolean;
+  col: ColumnHelper<T>;
 }
 
 /**
  * One registry list: debounced search, filters, server sorting and paging, a table on a wide screen and
  * cards on a phone, and its loading, error, empty and data states.
  */
-function RegistryListScreen<T extends { id: string }>(props: RegistryListConfig<T> & { col: ColumnHelper<T> }) {
+function RegistryListScreen<T extends { id: string }>(props: RegistryListScreenProps<T>) {
   const { resource, title, subtitle, noun, searchHint, useList, defaultSort, filters, rowTestID, showsLengths, firstHint, col } = props;
   const { show } = useLengthUnit();
   const makeColumns = props.columns;
