@@ -10,6 +10,7 @@ import { space, type } from '../theme';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { Checks, trimOrNull } from './checks';
+import { fieldBinders } from './bind';
 import { FormFrame, FormSection } from './form-frame';
 import { ConnectorPicker, connectorLabel, DipTubePicker, dipTubeLabel } from './pickers';
 import { useRecordForm, type FormSpec } from './use-record-form';
@@ -60,6 +61,7 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
     },
   });
   const { draft, set, field, mode } = form;
+  const bind = fieldBinders(form, pairingSpec.labelOf);
 
   // The records behind the picks, for the preview: the one just picked, else loaded by id.
   const [pickedTube, setPickedTube] = useState<DipTubeRecord | null>(null);
@@ -128,16 +130,7 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
             </Text>
           </View>
         )}
-        <TextField
-          label="Notes"
-          hint="Optional: trials, measurements, limits of use."
-          value={draft.notes}
-          onChangeText={(v) => set('notes', v)}
-          multiline
-          numberOfLines={4}
-          testID="form-notes"
-          {...field('notes')}
-        />
+        <TextField {...bind.text('notes')} hint="Optional: trials, measurements, limits of use." multiline numberOfLines={4} />
       </FormSection>
     </FormFrame>
   );

@@ -1,0 +1,40 @@
+import type { Draft } from './draft';
+import type { RecordForm } from './use-record-form';
+
+type Stamped = { id: string; version: number };
+type KeysOf<D, V> = { [K in keyof D]: D[K] extends V ? K : never }[keyof D] & string;
+
+/**
+ * Props that tie a field to one key of a form's draft: its label (from the record's labels, `labelOf`),
+ * value, change handler, message, blur, focus ref and test id (`form-<key>`). A field's own words (hint,
+ * suffix) and a label the record words otherwise are written beside the spread.
+ */
+export function fieldBinders<R extends Stamped, D extends Draft>(form: RecordForm<R, D>, labelOf: (path: string) => string | undefined) {
+  const label = (key: string) => labelOf(key) ?? key;
+  return {
+    /** A TextField or a NumberField: the draft keeps the text as typed. */
+    text: <K extends KeysOf<D, string>>(key: K) => ({
+      label: label(key),
+      value: form.draft[key] as string,
+      onChangeText: (v: string) => form.set(key, v as D[K]),
+      testID: `form-${key}`,
+      ...form.field(key),
+    }),
+    /** A LengthField, or a record picker (which has its own label). */
+    value: <K extends keyof D & string>(key: K) => ({
+      label: label(key),
+      value: form.draft[key],
+      onChange: (v: D[K]) => form.set(key, v),
+      testID: `form-${key}`,
+      ...form.field(key),
+    }),
+    /** ChoiceChips: no text to focus, so only the message. */
+    choice: <K extends keyof D & string>(key: K) => ({
+      label: label(key),
+      value: form.draft[key],
+      onChange: (v: D[K]) => form.set(key, v),
+      error: form.field(key).error,
+      testID: `form-${key}`,
+    }),
+  };
+}
