@@ -8,7 +8,7 @@ import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { Checks, mmOf } from './checks';
 import { fieldBinders } from './bind';
-import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { FieldRow, FormFrame, FormSection } from './form-frame';
 import { optionLabel, RETURN_PATH_OPTIONS, SUITED_OPTIONS } from './options';
 import { KeyCodePicker, SupplierPicker } from './pickers';
 import { useRecordForm, type FormSpec } from './use-record-form';
@@ -135,22 +135,14 @@ export function ConnectorFormScreen({ id }: { id?: string }) {
       </FormSection>
       <FormSection title="Ports" full>
         <FieldRow>
-          <FieldCell>
-            <LengthField {...bind.value('feedBoreMm')} />
-          </FieldCell>
-          <FieldCell>
-            <TextField {...bind.text('feedNominal')} hint="As marked, e.g. 3/4 in." />
-          </FieldCell>
+          <LengthField {...bind.value('feedBoreMm')} />
+          <TextField {...bind.text('feedNominal')} hint="As marked, e.g. 3/4 in." />
         </FieldRow>
         <ChoiceChips label="Return path" options={RETURN_PATH_OPTIONS} value={draft.returnPath} onChange={setReturnPath} error={field('returnPath').error} testID="form-returnPath" />
         {hasReturn(draft) ? (
           <FieldRow>
-            <FieldCell>
-              <LengthField {...bind.value('returnBoreMm')} />
-            </FieldCell>
-            <FieldCell>
-              <TextField {...bind.text('returnNominal')} hint="As marked, e.g. 1/2 in." />
-            </FieldCell>
+            <LengthField {...bind.value('returnBoreMm')} />
+            <TextField {...bind.text('returnNominal')} hint="As marked, e.g. 1/2 in." />
           </FieldRow>
         ) : draft.returnPath === 'none' ? (
           <Text style={type.small} testID="form-no-return">

@@ -8,7 +8,7 @@ import { DIP_TUBE_LIMITS as T, dipTubeProblem } from '@/shared/records/dip-tube'
 import { sentence } from '@/shared/records/field';
 import { Checks, mmOf } from './checks';
 import { fieldBinders } from './bind';
-import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { FieldRow, FormFrame, FormSection } from './form-frame';
 import { CHANNEL_OPTIONS, optionLabel } from './options';
 import { KeyCodePicker, SupplierPicker, ThreadPicker } from './pickers';
 import { useRecordForm, type FormSpec } from './use-record-form';
@@ -118,15 +118,9 @@ export function DipTubeFormScreen({ id }: { id?: string }) {
       </FormSection>
       <FormSection title="Dimensions" full>
         <FieldRow>
-          <FieldCell>
-            <LengthField {...bind.value('lengthMm')} hint="From the bung seat to the tip." />
-          </FieldCell>
-          <FieldCell>
-            <LengthField {...bind.value('boreMm')} hint="Inside diameter." />
-          </FieldCell>
-          <FieldCell>
-            <LengthField {...bind.value('odMm')} hint="Must pass through the bung." />
-          </FieldCell>
+          <LengthField {...bind.value('lengthMm')} hint="From the bung seat to the tip." />
+          <LengthField {...bind.value('boreMm')} hint="Inside diameter." />
+          <LengthField {...bind.value('odMm')} hint="Must pass through the bung." />
         </FieldRow>
       </FormSection>
     </FormFrame>

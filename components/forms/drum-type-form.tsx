@@ -11,8 +11,8 @@ import { lengthDraft, LengthField, NumberField, numberText, type LengthDraft } f
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { Checks, mmOf, trimOrNull } from './checks';
-import { fieldBinders } from './bind';
-import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { bindSupplier, fieldBinders } from './bind';
+import { FieldRow, FormFrame, FormSection } from './form-frame';
 import { HEAD_OPTIONS, MATERIAL_OPTIONS, optionLabel, REGION_OPTIONS } from './options';
 import { emptyOpening, newKey, OpeningsEditor, type OpeningDraft } from './drum-openings-editor';
 import { SupplierPicker } from './pickers';
@@ -130,7 +130,7 @@ export const drumTypeSpec: FormSpec<DrumTypeRecord, DrumTypeDraft> = {
 /** Create (no id) or edit a drum type with its openings. */
 export function DrumTypeFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: drumTypeSpec, source: drumTypeQueries, id, onSaved: (d) => router.replace(`/registry/drum-types/${d.id}` as never) });
-  const { draft, set, field } = form;
+  const { draft, field } = form;
   const bind = fieldBinders(form, drumTypeSpec.labelOf);
   const warnings = packagingFindings(draft).filter((f) => f.outcome !== 'pass' && f.check !== 'code' && f.check !== 'kind');
   const explained = packagingFindings(draft).find((f) => f.check === 'code' && f.outcome === 'pass');
@@ -145,15 +145,7 @@ export function DrumTypeFormScreen({ id }: { id?: string }) {
       <FormSection title="Drum">
         <TextField {...bind.text('partNumber')} autoCapitalize="characters" autoCorrect={false} />
         <TextField {...bind.text('name')} hint="What people call it, e.g. 55 gal lined steel tight head." />
-        <SupplierPicker
-          value={draft.supplierId}
-          onChange={(p, s) => {
-            set('supplierId', p);
-            if (s && !draft.region) set('region', s.region);
-          }}
-          testID="form-supplierId"
-          {...field('supplierId')}
-        />
+        <SupplierPicker {...bindSupplier(form)} />
         <ChoiceChips {...bind.choice('region')} options={REGION_OPTIONS} />
       </FormSection>
       <FormSection title="Build and marking">
@@ -170,15 +162,9 @@ export function DrumTypeFormScreen({ id }: { id?: string }) {
       </FormSection>
       <FormSection title="Size" full>
         <FieldRow>
-          <FieldCell>
-            <LengthField {...bind.value('outsideHeightMm')} hint="Overall, bottom chime to top chime." />
-          </FieldCell>
-          <FieldCell>
-            <LengthField {...bind.value('insideDepthMm')} hint="Bung seat to inside bottom." />
-          </FieldCell>
-          <FieldCell>
-            <LengthField {...bind.value('outsideDiameterMm')} hint="Across the rolling hoops." />
-          </FieldCell>
+          <LengthField {...bind.value('outsideHeightMm')} hint="Overall, bottom chime to top chime." />
+          <LengthField {...bind.value('insideDepthMm')} hint="Bung seat to inside bottom." />
+          <LengthField {...bind.value('outsideDiameterMm')} hint="Across the rolling hoops." />
         </FieldRow>
       </FormSection>
       <FormSection title="Openings" full testID="form-openings">

@@ -1,5 +1,5 @@
 import { router } from 'expo-router';
-import type { ReactNode } from 'react';
+import { Children, type ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { Screen } from '../screen';
 import { useCanEditRegistry } from '../registry/use-can-edit-registry';
@@ -31,15 +31,18 @@ export function FormSection({ title, children, full, testID }: { title: string; 
   );
 }
 
-/** Two fields side by side on a wide screen, stacked on a phone. */
+/** Fields side by side, sharing the width, on a wide screen; stacked on a phone. */
 export function FieldRow({ children }: { children: ReactNode }) {
   const wide = useIsWide();
-  return <View style={wide ? styles.fieldRow : styles.fieldCol}>{children}</View>;
-}
-
-export function FieldCell({ children }: { children: ReactNode }) {
-  const wide = useIsWide();
-  return <View style={wide ? styles.cell : undefined}>{children}</View>;
+  return (
+    <View style={wide ? styles.fieldRow : styles.fieldCol}>
+      {Children.toArray(children).map((child, i) => (
+        <View key={i} style={wide ? styles.cell : undefined}>
+          {child}
+        </View>
+      ))}
+    </View>
+  );
 }
 
 interface FormFrameProps<R extends { id: string; version: number }, D extends Draft> {

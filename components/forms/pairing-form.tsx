@@ -60,7 +60,7 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
       router.replace(`/registry/pairings/${p.id}` as never);
     },
   });
-  const { draft, set, field, mode } = form;
+  const { draft, set, mode } = form;
   const bind = fieldBinders(form, pairingSpec.labelOf);
 
   // The records behind the picks, for the preview: the one just picked, else loaded by id.
@@ -99,24 +99,8 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
       <FormSection title="Pairing" full>
         {mode === 'create' ? (
           <>
-            <DipTubePicker
-              value={draft.dipTubeId}
-              onChange={(p, t) => {
-                setPickedTube(t);
-                set('dipTubeId', p);
-              }}
-              testID="form-dipTubeId"
-              {...field('dipTubeId')}
-            />
-            <ConnectorPicker
-              value={draft.connectorId}
-              onChange={(p, c) => {
-                setPickedConnector(c);
-                set('connectorId', p);
-              }}
-              testID="form-connectorId"
-              {...field('connectorId')}
-            />
+            <DipTubePicker {...bind.value('dipTubeId')} onChange={(p, t) => (setPickedTube(t), set('dipTubeId', p))} />
+            <ConnectorPicker {...bind.value('connectorId')} onChange={(p, c) => (setPickedConnector(c), set('connectorId', p))} />
           </>
         ) : (
           <View style={{ gap: space.sm }}>

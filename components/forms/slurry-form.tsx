@@ -6,7 +6,7 @@ import { NumberField, numberText } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { Checks } from './checks';
-import { fieldBinders } from './bind';
+import { bindSupplier, fieldBinders } from './bind';
 import { FormFrame, FormSection } from './form-frame';
 import { optionLabel, REGION_OPTIONS, YES_NO_OPTIONS } from './options';
 import { DrumTypePicker, SupplierPicker } from './pickers';
@@ -119,7 +119,6 @@ export const slurrySpec: FormSpec<SlurryRecord, SlurryDraft> = {
 /** Create (no id) or edit a slurry. */
 export function SlurryFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: slurrySpec, source: slurryQueries, id, onSaved: (s) => router.replace(`/registry/slurries/${s.id}` as never) });
-  const { draft, set, field } = form;
   const bind = fieldBinders(form, slurrySpec.labelOf);
   return (
     <FormFrame
@@ -131,16 +130,7 @@ export function SlurryFormScreen({ id }: { id?: string }) {
     >
       <FormSection title="Slurry">
         <TextField {...bind.text('name')} />
-        <SupplierPicker
-          value={draft.supplierId}
-          onChange={(p, s) => {
-            set('supplierId', p);
-            // The supplier's region is the usual answer; the person can still change it.
-            if (s && !draft.region) set('region', s.region);
-          }}
-          testID="form-supplierId"
-          {...field('supplierId')}
-        />
+        <SupplierPicker {...bindSupplier(form)} />
         <ChoiceChips {...bind.choice('region')} options={REGION_OPTIONS} />
       </FormSection>
       <FormSection title="Handling">

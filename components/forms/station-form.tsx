@@ -6,7 +6,7 @@ import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { Checks } from './checks';
 import { fieldBinders } from './bind';
-import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { FieldRow, FormFrame, FormSection } from './form-frame';
 import { AGITATION_OPTIONS, optionLabel, TAPPING_OPTIONS } from './options';
 import { ConnectorPicker } from './pickers';
 import { useRecordForm, type FormSpec } from './use-record-form';
@@ -75,12 +75,8 @@ export function StationFormScreen({ id }: { id?: string }) {
     >
       <FormSection title="Station">
         <FieldRow>
-          <FieldCell>
-            <TextField {...bind.text('name')} />
-          </FieldCell>
-          <FieldCell>
-            <TextField {...bind.text('bay')} />
-          </FieldCell>
+          <TextField {...bind.text('name')} />
+          <TextField {...bind.text('bay')} />
         </FieldRow>
         <NumberField {...bind.text('flowLpm')} suffix="L/min" />
       </FormSection>
