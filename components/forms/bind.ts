@@ -16,9 +16,12 @@ export function fieldBinders<R extends Stamped, D extends Draft>(form: RecordFor
   const common = <K extends keyof D & string>(key: K) => ({ label: label(key), testID: `form-${key}`, ...form.field(key) });
   /** A LengthField, or a record picker (which has its own label). */
   const value = <K extends keyof D & string>(key: K) => ({ ...common(key), value: form.draft[key], onChange: (v: D[K]) => form.set(key, v) });
+  /** A TextField or a NumberField: the draft keeps the text as typed. */
+  const text = <K extends KeysOf<D, string>>(key: K) => ({ ...common(key), value: form.draft[key] as string, onChangeText: (v: string) => form.set(key, v as D[K]) });
   return {
-    /** A TextField or a NumberField: the draft keeps the text as typed. */
-    text: <K extends KeysOf<D, string>>(key: K) => ({ ...common(key), value: form.draft[key] as string, onChangeText: (v: string) => form.set(key, v as D[K]) }),
+    text,
+    /** A code as marked on the part (a part number, a UN code): capitals, no autocorrect. */
+    code: <K extends KeysOf<D, string>>(key: K) => ({ ...text(key), autoCapitalize: 'characters' as const, autoCorrect: false }),
     value,
     /** ChoiceChips: no text to focus, so only the message. */
     choice: <K extends keyof D & string>(key: K) => {

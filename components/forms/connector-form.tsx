@@ -117,15 +117,9 @@ export function ConnectorFormScreen({ id }: { id?: string }) {
     }
   };
   return (
-    <FormFrame
-      form={form}
-      title={id ? `Edit dispense head ${form.base?.partNumber ?? ''}`.trim() : 'New dispense head'}
-      subtitle="A dispense head: its ports, keying and the tapping it is made for."
-      testID="connector-form"
-      cancelTo={id ? `/registry/connectors/${id}` : '/registry/connectors'}
-    >
+    <FormFrame form={form} resource="connectors" id={id} name={form.base?.partNumber} subtitle="A dispense head: its ports, keying and the tapping it is made for." testID="connector-form">
       <FormSection title="Part">
-        <TextField {...bind.text('partNumber')} autoCapitalize="characters" autoCorrect={false} />
+        <TextField {...bind.code('partNumber')} />
         <SupplierPicker {...bind.value('supplierId')} />
         <TextField {...bind.text('wettedMaterials')} hint="Everything the slurry touches, e.g. PFA, PTFE, FFKM seals." />
       </FormSection>

@@ -99,15 +99,9 @@ export function DipTubeFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: dipTubeSpec, source: dipTubeQueries, id, onSaved: (t) => router.replace(`/registry/dip-tubes/${t.id}` as never) });
   const bind = fieldBinders(form, dipTubeSpec.labelOf);
   return (
-    <FormFrame
-      form={form}
-      title={id ? `Edit dip tube ${form.base?.partNumber ?? ''}`.trim() : 'New dip tube'}
-      subtitle="Type lengths in mm or inches; they are saved in mm."
-      testID="dip-tube-form"
-      cancelTo={id ? `/registry/dip-tubes/${id}` : '/registry/dip-tubes'}
-    >
+    <FormFrame form={form} resource="dip-tubes" id={id} name={form.base?.partNumber} subtitle="Type lengths in mm or inches; they are saved in mm." testID="dip-tube-form">
       <FormSection title="Part">
-        <TextField {...bind.text('partNumber')} autoCapitalize="characters" autoCorrect={false} />
+        <TextField {...bind.code('partNumber')} />
         <SupplierPicker {...bind.value('supplierId')} />
         <TextField {...bind.text('material')} hint="The wetted material, e.g. PFA or PVDF." />
       </FormSection>

@@ -137,13 +137,14 @@ export function DrumTypeFormScreen({ id }: { id?: string }) {
   return (
     <FormFrame
       form={form}
-      title={id ? `Edit drum type ${form.base?.partNumber ?? ''}`.trim() : 'New drum type'}
+      resource="drum-types"
+      id={id}
+      name={form.base?.partNumber}
       subtitle="The drum as it arrives: its size, its UN mark and every opening. Lengths are saved in mm."
       testID="drum-type-form"
-      cancelTo={id ? `/registry/drum-types/${id}` : '/registry/drum-types'}
     >
       <FormSection title="Drum">
-        <TextField {...bind.text('partNumber')} autoCapitalize="characters" autoCorrect={false} />
+        <TextField {...bind.code('partNumber')} />
         <TextField {...bind.text('name')} hint="What people call it, e.g. 55 gal lined steel tight head." />
         <SupplierPicker {...bindSupplier(form)} />
         <ChoiceChips {...bind.choice('region')} options={REGION_OPTIONS} />
@@ -151,7 +152,7 @@ export function DrumTypeFormScreen({ id }: { id?: string }) {
       <FormSection title="Build and marking">
         <ChoiceChips {...bind.choice('material')} options={MATERIAL_OPTIONS} />
         <ChoiceChips {...bind.choice('head')} options={HEAD_OPTIONS} />
-        <TextField {...bind.text('unPackagingCode')} hint="Optional: the code from the UN mark, e.g. 1A1 or 1H1." autoCapitalize="characters" autoCorrect={false} />
+        <TextField {...bind.code('unPackagingCode')} hint="Optional: the code from the UN mark, e.g. 1A1 or 1H1." />
         {explained && !field('unPackagingCode').error ? <Text style={type.small}>{explained.message}</Text> : null}
         {warnings.map((w) => (
           <Text key={w.check} role="status" style={styles.warning} testID={`form-unPackagingCode-${w.check}`}>

@@ -2,6 +2,7 @@ import { router } from 'expo-router';
 import { Children, type ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { Screen } from '../screen';
+import { REGISTRY_RESOURCES, type RegistryResource } from '../registry/resources';
 import { useCanEditRegistry } from '../registry/use-can-edit-registry';
 import { colors, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
@@ -47,11 +48,18 @@ export function FieldRow({ children }: { children: ReactNode }) {
 
 interface FormFrameProps<R extends { id: string; version: number }, D extends Draft> {
   form: RecordForm<R, D>;
-  title: string;
+  /** A registry resource's form: its title ("New dip tube", "Edit dip tube <name>") and where Cancel goes come from it. */
+  resource?: RegistryResource;
+  /** The record's id when editing. */
+  id?: string;
+  /** The record's name in the title when editing: its part number or name. */
+  name?: string;
+  /** The page title, when not a registry resource's. */
+  title?: string;
   subtitle?: string;
   testID: string;
-  /** Where Cancel goes when there is no page to go back to. */
-  cancelTo: string;
+  /** Where Cancel goes when there is no page to go back to (a registry resource's: its page, or its list). */
+  cancelTo?: string;
   /** Beside the fields on a wide screen, below them on a phone (the pairing's fit preview). */
   aside?: ReactNode;
   children: ReactNode;
@@ -61,7 +69,11 @@ interface FormFrameProps<R extends { id: string; version: number }, D extends Dr
  * The page around every registry form: who may use it, loading the record to edit, the fields, what the
  * server said, the conflict notice and the Cancel / Save buttons (last, so they come last in tab order).
  */
-export function FormFrame<R extends { id: string; version: number }, D extends Draft>({ form, title, subtitle, testID, cancelTo, aside, children }: FormFrameProps<R, D>) {
+export function FormFrame<R extends { id: string; version: number }, D extends Draft>(props: FormFrameProps<R, D>) {
+  const { form, resource, id, name, subtitle, testID, aside, children } = props;
+  const noun = resource ? REGISTRY_RESOURCES[resource].noun.one : '';
+  const title = props.title ?? (id ? `Edit ${noun} ${name ?? ''}`.trim() : `New ${noun}`);
+  const cancelTo = props.cancelTo ?? (id ? `/registry/${resource}/${id}` : `/registry/${resource}`);
   const wide = useIsWide();
   const canEdit = useCanEditRegistry();
 

@@ -82,18 +82,18 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
       set('connectorId', { id: connectorDetail.data.id, label: connectorLabel(connectorDetail.data) });
   }, [mode, draft.connectorId, initialConnectorId, connectorDetail.data, set]);
 
-  const title = mode === 'create' ? 'New pairing' : `Edit pairing ${form.base?.dipTubePartNumber ?? ''} + ${form.base?.connectorPartNumber ?? ''}`;
   return (
     <FormFrame
       form={form}
-      title={title}
+      resource="pairings"
+      id={id}
+      name={`${form.base?.dipTubePartNumber ?? ''} + ${form.base?.connectorPartNumber ?? ''}`}
       subtitle={
         mode === 'create'
           ? 'A dip tube and the dispense head it is used with. It starts as a draft; another engineer approves it.'
           : 'Only the notes change; to pair other parts, retire this pairing and create a new one.'
       }
       testID="pairing-form"
-      cancelTo={id ? `/registry/pairings/${id}` : '/registry/pairings'}
       aside={<FitPreview tube={tube} connector={connector} status={form.base?.status ?? 'draft'} />}
     >
       <FormSection title="Pairing" full>

@@ -121,13 +121,7 @@ export function SlurryFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: slurrySpec, source: slurryQueries, id, onSaved: (s) => router.replace(`/registry/slurries/${s.id}` as never) });
   const bind = fieldBinders(form, slurrySpec.labelOf);
   return (
-    <FormFrame
-      form={form}
-      title={id ? `Edit slurry ${form.base?.name ?? ''}`.trim() : 'New slurry'}
-      subtitle="How it behaves at the station, and the drum it arrives in."
-      testID="slurry-form"
-      cancelTo={id ? `/registry/slurries/${id}` : '/registry/slurries'}
-    >
+    <FormFrame form={form} resource="slurries" id={id} name={form.base?.name} subtitle="How it behaves at the station, and the drum it arrives in." testID="slurry-form">
       <FormSection title="Slurry">
         <TextField {...bind.text('name')} />
         <SupplierPicker {...bindSupplier(form)} />
