@@ -180,5 +180,4 @@ const styles = StyleSheet.create({
   unitTextOn: { color: colors.onPrimary },
   focusRing: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 2 } as object,
   suffix: { fontFamily: fonts.semibold, fontSize: 16, color: colors.inkMuted, minWidth: 36 },
-  error: field.error,
 });
