@@ -128,30 +128,24 @@ export function FormFrame<R extends { id: string; version: number }, D extends D
   const fields = <View style={[styles.fields, wide && styles.fieldsWide]}>{children}</View>;
 
   // With an aside, a wide screen puts it in a column beside the form; a phone shows it before the buttons.
-  if (aside && wide) {
-    return (
-      <Screen
-        title={title}
-        subtitle={subtitle}
-        testID={testID}
-        columns={[
-          <>
-            {fields}
-            {status}
-            {footer}
-          </>,
-          aside,
-        ]}
-        split={[3, 2]}
-      />
-    );
-  }
-  return (
-    <Screen title={title} subtitle={subtitle} testID={testID}>
+  const beside = !!aside && wide;
+  const main = (
+    <>
       {fields}
-      {aside}
       {status}
       {footer}
+    </>
+  );
+  return (
+    <Screen title={title} subtitle={subtitle} testID={testID} columns={beside ? [main, aside] : undefined} split={[3, 2]}>
+      {beside ? null : (
+        <>
+          {fields}
+          {aside}
+          {status}
+          {footer}
+        </>
+      )}
     </Screen>
   );
 }

@@ -9,7 +9,7 @@ import { Card } from '../ui/card';
 import { HandlingCaution } from '../ui/handling-caution';
 import { DockDrumCard, DockStationCard } from './dock-drum-card';
 import { DockConditionCard, DockLotCard } from './dock-lot-card';
-import { DockResult, RESULT_ID } from './dock-result';
+import { DockResult, HistoryLink, RESULT_ID } from './dock-result';
 import { LinkButton } from '../ui/link-button';
 import { revealNativeId } from './reveal';
 import { useDockForm } from './use-dock-form';
@@ -57,7 +57,7 @@ export function DockCheckScreen() {
     <Screen
       title="Dock check"
       subtitle="Check an arriving lot against the site's tubes and heads, and its dates and condition, before its drums go to a station."
-      actions={<LinkButton href="/receive/history" label="Check history" testID="dock-history-link" />}
+      actions={<HistoryLink />}
       testID="dock-screen"
       footer={footer}
       columns={[

@@ -56,6 +56,12 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
   const onRelease = () =>
     submitNote(comment, 'comment', 'Say why the lot may be used now (at least 3 characters).', setCommentError, (note, options) => release.mutate({ id: record.id, comment: note }, options));
 
+  const problem = formError ? (
+    <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
+      {formError}
+    </Text>
+  ) : null;
+
   if (record.status === 'on-hold' || record.status === 'quarantined') {
     const quarantined = record.status === 'quarantined';
     const onlyCertificate = record.lotVerdict?.blockers.filter((b) => b.severity !== 'caution').every((b) => b.source === 'certificate') ?? false;
@@ -86,11 +92,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
           // A hold by the rules says who lifts it beside each reason (components/receive/lot-verdict.tsx).
           <Text style={type.small}>Released by an {rolesInWords(rolesFor('release-lots')).toLowerCase()}, with a comment.</Text>
         )}
-        {formError ? (
-          <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
-            {formError}
-          </Text>
-        ) : null}
+        {problem}
       </View>
     );
   }
@@ -122,11 +124,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
         testID={`${prefix}-hold-reason`}
       />
       <Button label="Put lot on hold" variant="danger" busy={hold.isPending} onPress={onHold} testID={`${prefix}-hold`} />
-      {formError ? (
-        <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
-          {formError}
-        </Text>
-      ) : null}
+      {problem}
     </View>
   );
 }
