@@ -3,18 +3,29 @@ import { ScrollView, StyleSheet, Text, View } from 'react-native';
 import { colors, maxContentWidth, space, type } from './theme';
 import { useIsWide } from './use-layout';
 
+/** Two columns: the page's main content, then what sits beside it on a wide screen. */
+export type ScreenColumns = readonly [main: ReactNode, side: ReactNode];
+
 interface ScreenProps {
   title: string;
   subtitle?: string;
   actions?: ReactNode;
-  children: ReactNode;
+  /** The page's content; with `columns`, what runs the full width above them. */
+  children?: ReactNode;
+  /** Side by side on a wide screen, main first; stacked in that order on a phone. */
+  columns?: ScreenColumns;
+  /** How a wide screen shares its width between the two columns, as flex weights: [1, 1] unless given. */
+  split?: readonly [main: number, side: number];
   testID?: string;
   /** A bar fixed to the bottom of the page (above the phone's navigation) holding the primary action. */
   footer?: ReactNode;
 }
 
-/** The one page layout: a single column on a phone; a centred, wider column on a wide screen. */
-export function Screen({ title, subtitle, actions, children, testID, footer }: ScreenProps) {
+/**
+ * The one page layout: a single column on a phone; a centred, wider page on a wide screen, in two columns
+ * when given `columns`.
+ */
+export function Screen({ title, subtitle, actions, children, columns, split = [1, 1], testID, footer }: ScreenProps) {
   const wide = useIsWide();
   const page = (
     <ScrollView style={styles.scroll} contentContainerStyle={[styles.content, wide && styles.contentWide]} testID={testID}>
@@ -29,6 +40,15 @@ export function Screen({ title, subtitle, actions, children, testID, footer }: S
           {actions ? <View style={styles.actions}>{actions}</View> : null}
         </View>
         {children}
+        {columns ? (
+          <View style={[styles.columns, wide && styles.columnsWide]} testID={testID ? `${testID}-columns` : undefined}>
+            {columns.map((column, i) => (
+              <View key={i} style={[styles.column, wide && { flex: split[i], minWidth: 0 }]}>
+                {column}
+              </View>
+            ))}
+          </View>
+        ) : null}
       </View>
     </ScrollView>
   );
@@ -52,6 +72,9 @@ const styles = StyleSheet.create({
   headerWide: { flexDirection: 'row', alignItems: 'flex-end', justifyContent: 'space-between' },
   titles: { gap: space.xs, flexShrink: 1 },
   actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
+  columns: { gap: space.lg },
+  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  column: { gap: space.lg },
   withFooter: { flex: 1 },
   footer: { backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.line, paddingHorizontal: space.lg, paddingVertical: space.sm, gap: space.xs },
   footerWide: { paddingHorizontal: space.xxl, alignItems: 'flex-end' },

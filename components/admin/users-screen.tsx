@@ -12,7 +12,6 @@ import { Card } from '../ui/card';
 import { ChoiceChips } from '../ui/choice-chips';
 import { EmptyState, ErrorState, LoadingState } from '../ui/states';
 import { TextField } from '../ui/text-field';
-import { useIsWide } from '../use-layout';
 import { ResetPasswordPanel } from './reset-password-panel';
 
 const roleOptions = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
@@ -96,28 +95,16 @@ function UserCard({ user, self }: { user: UserRow; self: boolean }) {
 
 export function UsersScreen() {
   const { session } = useSession();
-  const wide = useIsWide();
   const users = useUsersQuery();
   let list;
   if (users.isPending) list = <LoadingState label="Loading people…" />;
   else if (users.isError) list = <ErrorState error={users.error} onRetry={() => users.refetch()} />;
   else if (users.data.items.length === 0) list = <EmptyState title="No people yet" next="Add the first person with the form." />;
   else list = users.data.items.map((u) => <UserCard key={u.id} user={u} self={u.id === session?.user.id} />);
-  return (
-    <Screen title="People" subtitle="Who can sign in, and with which role." testID="users-screen">
-      <View style={[styles.cols, wide && styles.colsWide]}>
-        <View style={[styles.col, wide && { flex: 3 }]}>{list}</View>
-        <View style={[styles.col, wide && { flex: 2 }]}>
-          <NewUserForm />
-        </View>
-      </View>
-    </Screen>
-  );
+  return <Screen title="People" subtitle="Who can sign in, and with which role." testID="users-screen" columns={[<View style={styles.col}>{list}</View>, <NewUserForm />]} split={[3, 2]} />;
 }
 
 const styles = StyleSheet.create({
-  cols: { gap: space.lg },
-  colsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   col: { gap: space.md },
   actions: { gap: space.sm },
 });

@@ -9,7 +9,8 @@ import { TextField } from '../ui/text-field';
 import { CONNECTOR_LIMITS as H, connectorProblem } from '@/shared/records/connector';
 import { sentence } from '@/shared/records/field';
 import { Checks, mmOf } from './checks';
-import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { fieldBinders } from './bind';
+import { FieldRow, FormFrame, FormSection } from './form-frame';
 import { optionLabel, RETURN_PATH_OPTIONS, SUITED_OPTIONS } from './options';
 import { KeyCodePicker, SupplierPicker } from './pickers';
 import { useRecordForm, type FormSpec } from './use-record-form';
@@ -111,6 +112,7 @@ export const connectorSpec: FormSpec<ConnectorRecord, ConnectorDraft> = {
 export function ConnectorFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: connectorSpec, source: connectorQueries, id, onSaved: (c) => router.replace(`/registry/connectors/${c.id}` as never) });
   const { draft, set, field } = form;
+  const bind = fieldBinders(form, connectorSpec.labelOf);
   const setReturnPath = (v: ReturnPath) => {
     set('returnPath', v);
     // Hidden fields must not keep a value that would be saved behind the person's back.
@@ -120,69 +122,26 @@ export function ConnectorFormScreen({ id }: { id?: string }) {
     }
   };
   return (
-    <FormFrame
-      form={form}
-      title={id ? `Edit dispense head ${form.base?.partNumber ?? ''}`.trim() : 'New dispense head'}
-      subtitle="A dispense head: its ports, keying and the tapping it is made for."
-      testID="connector-form"
-      cancelTo={id ? `/registry/connectors/${id}` : '/registry/connectors'}
-    >
+    <FormFrame form={form} resource="connectors" id={id} name={form.base?.partNumber} subtitle="A dispense head: its ports, keying and the tapping it is made for." testID="connector-form">
       <FormSection title="Part">
-        <TextField
-          label="Part number"
-          value={draft.partNumber}
-          onChangeText={(v) => set('partNumber', v)}
-          autoCapitalize="characters"
-          autoCorrect={false}
-          testID="form-partNumber"
-          {...field('partNumber')}
-        />
-        <SupplierPicker value={draft.supplierId} onChange={(p) => set('supplierId', p)} testID="form-supplierId" {...field('supplierId')} />
-        <TextField
-          label="Wetted materials"
-          hint="Everything the slurry touches, e.g. PFA, PTFE, FFKM seals."
-          value={draft.wettedMaterials}
-          onChangeText={(v) => set('wettedMaterials', v)}
-          testID="form-wettedMaterials"
-          {...field('wettedMaterials')}
-        />
+        <TextField {...bind.code('partNumber')} />
+        <SupplierPicker {...bind.value('supplierId')} />
+        <TextField {...bind.text('wettedMaterials')} hint="Everything the slurry touches, e.g. PFA, PTFE, FFKM seals." />
       </FormSection>
       <FormSection title="Keying and tapping">
-        <KeyCodePicker hint="The collar key on the head, if the site keys this line." value={draft.keyCode} onChange={(p) => set('keyCode', p)} testID="form-keyCode" {...field('keyCode')} />
-        <ChoiceChips label="Suited to" options={SUITED_OPTIONS} value={draft.suitedTo} onChange={(v) => set('suitedTo', v)} error={field('suitedTo').error} testID="form-suitedTo" />
+        <KeyCodePicker {...bind.value('keyCode')} hint="The collar key on the head, if the site keys this line." />
+        <ChoiceChips {...bind.choice('suitedTo')} options={SUITED_OPTIONS} />
       </FormSection>
       <FormSection title="Ports" full>
         <FieldRow>
-          <FieldCell>
-            <LengthField label="Feed port bore" value={draft.feedBoreMm} onChange={(v) => set('feedBoreMm', v)} testID="form-feedBoreMm" {...field('feedBoreMm')} />
-          </FieldCell>
-          <FieldCell>
-            <TextField
-              label="Feed port size"
-              hint="As marked, e.g. 3/4 in."
-              value={draft.feedNominal}
-              onChangeText={(v) => set('feedNominal', v)}
-              testID="form-feedNominal"
-              {...field('feedNominal')}
-            />
-          </FieldCell>
+          <LengthField {...bind.value('feedBoreMm')} />
+          <TextField {...bind.text('feedNominal')} hint="As marked, e.g. 3/4 in." />
         </FieldRow>
         <ChoiceChips label="Return path" options={RETURN_PATH_OPTIONS} value={draft.returnPath} onChange={setReturnPath} error={field('returnPath').error} testID="form-returnPath" />
         {hasReturn(draft) ? (
           <FieldRow>
-            <FieldCell>
-              <LengthField label="Return port bore" value={draft.returnBoreMm} onChange={(v) => set('returnBoreMm', v)} testID="form-returnBoreMm" {...field('returnBoreMm')} />
-            </FieldCell>
-            <FieldCell>
-              <TextField
-                label="Return port size"
-                hint="As marked, e.g. 1/2 in."
-                value={draft.returnNominal}
-                onChangeText={(v) => set('returnNominal', v)}
-                testID="form-returnNominal"
-                {...field('returnNominal')}
-              />
-            </FieldCell>
+            <LengthField {...bind.value('returnBoreMm')} />
+            <TextField {...bind.text('returnNominal')} hint="As marked, e.g. 1/2 in." />
           </FieldRow>
         ) : draft.returnPath === 'none' ? (
           <Text style={type.small} testID="form-no-return">

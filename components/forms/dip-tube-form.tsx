@@ -7,7 +7,8 @@ import { TextField } from '../ui/text-field';
 import { DIP_TUBE_LIMITS as T, dipTubeProblem } from '@/shared/records/dip-tube';
 import { sentence } from '@/shared/records/field';
 import { Checks, mmOf } from './checks';
-import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { fieldBinders } from './bind';
+import { FieldRow, FormFrame, FormSection } from './form-frame';
 import { CHANNEL_OPTIONS, optionLabel } from './options';
 import { KeyCodePicker, SupplierPicker, ThreadPicker } from './pickers';
 import { useRecordForm, type FormSpec } from './use-record-form';
@@ -96,44 +97,24 @@ export const dipTubeSpec: FormSpec<DipTubeRecord, DipTubeDraft> = {
 /** Create (no id) or edit a dip tube. */
 export function DipTubeFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: dipTubeSpec, source: dipTubeQueries, id, onSaved: (t) => router.replace(`/registry/dip-tubes/${t.id}` as never) });
-  const { draft, set, field } = form;
+  const bind = fieldBinders(form, dipTubeSpec.labelOf);
   return (
-    <FormFrame
-      form={form}
-      title={id ? `Edit dip tube ${form.base?.partNumber ?? ''}`.trim() : 'New dip tube'}
-      subtitle="Type lengths in mm or inches; they are saved in mm."
-      testID="dip-tube-form"
-      cancelTo={id ? `/registry/dip-tubes/${id}` : '/registry/dip-tubes'}
-    >
+    <FormFrame form={form} resource="dip-tubes" id={id} name={form.base?.partNumber} subtitle="Type lengths in mm or inches; they are saved in mm." testID="dip-tube-form">
       <FormSection title="Part">
-        <TextField
-          label="Part number"
-          value={draft.partNumber}
-          onChangeText={(v) => set('partNumber', v)}
-          autoCapitalize="characters"
-          autoCorrect={false}
-          testID="form-partNumber"
-          {...field('partNumber')}
-        />
-        <SupplierPicker value={draft.supplierId} onChange={(p) => set('supplierId', p)} testID="form-supplierId" {...field('supplierId')} />
-        <TextField label="Material" hint="The wetted material, e.g. PFA or PVDF." value={draft.material} onChangeText={(v) => set('material', v)} testID="form-material" {...field('material')} />
+        <TextField {...bind.code('partNumber')} />
+        <SupplierPicker {...bind.value('supplierId')} />
+        <TextField {...bind.text('material')} hint="The wetted material, e.g. PFA or PVDF." />
       </FormSection>
       <FormSection title="Thread and keying">
-        <ThreadPicker hint="The bung thread the tube's head screws into." value={draft.threadCode} onChange={(p) => set('threadCode', p)} testID="form-threadCode" {...field('threadCode')} />
-        <KeyCodePicker hint="The collar key on the tube, if the site keys this line." value={draft.keyCode} onChange={(p) => set('keyCode', p)} testID="form-keyCode" {...field('keyCode')} />
-        <ChoiceChips label="Channels" options={CHANNEL_OPTIONS} value={draft.channels} onChange={(v) => set('channels', v)} error={field('channels').error} testID="form-channels" />
+        <ThreadPicker {...bind.value('threadCode')} hint="The bung thread the tube's head screws into." />
+        <KeyCodePicker {...bind.value('keyCode')} hint="The collar key on the tube, if the site keys this line." />
+        <ChoiceChips {...bind.choice('channels')} options={CHANNEL_OPTIONS} />
       </FormSection>
       <FormSection title="Dimensions" full>
         <FieldRow>
-          <FieldCell>
-            <LengthField label="Length" hint="From the bung seat to the tip." value={draft.lengthMm} onChange={(v) => set('lengthMm', v)} testID="form-lengthMm" {...field('lengthMm')} />
-          </FieldCell>
-          <FieldCell>
-            <LengthField label="Bore" hint="Inside diameter." value={draft.boreMm} onChange={(v) => set('boreMm', v)} testID="form-boreMm" {...field('boreMm')} />
-          </FieldCell>
-          <FieldCell>
-            <LengthField label="Outside diameter" hint="Must pass through the bung." value={draft.odMm} onChange={(v) => set('odMm', v)} testID="form-odMm" {...field('odMm')} />
-          </FieldCell>
+          <LengthField {...bind.value('lengthMm')} hint="From the bung seat to the tip." />
+          <LengthField {...bind.value('boreMm')} hint="Inside diameter." />
+          <LengthField {...bind.value('odMm')} hint="Must pass through the bung." />
         </FieldRow>
       </FormSection>
     </FormFrame>

@@ -10,7 +10,7 @@ import { lengthDraft, LengthField, type LengthDraft } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import type { DrumTypeDraft } from './drum-type-form';
-import { FieldCell, FieldRow } from './form-frame';
+import { FieldRow } from './form-frame';
 import { POSITION_OPTIONS } from './options';
 import { KeyCodePicker, ThreadPicker } from './pickers';
 import type { RecordForm } from './use-record-form';
@@ -52,7 +52,13 @@ export function OpeningsEditor({ form }: { form: RecordForm<DrumTypeRecord, Drum
   return (
     <View style={styles.openings}>
       {draft.openings.map((o, i) => {
-        const p = `openings.${i}`;
+        // One field of this opening: its value, change handler, message and test id.
+        const at = <K extends keyof OpeningDraft>(key: K) => ({
+          value: o[key],
+          onChange: (v: OpeningDraft[K]) => change(i, key, v),
+          testID: `form-openings-${i}-${key}`,
+          ...field(`openings.${i}.${key}`),
+        });
         return (
           <View key={o._key} style={styles.opening} testID={`form-opening-${i}`} role="group" aria-label={`Opening ${i + 1}`}>
             <View style={styles.openingHead}>
@@ -69,43 +75,21 @@ export function OpeningsEditor({ form }: { form: RecordForm<DrumTypeRecord, Drum
               />
             </View>
             <FieldRow>
-              <FieldCell>
-                <TextField
-                  label="Label"
-                  hint="As marked or as people say it, e.g. large bung."
-                  value={o.label}
-                  onChangeText={(v) => change(i, 'label', v)}
-                  testID={`form-openings-${i}-label`}
-                  {...field(`${p}.label`)}
-                />
-              </FieldCell>
-              <FieldCell>
-                <LengthField
-                  label="Bore"
-                  hint="Inside diameter of the opening."
-                  value={o.boreMm}
-                  onChange={(v) => change(i, 'boreMm', v)}
-                  testID={`form-openings-${i}-boreMm`}
-                  {...field(`${p}.boreMm`)}
-                />
-              </FieldCell>
+              <TextField
+                label="Label"
+                hint="As marked or as people say it, e.g. large bung."
+                value={o.label}
+                onChangeText={(v) => change(i, 'label', v)}
+                testID={`form-openings-${i}-label`}
+                {...field(`openings.${i}.label`)}
+              />
+              <LengthField label="Bore" hint="Inside diameter of the opening." {...at('boreMm')} />
             </FieldRow>
             <FieldRow>
-              <FieldCell>
-                <ThreadPicker value={o.threadCode} onChange={(v) => change(i, 'threadCode', v)} testID={`form-openings-${i}-threadCode`} {...field(`${p}.threadCode`)} />
-              </FieldCell>
-              <FieldCell>
-                <KeyCodePicker value={o.keyCode} onChange={(v) => change(i, 'keyCode', v)} testID={`form-openings-${i}-keyCode`} {...field(`${p}.keyCode`)} />
-              </FieldCell>
+              <ThreadPicker {...at('threadCode')} />
+              <KeyCodePicker {...at('keyCode')} />
             </FieldRow>
-            <ChoiceChips
-              label="Position"
-              options={POSITION_OPTIONS}
-              value={o.position}
-              onChange={(v) => change(i, 'position', v)}
-              error={field(`${p}.position`).error}
-              testID={`form-openings-${i}-position`}
-            />
+            <ChoiceChips label="Position" options={POSITION_OPTIONS} {...at('position')} />
           </View>
         );
       })}

@@ -11,7 +11,8 @@ import { lengthDraft, LengthField, NumberField, numberText, type LengthDraft } f
 import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { Checks, mmOf, trimOrNull } from './checks';
-import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { bindSupplier, fieldBinders } from './bind';
+import { FieldRow, FormFrame, FormSection } from './form-frame';
 import { HEAD_OPTIONS, MATERIAL_OPTIONS, optionLabel, REGION_OPTIONS } from './options';
 import { emptyOpening, newKey, OpeningsEditor, type OpeningDraft } from './drum-openings-editor';
 import { SupplierPicker } from './pickers';
@@ -129,99 +130,42 @@ export const drumTypeSpec: FormSpec<DrumTypeRecord, DrumTypeDraft> = {
 /** Create (no id) or edit a drum type with its openings. */
 export function DrumTypeFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: drumTypeSpec, source: drumTypeQueries, id, onSaved: (d) => router.replace(`/registry/drum-types/${d.id}` as never) });
-  const { draft, set, field } = form;
+  const { draft, field } = form;
+  const bind = fieldBinders(form, drumTypeSpec.labelOf);
   const warnings = packagingFindings(draft).filter((f) => f.outcome !== 'pass' && f.check !== 'code' && f.check !== 'kind');
   const explained = packagingFindings(draft).find((f) => f.check === 'code' && f.outcome === 'pass');
   return (
     <FormFrame
       form={form}
-      title={id ? `Edit drum type ${form.base?.partNumber ?? ''}`.trim() : 'New drum type'}
+      resource="drum-types"
+      id={id}
+      name={form.base?.partNumber}
       subtitle="The drum as it arrives: its size, its UN mark and every opening. Lengths are saved in mm."
       testID="drum-type-form"
-      cancelTo={id ? `/registry/drum-types/${id}` : '/registry/drum-types'}
     >
       <FormSection title="Drum">
-        <TextField
-          label="Part number"
-          value={draft.partNumber}
-          onChangeText={(v) => set('partNumber', v)}
-          autoCapitalize="characters"
-          autoCorrect={false}
-          testID="form-partNumber"
-          {...field('partNumber')}
-        />
-        <TextField label="Name" hint="What people call it, e.g. 55 gal lined steel tight head." value={draft.name} onChangeText={(v) => set('name', v)} testID="form-name" {...field('name')} />
-        <SupplierPicker
-          value={draft.supplierId}
-          onChange={(p, s) => {
-            set('supplierId', p);
-            if (s && !draft.region) set('region', s.region);
-          }}
-          testID="form-supplierId"
-          {...field('supplierId')}
-        />
-        <ChoiceChips label="Region" options={REGION_OPTIONS} value={draft.region} onChange={(v) => set('region', v)} error={field('region').error} testID="form-region" />
+        <TextField {...bind.code('partNumber')} />
+        <TextField {...bind.text('name')} hint="What people call it, e.g. 55 gal lined steel tight head." />
+        <SupplierPicker {...bindSupplier(form)} />
+        <ChoiceChips {...bind.choice('region')} options={REGION_OPTIONS} />
       </FormSection>
       <FormSection title="Build and marking">
-        <ChoiceChips label="Material" options={MATERIAL_OPTIONS} value={draft.material} onChange={(v) => set('material', v)} error={field('material').error} testID="form-material" />
-        <ChoiceChips label="Head" options={HEAD_OPTIONS} value={draft.head} onChange={(v) => set('head', v)} error={field('head').error} testID="form-head" />
-        <TextField
-          label="UN packaging code"
-          hint="Optional: the code from the UN mark, e.g. 1A1 or 1H1."
-          value={draft.unPackagingCode}
-          onChangeText={(v) => set('unPackagingCode', v)}
-          autoCapitalize="characters"
-          autoCorrect={false}
-          testID="form-unPackagingCode"
-          {...field('unPackagingCode')}
-        />
+        <ChoiceChips {...bind.choice('material')} options={MATERIAL_OPTIONS} />
+        <ChoiceChips {...bind.choice('head')} options={HEAD_OPTIONS} />
+        <TextField {...bind.code('unPackagingCode')} hint="Optional: the code from the UN mark, e.g. 1A1 or 1H1." />
         {explained && !field('unPackagingCode').error ? <Text style={type.small}>{explained.message}</Text> : null}
         {warnings.map((w) => (
           <Text key={w.check} role="status" style={styles.warning} testID={`form-unPackagingCode-${w.check}`}>
             ! {w.message}
           </Text>
         ))}
-        <NumberField
-          label="Nominal capacity"
-          suffix="L"
-          value={draft.nominalCapacityL}
-          onChangeText={(v) => set('nominalCapacityL', v)}
-          testID="form-nominalCapacityL"
-          {...field('nominalCapacityL')}
-        />
+        <NumberField {...bind.text('nominalCapacityL')} suffix="L" />
       </FormSection>
       <FormSection title="Size" full>
         <FieldRow>
-          <FieldCell>
-            <LengthField
-              label="Outside height"
-              hint="Overall, bottom chime to top chime."
-              value={draft.outsideHeightMm}
-              onChange={(v) => set('outsideHeightMm', v)}
-              testID="form-outsideHeightMm"
-              {...field('outsideHeightMm')}
-            />
-          </FieldCell>
-          <FieldCell>
-            <LengthField
-              label="Inside depth"
-              hint="Bung seat to inside bottom."
-              value={draft.insideDepthMm}
-              onChange={(v) => set('insideDepthMm', v)}
-              testID="form-insideDepthMm"
-              {...field('insideDepthMm')}
-            />
-          </FieldCell>
-          <FieldCell>
-            <LengthField
-              label="Outside diameter"
-              hint="Across the rolling hoops."
-              value={draft.outsideDiameterMm}
-              onChange={(v) => set('outsideDiameterMm', v)}
-              testID="form-outsideDiameterMm"
-              {...field('outsideDiameterMm')}
-            />
-          </FieldCell>
+          <LengthField {...bind.value('outsideHeightMm')} hint="Overall, bottom chime to top chime." />
+          <LengthField {...bind.value('insideDepthMm')} hint="Bung seat to inside bottom." />
+          <LengthField {...bind.value('outsideDiameterMm')} hint="Across the rolling hoops." />
         </FieldRow>
       </FormSection>
       <FormSection title="Openings" full testID="form-openings">

@@ -1,7 +1,8 @@
 import { router } from 'expo-router';
-import type { ReactNode } from 'react';
+import { Children, type ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { Screen } from '../screen';
+import { REGISTRY_RESOURCES, type RegistryResource } from '../registry/resources';
 import { useCanEditRegistry } from '../registry/use-can-edit-registry';
 import { colors, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
@@ -31,24 +32,34 @@ export function FormSection({ title, children, full, testID }: { title: string; 
   );
 }
 
-/** Two fields side by side on a wide screen, stacked on a phone. */
+/** Fields side by side, sharing the width, on a wide screen; stacked on a phone. */
 export function FieldRow({ children }: { children: ReactNode }) {
   const wide = useIsWide();
-  return <View style={wide ? styles.fieldRow : styles.fieldCol}>{children}</View>;
-}
-
-export function FieldCell({ children }: { children: ReactNode }) {
-  const wide = useIsWide();
-  return <View style={wide ? styles.cell : undefined}>{children}</View>;
+  return (
+    <View style={wide ? styles.fieldRow : styles.fieldCol}>
+      {Children.toArray(children).map((child, i) => (
+        <View key={i} style={wide ? styles.cell : undefined}>
+          {child}
+        </View>
+      ))}
+    </View>
+  );
 }
 
 interface FormFrameProps<R extends { id: string; version: number }, D extends Draft> {
   form: RecordForm<R, D>;
-  title: string;
+  /** A registry resource's form: its title ("New dip tube", "Edit dip tube <name>") and where Cancel goes come from it. */
+  resource?: RegistryResource;
+  /** The record's id when editing. */
+  id?: string;
+  /** The record's name in the title when editing: its part number or name. */
+  name?: string;
+  /** The page title, when not a registry resource's. */
+  title?: string;
   subtitle?: string;
   testID: string;
-  /** Where Cancel goes when there is no page to go back to. */
-  cancelTo: string;
+  /** Where Cancel goes when there is no page to go back to (a registry resource's: its page, or its list). */
+  cancelTo?: string;
   /** Beside the fields on a wide screen, below them on a phone (the pairing's fit preview). */
   aside?: ReactNode;
   children: ReactNode;
@@ -58,7 +69,11 @@ interface FormFrameProps<R extends { id: string; version: number }, D extends Dr
  * The page around every registry form: who may use it, loading the record to edit, the fields, what the
  * server said, the conflict notice and the Cancel / Save buttons (last, so they come last in tab order).
  */
-export function FormFrame<R extends { id: string; version: number }, D extends Draft>({ form, title, subtitle, testID, cancelTo, aside, children }: FormFrameProps<R, D>) {
+export function FormFrame<R extends { id: string; version: number }, D extends Draft>(props: FormFrameProps<R, D>) {
+  const { form, resource, id, name, subtitle, testID, aside, children } = props;
+  const noun = resource ? REGISTRY_RESOURCES[resource].noun.one : '';
+  const title = props.title ?? (id ? `Edit ${noun} ${name ?? ''}`.trim() : `New ${noun}`);
+  const cancelTo = props.cancelTo ?? (id ? `/registry/${resource}/${id}` : `/registry/${resource}`);
   const wide = useIsWide();
   const canEdit = useCanEditRegistry();
 
@@ -112,18 +127,18 @@ export function FormFrame<R extends { id: string; version: number }, D extends D
   );
   const fields = <View style={[styles.fields, wide && styles.fieldsWide]}>{children}</View>;
 
+  // With an aside, a wide screen puts it in a column beside the form; a phone shows it before the buttons.
+  const beside = !!aside && wide;
+  const main = (
+    <>
+      {fields}
+      {status}
+      {footer}
+    </>
+  );
   return (
-    <Screen title={title} subtitle={subtitle} testID={testID}>
-      {aside && wide ? (
-        <View style={styles.columns}>
-          <View style={styles.main}>
-            {fields}
-            {status}
-            {footer}
-          </View>
-          <View style={styles.aside}>{aside}</View>
-        </View>
-      ) : (
+    <Screen title={title} subtitle={subtitle} testID={testID} columns={beside ? [main, aside] : undefined} split={[3, 2]}>
+      {beside ? null : (
         <>
           {fields}
           {aside}
@@ -144,9 +159,6 @@ const styles = StyleSheet.create({
   fieldRow: { flexDirection: 'row', gap: space.md, alignItems: 'flex-start' },
   fieldCol: { gap: space.md },
   cell: { flex: 1, minWidth: 0 },
-  columns: { flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' },
-  main: { flex: 3, gap: space.lg, minWidth: 0 },
-  aside: { flex: 2, gap: space.lg, minWidth: 0 },
   banner: { borderRadius: radius.md, padding: space.md, borderWidth: 1.5 },
   notice: { backgroundColor: colors.surface, borderColor: colors.primary },
   error: { backgroundColor: colors.dangerSoft, borderColor: colors.danger },

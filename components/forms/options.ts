@@ -1,61 +1,32 @@
 // The choices the registry API accepts (server/registry/registry.dto.ts), with the words shown for them.
-import { REGION_LABELS, type Region } from '@/shared/contract/records';
+import { REGION_LABELS, type ConnectorRecord, type DipTubeRecord, type DrumTypeRecord, type OpeningRecord, type Region, type StationRecord } from '@/shared/contract/records';
 
 type Options<T extends string> = ReadonlyArray<{ value: T; label: string }>;
 
-export const REGION_OPTIONS: Options<Region> = (Object.keys(REGION_LABELS) as Region[]).map((value) => ({ value, label: REGION_LABELS[value] }));
+/** A choice list from each value's words, in their order. */
+function choices<T extends string>(labels: Record<T, string>): Options<T> {
+  return (Object.keys(labels) as T[]).map((value) => ({ value, label: labels[value] }));
+}
 
-export const MATERIAL_OPTIONS: Options<'steel' | 'plastic' | 'fibre' | 'aluminium' | 'other'> = [
-  { value: 'steel', label: 'Steel' },
-  { value: 'plastic', label: 'Plastic' },
-  { value: 'fibre', label: 'Fibre' },
-  { value: 'aluminium', label: 'Aluminium' },
-  { value: 'other', label: 'Other' },
-];
+export const REGION_OPTIONS = choices<Region>(REGION_LABELS);
 
-export const HEAD_OPTIONS: Options<'tight' | 'open'> = [
-  { value: 'tight', label: 'Tight head (bungs)' },
-  { value: 'open', label: 'Open head (lid)' },
-];
+export const MATERIAL_OPTIONS = choices<DrumTypeRecord['material']>({ steel: 'Steel', plastic: 'Plastic', fibre: 'Fibre', aluminium: 'Aluminium', other: 'Other' });
 
-export const POSITION_OPTIONS: Options<'large' | 'small' | 'center' | 'other'> = [
-  { value: 'large', label: 'Large bung' },
-  { value: 'small', label: 'Small bung' },
-  { value: 'center', label: 'Centre' },
-  { value: 'other', label: 'Other' },
-];
+export const HEAD_OPTIONS = choices<DrumTypeRecord['head']>({ tight: 'Tight head (bungs)', open: 'Open head (lid)' });
 
-export const CHANNEL_OPTIONS: Options<'feed' | 'feed-return'> = [
-  { value: 'feed', label: 'Feed only' },
-  { value: 'feed-return', label: 'Feed and return' },
-];
+export const POSITION_OPTIONS = choices<OpeningRecord['position']>({ large: 'Large bung', small: 'Small bung', center: 'Centre', other: 'Other' });
 
-export const RETURN_PATH_OPTIONS: Options<'none' | 'restricted' | 'open'> = [
-  { value: 'none', label: 'No return' },
-  { value: 'restricted', label: 'Restricted return' },
-  { value: 'open', label: 'Open return' },
-];
+export const CHANNEL_OPTIONS = choices<DipTubeRecord['channels']>({ feed: 'Feed only', 'feed-return': 'Feed and return' });
 
-export const SUITED_OPTIONS: Options<'two-opening' | 'one-opening' | 'both'> = [
-  { value: 'two-opening', label: 'Two-opening tapping' },
-  { value: 'one-opening', label: 'One-opening tapping' },
-  { value: 'both', label: 'Both' },
-];
+export const RETURN_PATH_OPTIONS = choices<ConnectorRecord['returnPath']>({ none: 'No return', restricted: 'Restricted return', open: 'Open return' });
 
-export const TAPPING_OPTIONS: Options<'two-opening' | 'one-opening'> = [
-  { value: 'two-opening', label: 'Two openings' },
-  { value: 'one-opening', label: 'One opening' },
-];
+export const SUITED_OPTIONS = choices<ConnectorRecord['suitedTo']>({ 'two-opening': 'Two-opening tapping', 'one-opening': 'One-opening tapping', both: 'Both' });
 
-export const AGITATION_OPTIONS: Options<'pump' | 'mechanical'> = [
-  { value: 'pump', label: 'Pump recirculation' },
-  { value: 'mechanical', label: 'Mechanical stirrer' },
-];
+export const TAPPING_OPTIONS = choices<StationRecord['tapping']>({ 'two-opening': 'Two openings', 'one-opening': 'One opening' });
 
-export const YES_NO_OPTIONS: Options<'yes' | 'no'> = [
-  { value: 'yes', label: 'Yes' },
-  { value: 'no', label: 'No' },
-];
+export const AGITATION_OPTIONS = choices<StationRecord['agitation']>({ pump: 'Pump recirculation', mechanical: 'Mechanical stirrer' });
+
+export const YES_NO_OPTIONS = choices<'yes' | 'no'>({ yes: 'Yes', no: 'No' });
 
 /** The label of a value in an option list, or the value itself. */
 export function optionLabel<T extends string>(options: Options<T>, value: T | null | undefined): string {

@@ -11,6 +11,7 @@ import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { PAIRING_LIMITS } from '@/shared/records/pairing';
 import { Checks, trimOrNull } from './checks';
+import { fieldBinders } from './bind';
 import { FormFrame, FormSection } from './form-frame';
 import { ConnectorPicker, connectorLabel, DipTubePicker, dipTubeLabel } from './pickers';
 import { useRecordForm, type FormSpec } from './use-record-form';
@@ -60,7 +61,8 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
       router.replace(`/registry/pairings/${p.id}` as never);
     },
   });
-  const { draft, set, field, mode } = form;
+  const { draft, set, mode } = form;
+  const bind = fieldBinders(form, pairingSpec.labelOf);
 
   // The records behind the picks, for the preview: the one just picked, else loaded by id.
   const [pickedTube, setPickedTube] = useState<DipTubeRecord | null>(null);
@@ -81,41 +83,25 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
       set('connectorId', { id: connectorDetail.data.id, label: connectorLabel(connectorDetail.data) });
   }, [mode, draft.connectorId, initialConnectorId, connectorDetail.data, set]);
 
-  const title = mode === 'create' ? 'New pairing' : `Edit pairing ${form.base?.dipTubePartNumber ?? ''} + ${form.base?.connectorPartNumber ?? ''}`;
   return (
     <FormFrame
       form={form}
-      title={title}
+      resource="pairings"
+      id={id}
+      name={`${form.base?.dipTubePartNumber ?? ''} + ${form.base?.connectorPartNumber ?? ''}`}
       subtitle={
         mode === 'create'
           ? 'A dip tube and the dispense head it is used with. It starts as a draft; another engineer approves it.'
           : 'Only the notes change; to pair other parts, retire this pairing and create a new one.'
       }
       testID="pairing-form"
-      cancelTo={id ? `/registry/pairings/${id}` : '/registry/pairings'}
       aside={<FitPreview tube={tube} connector={connector} status={form.base?.status ?? 'draft'} />}
     >
       <FormSection title="Pairing" full>
         {mode === 'create' ? (
           <>
-            <DipTubePicker
-              value={draft.dipTubeId}
-              onChange={(p, t) => {
-                setPickedTube(t);
-                set('dipTubeId', p);
-              }}
-              testID="form-dipTubeId"
-              {...field('dipTubeId')}
-            />
-            <ConnectorPicker
-              value={draft.connectorId}
-              onChange={(p, c) => {
-                setPickedConnector(c);
-                set('connectorId', p);
-              }}
-              testID="form-connectorId"
-              {...field('connectorId')}
-            />
+            <DipTubePicker {...bind.value('dipTubeId')} onChange={(p, t) => (setPickedTube(t), set('dipTubeId', p))} />
+            <ConnectorPicker {...bind.value('connectorId')} onChange={(p, c) => (setPickedConnector(c), set('connectorId', p))} />
           </>
         ) : (
           <View style={{ gap: space.sm }}>
@@ -129,16 +115,7 @@ export function PairingFormScreen({ id, initialDipTubeId, initialConnectorId }: 
             </Text>
           </View>
         )}
-        <TextField
-          label="Notes"
-          hint="Optional: trials, measurements, limits of use."
-          value={draft.notes}
-          onChangeText={(v) => set('notes', v)}
-          multiline
-          numberOfLines={4}
-          testID="form-notes"
-          {...field('notes')}
-        />
+        <TextField {...bind.text('notes')} hint="Optional: trials, measurements, limits of use." multiline numberOfLines={4} />
       </FormSection>
     </FormFrame>
   );

@@ -8,6 +8,7 @@ import { TextField } from '../ui/text-field';
 import { sentence } from '@/shared/records/field';
 import { SLURRY_LIMITS as S, SLURRY_SAYS, slurryProblem } from '@/shared/records/slurry';
 import { Checks } from './checks';
+import { bindSupplier, fieldBinders } from './bind';
 import { FormFrame, FormSection } from './form-frame';
 import { optionLabel, REGION_OPTIONS, YES_NO_OPTIONS } from './options';
 import { DrumTypePicker, SupplierPicker } from './pickers';
@@ -125,81 +126,26 @@ export const slurrySpec: FormSpec<SlurryRecord, SlurryDraft> = {
 /** Create (no id) or edit a slurry. */
 export function SlurryFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: slurrySpec, source: slurryQueries, id, onSaved: (s) => router.replace(`/registry/slurries/${s.id}` as never) });
-  const { draft, set, field } = form;
+  const bind = fieldBinders(form, slurrySpec.labelOf);
   return (
-    <FormFrame
-      form={form}
-      title={id ? `Edit slurry ${form.base?.name ?? ''}`.trim() : 'New slurry'}
-      subtitle="How it behaves at the station, and the drum it arrives in."
-      testID="slurry-form"
-      cancelTo={id ? `/registry/slurries/${id}` : '/registry/slurries'}
-    >
+    <FormFrame form={form} resource="slurries" id={id} name={form.base?.name} subtitle="How it behaves at the station, and the drum it arrives in." testID="slurry-form">
       <FormSection title="Slurry">
-        <TextField label="Name" value={draft.name} onChangeText={(v) => set('name', v)} testID="form-name" {...field('name')} />
-        <SupplierPicker
-          value={draft.supplierId}
-          onChange={(p, s) => {
-            set('supplierId', p);
-            // The supplier's region is the usual answer; the person can still change it.
-            if (s && !draft.region) set('region', s.region);
-          }}
-          testID="form-supplierId"
-          {...field('supplierId')}
-        />
-        <ChoiceChips label="Region" options={REGION_OPTIONS} value={draft.region} onChange={(v) => set('region', v)} error={field('region').error} testID="form-region" />
+        <TextField {...bind.text('name')} />
+        <SupplierPicker {...bindSupplier(form)} />
+        <ChoiceChips {...bind.choice('region')} options={REGION_OPTIONS} />
       </FormSection>
       <FormSection title="Handling">
-        <DrumTypePicker hint="The drum type it is delivered in." value={draft.drumTypeId} onChange={(p) => set('drumTypeId', p)} testID="form-drumTypeId" {...field('drumTypeId')} />
-        <ChoiceChips label="Foams when stirred" options={YES_NO_OPTIONS} value={draft.foams} onChange={(v) => set('foams', v)} error={field('foams').error} testID="form-foams" />
-        <ChoiceChips
-          label="Shear-sensitive"
-          options={YES_NO_OPTIONS}
-          value={draft.shearSensitive}
-          onChange={(v) => set('shearSensitive', v)}
-          error={field('shearSensitive').error}
-          testID="form-shearSensitive"
-        />
-        <NumberField
-          label="Solids"
-          hint="Weight percent, 0 to 100."
-          suffix="wt %"
-          value={draft.solidsWtPct}
-          onChangeText={(v) => set('solidsWtPct', v)}
-          testID="form-solidsWtPct"
-          {...field('solidsWtPct')}
-        />
+        <DrumTypePicker {...bind.value('drumTypeId')} hint="The drum type it is delivered in." />
+        <ChoiceChips {...bind.choice('foams')} label="Foams when stirred" options={YES_NO_OPTIONS} />
+        <ChoiceChips {...bind.choice('shearSensitive')} options={YES_NO_OPTIONS} />
+        <NumberField {...bind.text('solidsWtPct')} hint="Weight percent, 0 to 100." suffix="wt %" />
       </FormSection>
       <FormSection title="Receiving">
-        <NumberField
-          label="Shelf life"
-          hint="Days from production; leave empty if the label always gives an expiry date."
-          suffix="days"
-          inputMode="numeric"
-          value={draft.shelfLifeDays}
-          onChangeText={(v) => set('shelfLifeDays', v)}
-          testID="form-shelfLifeDays"
-          {...field('shelfLifeDays')}
-        />
-        <NumberField
-          label="Minimum remaining life on arrival"
-          hint="A lot with fewer days left is held at the dock."
-          suffix="days"
-          inputMode="numeric"
-          value={draft.minRemainingDays}
-          onChangeText={(v) => set('minRemainingDays', v)}
-          testID="form-minRemainingDays"
-          {...field('minRemainingDays')}
-        />
-        <NumberField label="Lowest storage temperature" suffix="°C" value={draft.storageMinC} onChangeText={(v) => set('storageMinC', v)} testID="form-storageMinC" {...field('storageMinC')} />
-        <NumberField label="Highest storage temperature" suffix="°C" value={draft.storageMaxC} onChangeText={(v) => set('storageMaxC', v)} testID="form-storageMaxC" {...field('storageMaxC')} />
-        <ChoiceChips
-          label="Certificate of analysis required at the dock"
-          options={YES_NO_OPTIONS}
-          value={draft.certificateRequired}
-          onChange={(v) => set('certificateRequired', v)}
-          error={field('certificateRequired').error}
-          testID="form-certificateRequired"
-        />
+        <NumberField {...bind.text('shelfLifeDays')} hint="Days from production; leave empty if the label always gives an expiry date." suffix="days" inputMode="numeric" />
+        <NumberField {...bind.text('minRemainingDays')} label="Minimum remaining life on arrival" hint="A lot with fewer days left is held at the dock." suffix="days" inputMode="numeric" />
+        <NumberField {...bind.text('storageMinC')} suffix="°C" />
+        <NumberField {...bind.text('storageMaxC')} suffix="°C" />
+        <ChoiceChips {...bind.choice('certificateRequired')} label="Certificate of analysis required at the dock" options={YES_NO_OPTIONS} />
       </FormSection>
     </FormFrame>
   );

@@ -6,7 +6,8 @@ import type { PickedRef } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { STATION_LIMITS as L } from '@/shared/records/station';
 import { Checks } from './checks';
-import { FieldCell, FieldRow, FormFrame, FormSection } from './form-frame';
+import { fieldBinders } from './bind';
+import { FieldRow, FormFrame, FormSection } from './form-frame';
 import { AGITATION_OPTIONS, optionLabel, TAPPING_OPTIONS } from './options';
 import { ConnectorPicker } from './pickers';
 import { useRecordForm, type FormSpec } from './use-record-form';
@@ -64,7 +65,7 @@ export const stationSpec: FormSpec<StationRecord, StationDraft> = {
 /** Create (no id) or edit a dispense station. */
 export function StationFormScreen({ id }: { id?: string }) {
   const form = useRecordForm({ spec: stationSpec, source: stationQueries, id, onSaved: () => router.replace('/stations') });
-  const { draft, set, field } = form;
+  const bind = fieldBinders(form, stationSpec.labelOf);
   return (
     <FormFrame
       form={form}
@@ -75,26 +76,15 @@ export function StationFormScreen({ id }: { id?: string }) {
     >
       <FormSection title="Station">
         <FieldRow>
-          <FieldCell>
-            <TextField label="Name" value={draft.name} onChangeText={(v) => set('name', v)} testID="form-name" {...field('name')} />
-          </FieldCell>
-          <FieldCell>
-            <TextField label="Bay" value={draft.bay} onChangeText={(v) => set('bay', v)} testID="form-bay" {...field('bay')} />
-          </FieldCell>
+          <TextField {...bind.text('name')} />
+          <TextField {...bind.text('bay')} />
         </FieldRow>
-        <NumberField label="Recirculation flow" suffix="L/min" value={draft.flowLpm} onChangeText={(v) => set('flowLpm', v)} testID="form-flowLpm" {...field('flowLpm')} />
+        <NumberField {...bind.text('flowLpm')} suffix="L/min" />
       </FormSection>
       <FormSection title="Tapping and head">
-        <ChoiceChips label="Tapping" options={TAPPING_OPTIONS} value={draft.tapping} onChange={(v) => set('tapping', v)} error={field('tapping').error} testID="form-tapping" />
-        <ChoiceChips label="Agitation" options={AGITATION_OPTIONS} value={draft.agitation} onChange={(v) => set('agitation', v)} error={field('agitation').error} testID="form-agitation" />
-        <ConnectorPicker
-          label="Installed dispense head"
-          noneLabel="No dispense head installed"
-          value={draft.connectorId}
-          onChange={(p) => set('connectorId', p)}
-          testID="form-connectorId"
-          {...field('connectorId')}
-        />
+        <ChoiceChips {...bind.choice('tapping')} options={TAPPING_OPTIONS} />
+        <ChoiceChips {...bind.choice('agitation')} options={AGITATION_OPTIONS} />
+        <ConnectorPicker {...bind.value('connectorId')} noneLabel="No dispense head installed" />
       </FormSection>
     </FormFrame>
   );

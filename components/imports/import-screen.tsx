@@ -1,7 +1,8 @@
 import { can } from '@/shared/contract/roles';
 import { StyleSheet, Text, View } from 'react-native';
 import { refusedRun, type ImportRun } from '../data/imports';
-import { LinkButton, SectionTitle } from '../receive/parts';
+import { LinkButton } from '../ui/link-button';
+import { SectionTitle } from '../ui/section-title';
 import { Screen } from '../screen';
 import { useSession } from '../session';
 import { colors, fonts, space, type } from '../theme';

@@ -2,7 +2,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { SPEC_SHEET_ENCODINGS_TEXT } from '@/shared/encodings';
 import { formatSize } from '../attachments/pick-file';
 import { IMPORT_KINDS } from '../data/imports';
-import { SectionTitle } from '../receive/parts';
+import { SectionTitle } from '../ui/section-title';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';

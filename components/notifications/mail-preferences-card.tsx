@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { MAIL_KINDS, useMailPreferences } from '../data/mail-preferences';
-import { SectionTitle } from '../receive/parts';
+import { SectionTitle } from '../ui/section-title';
 import { Toggle } from '../sourcing/toggle';
 import { space, type } from '../theme';
 import { Card } from '../ui/card';

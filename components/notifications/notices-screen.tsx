@@ -2,14 +2,13 @@ import { NOTICE_KIND_WORDS } from '@/shared/contract/notice-kinds';
 import { useRouter } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { useMarkAllNoticesReadMutation, useMarkNoticeReadMutation, useNotificationsQuery, type NoticeRecord } from '../data/notifications';
-import { formatWhen } from '../receive/parts';
+import { formatWhen } from '../ui/format';
 import { Screen } from '../screen';
 import { AppearanceCard } from '../settings/appearance-card';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { EmptyState, ErrorState, LoadingState } from '../ui/states';
-import { useIsWide } from '../use-layout';
 import { PasswordCard } from '../auth/password-card';
 import { MailPreferencesCard } from './mail-preferences-card';
 
@@ -21,49 +20,50 @@ export function sortNotices(items: NoticeRecord[]): NoticeRecord[] {
 /** The signed-in person's notices: what happened, a link to it, and marking it read. */
 export function NoticesScreen() {
   const router = useRouter();
-  const wide = useIsWide();
   const list = useNotificationsQuery();
   const readAll = useMarkAllNoticesReadMutation();
   const unread = list.data?.unread ?? 0;
+  let notices;
+  if (list.isPending) notices = <LoadingState label="Loading notices…" />;
+  else if (list.isError) notices = <ErrorState error={list.error} onRetry={() => list.refetch()} />;
+  else if (list.data.items.length === 0)
+    notices = (
+      <EmptyState
+        title="No notices"
+        next="You are told here when a lot is held at the dock, a plan needs hardware, or a pairing needs your review."
+        action={{ label: 'Go home', onPress: () => router.push('/') }}
+      />
+    );
+  else
+    notices = (
+      <View role="list" aria-label="Notices" style={styles.list} testID="notices-list">
+        {sortNotices(list.data.items).map((n) => (
+          <NoticeRow key={n.id} n={n} />
+        ))}
+      </View>
+    );
+  // On a wide screen the person's settings (e-mail choices, password, colours) sit beside the notices; on a phone, after them.
+  const settings = (
+    <>
+      <MailPreferencesCard />
+      <PasswordCard />
+      <AppearanceCard />
+    </>
+  );
   return (
     <Screen
       title="Notices"
       subtitle={list.data ? (unread ? `${unread} unread` : 'All read') : undefined}
       actions={unread ? <Button label="Mark all read" variant="secondary" busy={readAll.isPending} onPress={() => readAll.mutate()} testID="notices-read-all" /> : undefined}
       testID="notices-screen"
+      columns={[notices, settings]}
+      split={[2, 1]}
     >
       {readAll.isError ? (
         <Text role="alert" style={styles.error}>
           {readAll.error.message}
         </Text>
       ) : null}
-      {/* On a wide screen the person's settings (e-mail choices, password, colours) sit beside the notices; on a phone, after them. */}
-      <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={[styles.main, wide && styles.mainWide]}>
-          {list.isPending ? (
-            <LoadingState label="Loading notices…" />
-          ) : list.isError ? (
-            <ErrorState error={list.error} onRetry={() => list.refetch()} />
-          ) : list.data.items.length === 0 ? (
-            <EmptyState
-              title="No notices"
-              next="You are told here when a lot is held at the dock, a plan needs hardware, or a pairing needs your review."
-              action={{ label: 'Go home', onPress: () => router.push('/') }}
-            />
-          ) : (
-            <View role="list" aria-label="Notices" style={styles.list} testID="notices-list">
-              {sortNotices(list.data.items).map((n) => (
-                <NoticeRow key={n.id} n={n} />
-              ))}
-            </View>
-          )}
-        </View>
-        <View style={[styles.settings, wide && styles.side]}>
-          <MailPreferencesCard />
-          <PasswordCard />
-          <AppearanceCard />
-        </View>
-      </View>
     </Screen>
   );
 }
@@ -104,12 +104,6 @@ function NoticeRow({ n }: { n: NoticeRecord }) {
 }
 
 const styles = StyleSheet.create({
-  columns: { gap: space.lg },
-  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  main: { gap: space.md },
-  mainWide: { flex: 2, minWidth: 0 },
-  settings: { gap: space.lg },
-  side: { flex: 1, minWidth: 280 },
   list: { gap: space.md },
   unread: { borderLeftWidth: 5, borderLeftColor: colors.primary, borderRadius: radius.lg },
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },

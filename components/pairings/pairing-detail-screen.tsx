@@ -79,18 +79,26 @@ export function PairingDetailScreen({ id }: { id: string }) {
     canEdit && p.status !== 'retired' ? <Button label="Edit notes" variant="secondary" onPress={() => router.push(`/registry/pairings/edit/${p.id}` as never)} testID="pairing-edit" /> : null;
   const title = `${p.dipTubePartNumber ?? 'Dip tube'} + ${p.connectorPartNumber ?? 'connector'}`;
   return (
-    <Screen title={title} subtitle="Pairing of a dip tube and the dispense head it is used with." actions={actions} testID="pairing-detail">
-      {wide ? (
-        <View style={styles.columns}>
-          <View style={styles.main}>
-            <PairingFacts pairing={p} />
-            <ReviewHistory pairing={p} />
-          </View>
-          <View style={styles.side}>
-            <ReviewPanel pairing={p} />
-          </View>
-        </View>
-      ) : (
+    <Screen
+      title={title}
+      subtitle="Pairing of a dip tube and the dispense head it is used with."
+      actions={actions}
+      testID="pairing-detail"
+      // A phone shows the review panel between the facts and the history.
+      columns={
+        wide
+          ? [
+              <>
+                <PairingFacts pairing={p} />
+                <ReviewHistory pairing={p} />
+              </>,
+              <ReviewPanel pairing={p} />,
+            ]
+          : undefined
+      }
+      split={[3, 2]}
+    >
+      {wide ? null : (
         <>
           <PairingFacts pairing={p} />
           <ReviewPanel pairing={p} />
@@ -102,9 +110,6 @@ export function PairingDetailScreen({ id }: { id: string }) {
 }
 
 const styles = StyleSheet.create({
-  columns: { flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' },
-  main: { flex: 3, gap: space.lg, minWidth: 0 },
-  side: { flex: 2, gap: space.lg, minWidth: 0 },
   fact: { gap: 2 },
   link: {
     fontFamily: fonts.semibold,

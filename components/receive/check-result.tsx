@@ -12,7 +12,9 @@ import { Disclosure } from '../ui/disclosure';
 import { HandlingCaution } from '../ui/handling-caution';
 import { DrumSection } from './drum-section';
 import { LotVerdictBanner } from './lot-verdict';
-import { Fact, FactGrid, formatWhen, SectionTitle } from './parts';
+import { Fact, FactGrid } from '../ui/facts';
+import { formatWhen } from '../ui/format';
+import { SectionTitle } from '../ui/section-title';
 
 /** What drum the lot came in: the registry's drum type, or what the clerk described at the dock. */
 export function drumLabel(record: Pick<ReceivingCheckRecord, 'drumTypeName' | 'drumTypePartNumber' | 'drumDescription'>, show: (mm: number) => string): string {
@@ -85,11 +87,16 @@ function UseThis({ result }: { result: FitCheckResult }) {
 }
 
 function NotChecked({ candidate }: { candidate: FitCandidateRecord }) {
-  if (!candidate.notChecked?.length) return null;
+  return <NotCheckedList items={candidate.notChecked} />;
+}
+
+/** The rules that could not be judged, each with why. */
+function NotCheckedList({ items }: { items: ReadonlyArray<{ rule: string; reason: string }> | undefined }) {
+  if (!items?.length) return null;
   return (
     <View style={styles.notChecked}>
       <Text style={type.label}>Not checked</Text>
-      {candidate.notChecked.map((n) => (
+      {items.map((n) => (
         <Text key={n.rule} style={type.small}>
           • {RULE_LABELS[n.rule] ?? n.rule}: {n.reason.replace(/^not checked: /, '')}
         </Text>
@@ -136,16 +143,7 @@ function AcceptanceRules({ record }: { record: ReceivingCheckRecord }) {
     <Card testID="check-acceptance">
       <SectionTitle>The lot: each rule</SectionTitle>
       <RuleList rules={acceptance.rules} testID="acceptance" />
-      {acceptance.notChecked.length ? (
-        <View style={styles.notChecked}>
-          <Text style={type.label}>Not checked</Text>
-          {acceptance.notChecked.map((n) => (
-            <Text key={n.rule} style={type.small}>
-              • {RULE_LABELS[n.rule] ?? n.rule}: {n.reason.replace(/^not checked: /, '')}
-            </Text>
-          ))}
-        </View>
-      ) : null}
+      <NotCheckedList items={acceptance.notChecked} />
     </Card>
   );
 }

@@ -7,11 +7,10 @@ import { colors, fonts, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { HandlingCaution } from '../ui/handling-caution';
-import { useIsWide } from '../use-layout';
 import { DockDrumCard, DockStationCard } from './dock-drum-card';
 import { DockConditionCard, DockLotCard } from './dock-lot-card';
-import { DockResult, RESULT_ID } from './dock-result';
-import { LinkButton } from './parts';
+import { DockResult, HistoryLink, RESULT_ID } from './dock-result';
+import { LinkButton } from '../ui/link-button';
 import { revealNativeId } from './reveal';
 import { useDockForm } from './use-dock-form';
 import { ProvisionalResult } from './provisional-result';
@@ -22,7 +21,6 @@ import { WaitingChecks } from './waiting-checks';
  * acceptance rules, recorded, and held or quarantined when the verdict says so.
  */
 export function DockCheckScreen() {
-  const wide = useIsWide();
   const { session } = useSession();
   const form = useDockForm();
   const shown = !!form.recordId || !!form.provisional;
@@ -55,43 +53,31 @@ export function DockCheckScreen() {
       <Button label="Check and record the lot" busy={form.saving} onPress={form.submit} testID="dock-submit" />
     </View>
   );
-  const lot = <DockLotCard form={form} />;
   return (
     <Screen
       title="Dock check"
       subtitle="Check an arriving lot against the site's tubes and heads, and its dates and condition, before its drums go to a station."
-      actions={<LinkButton href="/receive/history" label="Check history" testID="dock-history-link" />}
+      actions={<HistoryLink />}
       testID="dock-screen"
       footer={footer}
+      columns={[
+        <>
+          <DockLotCard form={form} />
+          <DockConditionCard form={form} />
+        </>,
+        <>
+          <DockDrumCard form={form} />
+          <DockStationCard form={form} />
+        </>,
+      ]}
     >
       <HandlingCaution />
       <WaitingChecks />
-      {wide ? (
-        <View style={styles.columns}>
-          <View style={styles.col}>
-            {lot}
-            <DockConditionCard form={form} />
-          </View>
-          <View style={styles.col}>
-            <DockDrumCard form={form} />
-            <DockStationCard form={form} />
-          </View>
-        </View>
-      ) : (
-        <>
-          {lot}
-          <DockConditionCard form={form} />
-          <DockDrumCard form={form} />
-          <DockStationCard form={form} />
-        </>
-      )}
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
-  columns: { flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' },
-  col: { flex: 1, minWidth: 0, gap: space.lg },
   submit: { gap: space.xs },
   formError: { fontFamily: fonts.semibold, fontSize: 15, color: colors.danger },
 });

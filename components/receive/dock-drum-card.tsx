@@ -8,7 +8,7 @@ import { ChoiceChips } from '../ui/choice-chips';
 import { LengthField } from '../ui/number-field';
 import { RecordPicker } from '../ui/record-picker';
 import { OpeningEditor } from './opening-editor';
-import { SectionTitle } from './parts';
+import { SectionTitle } from '../ui/section-title';
 import { newOpening, type DockForm } from './use-dock-form';
 
 const MODES = [

@@ -9,7 +9,7 @@ import { NumberField } from '../ui/number-field';
 import { RecordPicker } from '../ui/record-picker';
 import { TextField } from '../ui/text-field';
 import { LotNumberField } from './lot-number-field';
-import { SectionTitle } from './parts';
+import { SectionTitle } from '../ui/section-title';
 import type { DockForm } from './use-dock-form';
 
 const INDICATOR_OPTIONS = TEMPERATURE_INDICATORS.map((value) => ({ value, label: TEMPERATURE_INDICATOR_LABELS[value] }));
@@ -55,33 +55,16 @@ export function DockLotCard({ form }: { form: DockForm }) {
 /** What the lot's condition says: its dates and the temperature indicator on the drums. */
 export function DockConditionCard({ form }: { form: DockForm }) {
   const { draft, set, errors } = form;
+  const date = (key: 'productionDate' | 'expiryDate') => ({ value: draft[key], onChangeText: (v: string) => set(key, v), inputMode: 'numeric' as const, error: errors[key] });
   return (
     <Card>
       <SectionTitle>Dates and temperature</SectionTitle>
       <View style={styles.dates}>
         <View style={styles.date}>
-          <TextField
-            label="Production date"
-            hint="YYYY-MM-DD"
-            placeholder="2026-10-01"
-            value={draft.productionDate}
-            onChangeText={(v) => set('productionDate', v)}
-            inputMode="numeric"
-            error={errors.productionDate}
-            testID="dock-production"
-          />
+          <TextField label="Production date" hint="YYYY-MM-DD" placeholder="2026-10-01" {...date('productionDate')} testID="dock-production" />
         </View>
         <View style={styles.date}>
-          <TextField
-            label="Expiry date"
-            hint="YYYY-MM-DD, if on the label"
-            placeholder="2027-10-01"
-            value={draft.expiryDate}
-            onChangeText={(v) => set('expiryDate', v)}
-            inputMode="numeric"
-            error={errors.expiryDate}
-            testID="dock-expiry"
-          />
+          <TextField label="Expiry date" hint="YYYY-MM-DD, if on the label" placeholder="2027-10-01" {...date('expiryDate')} testID="dock-expiry" />
         </View>
       </View>
       <ChoiceChips label="Temperature indicator" options={INDICATOR_OPTIONS} value={draft.indicator} onChange={(v) => set('indicator', v)} error={errors.indicator} testID="dock-indicator" />

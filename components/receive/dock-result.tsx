@@ -9,7 +9,7 @@ import { CertificateButton, needsCertificate, useRole } from './certificate-butt
 import { CheckFiles } from './check-files';
 import { CheckResult } from './check-result';
 import { HoldPanel } from './hold-panel';
-import { LinkButton } from './parts';
+import { LinkButton } from '../ui/link-button';
 
 export const RESULT_ID = 'dock-result';
 
@@ -26,13 +26,7 @@ export function DockResult({ recordId, onAgain }: { recordId: string; onAgain: (
     </View>
   );
   return (
-    <Screen
-      title="Dock check"
-      subtitle="The verdict for this lot, recorded with who checked it and when."
-      actions={<LinkButton href="/receive/history" label="Check history" testID="dock-history-link" />}
-      testID="dock-screen"
-      footer={footer}
-    >
+    <Screen title="Dock check" subtitle="The verdict for this lot, recorded with who checked it and when." actions={<HistoryLink />} testID="dock-screen" footer={footer}>
       <View nativeID={RESULT_ID} />
       {record.isPending ? (
         <LoadingState label="Loading the check…" />
@@ -55,3 +49,8 @@ const styles = StyleSheet.create({
   bar: { gap: space.sm },
   barWide: { flexDirection: 'row', alignItems: 'flex-start' },
 });
+
+/** The dock pages' way to the recorded checks. */
+export function HistoryLink() {
+  return <LinkButton href="/receive/history" label="Check history" testID="dock-history-link" />;
+}

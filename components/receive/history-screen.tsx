@@ -19,7 +19,9 @@ import { EmptyState, ErrorState, LoadingState } from '../ui/states';
 import { TextField } from '../ui/text-field';
 import { useIsWide } from '../use-layout';
 import { drumLabel } from './check-result';
-import { formatWhen, LinkButton, LotStatusChip } from './parts';
+import { LotStatusChip } from './lot-status-chip';
+import { formatWhen } from '../ui/format';
+import { LinkButton } from '../ui/link-button';
 
 const PAGE_SIZE = 20;
 const VERDICTS = [

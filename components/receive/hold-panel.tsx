@@ -7,7 +7,9 @@ import { useSession } from '../session';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { TextField } from '../ui/text-field';
-import { formatWhen, LotStatusChip, SectionTitle } from './parts';
+import { LotStatusChip } from './lot-status-chip';
+import { formatWhen } from '../ui/format';
+import { SectionTitle } from '../ui/section-title';
 
 /**
  * A held or quarantined lot says why and who may release it; an engineer releases it with a comment. A lot
@@ -54,6 +56,12 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
   const onRelease = () =>
     submitNote(comment, 'comment', 'Say why the lot may be used now (at least 3 characters).', setCommentError, (note, options) => release.mutate({ id: record.id, comment: note }, options));
 
+  const problem = formError ? (
+    <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
+      {formError}
+    </Text>
+  ) : null;
+
   if (record.status === 'on-hold' || record.status === 'quarantined') {
     const quarantined = record.status === 'quarantined';
     const onlyCertificate = record.lotVerdict?.blockers.filter((b) => b.severity !== 'caution').every((b) => b.source === 'certificate') ?? false;
@@ -84,11 +92,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
           // A hold by the rules says who lifts it beside each reason (components/receive/lot-verdict.tsx).
           <Text style={type.small}>Released by an {rolesInWords(rolesFor('release-lots')).toLowerCase()}, with a comment.</Text>
         )}
-        {formError ? (
-          <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
-            {formError}
-          </Text>
-        ) : null}
+        {problem}
       </View>
     );
   }
@@ -120,11 +124,7 @@ export function HoldPanel({ record, prefix }: { record: ReceivingCheckRecord; pr
         testID={`${prefix}-hold-reason`}
       />
       <Button label="Put lot on hold" variant="danger" busy={hold.isPending} onPress={onHold} testID={`${prefix}-hold`} />
-      {formError ? (
-        <Text role="alert" style={styles.error} testID={`${prefix}-hold-error`}>
-          {formError}
-        </Text>
-      ) : null}
+      {problem}
     </View>
   );
 }

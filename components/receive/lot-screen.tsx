@@ -9,7 +9,10 @@ import { CertificateButton, needsCertificate, useRole } from './certificate-butt
 import { CheckFiles } from './check-files';
 import { CheckResult } from './check-result';
 import { HoldPanel } from './hold-panel';
-import { formatWhen, LinkButton, SectionTitle, TextLink } from './parts';
+import { formatWhen } from '../ui/format';
+import { LinkButton } from '../ui/link-button';
+import { SectionTitle } from '../ui/section-title';
+import { TextLink } from '../ui/text-link';
 
 /** One lot: its verdict, hold or release, and every piece of hardware that touched it. */
 export function LotScreen({ id }: { id: string }) {

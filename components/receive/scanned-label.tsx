@@ -1,7 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { DrumLabel } from '@/shared/gs1';
 import { colors, radius, space, type } from '../theme';
-import { formatDate } from './parts';
+import { formatDate } from '../ui/format';
 
 /** What the scanned label said beyond the lot number, shown read-only under the lot field. */
 export function ScannedLabel({ label, testID }: { label: DrumLabel; testID: string }) {

@@ -2,7 +2,9 @@ import { StyleSheet, Text, View } from 'react-native';
 import { useQueuedChecks } from '../data/dock-queue';
 import { colors, fonts, space, type } from '../theme';
 import { Card } from '../ui/card';
-import { formatWhen, LinkButton, SectionTitle } from './parts';
+import { formatWhen } from '../ui/format';
+import { LinkButton } from '../ui/link-button';
+import { SectionTitle } from '../ui/section-title';
 
 const STATE_WORDS = { waiting: 'Waiting for the network', sent: 'Sent and recorded', refused: 'Refused by the server' } as const;
 

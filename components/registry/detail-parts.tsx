@@ -2,31 +2,58 @@ import type { UseQueryResult } from '@tanstack/react-query';
 import { Link } from 'expo-router';
 import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { Screen } from '../screen';
+import type { PairingStatus } from '@/shared/contract/records';
+import { AttachmentsPanel } from '../attachments/attachments-panel';
+import type { AttachmentOwnerKind } from '../data/attachments';
+import { useLengthUnit } from '../data/me';
+import { Screen, type ScreenColumns } from '../screen';
 import { colors, fonts, minTouch, space, type } from '../theme';
 import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
-import { useIsWide } from '../use-layout';
 import { LinkButton } from '../ui/link-button';
-import type { RegistryResource } from './registry-list-screen';
+import { queriesOf, REGISTRY_RESOURCES, type RecordOf, type RegistryResource } from './resources';
+import { StatusChip } from './status-chip';
 import { UnitToggle } from './unit-toggle';
 import { useCanEditRegistry } from './use-can-edit-registry';
 
-interface DetailScreenProps<T> {
+/** What a detail page's columns are built with, besides the record. */
+export interface DetailContext {
+  id: string;
+  /** A length in the person's unit (mm or in). */
+  show: ReturnType<typeof useLengthUnit>['show'];
+}
+
+/** One registry detail page's configuration: `registryDetail` makes its screen. */
+interface DetailConfig<T> {
+  title: (record: T) => string;
+  subtitle?: (record: T, context: DetailContext) => string;
+  /** The record's facts, and what is related to it beside them on a wide screen (after them on a phone). */
+  columns: (record: T, context: DetailContext) => ScreenColumns;
+}
+
+/** A registry detail screen (given the record's id) from its configuration. */
+export function registryDetail<R extends RegistryResource>(resource: R, config: DetailConfig<RecordOf<R>>) {
+  const { noun, showsLengths } = REGISTRY_RESOURCES[resource];
+  const kind = noun.one[0].toUpperCase() + noun.one.slice(1);
+  const { useDetail } = queriesOf(resource);
+  return function ConfiguredDetail({ id }: { id: string }) {
+    return <DetailScreen<RecordOf<R>> {...config} resource={resource} kind={kind} showsLengths={showsLengths} query={useDetail(id)} id={id} />;
+  };
+}
+
+interface DetailScreenProps<T> extends DetailConfig<T> {
   resource: RegistryResource;
   id: string;
   /** "Drum type": the page title until the record arrives. */
   kind: string;
   query: UseQueryResult<T>;
-  title: (record: T) => string;
-  subtitle?: (record: T) => string;
-  showsLengths?: boolean;
-  children: (record: T) => ReactNode;
+  showsLengths: boolean;
 }
 
 /** The frame of every registry detail page: its states, the mm / in switch and the Edit link for engineers. */
-export function DetailScreen<T>({ resource, id, kind, query, title, subtitle, showsLengths, children }: DetailScreenProps<T>) {
+function DetailScreen<T>({ resource, id, kind, query, title, subtitle, showsLengths, columns }: DetailScreenProps<T>) {
   const canEdit = useCanEditRegistry();
+  const { show } = useLengthUnit();
   const actions = (
     <>
       {showsLengths ? <UnitToggle /> : null}
@@ -47,21 +74,40 @@ export function DetailScreen<T>({ resource, id, kind, query, title, subtitle, sh
       </Screen>
     );
   }
-  return (
-    <Screen title={title(query.data)} subtitle={subtitle?.(query.data)} actions={actions} testID={`registry-detail-${resource}`}>
-      {children(query.data)}
-    </Screen>
-  );
+  return <Screen title={title(query.data)} subtitle={subtitle?.(query.data, { id, show })} actions={actions} testID={`registry-detail-${resource}`} columns={columns(query.data, { id, show })} />;
 }
 
-/** Two columns on a wide screen, one on a phone. */
-export function DetailColumns({ left, right }: { left: ReactNode; right: ReactNode }) {
-  const wide = useIsWide();
+/** A record's spec sheets and photos; engineers add to them. */
+export function SpecSheets({ ownerKind, ownerId }: { ownerKind: AttachmentOwnerKind; ownerId: string }) {
+  const canEdit = useCanEditRegistry();
+  return <AttachmentsPanel ownerKind={ownerKind} ownerId={ownerId} canAdd={canEdit} title="Spec sheets and photos" />;
+}
+
+type PartPairing = { id: string; status: PairingStatus; dipTubeId?: string; dipTubePartNumber?: string; connectorId?: string; connectorPartNumber?: string };
+
+const PAIRED_WITH = {
+  'dip-tube': { what: 'a dip tube', label: 'Dip tube', path: 'dip-tubes', part: (p: PartPairing) => p.dipTubePartNumber, partId: (p: PartPairing) => p.dipTubeId },
+  connector: { what: 'a dispense head', label: 'Dispense head', path: 'connectors', part: (p: PartPairing) => p.connectorPartNumber, partId: (p: PartPairing) => p.connectorId },
+} as const;
+
+/** A dip tube's or a dispense head's pairings, each with its status and a link to the other part. */
+/** `page` names the test ids: `tube-pairings`, and a row `tube-pairing-<part number>`. */
+export function PartPairings({ pairings, pairedWith, empty, page }: { pairings: PartPairing[] | undefined; pairedWith: keyof typeof PAIRED_WITH; empty: string; page: string }) {
+  const other = PAIRED_WITH[pairedWith];
   return (
-    <View style={[styles.columns, wide && styles.columnsWide]}>
-      <View style={[styles.column, wide && styles.columnWide]}>{left}</View>
-      <View style={[styles.column, wide && styles.columnWide]}>{right}</View>
-    </View>
+    <Section title="Pairings" testID={`${page}-pairings`}>
+      <RelationList
+        empty={empty}
+        items={(pairings ?? []).map((p) => ({
+          key: p.id,
+          title: `With ${other.part(p) ?? other.what}`,
+          href: `/registry/pairings/${p.id}`,
+          aside: <StatusChip status={p.status} />,
+          links: [{ label: other.label, href: `/registry/${other.path}/${other.partId(p)}` }],
+          testID: `${page}-pairing-${other.part(p)}`,
+        }))}
+      />
+    </Section>
   );
 }
 
@@ -164,10 +210,6 @@ export function RelationList({ items, empty, testID }: { items: Relation[]; empt
 }
 
 const styles = StyleSheet.create({
-  columns: { gap: space.lg },
-  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  column: { gap: space.lg },
-  columnWide: { flex: 1, minWidth: 0 },
   facts: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.md },
   fact: { flexBasis: '42%', flexGrow: 1, minWidth: 140, gap: 2 },
   textLink: {

@@ -1,9 +1,10 @@
 import type { UseQueryResult } from '@tanstack/react-query';
-import type { ColumnDef } from '@tanstack/react-table';
+import { createColumnHelper, type ColumnDef, type ColumnHelper } from '@tanstack/react-table';
 import { useRouter } from 'expo-router';
-import { useEffect } from 'react';
+import { useEffect, useMemo } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { ListParams, Page } from '@/shared/contract/records';
+import { useLengthUnit } from '../data/me';
 import { Screen } from '../screen';
 import { colors, space, type } from '../theme';
 import { DataTable, type TableSort } from '../ui/data-table';
@@ -16,35 +17,52 @@ import { FilterBar, type FilterKind } from './filter-bar';
 import { LinkButton } from '../ui/link-button';
 import { UnitToggle } from './unit-toggle';
 import { useCanEditRegistry } from './use-can-edit-registry';
+import { queriesOf, REGISTRY_RESOURCES, type RecordOf, type RegistryResource } from './resources';
 import { useListState } from './use-list-state';
 
-export type RegistryResource = 'drum-types' | 'dip-tubes' | 'connectors' | 'pairings' | 'slurries' | 'suppliers';
+type Show = ReturnType<typeof useLengthUnit>['show'];
 
-interface RegistryListScreenProps<T extends { id: string }> {
-  resource: RegistryResource;
+/** One registry list's configuration: `registryList` makes its screen. */
+export interface RegistryListConfig<T> {
   title: string;
   subtitle: string;
-  noun: { one: string; many: string };
   /** What the search matches, as a placeholder: "Part number or material". */
   searchHint: string;
-  useList: (params: ListParams) => UseQueryResult<Page<T>>;
-  columns: ColumnDef<T, unknown>[];
+  /** The table's columns, built with the record's column helper; lengths shown in the person's unit. */
+  columns: (col: ColumnHelper<T>, show: Show) => ColumnDef<T, never>[];
   defaultSort: TableSort;
   filters: readonly FilterKind[];
   /** The row's test id suffix: its part number or name. */
   rowTestID: (row: T) => string;
-  /** Lists that show lengths get the mm / in switch. */
-  showsLengths?: boolean;
   /** What an engineer registers first, when the registry is empty: "with its thread, length and bore". */
   firstHint: string;
+}
+
+/** A registry list screen from its configuration. */
+export function registryList<R extends RegistryResource>(resource: R, config: RegistryListConfig<RecordOf<R>>) {
+  const col = createColumnHelper<RecordOf<R>>();
+  return function ConfiguredList() {
+    return <RegistryListScreen<RecordOf<R>> {...config} {...REGISTRY_RESOURCES[resource]} useList={queriesOf(resource).useList} resource={resource} col={col} />;
+  };
+}
+
+interface RegistryListScreenProps<T> extends RegistryListConfig<T> {
+  resource: RegistryResource;
+  noun: { one: string; many: string };
+  useList: (params: ListParams) => UseQueryResult<Page<T>>;
+  showsLengths: boolean;
+  col: ColumnHelper<T>;
 }
 
 /**
  * One registry list: debounced search, filters, server sorting and paging, a table on a wide screen and
  * cards on a phone, and its loading, error, empty and data states.
  */
-export function RegistryListScreen<T extends { id: string }>(props: RegistryListScreenProps<T>) {
-  const { resource, title, subtitle, noun, searchHint, useList, columns, defaultSort, filters, rowTestID, showsLengths, firstHint } = props;
+function RegistryListScreen<T extends { id: string }>(props: RegistryListScreenProps<T>) {
+  const { resource, title, subtitle, noun, searchHint, useList, defaultSort, filters, rowTestID, showsLengths, firstHint, col } = props;
+  const { show } = useLengthUnit();
+  const makeColumns = props.columns;
+  const columns = useMemo(() => makeColumns(col, show) as ColumnDef<T, unknown>[], [makeColumns, col, show]);
   const wide = useIsWide();
   const router = useRouter();
   const canEdit = useCanEditRegistry();

@@ -1,7 +1,7 @@
 import { Text } from 'react-native';
 import { THEME_CHOICES, type ThemeChoice } from '@/shared/themes';
 import { useThemeChoice } from '../data/me';
-import { SectionTitle } from '../receive/parts';
+import { SectionTitle } from '../ui/section-title';
 import { type } from '../theme';
 import { Card } from '../ui/card';
 import { ChoiceChips } from '../ui/choice-chips';

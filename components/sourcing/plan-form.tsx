@@ -3,7 +3,7 @@ import { REGION_LABELS, type DrumTypeRecord, type SupplierRecord } from '@/share
 import { drumTypeQueries } from '../data/drum-types';
 import { stationQueries } from '../data/stations';
 import { supplierQueries } from '../data/suppliers';
-import { SectionTitle } from '../receive/parts';
+import { SectionTitle } from '../ui/section-title';
 import { colors, fonts, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';

@@ -2,7 +2,11 @@ import { StyleSheet, Text, View } from 'react-native';
 import { REGION_LABELS } from '@/shared/contract/records';
 import { VerdictChip } from '../fit/verdict';
 import { useSourcingPlanQuery, type StationImpact } from '../data/sourcing';
-import { Fact, FactGrid, formatDate, formatWhen, LinkButton, SectionTitle, TextLink } from '../receive/parts';
+import { Fact, FactGrid } from '../ui/facts';
+import { formatDate, formatWhen } from '../ui/format';
+import { LinkButton } from '../ui/link-button';
+import { SectionTitle } from '../ui/section-title';
+import { TextLink } from '../ui/text-link';
 import { Screen } from '../screen';
 import { colors, fonts, space, type } from '../theme';
 import { Card } from '../ui/card';
@@ -70,7 +74,23 @@ export function PlanScreen({ id }: { id: string }) {
   );
 
   return (
-    <Screen title={p.slurryName} subtitle={`From ${p.supplierName ?? '—'} (${region}) from ${formatDate(p.startDate)}, ${p.drumsPerMonth} drums a month`} actions={actions} testID="plan-screen">
+    <Screen
+      title={p.slurryName}
+      subtitle={`From ${p.supplierName ?? '—'} (${region}) from ${formatDate(p.startDate)}, ${p.drumsPerMonth} drums a month`}
+      actions={actions}
+      testID="plan-screen"
+      columns={
+        wide
+          ? [
+              stations,
+              <>
+                {order}
+                {warnings}
+              </>,
+            ]
+          : undefined
+      }
+    >
       <Card testID="plan-summary">
         <FactGrid wide={wide}>
           <Fact label="Supplier" value={`${p.supplierName ?? '—'} (${region})`} />
@@ -82,15 +102,8 @@ export function PlanScreen({ id }: { id: string }) {
         </FactGrid>
         {p.notes ? <Text style={type.body}>Notes: {p.notes}</Text> : null}
       </Card>
-      {wide ? (
-        <View style={styles.columns}>
-          <View style={styles.col}>{stations}</View>
-          <View style={styles.col}>
-            {order}
-            {warnings}
-          </View>
-        </View>
-      ) : (
+      {/* A phone shows what to order before the stations it is for. */}
+      {wide ? null : (
         <>
           {order}
           {warnings}
@@ -121,8 +134,6 @@ function StationRow({ s }: { s: StationImpact }) {
 }
 
 const styles = StyleSheet.create({
-  columns: { flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' },
-  col: { flex: 1, minWidth: 0, gap: space.lg },
   stations: { gap: space.md },
   station: { gap: space.xs, paddingTop: space.sm, borderTopWidth: 1, borderTopColor: colors.line },
   stationHead: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap', justifyContent: 'space-between' },

@@ -4,17 +4,17 @@ import { StyleSheet, Text, View } from 'react-native';
 import { REGION_LABELS } from '@/shared/contract/records';
 import { useSourcingPlansQuery, type SourcingPlanRecord } from '../data/sourcing';
 import { useWarningsQuery } from '../data/warnings';
-import { formatDate, formatWhen, LinkButton, SectionTitle } from '../receive/parts';
+import { formatDate, formatWhen } from '../ui/format';
+import { LinkButton } from '../ui/link-button';
+import { SectionTitle } from '../ui/section-title';
 import { Screen } from '../screen';
 import { useSession } from '../session';
 import { colors, fonts, minTouch, radius, space, type } from '../theme';
 import { ErrorState, LoadingState } from '../ui/states';
-import { useIsWide } from '../use-layout';
 import { PlanForm } from './plan-form';
 
 /** Sourcing plans: a new plan's form beside the plans made so far. */
 export function PlansScreen() {
-  const wide = useIsWide();
   const { session } = useSession();
   const plans = useSourcingPlansQuery();
   const open = useWarningsQuery('open');
@@ -47,22 +47,15 @@ export function PlansScreen() {
   );
 
   return (
-    <Screen title="Sourcing" subtitle="Before buying from a new supplier or region: which stations its drums reach, whether they fit, what to order." actions={actions} testID="sourcing-screen">
-      {wide ? (
-        <View style={styles.columns}>
-          {canPlan ? (
-            <View style={styles.formCol}>
-              <PlanForm />
-            </View>
-          ) : null}
-          <View style={styles.listCol}>{list}</View>
-        </View>
-      ) : (
-        <>
-          {canPlan ? <PlanForm /> : null}
-          {list}
-        </>
-      )}
+    <Screen
+      title="Sourcing"
+      subtitle="Before buying from a new supplier or region: which stations its drums reach, whether they fit, what to order."
+      actions={actions}
+      testID="sourcing-screen"
+      columns={canPlan ? [<PlanForm />, list] : undefined}
+      split={[1.1, 1]}
+    >
+      {canPlan ? null : list}
     </Screen>
   );
 }
@@ -86,9 +79,6 @@ function PlanRow({ plan }: { plan: SourcingPlanRecord }) {
 }
 
 const styles = StyleSheet.create({
-  columns: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
-  formCol: { flex: 1.1, minWidth: 0 },
-  listCol: { flex: 1, minWidth: 0 },
   column: { gap: space.md },
   empty: { gap: space.sm, padding: space.lg, borderRadius: radius.md, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line },
   list: { backgroundColor: colors.surface, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line, overflow: 'hidden' },

@@ -4,7 +4,7 @@ import { REGION_LABELS, type Region } from '@/shared/contract/records';
 import { isCalendarDate } from '@/shared/dates';
 import { ApiError } from '../api/client';
 import { useSourcingPlanCreateMutation, type SourcingPlanInput } from '../data/sourcing';
-import { formatDate } from '../receive/parts';
+import { formatDate } from '../ui/format';
 import { parseNumber } from '../ui/number-field';
 import type { PickedRef } from '../ui/record-picker';
 

@@ -1,5 +1,5 @@
 import type { WarningStatus } from '../data/warnings';
-import { Tag } from '../receive/parts';
+import { Tag } from '../ui/tag';
 
 const LOOK: Record<WarningStatus, { label: string; tone: 'noFit' | 'caution' | 'fits' }> = {
   open: { label: '! Open', tone: 'noFit' },

@@ -1,6 +1,8 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { StationBoard } from '../data/station-board';
-import { formatWhen, SectionTitle, TextLink } from '../receive/parts';
+import { formatWhen } from '../ui/format';
+import { SectionTitle } from '../ui/section-title';
+import { TextLink } from '../ui/text-link';
 import { colors, fonts, space, type } from '../theme';
 import { Card } from '../ui/card';
 

@@ -1,7 +1,8 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { BoardTubeSet } from '../data/station-board';
-import { formatWhen, TextLink } from '../receive/parts';
+import { formatWhen } from '../ui/format';
+import { TextLink } from '../ui/text-link';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';

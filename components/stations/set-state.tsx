@@ -1,5 +1,5 @@
 import type { TubeSetState } from '@/shared/contract/records';
-import { Tag } from '../receive/parts';
+import { Tag } from '../ui/tag';
 
 // The rotation at a drum position: online -> cleaning -> clean and ready -> standby -> online.
 export const SET_STATE_LOOK: Record<TubeSetState, { word: string; mark: string; tone: 'primary' | 'caution' | 'fits' | 'muted' }> = {

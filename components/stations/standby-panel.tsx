@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { VerdictChip } from '../fit/verdict';
 import { useReceivingChecksQuery } from '../data/receiving';
 import type { BoardTubeSet, StandbyInput } from '../data/station-board';
-import { formatWhen } from '../receive/parts';
+import { formatWhen } from '../ui/format';
 import { colors, fonts, minTouch, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 import { TextField } from '../ui/text-field';

@@ -2,7 +2,8 @@ import type { ReactNode } from 'react';
 import { can } from '@/shared/contract/roles';
 import { StyleSheet, Text, View } from 'react-native';
 import { useStationBoardQuery, type StationBoard } from '../data/station-board';
-import { LinkButton, SectionTitle } from '../receive/parts';
+import { LinkButton } from '../ui/link-button';
+import { SectionTitle } from '../ui/section-title';
 import { Screen } from '../screen';
 import { useSession } from '../session';
 import { space, type } from '../theme';
@@ -68,19 +69,12 @@ function Board({ board, wide, actions }: { board: StationBoard; wide: boolean; a
       subtitle={`${station.bay} · ${station.tapping === 'one-opening' ? 'one-opening' : 'two-opening'} tapping · ${station.agitation === 'pump' ? 'pump' : 'mechanical'} agitation · head ${station.connectorPartNumber ?? 'none'}`}
       actions={actions}
       testID="board-screen"
+      columns={[<ChangeOuts board={board} />, <RinseLog board={board} />]}
     >
       <HandlingCaution pressurised />
       <Text style={type.body}>Rotation: online → cleaning → rinsed, clean and ready → standby drum → online. A set goes into a drum only after a rinse since its last drum.</Text>
       <ChangeOutCard rotation={rotation} canAct={canAct} />
       {sets}
-      <View style={[styles.logs, wide && styles.logsWide]}>
-        <View style={wide ? styles.log : undefined}>
-          <ChangeOuts board={board} />
-        </View>
-        <View style={wide ? styles.log : undefined}>
-          <RinseLog board={board} />
-        </View>
-      </View>
     </Screen>
   );
 }
@@ -109,7 +103,4 @@ function ChangeOutCard({ rotation, canAct }: { rotation: ReturnType<typeof useRo
 const styles = StyleSheet.create({
   sets: { gap: space.lg },
   setsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  logs: { gap: space.lg },
-  logsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  log: { flex: 1, minWidth: 0 },
 });

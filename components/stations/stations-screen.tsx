@@ -3,7 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { StationRecord, TubeSetRecord } from '@/shared/contract/records';
 import { stationQueries } from '../data/stations';
 import { tubeSetQueries } from '../data/tube-sets';
-import { SectionTitle } from '../receive/parts';
+import { SectionTitle } from '../ui/section-title';
 import { Screen } from '../screen';
 import { colors, fonts, minTouch, radius, space, type } from '../theme';
 import { Card } from '../ui/card';

@@ -10,7 +10,6 @@ import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
 import { TextField } from '../ui/text-field';
-import { useIsWide } from '../use-layout';
 import { useRevealOnPhone } from './use-reveal';
 
 const EXAMPLES = ['1A1', '1A2', '1H1', '1H2', '31HA1', 'UN 1A1/Y1.4/150/24/NL/VL824'] as const;
@@ -22,7 +21,6 @@ const GROUP_LABELS: Record<ParsedPackagingCode['group'], string> = {
 
 /** Reads the code part of a UN packaging mark (the 1A1 in "UN 1A1/Y1.4/150/…") in plain words. */
 export function PackagingCodeScreen() {
-  const wide = useIsWide();
   const params = useLocalSearchParams<{ code?: string }>();
   const initial = (Array.isArray(params.code) ? params.code[0] : params.code) ?? '';
   const [text, setText] = useState(initial);
@@ -83,9 +81,12 @@ export function PackagingCodeScreen() {
   }
 
   return (
-    <Screen title="Packaging code" subtitle="What the UN packaging code on a drum says about its kind, material and head." testID="tools-packaging">
-      <View style={[styles.cols, wide && styles.colsWide]}>
-        <Card style={wide ? styles.formCol : undefined} testID="packaging-form">
+    <Screen
+      title="Packaging code"
+      subtitle="What the UN packaging code on a drum says about its kind, material and head."
+      testID="tools-packaging"
+      columns={[
+        <Card testID="packaging-form">
           <TextField
             label="UN packaging code"
             hint="Just the code, or the whole mark: UN 1A1/Y1.4/150/24/NL/VL824 is read part by part."
@@ -105,12 +106,13 @@ export function PackagingCodeScreen() {
               <Button key={e} label={e} variant="secondary" accessibilityLabel={`Explain ${e}`} onPress={() => explain(e)} testID={`packaging-example-${e}`} />
             ))}
           </View>
-        </Card>
-        <View ref={resultRef} style={[styles.resultCol, wide && styles.resultColWide]} aria-live="polite">
+        </Card>,
+        <View ref={resultRef} style={styles.resultCol} aria-live="polite">
           {result}
-        </View>
-      </View>
-    </Screen>
+        </View>,
+      ]}
+      split={[4, 6]}
+    />
   );
 }
 
@@ -162,11 +164,7 @@ function Part({ mark, what, meaning }: { mark: string; what: string; meaning: st
 }
 
 const styles = StyleSheet.create({
-  cols: { gap: space.lg },
-  colsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  formCol: { flex: 4, minWidth: 0 },
   resultCol: { gap: space.lg },
-  resultColWide: { flex: 6, minWidth: 0 },
   examples: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   invalid: { gap: space.sm, padding: space.lg, borderRadius: radius.md, backgroundColor: colors.dangerSoft, borderWidth: 1, borderColor: colors.danger },
   code: { fontFamily: fonts.bold, fontSize: 32, lineHeight: 38, color: colors.primary, letterSpacing: 1 },

@@ -5,7 +5,6 @@ import { Screen } from '../screen';
 import { space, type } from '../theme';
 import { Card } from '../ui/card';
 import { ErrorState } from '../ui/states';
-import { useIsWide } from '../use-layout';
 import { useRevealOnPhone } from './use-reveal';
 
 /** What a calculator's page reads of its mutation (TanStack Query's UseMutationResult fits). */
@@ -34,7 +33,6 @@ interface ToolPageProps<T, V> {
  * is shown at the form's fields; any other failure here, with a retry.
  */
 export function ToolPage<T, V>({ title, subtitle, testID, form, calc, renderAnswer, empty, flex: [formFlex, resultFlex] }: ToolPageProps<T, V>) {
-  const wide = useIsWide();
   // On a phone the latest answer is scrolled into view when it arrives.
   const resultRef = useRevealOnPhone(calc.data);
   let result;
@@ -51,19 +49,21 @@ export function ToolPage<T, V>({ title, subtitle, testID, form, calc, renderAnsw
     );
   }
   return (
-    <Screen title={title} subtitle={subtitle} testID={testID}>
-      <View style={[styles.cols, wide && styles.colsWide]}>
-        <View style={[styles.col, wide && { flex: formFlex, minWidth: 0 }]}>{form}</View>
-        <View ref={resultRef} style={[styles.col, wide && { flex: resultFlex, minWidth: 0 }]} aria-live="polite">
+    <Screen
+      title={title}
+      subtitle={subtitle}
+      testID={testID}
+      columns={[
+        form,
+        <View ref={resultRef} style={styles.result} aria-live="polite">
           {result}
-        </View>
-      </View>
-    </Screen>
+        </View>,
+      ]}
+      split={[formFlex, resultFlex]}
+    />
   );
 }
 
 const styles = StyleSheet.create({
-  cols: { gap: space.lg },
-  colsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  col: { gap: space.lg },
+  result: { gap: space.lg },
 });

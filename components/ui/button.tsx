@@ -61,3 +61,6 @@ const styles = StyleSheet.create({
   textOnFill: { color: colors.onPrimary },
   textPlain: { color: colors.primary },
 });
+
+/** The button's look, for a link that looks like one (`LinkButton`). */
+export const buttonLook = styles;

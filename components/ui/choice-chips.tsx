@@ -1,6 +1,7 @@
 import { useRef } from 'react';
 import { Platform, Pressable, StyleSheet, Text, View } from 'react-native';
-import { colors, fonts, minTouch, radius, space, type, field } from '../theme';
+import { FieldMessage } from './field-parts';
+import { colors, fonts, minTouch, radius, space, type } from '../theme';
 
 interface ChoiceChipsProps<T extends string> {
   label: string;
@@ -65,11 +66,7 @@ export function ChoiceChips<T extends string>({ label, options, value, onChange,
           );
         })}
       </View>
-      {error ? (
-        <Text role="alert" style={styles.error}>
-          {error}
-        </Text>
-      ) : null}
+      <FieldMessage error={error} />
     </View>
   );
 }
@@ -89,5 +86,4 @@ const styles = StyleSheet.create({
   chipOn: { backgroundColor: colors.primary, borderColor: colors.primary },
   text: { fontFamily: fonts.semibold, fontSize: 15, color: colors.ink },
   textOn: { color: colors.onPrimary },
-  error: field.error,
 });

@@ -1,6 +1,7 @@
 import { forwardRef, useId, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
 import { fromMm, LENGTH_UNITS, toMm, type LengthUnit } from '@/shared/units';
+import { FieldHead, FieldMessage } from './field-parts';
 import { colors, fonts, minTouch, radius, space, type, field } from '../theme';
 
 // ---------------------------------------------------------------------------------------------------
@@ -82,10 +83,7 @@ export const NumberField = forwardRef<TextInput, NumberFieldProps>(function Numb
   const unitLabel = lengthUnit ?? suffix;
   return (
     <View style={styles.wrap}>
-      <Text nativeID={`${id}-label`} style={type.label}>
-        {label}
-      </Text>
-      {hint ? <Text style={type.small}>{hint}</Text> : null}
+      <FieldHead nativeID={`${id}-label`} label={label} hint={hint} />
       <View style={styles.row}>
         <TextInput
           ref={ref}
@@ -142,11 +140,7 @@ export const NumberField = forwardRef<TextInput, NumberFieldProps>(function Numb
         ) : null}
       </View>
       {note ? <Text style={type.small}>{note}</Text> : null}
-      {error ? (
-        <Text role="alert" testID={testID ? `${testID}-error` : undefined} style={styles.error}>
-          {error}
-        </Text>
-      ) : null}
+      <FieldMessage error={error} fieldTestID={testID} />
     </View>
   );
 });
@@ -186,5 +180,4 @@ const styles = StyleSheet.create({
   unitTextOn: { color: colors.onPrimary },
   focusRing: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 2 } as object,
   suffix: { fontFamily: fonts.semibold, fontSize: 16, color: colors.inkMuted, minWidth: 36 },
-  error: field.error,
 });

@@ -1,6 +1,7 @@
 import { forwardRef, useId } from 'react';
-import { StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
-import { colors, space, type, field } from '../theme';
+import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
+import { colors, space, field } from '../theme';
+import { FieldHead, FieldMessage } from './field-parts';
 
 interface TextFieldProps extends Omit<TextInputProps, 'style'> {
   label: string;
@@ -14,10 +15,7 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
   const messageId = `${id}-msg`;
   return (
     <View style={styles.wrap}>
-      <Text nativeID={`${id}-label`} style={type.label}>
-        {label}
-      </Text>
-      {hint ? <Text style={type.small}>{hint}</Text> : null}
+      <FieldHead nativeID={`${id}-label`} label={label} hint={hint} />
       <TextInput
         ref={ref}
         testID={testID}
@@ -28,11 +26,7 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
         style={[styles.input, error ? styles.inputError : null]}
         {...rest}
       />
-      {error ? (
-        <Text nativeID={messageId} role="alert" testID={testID ? `${testID}-error` : undefined} style={styles.error}>
-          {error}
-        </Text>
-      ) : null}
+      <FieldMessage error={error} nativeID={messageId} fieldTestID={testID} />
     </View>
   );
 });
@@ -41,5 +35,4 @@ const styles = StyleSheet.create({
   wrap: { gap: space.xs },
   input: field.input,
   inputError: field.inputError,
-  error: field.error,
 });
