@@ -1,6 +1,8 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { rinseCheck } from '../../shared/fit/rules';
+import type { StationBoard } from '../../shared/contract/stations';
 import { conflict, fieldError, notFound } from '../common/errors';
+import { copyOf, nameOf, type Sent } from '../common/json';
 import { ChangeOut, ReceivingCheck, RinseLog, Station, TubeSet } from '../entities';
 import { audit } from '../audit/audit';
 import type { RinseDto, StandbyDto } from './rotation.dto';
@@ -135,46 +137,23 @@ export class RotationService {
         .getMany(),
     ]);
     return {
-      station: {
-        id: station.id,
-        version: station.version,
-        name: station.name,
-        bay: station.bay,
-        tapping: station.tapping,
-        agitation: station.agitation,
-        flowLpm: station.flowLpm,
-        connectorId: station.connectorId,
-        connectorPartNumber: station.connector?.partNumber ?? null,
-      },
+      station: { ...copyOf(station, ['id', 'version', 'name', 'bay', 'tapping', 'agitation', 'flowLpm', 'connectorId']), connectorPartNumber: station.connector?.partNumber ?? null },
       tubeSets: sets.map((s) => ({
-        id: s.id,
-        version: s.version,
-        label: s.label,
-        state: s.state,
-        dipTubeId: s.dipTubeId,
+        ...copyOf(s, ['id', 'version', 'label', 'state', 'dipTubeId', 'lastRinsedAt', 'lastUsedAt', 'currentLotNumber', 'currentDrumSerial', 'currentReceivingCheckId']),
         dipTubePartNumber: s.dipTube?.partNumber ?? null,
-        lastRinsedAt: s.lastRinsedAt,
-        lastRinsedByName: s.lastRinsedBy?.displayName ?? null,
-        lastUsedAt: s.lastUsedAt,
-        currentLotNumber: s.currentLotNumber,
-        currentDrumSerial: s.currentDrumSerial,
-        currentReceivingCheckId: s.currentReceivingCheckId,
+        lastRinsedByName: nameOf(s.lastRinsedBy),
         // Whether the set may go into the next drum, by the shared rinse rule.
         rinse: rinseCheck({ lastRinsedAt: s.lastRinsedAt, lastUsedAt: s.lastUsedAt }),
       })),
       changeOuts: changeOuts.map((c) => ({
-        id: c.id,
-        at: c.at,
+        ...copyOf(c, ['id', 'at', 'lotNumber', 'receivingCheckId', 'drumSerial']),
         tubeSetLabel: c.tubeSet?.label ?? null,
         dipTubePartNumber: c.dipTube?.partNumber ?? null,
         connectorPartNumber: c.connector?.partNumber ?? null,
-        lotNumber: c.lotNumber,
-        receivingCheckId: c.receivingCheckId,
-        drumSerial: c.drumSerial,
         retiredTubeSetLabel: c.retiredTubeSet?.label ?? null,
-        byName: c.by?.displayName ?? null,
+        byName: nameOf(c.by),
       })),
-      rinses: rinses.map((r) => ({ id: r.id, at: r.rinsedAt, tubeSetLabel: r.tubeSet?.label ?? null, byName: r.rinsedBy?.displayName ?? null, note: r.note })),
-    };
+      rinses: rinses.map((r) => ({ id: r.id, at: r.rinsedAt, tubeSetLabel: r.tubeSet?.label ?? null, byName: nameOf(r.rinsedBy), note: r.note })),
+    } satisfies Sent<StationBoard>;
   }
 }

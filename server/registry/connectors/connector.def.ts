@@ -6,21 +6,16 @@ import { anId, oneOf } from '../list-query';
 import { ensureExists, pick, resolveKey } from '../refs';
 import { ConnectorDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { ConnectorRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
-export const connectorJson = (c: Connector) => ({
-  ...stamps(c),
-  partNumber: c.partNumber,
-  supplierId: c.supplierId,
-  supplierName: c.supplier?.name ?? null,
-  keyCode: c.keyCode?.code ?? null,
-  feedBoreMm: c.feedBoreMm,
-  feedNominal: c.feedNominal,
-  returnBoreMm: c.returnBoreMm,
-  returnNominal: c.returnNominal,
-  returnPath: c.returnPath,
-  suitedTo: c.suitedTo,
-  wettedMaterials: c.wettedMaterials,
-});
+export const connectorJson = (c: Connector) =>
+  ({
+    ...stamps(c),
+    ...copyOf(c, ['partNumber', 'supplierId', 'feedBoreMm', 'feedNominal', 'returnBoreMm', 'returnNominal', 'returnPath', 'suitedTo', 'wettedMaterials']),
+    supplierName: c.supplier?.name ?? null,
+    keyCode: c.keyCode?.code ?? null,
+  }) satisfies Sent<ConnectorRecord>;
 
 export const connectorDef: ResourceDef<Connector> = {
   path: 'connectors',
@@ -49,13 +44,14 @@ export const connectorDef: ResourceDef<Connector> = {
     if (returnPath !== 'none' && returnBore == null) throw fieldError('returnBoreMm', 'is required when the head has a return path');
     return cols;
   },
-  detailExtras: async (c, m) => ({
-    stations: (await m.find(Station, { where: { connectorId: c.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name, bay: s.bay, tapping: s.tapping })),
-    pairings: (await m.find(Pairing, { where: { connectorId: c.id }, relations: { dipTube: true } })).map((p) => ({
-      id: p.id,
-      status: p.status,
-      dipTubeId: p.dipTubeId,
-      dipTubePartNumber: p.dipTube?.partNumber,
-    })),
-  }),
+  detailExtras: async (c, m) =>
+    ({
+      stations: (await m.find(Station, { where: { connectorId: c.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name, bay: s.bay, tapping: s.tapping })),
+      pairings: (await m.find(Pairing, { where: { connectorId: c.id }, relations: { dipTube: true } })).map((p) => ({
+        id: p.id,
+        status: p.status,
+        dipTubeId: p.dipTubeId,
+        dipTubePartNumber: p.dipTube?.partNumber,
+      })),
+    }) satisfies Sent<Required<Pick<ConnectorRecord, 'stations' | 'pairings'>>>,
 };

@@ -6,20 +6,17 @@ import { anId } from '../list-query';
 import { ensureExists, pick, resolveKey, resolveThread } from '../refs';
 import { DipTubeDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { DipTubeRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
-export const dipTubeJson = (t: DipTube) => ({
-  ...stamps(t),
-  partNumber: t.partNumber,
-  supplierId: t.supplierId,
-  supplierName: t.supplier?.name ?? null,
-  threadCode: t.threadSpec?.code ?? null,
-  lengthMm: t.lengthMm,
-  boreMm: t.boreMm,
-  odMm: t.odMm,
-  material: t.material,
-  keyCode: t.keyCode?.code ?? null,
-  channels: t.channels,
-});
+export const dipTubeJson = (t: DipTube) =>
+  ({
+    ...stamps(t),
+    ...copyOf(t, ['partNumber', 'supplierId', 'lengthMm', 'boreMm', 'odMm', 'material', 'channels']),
+    supplierName: t.supplier?.name ?? null,
+    threadCode: t.threadSpec?.code ?? null,
+    keyCode: t.keyCode?.code ?? null,
+  }) satisfies Sent<DipTubeRecord>;
 
 export const dipTubeDef: ResourceDef<DipTube> = {
   path: 'dip-tubes',
@@ -47,22 +44,23 @@ export const dipTubeDef: ResourceDef<DipTube> = {
     if (dto.keyCode !== undefined) cols.keyCodeId = await resolveKey(manager, dto.keyCode, 'keyCode');
     return cols;
   },
-  detailExtras: async (t, m) => ({
-    // Drum types with an opening of this tube's thread (whether the length reaches is the fit check's job).
-    fitsDrumTypes: (
-      await m
-        .getRepository(DrumType)
-        .createQueryBuilder('d')
-        .where('d.id IN (SELECT drum_type_id FROM drum_openings WHERE thread_spec_id = :tid)', { tid: t.threadSpecId })
-        .orderBy('d.name')
-        .limit(100)
-        .getMany()
-    ).map((d) => ({ id: d.id, name: d.name, partNumber: d.partNumber, insideDepthMm: d.insideDepthMm })),
-    pairings: (await m.find(Pairing, { where: { dipTubeId: t.id }, relations: { connector: true } })).map((p) => ({
-      id: p.id,
-      status: p.status,
-      connectorId: p.connectorId,
-      connectorPartNumber: p.connector?.partNumber,
-    })),
-  }),
+  detailExtras: async (t, m) =>
+    ({
+      // Drum types with an opening of this tube's thread (whether the length reaches is the fit check's job).
+      fitsDrumTypes: (
+        await m
+          .getRepository(DrumType)
+          .createQueryBuilder('d')
+          .where('d.id IN (SELECT drum_type_id FROM drum_openings WHERE thread_spec_id = :tid)', { tid: t.threadSpecId })
+          .orderBy('d.name')
+          .limit(100)
+          .getMany()
+      ).map((d) => ({ id: d.id, name: d.name, partNumber: d.partNumber, insideDepthMm: d.insideDepthMm })),
+      pairings: (await m.find(Pairing, { where: { dipTubeId: t.id }, relations: { connector: true } })).map((p) => ({
+        id: p.id,
+        status: p.status,
+        connectorId: p.connectorId,
+        connectorPartNumber: p.connector?.partNumber,
+      })),
+    }) satisfies Sent<Required<Pick<DipTubeRecord, 'fitsDrumTypes' | 'pairings'>>>,
 };

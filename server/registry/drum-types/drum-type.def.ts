@@ -7,23 +7,16 @@ import { ensureExists, pick } from '../refs';
 import { DrumTypeDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
 import { openingJson, writeOpenings } from './openings';
+import type { DrumTypeRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
-export const drumTypeJson = (d: DrumType) => ({
-  ...stamps(d),
-  supplierId: d.supplierId,
-  supplierName: d.supplier?.name ?? null,
-  region: d.region,
-  name: d.name,
-  partNumber: d.partNumber,
-  nominalCapacityL: d.nominalCapacityL,
-  material: d.material,
-  head: d.head,
-  unPackagingCode: d.unPackagingCode,
-  outsideHeightMm: d.outsideHeightMm,
-  insideDepthMm: d.insideDepthMm,
-  outsideDiameterMm: d.outsideDiameterMm,
-  openings: [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label)).map(openingJson),
-});
+export const drumTypeJson = (d: DrumType) =>
+  ({
+    ...stamps(d),
+    ...copyOf(d, ['supplierId', 'region', 'name', 'partNumber', 'nominalCapacityL', 'material', 'head', 'unPackagingCode', 'outsideHeightMm', 'insideDepthMm', 'outsideDiameterMm']),
+    supplierName: d.supplier?.name ?? null,
+    openings: [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label)).map(openingJson),
+  }) satisfies Sent<DrumTypeRecord>;
 
 export const drumTypeDef: ResourceDef<DrumType> = {
   path: 'drum-types',
@@ -65,29 +58,30 @@ export const drumTypeDef: ResourceDef<DrumType> = {
     return cols;
   },
   afterWrite: writeOpenings,
-  detailExtras: async (d, m) => ({
-    // Pairings whose tube threads into one of this drum's openings.
-    pairings: await m
-      .getRepository(Pairing)
-      .createQueryBuilder('p')
-      .innerJoinAndSelect('p.dipTube', 'pt')
-      .innerJoinAndSelect('pt.threadSpec', 'ptt')
-      .innerJoinAndSelect('p.connector', 'pc')
-      .where('pt.thread_spec_id IN (SELECT thread_spec_id FROM drum_openings WHERE drum_type_id = :id)', { id: d.id })
-      .orderBy('p.status', 'ASC')
-      .limit(100)
-      .getMany()
-      .then((ps) =>
-        ps.map((p) => ({
-          id: p.id,
-          status: p.status,
-          dipTubeId: p.dipTubeId,
-          dipTubePartNumber: p.dipTube?.partNumber,
-          threadCode: p.dipTube?.threadSpec?.code,
-          connectorId: p.connectorId,
-          connectorPartNumber: p.connector?.partNumber,
-        })),
-      ),
-    slurries: (await m.find(Slurry, { where: { drumTypeId: d.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name })),
-  }),
+  detailExtras: async (d, m) =>
+    ({
+      // Pairings whose tube threads into one of this drum's openings.
+      pairings: await m
+        .getRepository(Pairing)
+        .createQueryBuilder('p')
+        .innerJoinAndSelect('p.dipTube', 'pt')
+        .innerJoinAndSelect('pt.threadSpec', 'ptt')
+        .innerJoinAndSelect('p.connector', 'pc')
+        .where('pt.thread_spec_id IN (SELECT thread_spec_id FROM drum_openings WHERE drum_type_id = :id)', { id: d.id })
+        .orderBy('p.status', 'ASC')
+        .limit(100)
+        .getMany()
+        .then((ps) =>
+          ps.map((p) => ({
+            id: p.id,
+            status: p.status,
+            dipTubeId: p.dipTubeId,
+            dipTubePartNumber: p.dipTube?.partNumber,
+            threadCode: p.dipTube?.threadSpec?.code,
+            connectorId: p.connectorId,
+            connectorPartNumber: p.connector?.partNumber,
+          })),
+        ),
+      slurries: (await m.find(Slurry, { where: { drumTypeId: d.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name })),
+    }) satisfies Sent<Required<Pick<DrumTypeRecord, 'pairings' | 'slurries'>>>,
 };

@@ -4,6 +4,8 @@ import { anId } from '../list-query';
 import { ensureExists, pick } from '../refs';
 import { SlurryDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { SlurryRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
 export const slurryDef: ResourceDef<Slurry> = {
   path: 'slurries',
@@ -19,23 +21,13 @@ export const slurryDef: ResourceDef<Slurry> = {
     region: filter(region, (qb, v) => qb.andWhere('sl.region = :region', { region: v })),
     supplierId: filter(anId, (qb, v) => qb.andWhere('sl.supplier_id = :supplierId', { supplierId: v })),
   },
-  toJson: (s) => ({
-    ...stamps(s),
-    name: s.name,
-    supplierId: s.supplierId,
-    supplierName: s.supplier?.name ?? null,
-    region: s.region,
-    drumTypeId: s.drumTypeId,
-    drumTypeName: s.drumType?.name ?? null,
-    foams: s.foams,
-    shearSensitive: s.shearSensitive,
-    solidsWtPct: s.solidsWtPct,
-    shelfLifeDays: s.shelfLifeDays,
-    minRemainingDays: s.minRemainingDays,
-    storageMinC: s.storageMinC,
-    storageMaxC: s.storageMaxC,
-    certificateRequired: s.certificateRequired,
-  }),
+  toJson: (s) =>
+    ({
+      ...stamps(s),
+      ...copyOf(s, ['name', 'supplierId', 'region', 'drumTypeId', 'foams', 'shearSensitive', 'solidsWtPct', 'shelfLifeDays', 'minRemainingDays', 'storageMinC', 'storageMaxC', 'certificateRequired']),
+      supplierName: s.supplier?.name ?? null,
+      drumTypeName: s.drumType?.name ?? null,
+    }) satisfies Sent<SlurryRecord>,
   toColumns: async (dto, { manager }) => {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
     if (dto.drumTypeId !== undefined) await ensureExists(manager, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');
