@@ -44,14 +44,13 @@ export const connectorDef: ResourceDef<Connector> = {
     if (returnPath !== 'none' && returnBore == null) throw fieldError('returnBoreMm', 'is required when the head has a return path');
     return cols;
   },
-  detailExtras: async (c, m) =>
-    ({
-      stations: (await m.find(Station, { where: { connectorId: c.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name, bay: s.bay, tapping: s.tapping })),
-      pairings: (await m.find(Pairing, { where: { connectorId: c.id }, relations: { dipTube: true } })).map((p) => ({
-        id: p.id,
-        status: p.status,
-        dipTubeId: p.dipTubeId,
-        dipTubePartNumber: p.dipTube?.partNumber,
-      })),
-    }) satisfies Sent<Required<Pick<ConnectorRecord, 'stations' | 'pairings'>>>,
+  detailExtras: async (c, m): Promise<Sent<Required<Pick<ConnectorRecord, 'stations' | 'pairings'>>>> => ({
+    stations: (await m.find(Station, { where: { connectorId: c.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name, bay: s.bay, tapping: s.tapping })),
+    pairings: (await m.find(Pairing, { where: { connectorId: c.id }, relations: { dipTube: true } })).map((p) => ({
+      id: p.id,
+      status: p.status,
+      dipTubeId: p.dipTubeId,
+      dipTubePartNumber: p.dipTube?.partNumber,
+    })),
+  }),
 };

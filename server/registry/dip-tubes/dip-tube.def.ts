@@ -44,23 +44,22 @@ export const dipTubeDef: ResourceDef<DipTube> = {
     if (dto.keyCode !== undefined) cols.keyCodeId = await resolveKey(manager, dto.keyCode, 'keyCode');
     return cols;
   },
-  detailExtras: async (t, m) =>
-    ({
-      // Drum types with an opening of this tube's thread (whether the length reaches is the fit check's job).
-      fitsDrumTypes: (
-        await m
-          .getRepository(DrumType)
-          .createQueryBuilder('d')
-          .where('d.id IN (SELECT drum_type_id FROM drum_openings WHERE thread_spec_id = :tid)', { tid: t.threadSpecId })
-          .orderBy('d.name')
-          .limit(100)
-          .getMany()
-      ).map((d) => ({ id: d.id, name: d.name, partNumber: d.partNumber, insideDepthMm: d.insideDepthMm })),
-      pairings: (await m.find(Pairing, { where: { dipTubeId: t.id }, relations: { connector: true } })).map((p) => ({
-        id: p.id,
-        status: p.status,
-        connectorId: p.connectorId,
-        connectorPartNumber: p.connector?.partNumber,
-      })),
-    }) satisfies Sent<Required<Pick<DipTubeRecord, 'fitsDrumTypes' | 'pairings'>>>,
+  detailExtras: async (t, m): Promise<Sent<Required<Pick<DipTubeRecord, 'fitsDrumTypes' | 'pairings'>>>> => ({
+    // Drum types with an opening of this tube's thread (whether the length reaches is the fit check's job).
+    fitsDrumTypes: (
+      await m
+        .getRepository(DrumType)
+        .createQueryBuilder('d')
+        .where('d.id IN (SELECT drum_type_id FROM drum_openings WHERE thread_spec_id = :tid)', { tid: t.threadSpecId })
+        .orderBy('d.name')
+        .limit(100)
+        .getMany()
+    ).map((d) => ({ id: d.id, name: d.name, partNumber: d.partNumber, insideDepthMm: d.insideDepthMm })),
+    pairings: (await m.find(Pairing, { where: { dipTubeId: t.id }, relations: { connector: true } })).map((p) => ({
+      id: p.id,
+      status: p.status,
+      connectorId: p.connectorId,
+      connectorPartNumber: p.connector?.partNumber,
+    })),
+  }),
 };

@@ -58,30 +58,29 @@ export const drumTypeDef: ResourceDef<DrumType> = {
     return cols;
   },
   afterWrite: writeOpenings,
-  detailExtras: async (d, m) =>
-    ({
-      // Pairings whose tube threads into one of this drum's openings.
-      pairings: await m
-        .getRepository(Pairing)
-        .createQueryBuilder('p')
-        .innerJoinAndSelect('p.dipTube', 'pt')
-        .innerJoinAndSelect('pt.threadSpec', 'ptt')
-        .innerJoinAndSelect('p.connector', 'pc')
-        .where('pt.thread_spec_id IN (SELECT thread_spec_id FROM drum_openings WHERE drum_type_id = :id)', { id: d.id })
-        .orderBy('p.status', 'ASC')
-        .limit(100)
-        .getMany()
-        .then((ps) =>
-          ps.map((p) => ({
-            id: p.id,
-            status: p.status,
-            dipTubeId: p.dipTubeId,
-            dipTubePartNumber: p.dipTube?.partNumber,
-            threadCode: p.dipTube?.threadSpec?.code,
-            connectorId: p.connectorId,
-            connectorPartNumber: p.connector?.partNumber,
-          })),
-        ),
-      slurries: (await m.find(Slurry, { where: { drumTypeId: d.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name })),
-    }) satisfies Sent<Required<Pick<DrumTypeRecord, 'pairings' | 'slurries'>>>,
+  detailExtras: async (d, m): Promise<Sent<Required<Pick<DrumTypeRecord, 'pairings' | 'slurries'>>>> => ({
+    // Pairings whose tube threads into one of this drum's openings.
+    pairings: await m
+      .getRepository(Pairing)
+      .createQueryBuilder('p')
+      .innerJoinAndSelect('p.dipTube', 'pt')
+      .innerJoinAndSelect('pt.threadSpec', 'ptt')
+      .innerJoinAndSelect('p.connector', 'pc')
+      .where('pt.thread_spec_id IN (SELECT thread_spec_id FROM drum_openings WHERE drum_type_id = :id)', { id: d.id })
+      .orderBy('p.status', 'ASC')
+      .limit(100)
+      .getMany()
+      .then((ps) =>
+        ps.map((p) => ({
+          id: p.id,
+          status: p.status,
+          dipTubeId: p.dipTubeId,
+          dipTubePartNumber: p.dipTube?.partNumber,
+          threadCode: p.dipTube?.threadSpec?.code,
+          connectorId: p.connectorId,
+          connectorPartNumber: p.connector?.partNumber,
+        })),
+      ),
+    slurries: (await m.find(Slurry, { where: { drumTypeId: d.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name })),
+  }),
 };

@@ -16,6 +16,6 @@ export const keyCodeDef: ResourceDef<KeyCode> = {
   search: ['k.code', 'k.label', "coalesce(k.marking, '')"],
   sorts: { code: 'k.code', label: 'k.label' },
   defaultSort: 'code',
-  toJson: (k) => ({ ...stamps(k), ...copyOf(k, ['code', 'label', 'marking']) }) satisfies Sent<KeyCodeRecord>,
+  toJson: (k): Sent<KeyCodeRecord> => ({ ...stamps(k), ...copyOf(k, ['code', 'label', 'marking']) }),
   toColumns: async (dto) => pick<KeyCode>(dto, ['code', 'label', 'marking']),
 };

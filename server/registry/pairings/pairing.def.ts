@@ -71,12 +71,11 @@ export const pairingDef: ResourceDef<Pairing> = {
       user.id,
     );
   },
-  detailExtras: async (p, m) =>
-    ({
-      reviews: (await m.find(PairingReview, { where: { pairingId: p.id }, relations: { reviewer: true }, order: { createdAt: 'ASC' } })).map((r) => ({
-        ...copyOf(r, ['id', 'decision', 'comment', 'reviewerId']),
-        reviewerName: nameOf(r.reviewer),
-        at: r.createdAt,
-      })),
-    }) satisfies Sent<Required<Pick<PairingRecord, 'reviews'>>>,
+  detailExtras: async (p, m): Promise<Sent<Required<Pick<PairingRecord, 'reviews'>>>> => ({
+    reviews: (await m.find(PairingReview, { where: { pairingId: p.id }, relations: { reviewer: true }, order: { createdAt: 'ASC' } })).map((r) => ({
+      ...copyOf(r, ['id', 'decision', 'comment', 'reviewerId']),
+      reviewerName: nameOf(r.reviewer),
+      at: r.createdAt,
+    })),
+  }),
 };

@@ -21,13 +21,12 @@ export const slurryDef: ResourceDef<Slurry> = {
     region: filter(region, (qb, v) => qb.andWhere('sl.region = :region', { region: v })),
     supplierId: filter(anId, (qb, v) => qb.andWhere('sl.supplier_id = :supplierId', { supplierId: v })),
   },
-  toJson: (s) =>
-    ({
-      ...stamps(s),
-      ...copyOf(s, ['name', 'supplierId', 'region', 'drumTypeId', 'foams', 'shearSensitive', 'solidsWtPct', 'shelfLifeDays', 'minRemainingDays', 'storageMinC', 'storageMaxC', 'certificateRequired']),
-      supplierName: s.supplier?.name ?? null,
-      drumTypeName: s.drumType?.name ?? null,
-    }) satisfies Sent<SlurryRecord>,
+  toJson: (s): Sent<SlurryRecord> => ({
+    ...stamps(s),
+    ...copyOf(s, ['name', 'supplierId', 'region', 'drumTypeId', 'foams', 'shearSensitive', 'solidsWtPct', 'shelfLifeDays', 'minRemainingDays', 'storageMinC', 'storageMaxC', 'certificateRequired']),
+    supplierName: s.supplier?.name ?? null,
+    drumTypeName: s.drumType?.name ?? null,
+  }),
   toColumns: async (dto, { manager }) => {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');
     if (dto.drumTypeId !== undefined) await ensureExists(manager, DrumType, dto.drumTypeId, 'drumTypeId', 'drum type');

@@ -16,17 +16,15 @@ export const stationDef: ResourceDef<Station> = {
   search: ['st.name', 'st.bay'],
   sorts: { name: 'st.name', bay: 'st.bay', updatedAt: 'st.updatedAt' },
   defaultSort: 'name',
-  toJson: (s) =>
-    ({ ...stamps(s), ...copyOf(s, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm']), connectorPartNumber: s.connector?.partNumber ?? null }) satisfies Sent<StationRecord>,
+  toJson: (s): Sent<StationRecord> => ({ ...stamps(s), ...copyOf(s, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm']), connectorPartNumber: s.connector?.partNumber ?? null }),
   toColumns: async (dto, { manager }) => {
     if (dto.connectorId != null) await ensureExists(manager, Connector, dto.connectorId, 'connectorId', 'connector');
     return pick<Station>(dto, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm']);
   },
-  detailExtras: async (s, m) =>
-    ({
-      tubeSets: (await m.find(TubeSet, { where: { stationId: s.id }, relations: { dipTube: true }, order: { label: 'ASC' } })).map((t) => ({
-        ...copyOf(t, ['id', 'label', 'state', 'lastRinsedAt', 'lastUsedAt']),
-        dipTubePartNumber: t.dipTube?.partNumber ?? null,
-      })),
-    }) satisfies Sent<Required<Pick<StationRecord, 'tubeSets'>>>,
+  detailExtras: async (s, m): Promise<Sent<Required<Pick<StationRecord, 'tubeSets'>>>> => ({
+    tubeSets: (await m.find(TubeSet, { where: { stationId: s.id }, relations: { dipTube: true }, order: { label: 'ASC' } })).map((t) => ({
+      ...copyOf(t, ['id', 'label', 'state', 'lastRinsedAt', 'lastUsedAt']),
+      dipTubePartNumber: t.dipTube?.partNumber ?? null,
+    })),
+  }),
 };

@@ -17,12 +17,11 @@ export const supplierDef: ResourceDef<Supplier> = {
   sorts: { name: 's.name', region: 's.region', updatedAt: 's.updatedAt' },
   defaultSort: 'name',
   filters: { region: filter(region, (qb, v) => qb.andWhere('s.region = :region', { region: v })) },
-  toJson: (s) => ({ ...stamps(s), ...copyOf(s, ['name', 'region', 'contactEmail', 'notes']) }) satisfies Sent<SupplierRecord>,
+  toJson: (s): Sent<SupplierRecord> => ({ ...stamps(s), ...copyOf(s, ['name', 'region', 'contactEmail', 'notes']) }),
   toColumns: async (dto) => pick<Supplier>(dto, ['name', 'region', 'contactEmail', 'notes']),
-  detailExtras: async (s, m) =>
-    ({
-      drumTypes: await m.count(DrumType, { where: { supplierId: s.id } }),
-      dipTubes: await m.count(DipTube, { where: { supplierId: s.id } }),
-      connectors: await m.count(Connector, { where: { supplierId: s.id } }),
-    }) satisfies Sent<Required<Pick<SupplierRecord, 'drumTypes' | 'dipTubes' | 'connectors'>>>,
+  detailExtras: async (s, m): Promise<Sent<Required<Pick<SupplierRecord, 'drumTypes' | 'dipTubes' | 'connectors'>>>> => ({
+    drumTypes: await m.count(DrumType, { where: { supplierId: s.id } }),
+    dipTubes: await m.count(DipTube, { where: { supplierId: s.id } }),
+    connectors: await m.count(Connector, { where: { supplierId: s.id } }),
+  }),
 };

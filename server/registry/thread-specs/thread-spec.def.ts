@@ -24,6 +24,6 @@ export const threadSpecDef: ResourceDef<ThreadSpec> = {
   defaultSort: 'majorDiameterMm',
   // On the thread table, ?thread= is the family.
   filters: { thread: filter(oneOf(THREAD_FAMILIES), (qb, v) => qb.andWhere('t.family = :family', { family: v })) },
-  toJson: (t) => ({ ...stamps(t), ...threadRow(t) }) satisfies Sent<ThreadSpecRecord>,
+  toJson: (t): Sent<ThreadSpecRecord> => ({ ...stamps(t), ...threadRow(t) }),
   toColumns: async (dto) => pick<ThreadSpec>(dto, ['code', 'family', 'nominalLabel', 'majorDiameterMm', 'pitchMm', 'threadsPerInch', 'flankAngleDeg', 'form', 'standard']),
 };

@@ -24,14 +24,13 @@ export const tubeSetDef: ResourceDef<TubeSet> = {
     // On tube sets, ?status= is the set's state in the rotation.
     status: filter(oneOf(TUBE_SET_STATES), (qb, v) => qb.andWhere('ts.state = :state', { state: v })),
   },
-  toJson: (t) =>
-    ({
-      ...stamps(t),
-      ...copyOf(t, ['currentLotNumber', 'currentDrumSerial', 'stationId', 'label', 'dipTubeId', 'state', 'lastRinsedAt', 'lastRinsedById', 'lastUsedAt']),
-      stationName: t.station?.name ?? null,
-      dipTubePartNumber: t.dipTube?.partNumber ?? null,
-      lastRinsedByName: nameOf(t.lastRinsedBy),
-    }) satisfies Sent<TubeSetRecord>,
+  toJson: (t): Sent<TubeSetRecord> => ({
+    ...stamps(t),
+    ...copyOf(t, ['currentLotNumber', 'currentDrumSerial', 'stationId', 'label', 'dipTubeId', 'state', 'lastRinsedAt', 'lastRinsedById', 'lastUsedAt']),
+    stationName: t.station?.name ?? null,
+    dipTubePartNumber: t.dipTube?.partNumber ?? null,
+    lastRinsedByName: nameOf(t.lastRinsedBy),
+  }),
   toColumns: async (dto, { manager, existing }) => {
     if (dto.stationId !== undefined) await ensureExists(manager, Station, dto.stationId, 'stationId', 'station');
     if (dto.dipTubeId !== undefined) await ensureExists(manager, DipTube, dto.dipTubeId, 'dipTubeId', 'dip tube');
