@@ -1,7 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { REGION_LABELS } from '@/shared/contract/records';
 import { VerdictChip } from '../fit/verdict';
-import { useSourcingPlanQuery, type StationImpact } from '../data/sourcing';
+import { useSourcingPlanQuery, type StationNeed } from '../data/sourcing';
 import { Fact, FactGrid, formatDate, formatWhen, LinkButton, SectionTitle, TextLink } from '../receive/parts';
 import { Screen } from '../screen';
 import { colors, fonts, space, type } from '../theme';
@@ -101,7 +101,7 @@ export function PlanScreen({ id }: { id: string }) {
   );
 }
 
-function StationRow({ s }: { s: StationImpact }) {
+function StationRow({ s }: { s: StationNeed }) {
   return (
     <View role="listitem" style={styles.station} testID={`plan-station-${s.stationName}`}>
       <View style={styles.stationHead}>

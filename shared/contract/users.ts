@@ -34,3 +34,8 @@ export interface PasswordResetAnswer {
   user: UserRecord;
   temporaryPassword: string;
 }
+
+/** "Forgot password" and the mailed link's reset: a sentence to show, the same whatever happened behind it. */
+export interface MessageAnswer {
+  message: string;
+}
