@@ -1,6 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { TemperatureIndicator } from '@/shared/acceptance/types';
-import type { DrumDescription, LotChangeOut, ReceivingCheckDetail, ReceivingCheckRecord, ReceivingCheckRow } from '@/shared/contract/receiving';
+import type { DrumDescription, ReceivingCheckDetail, ReceivingCheckRecord, ReceivingCheckRow } from '@/shared/contract/receiving';
 import type { Page } from '@/shared/contract/records';
 import type { Verdict } from '@/shared/contract/verdicts';
 import type { LotStatus } from '@/shared/contract/lot-status';
@@ -13,7 +13,7 @@ import { warningKeys } from './warnings';
 
 export type { Verdict, LotStatus, LotDecision, LotVerdict, TemperatureIndicator };
 
-export type { DrumDescription, LotChangeOut, ReceivingCheckDetail, ReceivingCheckRecord, ReceivingCheckRow };
+export type { DrumDescription, ReceivingCheckDetail, ReceivingCheckRecord, ReceivingCheckRow };
 
 /** POST /receiving-checks: the dock's question (shared with the phone's own check) and the lot's own fields. */
 export interface ReceivingCheckInput extends DockQuestion {

@@ -1,11 +1,11 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { BoardChangeOut, BoardRinse, BoardTubeSet, StationBoard } from '@/shared/contract/stations';
+import type { ChangeOutRecord, BoardRinse, BoardTubeSet, StationBoard } from '@/shared/contract/stations';
 import { api } from '../api/client';
 import { receivingKeys } from './receiving';
 import { stationQueries } from './stations';
 import { tubeSetQueries } from './tube-sets';
 
-export type { BoardChangeOut, BoardRinse, BoardTubeSet, StationBoard };
+export type { ChangeOutRecord, BoardRinse, BoardTubeSet, StationBoard };
 
 export interface StandbyInput {
   id: string;

@@ -1,5 +1,5 @@
-import type { ChangeOut, ReceivingCheck } from '../entities';
-import type { DrumDescription, LotChangeOut, ProvisionalVerdict, ReceivingCheckRecord, ReceivingCheckRow } from '../../shared/contract/receiving';
+import type { ReceivingCheck } from '../entities';
+import type { DrumDescription, ProvisionalVerdict, ReceivingCheckRecord, ReceivingCheckRow } from '../../shared/contract/receiving';
 import type { FitCheckResult } from '../../shared/contract/records';
 import { copyOf, nameOf, type Sent } from '../common/json';
 
@@ -48,14 +48,3 @@ export const receivingRowJson = (r: ReceivingCheck) =>
     lotVerdict: r.acceptance ? { decision: r.acceptance.decision, sentence: r.acceptance.sentence } : null,
     result: { summary: (r.result as { summary?: string }).summary ?? '' },
   }) satisfies Sent<ReceivingCheckRow>;
-
-/** A piece of hardware that touched the lot. */
-export const lotChangeOutJson = (c: ChangeOut) =>
-  ({
-    ...copyOf(c, ['id', 'at', 'stationId', 'tubeSetId', 'drumSerial']),
-    stationName: c.station?.name ?? null,
-    tubeSetLabel: c.tubeSet?.label ?? null,
-    dipTubePartNumber: c.dipTube?.partNumber ?? null,
-    connectorPartNumber: c.connector?.partNumber ?? null,
-    byName: nameOf(c.by),
-  }) satisfies Sent<LotChangeOut>;

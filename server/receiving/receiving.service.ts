@@ -13,7 +13,8 @@ import type { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from '.
 import type { ReceivingCheckDetail, ReceivingCheckRow } from '../../shared/contract/receiving';
 import type { Page } from '../../shared/contract/records';
 import type { Sent } from '../common/json';
-import { lotChangeOutJson, receivingJson, receivingRowJson } from './receiving.json';
+import { CHANGE_OUT_RELATIONS, changeOutJson } from '../stations/change-out.json';
+import { receivingJson, receivingRowJson } from './receiving.json';
 
 export { receivingJson };
 
@@ -157,13 +158,13 @@ export class ReceivingService {
     if (!r) throw notFound('Receiving check');
     const changeOuts = await this.ds.getRepository(ChangeOut).find({
       where: [{ receivingCheckId: id }],
-      relations: { station: true, tubeSet: true, dipTube: true, connector: true, by: true },
+      relations: CHANGE_OUT_RELATIONS,
       order: { at: 'ASC' },
     });
     return {
       ...receivingJson(r),
       // Every piece of hardware that touched this lot, in order.
-      changeOuts: changeOuts.map(lotChangeOutJson),
+      changeOuts: changeOuts.map(changeOutJson),
     } satisfies Sent<ReceivingCheckDetail>;
   }
 

@@ -3,6 +3,7 @@ import { rinseCheck } from '../../shared/fit/rules';
 import type { StationBoard } from '../../shared/contract/stations';
 import { conflict, fieldError, notFound } from '../common/errors';
 import { copyOf, nameOf, type Sent } from '../common/json';
+import { CHANGE_OUT_RELATIONS, changeOutJson } from './change-out.json';
 import { ChangeOut, ReceivingCheck, RinseLog, Station, TubeSet } from '../entities';
 import { audit } from '../audit/audit';
 import type { RinseDto, StandbyDto } from './rotation.dto';
@@ -125,7 +126,7 @@ export class RotationService {
     if (!station) throw notFound('Station');
     const [sets, changeOuts, rinses] = await Promise.all([
       this.ds.getRepository(TubeSet).find({ where: { stationId }, relations: { dipTube: true, lastRinsedBy: true }, order: { label: 'ASC' } }),
-      this.ds.getRepository(ChangeOut).find({ where: { stationId }, relations: { tubeSet: true, dipTube: true, connector: true, by: true, retiredTubeSet: true }, order: { at: 'DESC' }, take: 100 }),
+      this.ds.getRepository(ChangeOut).find({ where: { stationId }, relations: CHANGE_OUT_RELATIONS, order: { at: 'DESC' }, take: 100 }),
       this.ds
         .getRepository(RinseLog)
         .createQueryBuilder('r')
@@ -145,14 +146,7 @@ export class RotationService {
         // Whether the set may go into the next drum, by the shared rinse rule.
         rinse: rinseCheck({ lastRinsedAt: s.lastRinsedAt, lastUsedAt: s.lastUsedAt }),
       })),
-      changeOuts: changeOuts.map((c) => ({
-        ...copyOf(c, ['id', 'at', 'lotNumber', 'receivingCheckId', 'drumSerial']),
-        tubeSetLabel: c.tubeSet?.label ?? null,
-        dipTubePartNumber: c.dipTube?.partNumber ?? null,
-        connectorPartNumber: c.connector?.partNumber ?? null,
-        retiredTubeSetLabel: c.retiredTubeSet?.label ?? null,
-        byName: nameOf(c.by),
-      })),
+      changeOuts: changeOuts.map(changeOutJson),
       rinses: rinses.map((r) => ({ id: r.id, at: r.rinsedAt, tubeSetLabel: r.tubeSet?.label ?? null, byName: nameOf(r.rinsedBy), note: r.note })),
     } satisfies Sent<StationBoard>;
   }

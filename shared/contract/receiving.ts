@@ -3,6 +3,7 @@ import type { TemperatureIndicator } from '../acceptance/types';
 import type { LotDecision, LotVerdict } from '../dock/verdict';
 import type { LotStatus } from './lot-status';
 import type { FitCheckResult } from './records';
+import type { ChangeOutRecord } from './stations';
 import type { Verdict } from './verdicts';
 
 /** A drum described at the dock instead of picked from the registry. */
@@ -64,20 +65,7 @@ export interface ReceivingCheckRecord {
 /** A row of the history list (GET /receiving-checks): the stored result is cut down to its summary. */
 export type ReceivingCheckRow = Omit<ReceivingCheckRecord, 'result' | 'lotVerdict'> & { result: { summary: string }; lotVerdict: Pick<LotVerdict, 'decision' | 'sentence'> | null };
 
-/** A piece of hardware that touched the lot: recorded when a set in one of its drums went online. */
-export interface LotChangeOut {
-  id: string;
-  at: string;
-  stationId: string;
-  stationName: string | null;
-  tubeSetId: string;
-  tubeSetLabel: string | null;
-  dipTubePartNumber: string | null;
-  connectorPartNumber: string | null;
-  drumSerial: string | null;
-  byName: string | null;
-}
-
 export interface ReceivingCheckDetail extends ReceivingCheckRecord {
-  changeOuts: LotChangeOut[];
+  /** Every piece of hardware that touched this lot, in order. */
+  changeOuts: ChangeOutRecord[];
 }

@@ -18,15 +18,20 @@ export interface BoardTubeSet {
   rinse: FitRuleRecord;
 }
 
-export interface BoardChangeOut {
+/** A change-out: a set went online in a station's drum; the board lists a station's, a lot lists those of its drums. */
+export interface ChangeOutRecord {
   id: string;
   at: string;
+  stationId: string;
+  stationName: string | null;
+  tubeSetId: string;
   tubeSetLabel: string | null;
   dipTubePartNumber: string | null;
   connectorPartNumber: string | null;
   lotNumber: string | null;
   receivingCheckId: string | null;
   drumSerial: string | null;
+  /** The set that came out of the emptied drum for cleaning, if one was online. */
   retiredTubeSetLabel: string | null;
   byName: string | null;
 }
@@ -42,6 +47,6 @@ export interface BoardRinse {
 export interface StationBoard {
   station: Pick<StationRecord, 'id' | 'version' | 'name' | 'bay' | 'tapping' | 'agitation' | 'flowLpm' | 'connectorId' | 'connectorPartNumber'>;
   tubeSets: BoardTubeSet[];
-  changeOuts: BoardChangeOut[];
+  changeOuts: ChangeOutRecord[];
   rinses: BoardRinse[];
 }

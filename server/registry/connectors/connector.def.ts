@@ -9,13 +9,12 @@ import type { ResourceDef } from '../resource';
 import type { ConnectorRecord } from '../../../shared/contract/records';
 import { copyOf, type Sent } from '../../common/json';
 
-export const connectorJson = (c: Connector) =>
-  ({
-    ...stamps(c),
-    ...copyOf(c, ['partNumber', 'supplierId', 'feedBoreMm', 'feedNominal', 'returnBoreMm', 'returnNominal', 'returnPath', 'suitedTo', 'wettedMaterials']),
-    supplierName: c.supplier?.name ?? null,
-    keyCode: c.keyCode?.code ?? null,
-  }) satisfies Sent<ConnectorRecord>;
+export const connectorJson = (c: Connector): Sent<ConnectorRecord> => ({
+  ...stamps(c),
+  ...copyOf(c, ['partNumber', 'supplierId', 'feedBoreMm', 'feedNominal', 'returnBoreMm', 'returnNominal', 'returnPath', 'suitedTo', 'wettedMaterials']),
+  supplierName: c.supplier?.name ?? null,
+  keyCode: c.keyCode?.code ?? null,
+});
 
 export const connectorDef: ResourceDef<Connector> = {
   path: 'connectors',

@@ -9,14 +9,13 @@ import type { ResourceDef } from '../resource';
 import type { DipTubeRecord } from '../../../shared/contract/records';
 import { copyOf, type Sent } from '../../common/json';
 
-export const dipTubeJson = (t: DipTube) =>
-  ({
-    ...stamps(t),
-    ...copyOf(t, ['partNumber', 'supplierId', 'lengthMm', 'boreMm', 'odMm', 'material', 'channels']),
-    supplierName: t.supplier?.name ?? null,
-    threadCode: t.threadSpec?.code ?? null,
-    keyCode: t.keyCode?.code ?? null,
-  }) satisfies Sent<DipTubeRecord>;
+export const dipTubeJson = (t: DipTube): Sent<DipTubeRecord> => ({
+  ...stamps(t),
+  ...copyOf(t, ['partNumber', 'supplierId', 'lengthMm', 'boreMm', 'odMm', 'material', 'channels']),
+  supplierName: t.supplier?.name ?? null,
+  threadCode: t.threadSpec?.code ?? null,
+  keyCode: t.keyCode?.code ?? null,
+});
 
 export const dipTubeDef: ResourceDef<DipTube> = {
   path: 'dip-tubes',

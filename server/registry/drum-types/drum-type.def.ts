@@ -10,13 +10,12 @@ import { openingJson, writeOpenings } from './openings';
 import type { DrumTypeRecord } from '../../../shared/contract/records';
 import { copyOf, type Sent } from '../../common/json';
 
-export const drumTypeJson = (d: DrumType) =>
-  ({
-    ...stamps(d),
-    ...copyOf(d, ['supplierId', 'region', 'name', 'partNumber', 'nominalCapacityL', 'material', 'head', 'unPackagingCode', 'outsideHeightMm', 'insideDepthMm', 'outsideDiameterMm']),
-    supplierName: d.supplier?.name ?? null,
-    openings: [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label)).map(openingJson),
-  }) satisfies Sent<DrumTypeRecord>;
+export const drumTypeJson = (d: DrumType): Sent<DrumTypeRecord> => ({
+  ...stamps(d),
+  ...copyOf(d, ['supplierId', 'region', 'name', 'partNumber', 'nominalCapacityL', 'material', 'head', 'unPackagingCode', 'outsideHeightMm', 'insideDepthMm', 'outsideDiameterMm']),
+  supplierName: d.supplier?.name ?? null,
+  openings: [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label)).map(openingJson),
+});
 
 export const drumTypeDef: ResourceDef<DrumType> = {
   path: 'drum-types',

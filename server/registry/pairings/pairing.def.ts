@@ -10,16 +10,15 @@ import type { ResourceDef } from '../resource';
 import type { PairingRecord } from '../../../shared/contract/records';
 import { copyOf, nameOf, type Sent } from '../../common/json';
 
-export const pairingJson = (p: Pairing) =>
-  ({
-    ...stamps(p),
-    ...copyOf(p, ['dipTubeId', 'connectorId', 'status', 'authorId', 'approverId', 'approvedAt', 'notes']),
-    dipTubePartNumber: p.dipTube?.partNumber ?? null,
-    threadCode: p.dipTube?.threadSpec?.code ?? null,
-    connectorPartNumber: p.connector?.partNumber ?? null,
-    authorName: nameOf(p.author),
-    approverName: nameOf(p.approver),
-  }) satisfies Sent<PairingRecord>;
+export const pairingJson = (p: Pairing): Sent<PairingRecord> => ({
+  ...stamps(p),
+  ...copyOf(p, ['dipTubeId', 'connectorId', 'status', 'authorId', 'approverId', 'approvedAt', 'notes']),
+  dipTubePartNumber: p.dipTube?.partNumber ?? null,
+  threadCode: p.dipTube?.threadSpec?.code ?? null,
+  connectorPartNumber: p.connector?.partNumber ?? null,
+  authorName: nameOf(p.author),
+  approverName: nameOf(p.approver),
+});
 
 export const pairingDef: ResourceDef<Pairing> = {
   path: 'pairings',
