@@ -14,11 +14,10 @@ import { IMPORT_KINDS, type ImportHistoryItem } from '../../shared/contract/impo
 import type { Page } from '../../shared/contract/records';
 import type { Sent } from '../common/json';
 
-const KINDS: readonly ImportKind[] = IMPORT_KINDS;
 export const MAX_IMPORT_BYTES = 20 * 1024 * 1024;
 
 function kindOf(value: unknown): ImportKind {
-  if (typeof value !== 'string' || !KINDS.includes(value as ImportKind)) throw fieldError('kind', `must be one of ${KINDS.join(', ')}`);
+  if (typeof value !== 'string' || !(IMPORT_KINDS as readonly string[]).includes(value)) throw fieldError('kind', `must be one of ${IMPORT_KINDS.join(', ')}`);
   return value as ImportKind;
 }
 
