@@ -6,6 +6,7 @@ import { conflict, fieldError } from '../common/errors';
 import { SiteSettings } from '../entities';
 import { audit } from '../audit/audit';
 import type { SettingsDto } from '../registry/registry.dto';
+import { SETTINGS_FIELDS } from '../../shared/contract/fields';
 import type { SettingsRecord } from '../../shared/contract/records';
 import { copyOf, type Sent } from '../common/json';
 
@@ -25,19 +26,8 @@ export function fitSettingsOf(row: SiteSettings): FitSettings {
   });
 }
 
-export const settingsJson = (s: SiteSettings) =>
-  copyOf(s, [
-    'id',
-    'version',
-    'siteName',
-    'tipClearanceMinMm',
-    'tipClearanceMaxMm',
-    'threadMatchToleranceMm',
-    'laminarLimit',
-    'maxReturnVelocityRatio',
-    'timeZone',
-    'updatedAt',
-  ]) satisfies Sent<SettingsRecord>;
+/** The settings as the API answers them: the contract's field list, copied. */
+export const settingsJson = (s: SiteSettings) => copyOf(s, SETTINGS_FIELDS) satisfies Sent<SettingsRecord>;
 
 export async function updateSettings(ds: DataSource, dto: SettingsDto, userId: string) {
   return ds.transaction(async (m) => {

@@ -26,36 +26,31 @@ export interface ImportPlannedRow {
   supplierId: string;
 }
 
-/** The answer to POST /imports: a dry run, a commit, or (in a 422's details) a refused commit. */
-export interface ImportRun {
+/** What a run and its record both carry. */
+interface ImportSummary {
   id: string;
   kind: ImportKind;
   fileName: string;
   dryRun: boolean;
   outcome: ImportOutcome;
   encoding: string;
-  delimiter: ',' | ';';
-  header: string[];
-  ignoredColumns: string[];
   counts: ImportCounts;
   errors: ImportRowError[];
-  /** The first 200 planned rows. */
-  rows: ImportPlannedRow[];
   attachmentId: string | null;
 }
 
+/** The answer to POST /imports: a dry run, a commit, or (in a 422's details) a refused commit. */
+export interface ImportRun extends ImportSummary {
+  delimiter: ',' | ';';
+  header: string[];
+  ignoredColumns: string[];
+  /** The first 200 planned rows. */
+  rows: ImportPlannedRow[];
+}
+
 /** One past import (GET /imports lists them with at most 50 errors each; GET /imports/:id has them all). Dry runs are kept too. */
-export interface ImportHistoryItem {
-  id: string;
-  kind: ImportKind;
-  fileName: string;
-  dryRun: boolean;
-  outcome: ImportOutcome;
-  encoding: string;
+export interface ImportHistoryItem extends ImportSummary {
   delimiter: string;
-  counts: ImportCounts;
-  errors: ImportRowError[];
-  attachmentId: string | null;
   byName: string | null;
   at: string;
 }
