@@ -1,13 +1,13 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from 'react';
 import { setApiToken, setUnauthorizedHandler } from './api/client';
-import { meRequest, type SessionUser } from './data/session';
+import { meRequest, type UserRecord } from './data/session';
 import { loadStored, saveStored } from './session-storage';
 import { setDeviceTheme } from './theme-web';
 
 interface Session {
   token: string;
-  user: SessionUser;
+  user: UserRecord;
 }
 
 interface SessionContextValue {
@@ -15,7 +15,7 @@ interface SessionContextValue {
   ready: boolean;
   begin: (s: Session) => void;
   end: () => void;
-  updateUser: (u: SessionUser) => void;
+  updateUser: (u: UserRecord) => void;
 }
 
 const SessionContext = createContext<SessionContextValue | null>(null);
@@ -38,7 +38,7 @@ export function SessionProvider({ children }: { children: ReactNode }) {
     setSession(s);
   }, []);
 
-  const updateUser = useCallback((user: SessionUser) => {
+  const updateUser = useCallback((user: UserRecord) => {
     setSession((s) => {
       if (!s) return s;
       const next = { ...s, user };

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { useUserResetPasswordMutation, type UserRow } from '../data/users';
+import { useUserResetPasswordMutation, type UserRecord } from '../data/users';
 import { colors, fonts, radius, space, type } from '../theme';
 import { Button } from '../ui/button';
 
@@ -8,7 +8,7 @@ import { Button } from '../ui/button';
  * An administrator's reset of someone's password, with a confirmation step. The temporary password is shown
  * once, here, until "Done": it is kept nowhere else in the client, and the server keeps only its hash.
  */
-export function ResetPasswordPanel({ user }: { user: UserRow }) {
+export function ResetPasswordPanel({ user }: { user: UserRecord }) {
   const reset = useUserResetPasswordMutation();
   const [confirming, setConfirming] = useState(false);
   const id = `user-reset-${user.email}`;

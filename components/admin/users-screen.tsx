@@ -3,7 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { MIN_PASSWORD_LENGTH } from '@/shared/passwords';
 import { DEFAULT_ROLE, ROLE_LABELS, ROLES, type Role } from '@/shared/contract/roles';
 import { ApiError } from '../api/client';
-import { useUserCreateMutation, useUsersQuery, useUserUpdateMutation, type UserRow } from '../data/users';
+import { useUserCreateMutation, useUsersQuery, useUserUpdateMutation, type UserRecord } from '../data/users';
 import { Screen } from '../screen';
 import { useSession } from '../session';
 import { colors, space, type } from '../theme';
@@ -64,7 +64,7 @@ function NewUserForm() {
   );
 }
 
-function UserCard({ user, self }: { user: UserRow; self: boolean }) {
+function UserCard({ user, self }: { user: UserRecord; self: boolean }) {
   const update = useUserUpdateMutation();
   return (
     <Card testID={`user-row-${user.email}`}>

@@ -1,28 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Linking, Platform } from 'react-native';
+import type { AttachmentOwnerKind, AttachmentPurpose, AttachmentRecord, SignedLink } from '@/shared/contract/attachments';
 import type { Page } from '@/shared/contract/records';
 import { api } from '../api/client';
 import { openFile, saveFile } from '../api/download';
 import { appendFile, upload, type PickedFile } from '../api/upload';
 
-/** The kinds of record a file can belong to (the server's ATTACHMENT_OWNERS). */
-export type AttachmentOwnerKind = 'drum-type' | 'dip-tube' | 'connector' | 'receiving-check' | 'import';
-
-export type AttachmentPurpose = 'file' | 'certificate';
-
-export interface AttachmentRecord {
-  id: string;
-  ownerKind: AttachmentOwnerKind;
-  ownerId: string;
-  fileName: string;
-  /** What the server read from the bytes, not what the name says. */
-  contentType: string;
-  sizeBytes: number;
-  /** 'certificate': the lot's certificate of analysis, which the acceptance rule reads. */
-  purpose: AttachmentPurpose;
-  uploadedByName: string | null;
-  createdAt: string;
-}
+export type { AttachmentOwnerKind, AttachmentPurpose, AttachmentRecord };
 
 export const attachmentKeys = {
   all: ['attachments'] as const,
@@ -55,7 +39,7 @@ export function useAttachmentUploadMutation(ownerKind: AttachmentOwnerKind, owne
 
 /** In the native app the file opens through a two-minute signed link; in a browser, as a blob behind the token. */
 async function openSigned(id: string): Promise<void> {
-  const { url } = await api<{ url: string }>(`/attachments/${id}/url`);
+  const { url } = await api<SignedLink>(`/attachments/${id}/url`);
   await Linking.openURL(url);
 }
 

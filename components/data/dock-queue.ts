@@ -2,13 +2,14 @@
 // query cache, components/offline/persist.ts) and sent when the server answers again. Each carries the key
 // the phone gave it, so a send that reached the server before the network dropped records nothing twice.
 import { useMutation, useMutationState, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { ProvisionalVerdict } from '@/shared/contract/receiving';
 import { api, ApiError, getApiToken, isNetworkError } from '../api/client';
 import { receivingKeys, type ReceivingCheckInput, type ReceivingCheckRecord } from './receiving';
 
 export const DOCK_CHECK_KEY = ['dock-check'] as const;
 
 export interface QueuedDockCheck {
-  body: ReceivingCheckInput & { clientKey: string; provisional?: { decision: string; verdict: string; sentence: string; revision: string; madeAt: string } };
+  body: ReceivingCheckInput & { clientKey: string; provisional?: ProvisionalVerdict };
   queuedAt: string;
 }
 

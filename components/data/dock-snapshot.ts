@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { DockSnapshot } from '@/shared/dock/snapshot';
+import type { DockSnapshot } from '@/shared/contract/dock';
 import { can } from '@/shared/contract/roles';
 import { api } from '../api/client';
 import { useSession } from '../session';

@@ -1,68 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { IMPORT_KINDS, type ImportCounts, type ImportHistoryItem, type ImportKind, type ImportOutcome, type ImportPlannedRow, type ImportRowError, type ImportRun } from '@/shared/contract/imports';
 import type { Page } from '@/shared/contract/records';
 import { api, ApiError } from '../api/client';
 import { saveFile } from '../api/download';
 import { appendFile, upload, type PickedFile } from '../api/upload';
 
-/** The registry tables a spec sheet can fill; each is also that table's API path and query key. */
-export type ImportKind = 'drum-types' | 'dip-tubes' | 'connectors';
-export const IMPORT_KINDS: readonly ImportKind[] = ['drum-types', 'dip-tubes', 'connectors'];
-
-export type ImportOutcome = 'dry-run' | 'committed' | 'refused';
-
-export interface ImportCounts {
-  new: number;
-  changed: number;
-  unchanged: number;
-  rejected: number;
-}
-
-export interface ImportRowError {
-  line: number;
-  column: string;
-  reason: string;
-}
-
-export interface ImportPlannedRow {
-  line: number;
-  action: 'new' | 'changed' | 'unchanged';
-  partNumber: string;
-  supplierId: string;
-}
-
-/** The answer to POST /imports: a dry run, a commit, or (in a 422's details) a refused commit. */
-export interface ImportRun {
-  id: string;
-  kind: ImportKind;
-  fileName: string;
-  dryRun: boolean;
-  outcome: ImportOutcome;
-  encoding: string;
-  delimiter: ',' | ';';
-  header: string[];
-  ignoredColumns: string[];
-  counts: ImportCounts;
-  errors: ImportRowError[];
-  /** The first 200 planned rows. */
-  rows: ImportPlannedRow[];
-  attachmentId: string | null;
-}
-
-/** One past import (GET /imports): dry runs are kept too. */
-export interface ImportHistoryItem {
-  id: string;
-  kind: ImportKind;
-  fileName: string;
-  dryRun: boolean;
-  outcome: ImportOutcome;
-  encoding: string;
-  delimiter: string;
-  counts: ImportCounts;
-  errors: ImportRowError[];
-  attachmentId: string | null;
-  byName: string | null;
-  at: string;
-}
+export { IMPORT_KINDS };
+export type { ImportCounts, ImportHistoryItem, ImportKind, ImportOutcome, ImportPlannedRow, ImportRowError, ImportRun };
 
 export const importKeys = {
   all: ['imports'] as const,

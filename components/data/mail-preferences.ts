@@ -2,7 +2,7 @@ import { NOTICE_KIND_WORDS, NOTICE_KINDS, type NoticeKind } from '@/shared/contr
 import { useMutation } from '@tanstack/react-query';
 import { api } from '../api/client';
 import { useSession } from '../session';
-import type { SessionUser } from './session';
+import type { MeAnswer } from '@/shared/contract/users';
 
 /** The kinds of notice that can also come by e-mail, in the words of the settings. */
 export const MAIL_KINDS = NOTICE_KINDS.map((kind) => ({ kind, label: NOTICE_KIND_WORDS[kind].setting }));
@@ -16,7 +16,7 @@ export function useMailPreferences() {
   const { session, updateUser } = useSession();
   const save = useMutation({
     scope: { id: 'me' },
-    mutationFn: (mailOff: string[]) => api<{ user: SessionUser }>('/me', { method: 'PATCH', body: { mailOff } }),
+    mutationFn: (mailOff: string[]) => api<MeAnswer>('/me', { method: 'PATCH', body: { mailOff } }),
     onSuccess: ({ user }) => updateUser(user),
   });
   // While a change is on its way, show it; if it fails, the account's own list shows again.

@@ -5,7 +5,7 @@ import { formatLength, fromMm, toMm, type LengthUnit } from '@/shared/units';
 import { api } from '../api/client';
 import { useSession } from '../session';
 import { setDeviceTheme, storedThemeChoice } from '../theme-web';
-import type { SessionUser } from './session';
+import type { MeAnswer } from '@/shared/contract/users';
 
 /** The signed-in user's length unit (kept per user on the server) and a way to change it. */
 export function useLengthUnit() {
@@ -14,7 +14,7 @@ export function useLengthUnit() {
   // Changes only with the unit, so that lists may build their columns once per unit.
   const show = useCallback((mm: number | null | undefined, digits?: number) => (mm == null ? '—' : formatLength(mm, unit, digits)), [unit]);
   const change = useMutation({
-    mutationFn: (next: LengthUnit) => api<{ user: SessionUser }>('/me', { method: 'PATCH', body: { lengthUnit: next } }),
+    mutationFn: (next: LengthUnit) => api<MeAnswer>('/me', { method: 'PATCH', body: { lengthUnit: next } }),
     onSuccess: ({ user }) => updateUser(user),
   });
   return {
@@ -37,7 +37,7 @@ export function useThemeChoice() {
   const account = session?.user.theme ?? storedThemeChoice();
   const save = useMutation({
     scope: { id: 'me' },
-    mutationFn: (theme: ThemeChoice) => api<{ user: SessionUser }>('/me', { method: 'PATCH', body: { theme } }),
+    mutationFn: (theme: ThemeChoice) => api<MeAnswer>('/me', { method: 'PATCH', body: { theme } }),
     onSuccess: ({ user }) => updateUser(user),
     onError: () => setDeviceTheme(account),
   });

@@ -1,22 +1,8 @@
-import type { NoticeKind } from '@/shared/contract/notice-kinds';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { NoticeList, NoticeRecord } from '@/shared/contract/notifications';
 import { api } from '../api/client';
 
-export interface NoticeRecord {
-  id: string;
-  kind: NoticeKind;
-  title: string;
-  body: string;
-  /** An app path, e.g. /receive/<id>. */
-  link: string | null;
-  readAt: string | null;
-  createdAt: string;
-}
-
-export interface NoticeList {
-  items: NoticeRecord[];
-  unread: number;
-}
+export type { NoticeList, NoticeRecord };
 
 export const notificationKeys = { all: ['notifications'] as const };
 

@@ -1,92 +1,25 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { TemperatureIndicator } from '@/shared/acceptance/types';
-import type { FitCheckResult, Page } from '@/shared/contract/records';
+import type { DrumDescription, ReceivingCheckDetail, ReceivingCheckRecord, ReceivingCheckRow } from '@/shared/contract/receiving';
+import type { Page } from '@/shared/contract/records';
+import type { Verdict } from '@/shared/contract/verdicts';
 import type { LotStatus } from '@/shared/contract/lot-status';
+import type { DockQuestion } from '@/shared/dock/snapshot';
 import type { LotDecision, LotVerdict } from '@/shared/dock/verdict';
 import { api } from '../api/client';
 import { useAttachmentUploadMutation } from './attachments';
 import { notificationKeys } from './notifications';
 import { warningKeys } from './warnings';
 
-export type Verdict = FitCheckResult['verdict'];
-export type { LotStatus, LotDecision, LotVerdict, TemperatureIndicator };
+export type { Verdict, LotStatus, LotDecision, LotVerdict, TemperatureIndicator };
 
-/** A drum described at the dock instead of picked from the registry. */
-export interface DrumDescription {
-  insideDepthMm: number;
-  openings: Array<{ label?: string; threadCode: string; keyCode?: string | null }>;
-}
+export type { DrumDescription, ReceivingCheckDetail, ReceivingCheckRecord, ReceivingCheckRow };
 
-/** One recorded dock check (GET /receiving-checks/:id, POST /receiving-checks). */
-export interface ReceivingCheckRecord {
-  id: string;
-  version: number;
-  lotNumber: string;
-  supplierId: string | null;
-  supplierName: string | null;
-  slurryId: string | null;
-  slurryName: string | null;
-  drumCount: number;
-  drumTypeId: string | null;
-  drumTypeName: string | null;
-  drumTypePartNumber: string | null;
-  drumDescription: DrumDescription | null;
-  stationId: string | null;
-  stationName: string | null;
-  productionDate: string | null;
-  expiryDate: string | null;
-  temperatureIndicator: TemperatureIndicator | null;
-  /** The hardware verdict alone. */
-  verdict: Verdict;
-  /** The combined decision (hardware and lot acceptance) and its sentence; null for checks stored before it. */
-  decision: LotDecision;
-  lotVerdict: LotVerdict | null;
-  result: FitCheckResult;
-  checkedById: string;
-  checkedByName: string | null;
-  checkedAt: string;
-  status: LotStatus;
-  holdReason: string | null;
-  heldByRules: boolean;
-  heldByName: string | null;
-  heldAt: string | null;
-  releasedByName: string | null;
-  releasedAt: string | null;
-  releaseComment: string | null;
-}
-
-/** A row of the history list: the stored result is cut down to its summary. */
-export type ReceivingCheckRow = Omit<ReceivingCheckRecord, 'result' | 'lotVerdict'> & { result: { summary: string }; lotVerdict: Pick<LotVerdict, 'decision' | 'sentence'> | null };
-
-/** A piece of hardware that touched the lot: recorded when a set in one of its drums went online. */
-export interface LotChangeOut {
-  id: string;
-  at: string;
-  stationId: string;
-  stationName: string | null;
-  tubeSetId: string;
-  tubeSetLabel: string | null;
-  dipTubePartNumber: string | null;
-  connectorPartNumber: string | null;
-  drumSerial: string | null;
-  byName: string | null;
-}
-
-export interface ReceivingCheckDetail extends ReceivingCheckRecord {
-  changeOuts: LotChangeOut[];
-}
-
-export interface ReceivingCheckInput {
+/** POST /receiving-checks: the dock's question (shared with the phone's own check) and the lot's own fields. */
+export interface ReceivingCheckInput extends DockQuestion {
   lotNumber: string;
   drumCount: number;
   supplierId?: string;
-  slurryId?: string;
-  drumTypeId?: string;
-  drum?: DrumDescription;
-  stationId?: string;
-  productionDate?: string;
-  expiryDate?: string;
-  temperatureIndicator?: TemperatureIndicator;
   /** The phone's key for this check: a second send of it records nothing new. */
   clientKey?: string;
 }

@@ -1,38 +1,11 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { OrderLine, Page, Region, StationNeed } from '@/shared/contract/records';
-
-export type { OrderLine };
+import type { OrderLine, Page, StationNeed } from '@/shared/contract/records';
+import type { SourcingPlanDetail, SourcingPlanRecord } from '@/shared/contract/sourcing';
 import { api } from '../api/client';
 import { notificationKeys } from './notifications';
-import { warningKeys, type HardwareWarningRecord } from './warnings';
+import { warningKeys } from './warnings';
 
-/** What one station needs to run the plan's drum. */
-export type StationImpact = StationNeed;
-
-export interface SourcingPlanRecord {
-  id: string;
-  version: number;
-  slurryName: string;
-  supplierId: string;
-  supplierName: string | null;
-  region: Region | null;
-  drumTypeId: string;
-  drumTypeName: string | null;
-  drumTypePartNumber: string | null;
-  startDate: string;
-  drumsPerMonth: number;
-  stationIds: string[];
-  foams: boolean;
-  shearSensitive: boolean;
-  notes: string | null;
-  createdByName: string | null;
-  createdAt: string;
-}
-
-export interface SourcingPlanDetail extends SourcingPlanRecord {
-  impact: { stations: StationImpact[]; order: OrderLine[] };
-  warnings: HardwareWarningRecord[];
-}
+export type { OrderLine, SourcingPlanDetail, SourcingPlanRecord, StationNeed };
 
 export interface SourcingPlanInput {
   slurryName: string;

@@ -1,64 +1,11 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { FitRuleRecord, TubeSetState } from '@/shared/contract/records';
+import type { ChangeOutRecord, BoardRinse, BoardTubeSet, StationBoard } from '@/shared/contract/stations';
 import { api } from '../api/client';
 import { receivingKeys } from './receiving';
 import { stationQueries } from './stations';
 import { tubeSetQueries } from './tube-sets';
 
-export interface BoardTubeSet {
-  id: string;
-  version: number;
-  label: string;
-  state: TubeSetState;
-  dipTubeId: string;
-  dipTubePartNumber: string | null;
-  lastRinsedAt: string | null;
-  lastRinsedByName: string | null;
-  lastUsedAt: string | null;
-  currentLotNumber: string | null;
-  currentDrumSerial: string | null;
-  currentReceivingCheckId: string | null;
-  /** Whether the set may go into the next drum, by the shared rinse rule. */
-  rinse: FitRuleRecord;
-}
-
-export interface BoardChangeOut {
-  id: string;
-  at: string;
-  tubeSetLabel: string | null;
-  dipTubePartNumber: string | null;
-  connectorPartNumber: string | null;
-  lotNumber: string | null;
-  receivingCheckId: string | null;
-  drumSerial: string | null;
-  retiredTubeSetLabel: string | null;
-  byName: string | null;
-}
-
-export interface BoardRinse {
-  id: string;
-  at: string;
-  tubeSetLabel: string | null;
-  byName: string | null;
-  note: string | null;
-}
-
-export interface StationBoard {
-  station: {
-    id: string;
-    version: number;
-    name: string;
-    bay: string;
-    tapping: 'two-opening' | 'one-opening';
-    agitation: 'pump' | 'mechanical';
-    flowLpm: number;
-    connectorId: string | null;
-    connectorPartNumber: string | null;
-  };
-  tubeSets: BoardTubeSet[];
-  changeOuts: BoardChangeOut[];
-  rinses: BoardRinse[];
-}
+export type { ChangeOutRecord, BoardRinse, BoardTubeSet, StationBoard };
 
 export interface StandbyInput {
   id: string;

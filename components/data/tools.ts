@@ -1,5 +1,5 @@
 import { useMutation, useQuery } from '@tanstack/react-query';
-import type { PortFlowResult } from '@/shared/flow';
+import type { DrumTypeChecks, FlowAnswer, PackagingCodeAnswer } from '@/shared/contract/tools';
 import type { PackagingFinding, ParsedPackagingCode } from '@/shared/packaging-code';
 import type { PackagingMark } from '@/shared/packaging-mark';
 import type { ThreadSide } from '@/shared/threads/thread-table';
@@ -9,10 +9,7 @@ import type { FlowUnit, LengthUnit } from '@/shared/units';
 import { api } from '../api/client';
 import { drumTypeQueries } from './drum-types';
 
-export type { ThreadIdentification, ParsedPackagingCode, PackagingFinding, LengthRecommendation, PackagingMark };
-
-/** GET /api/tools/packaging-codes/:code: the code, and the rest of the mark when a whole mark was given. */
-export type PackagingCodeAnswer = ParsedPackagingCode & { mark: PackagingMark | null };
+export type { ThreadIdentification, ParsedPackagingCode, PackagingFinding, LengthRecommendation, PackagingMark, DrumTypeChecks, FlowAnswer, PackagingCodeAnswer };
 
 export interface ThreadMatchInput {
   majorDiameter: { value: number; unit: LengthUnit };
@@ -28,19 +25,6 @@ export interface FlowInput {
   flow: { value: number; unit: FlowUnit };
   feedBoreMm: number;
   returnBoreMm?: number | null;
-}
-
-/** POST /api/tools/flow: the shared computation plus the flow echoed in the other units and the site's laminar limit. */
-export interface FlowAnswer extends PortFlowResult {
-  flow: { value: number; unit: FlowUnit };
-  flowGpm: number;
-  flowM3h: number;
-  laminarLimit: number;
-}
-
-export interface DrumTypeChecks {
-  recommendedLength: LengthRecommendation;
-  packaging: PackagingFinding[];
 }
 
 export const toolKeys = {

@@ -1,27 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { OrderLine, Page, StationNeed } from '@/shared/contract/records';
+import type { Page } from '@/shared/contract/records';
+import type { HardwareWarningRecord, WarningStatus } from '@/shared/contract/sourcing';
 import { api } from '../api/client';
 
-export type WarningStatus = 'open' | 'acknowledged' | 'resolved';
-
-/** A plan or a held lot that needs hardware the site lacks (GET /warnings). */
-export interface HardwareWarningRecord {
-  id: string;
-  version: number;
-  source: 'plan' | 'lot';
-  sourcingPlanId: string | null;
-  receivingCheckId: string | null;
-  lotNumber: string | null;
-  planSlurryName: string | null;
-  status: WarningStatus;
-  summary: string;
-  needs: Array<{ stations: StationNeed[]; order: OrderLine[] }>;
-  acknowledgedByName: string | null;
-  acknowledgedAt: string | null;
-  resolvedByName: string | null;
-  resolvedAt: string | null;
-  createdAt: string;
-}
+export type { HardwareWarningRecord, WarningStatus };
 
 export const warningKeys = {
   all: ['warnings'] as const,

@@ -1,5 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
-import { useReceivingCheckQuery, type LotChangeOut } from '../data/receiving';
+import type { ChangeOutRecord } from '@/shared/contract/stations';
+import { useReceivingCheckQuery } from '../data/receiving';
 import { Screen } from '../screen';
 import { colors, fonts, space, type } from '../theme';
 import { Card } from '../ui/card';
@@ -64,7 +65,7 @@ export function LotScreen({ id }: { id: string }) {
   );
 }
 
-function ChangeOutRow({ c, n, wide }: { c: LotChangeOut; n: number; wide: boolean }) {
+function ChangeOutRow({ c, n, wide }: { c: ChangeOutRecord; n: number; wide: boolean }) {
   return (
     <View role="listitem" style={[styles.row, wide && styles.rowWide]} testID={`lot-history-${c.tubeSetLabel ?? c.id}`}>
       <Text style={[styles.n, wide && styles.nWide]}>{n}</Text>

@@ -39,6 +39,8 @@ function asRecord(p: ProvisionalShown, checkedByName: string | null): ReceivingC
     verdict: check.result.verdict,
     decision: check.lotVerdict.decision,
     lotVerdict: check.lotVerdict,
+    // Not recorded yet: the server keeps the phone's verdict beside its own once the check is sent.
+    provisional: null,
     result: check.result as unknown as FitCheckResult,
     checkedById: '',
     checkedByName,

@@ -1,7 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { REGION_LABELS } from '@/shared/contract/records';
 import { VerdictChip } from '../fit/verdict';
-import { useSourcingPlanQuery, type StationImpact } from '../data/sourcing';
+import { useSourcingPlanQuery, type StationNeed } from '../data/sourcing';
 import { Fact, FactGrid } from '../ui/facts';
 import { formatDate, formatWhen } from '../ui/format';
 import { LinkButton } from '../ui/link-button';
@@ -114,7 +114,7 @@ export function PlanScreen({ id }: { id: string }) {
   );
 }
 
-function StationRow({ s }: { s: StationImpact }) {
+function StationRow({ s }: { s: StationNeed }) {
   return (
     <View role="listitem" style={styles.station} testID={`plan-station-${s.stationName}`}>
       <View style={styles.stationHead}>

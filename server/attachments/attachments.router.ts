@@ -1,7 +1,10 @@
 import { Router } from 'express';
 import { pipeline } from 'node:stream/promises';
 import type { DataSource } from 'typeorm';
+import type { AttachmentRecord, SignedLink } from '../../shared/contract/attachments';
+import type { Page } from '../../shared/contract/records';
 import { secured } from '../auth/policy';
+import type { Sent } from '../common/json';
 import { parseId } from '../registry/resource';
 import { attachmentDisposition, type Storage } from '../storage/storage';
 import type { ReceivingService } from '../receiving/receiving.service';
@@ -29,7 +32,7 @@ export function attachmentsRouter(ds: DataSource, storage: Storage | null, recei
   r.get('/attachments', async (req, res) => {
     refuseQuery(req, ['ownerKind', 'ownerId']);
     const items = await service.list(req.user!.role, req.query);
-    res.json({ items, total: items.length, page: 1, pageSize: items.length });
+    res.json({ items, total: items.length, page: 1, pageSize: items.length } satisfies Sent<Page<AttachmentRecord>>);
   });
 
   // Through the API: the same token and role check as the record it belongs to.
@@ -45,7 +48,7 @@ export function attachmentsRouter(ds: DataSource, storage: Storage | null, recei
 
   // A short-lived signed link for clients that reach the bucket directly.
   r.get('/attachments/:id/url', async (req, res) => {
-    res.json({ url: await service.signedUrl(req.user!.role, parseId(req.params.id), LINK_SECONDS), expiresInSeconds: LINK_SECONDS });
+    res.json({ url: await service.signedUrl(req.user!.role, parseId(req.params.id), LINK_SECONDS), expiresInSeconds: LINK_SECONDS } satisfies SignedLink);
   });
 
   return router;

@@ -8,6 +8,8 @@ import { Attachment, ATTACHMENT_OWNERS, ATTACHMENT_PURPOSES, Connector, fitFileN
 import { parseId } from '../registry/resource';
 import { storageNotConfigured, type Storage } from '../storage/storage';
 import { ATTACHMENT_TYPES, sniffType } from './file-kind';
+import type { AttachmentRecord } from '../../shared/contract/attachments';
+import { copyOf, nameOf, type Sent } from '../common/json';
 
 /**
  * Each kind of record files are kept with, and the routes whose access its files follow: reading a file needs
@@ -30,17 +32,8 @@ for (const [kind, o] of OWNERS) {
 
 const allows = (access: Access, role: Role) => access === 'public' || access === 'signed-in' || access.includes(role);
 
-export const attachmentJson = (a: Attachment) => ({
-  id: a.id,
-  ownerKind: a.ownerKind,
-  ownerId: a.ownerId,
-  fileName: a.fileName,
-  contentType: a.contentType,
-  sizeBytes: a.sizeBytes,
-  purpose: a.purpose,
-  uploadedByName: a.uploadedBy?.displayName ?? null,
-  createdAt: a.createdAt,
-});
+export const attachmentJson = (a: Attachment) =>
+  ({ ...copyOf(a, ['id', 'ownerKind', 'ownerId', 'fileName', 'contentType', 'sizeBytes', 'purpose', 'createdAt']), uploadedByName: nameOf(a.uploadedBy) }) satisfies Sent<AttachmentRecord>;
 
 function ownerKindOf(value: unknown, field = 'ownerKind'): AttachmentOwner {
   if (typeof value !== 'string' || !(ATTACHMENT_OWNERS as readonly string[]).includes(value)) throw fieldError(field, `must be one of ${ATTACHMENT_OWNERS.join(', ')}`);

@@ -1,33 +1,23 @@
 import type { DataSource } from 'typeorm';
 import { unauthorized } from '../common/errors';
+import type { SignInResult, UserRecord } from '../../shared/contract/users';
 import { User } from '../entities';
 import { verifyPassword } from './passwords';
 import { sessionToken } from './tokens';
 
-export interface PublicUser {
-  id: string;
-  email: string;
-  name: string;
-  role: User['role'];
-  active: boolean;
-  lengthUnit: 'mm' | 'in';
-  mailOff: string[];
-  /** The client sends this person to the password change first; the server refuses everything else meanwhile. */
-  mustChangePassword: boolean;
-  theme: User['theme'];
-}
-
-export const toPublicUser = (u: User): PublicUser => ({
-  id: u.id,
-  email: u.email,
-  name: u.displayName,
-  role: u.role,
-  active: u.active,
-  lengthUnit: u.lengthUnit,
-  mailOff: u.mailOff ?? [],
-  mustChangePassword: u.mustChangePassword,
-  theme: u.theme ?? 'system',
-});
+/** A person as the API answers with them (sign-in, /me, /users). */
+export const toUserRecord = (u: User) =>
+  ({
+    id: u.id,
+    email: u.email,
+    name: u.displayName,
+    role: u.role,
+    active: u.active,
+    lengthUnit: u.lengthUnit,
+    mailOff: u.mailOff ?? [],
+    mustChangePassword: u.mustChangePassword,
+    theme: u.theme ?? 'system',
+  }) satisfies UserRecord;
 
 // One message whatever was wrong, so the answer never tells whether an account exists.
 const WRONG = 'That e-mail and password do not match an active account.';
@@ -40,10 +30,10 @@ export class AuthService {
     private readonly secret: string,
   ) {}
 
-  async signIn(email: string, password: string): Promise<{ token: string; user: PublicUser }> {
+  async signIn(email: string, password: string): Promise<SignInResult> {
     const user = await this.ds.getRepository(User).createQueryBuilder('u').addSelect('u.passwordHash').where('u.email = :email', { email: email.trim().toLowerCase() }).getOne();
     const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
     if (!user || !ok || !user.active) throw unauthorized(WRONG);
-    return { token: sessionToken(user, this.secret), user: toPublicUser(user) };
+    return { token: sessionToken(user, this.secret), user: toUserRecord(user) };
   }
 }

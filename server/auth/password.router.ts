@@ -9,6 +9,7 @@ import { ChangePasswordDto, ForgotPasswordDto, ResetPasswordDto } from './passwo
 import { PasswordService, WrongCurrentPassword } from './password.service';
 import { secured } from './policy';
 import { accountKey, counter, retryAfterS } from './sign-in-limits';
+import type { MessageAnswer } from '../../shared/contract/users';
 
 export interface PasswordLimits {
   /** "Forgot password" requests per target address in the window, whoever asks: no mailbox can be flooded. */
@@ -94,13 +95,13 @@ export function passwordRouters(ds: DataSource, secret: string, limits: Password
     } finally {
       await waitUntil(started + limits.forgotAnswerMs);
     }
-    res.status(202).json({ message: FORGOT_ANSWER });
+    res.status(202).json({ message: FORGOT_ANSWER } satisfies MessageAnswer);
   });
   const reset = Router();
   secured(reset).post('/auth/reset-password', body(ResetPasswordDto), async (req, res) => {
     const { token, newPassword } = req.body as ResetPasswordDto;
     await service.resetWithToken(token, newPassword);
-    res.json({ message: 'Your new password is set, and every session of yours has ended. Sign in with the new password.' });
+    res.json({ message: 'Your new password is set, and every session of yours has ended. Sign in with the new password.' } satisfies MessageAnswer);
   });
 
   const signedIn = Router();

@@ -4,7 +4,8 @@ import { audit } from '../audit/audit';
 import { fieldError, HttpError, notFound, ValidationFailed, type FieldProblem } from '../common/errors';
 import { User } from '../entities';
 import { enqueueAccountMail, publicUrl } from '../mail/outbox';
-import { toPublicUser, type PublicUser } from './auth.service';
+import type { PasswordResetAnswer, SignInResult } from '../../shared/contract/users';
+import { toUserRecord } from './auth.service';
 import { hashPassword, hashResetToken, newResetToken, temporaryPassword, verifyPassword } from './passwords';
 import { sessionToken } from './tokens';
 
@@ -48,7 +49,7 @@ export class PasswordService {
   }
 
   /** The signed-in person's own change. Answers a fresh token: every other session of theirs ends, this one goes on. */
-  async change(userId: string, currentPassword: string, newPassword: string): Promise<{ token: string; user: PublicUser }> {
+  async change(userId: string, currentPassword: string, newPassword: string): Promise<SignInResult> {
     const user = await this.withHash(this.ds, userId);
     if (!user) throw notFound('User');
     const problems = ruleProblems('newPassword', newPassword);
@@ -67,12 +68,12 @@ export class PasswordService {
         summary: `Password changed by ${saved.email}; their other sessions ended`,
         after: { sessionEpoch: saved.sessionEpoch },
       });
-      return { token: sessionToken(saved, this.secret), user: toPublicUser(saved) };
+      return { token: sessionToken(saved, this.secret), user: toUserRecord(saved) };
     });
   }
 
   /** An administrator's reset: a temporary password made here and shown once; the person must change it after signing in. */
-  async adminReset(targetId: string, actingUserId: string): Promise<{ user: PublicUser; temporaryPassword: string }> {
+  async adminReset(targetId: string, actingUserId: string): Promise<PasswordResetAnswer> {
     if (targetId === actingUserId) throw fieldError('id', 'is your own account: change your own password under Notices');
     if (!(await this.ds.getRepository(User).existsBy({ id: targetId }))) throw notFound('User');
     const temporary = temporaryPassword();
@@ -87,7 +88,7 @@ export class PasswordService {
         summary: `Password reset by an administrator for ${saved.email}; temporary password issued, all sessions ended`,
         after: { mustChangePassword: true, sessionEpoch: saved.sessionEpoch },
       });
-      return { user: toPublicUser(saved), temporaryPassword: temporary };
+      return { user: toUserRecord(saved), temporaryPassword: temporary };
     });
   }
 

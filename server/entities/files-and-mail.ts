@@ -2,12 +2,11 @@ import { Column, Entity, JoinColumn, ManyToOne } from 'typeorm';
 import { Base } from './base';
 import { NullableText, NullableUuid, Text, Uuid } from './columns';
 import { User } from './user';
+import { ATTACHMENT_OWNERS, ATTACHMENT_PURPOSES, type AttachmentOwnerKind, type AttachmentPurpose } from '../../shared/contract/attachments';
+import type { ImportCounts, ImportKind, ImportOutcome, ImportRowError } from '../../shared/contract/imports';
 
-export const ATTACHMENT_OWNERS = ['drum-type', 'dip-tube', 'connector', 'receiving-check', 'import'] as const;
-export type AttachmentOwner = (typeof ATTACHMENT_OWNERS)[number];
-/** A file is a plain file, or the certificate of analysis of the lot it belongs to (the acceptance rule reads it). */
-export const ATTACHMENT_PURPOSES = ['file', 'certificate'] as const;
-export type AttachmentPurpose = (typeof ATTACHMENT_PURPOSES)[number];
+export { ATTACHMENT_OWNERS, ATTACHMENT_PURPOSES, type AttachmentPurpose, type ImportKind };
+export type AttachmentOwner = AttachmentOwnerKind;
 
 /** File names are kept up to 255 characters, cut by code point so a name never ends in half a UTF-16 pair. */
 export const FILE_NAME_LENGTH = 255;
@@ -26,18 +25,16 @@ export class Attachment extends Base {
   @ManyToOne(() => User) @JoinColumn({ name: 'uploaded_by_id' }) uploadedBy?: User;
 }
 
-export type ImportKind = 'drum-types' | 'dip-tubes' | 'connectors';
-
 @Entity({ name: 'imports' })
 export class ImportRecord extends Base {
   @Text('kind', 12) kind: ImportKind;
   @Text('file_name', FILE_NAME_LENGTH) fileName: string;
   @Column({ name: 'dry_run', type: 'boolean' }) dryRun: boolean;
-  @Text('outcome', 10) outcome: 'dry-run' | 'committed' | 'refused';
+  @Text('outcome', 10) outcome: ImportOutcome;
   @Text('encoding', 20) encoding: string;
   @Text('delimiter', 4) delimiter: string;
-  @Column({ name: 'counts', type: 'jsonb' }) counts: { new: number; changed: number; unchanged: number; rejected: number };
-  @Column({ name: 'errors', type: 'jsonb' }) errors: Array<{ line: number; column: string; reason: string }>;
+  @Column({ name: 'counts', type: 'jsonb' }) counts: ImportCounts;
+  @Column({ name: 'errors', type: 'jsonb' }) errors: ImportRowError[];
   @NullableUuid('attachment_id') attachmentId: string | null;
   @Uuid('by_id') byId: string;
   @ManyToOne(() => User) @JoinColumn({ name: 'by_id' }) by?: User;

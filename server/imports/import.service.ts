@@ -7,6 +7,8 @@ import { DrumOpening, DrumType, fitFileName, ImportRecord, type ImportKind } fro
 import { normaliseHeader } from './columns';
 import { decodeCsv, detectDelimiter } from './decode';
 import { loadReferences, parseRows, pickKeys, type RowError } from './read-rows';
+import type { ImportHistoryItem, ImportRun } from '../../shared/contract/imports';
+import { copyOf, nameOf, type Sent } from '../common/json';
 
 export type { RowError } from './read-rows';
 
@@ -117,7 +119,7 @@ export class ImportService {
       errors: errors.slice(0, MAX_ERRORS),
       rows: planned.slice(0, 200).map((r) => ({ line: r.line, action: r.action, partNumber: r.partNumber, supplierId: r.supplierId })),
       attachmentId,
-    };
+    } satisfies ImportRun;
     if (process.env.BUNGWISE_IMPORT_TIMING === '1') console.error(`[bungwise] import of ${rows.length} rows, ms since start: ${JSON.stringify(phases)}`);
     if (outcome === 'refused') {
       throw new HttpError(422, 'import_refused', `Nothing was written: ${counts.rejected} row(s) have problems. Fix them (see details) and import again.`, body);
@@ -242,22 +244,18 @@ export class ImportService {
 
   async history(limit = 50) {
     const rows = await this.ds.getRepository(ImportRecord).find({ relations: { by: true }, order: { createdAt: 'DESC' }, take: limit });
-    return rows.map((r) => ({
-      id: r.id,
-      kind: r.kind,
-      fileName: r.fileName,
-      dryRun: r.dryRun,
-      outcome: r.outcome,
-      encoding: r.encoding,
-      delimiter: r.delimiter,
-      counts: r.counts,
-      errors: r.errors.slice(0, 50),
-      attachmentId: r.attachmentId,
-      byName: r.by?.displayName ?? null,
-      at: r.createdAt,
-    }));
+    return rows.map((r) => importJson(r, 50));
   }
 }
+
+/** A recorded import (the history's items, GET /imports/:id), with at most `maxErrors` of its row errors. */
+export const importJson = (r: ImportRecord, maxErrors?: number) =>
+  ({
+    ...copyOf(r, ['id', 'kind', 'fileName', 'dryRun', 'outcome', 'encoding', 'delimiter', 'counts', 'attachmentId']),
+    errors: r.errors.slice(0, maxErrors),
+    byName: nameOf(r.by),
+    at: r.createdAt,
+  }) satisfies Sent<ImportHistoryItem>;
 
 // [field, column, SQL type] for the flat kinds, in the order written.
 const DIP_TUBE_FIELDS: Array<[string, string, string]> = [

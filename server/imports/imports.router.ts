@@ -9,13 +9,15 @@ import { parseId } from '../registry/resource';
 import type { Storage } from '../storage/storage';
 import { AttachmentsService } from '../attachments/attachments.service';
 import { templateCsv } from './columns';
-import { ImportService, type ImportOptions } from './import.service';
+import { importJson, ImportService, type ImportOptions } from './import.service';
+import { IMPORT_KINDS, type ImportHistoryItem } from '../../shared/contract/imports';
+import type { Page } from '../../shared/contract/records';
+import type { Sent } from '../common/json';
 
-const KINDS: ImportKind[] = ['drum-types', 'dip-tubes', 'connectors'];
 export const MAX_IMPORT_BYTES = 20 * 1024 * 1024;
 
 function kindOf(value: unknown): ImportKind {
-  if (typeof value !== 'string' || !KINDS.includes(value as ImportKind)) throw fieldError('kind', `must be one of ${KINDS.join(', ')}`);
+  if (typeof value !== 'string' || !(IMPORT_KINDS as readonly string[]).includes(value)) throw fieldError('kind', `must be one of ${IMPORT_KINDS.join(', ')}`);
   return value as ImportKind;
 }
 
@@ -44,26 +46,13 @@ export function importsRouter(ds: DataSource, storage: Storage | null, options: 
   r.get('/imports', async (req, res) => {
     refuseQuery(req);
     const items = await service.history();
-    res.json({ items, total: items.length, page: 1, pageSize: items.length });
+    res.json({ items, total: items.length, page: 1, pageSize: items.length } satisfies Sent<Page<ImportHistoryItem>>);
   });
 
   r.get('/imports/:id', async (req, res) => {
     const r = await ds.getRepository(ImportRecord).findOne({ where: { id: parseId(req.params.id) }, relations: { by: true } });
     if (!r) throw notFound('Import');
-    res.json({
-      id: r.id,
-      kind: r.kind,
-      fileName: r.fileName,
-      dryRun: r.dryRun,
-      outcome: r.outcome,
-      encoding: r.encoding,
-      delimiter: r.delimiter,
-      counts: r.counts,
-      errors: r.errors,
-      attachmentId: r.attachmentId,
-      byName: r.by?.displayName ?? null,
-      at: r.createdAt,
-    });
+    res.json(importJson(r));
   });
 
   return router;

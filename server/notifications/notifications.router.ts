@@ -5,6 +5,8 @@ import { notFound } from '../common/errors';
 import { Notification } from '../entities';
 import { refuseQuery } from '../common/validate';
 import { parseId } from '../registry/resource';
+import type { NoticeList } from '../../shared/contract/notifications';
+import type { Sent } from '../common/json';
 import { notificationJson } from './notifications.service';
 
 /** Each user's own notices; nobody reads another's. */
@@ -18,7 +20,7 @@ export function notificationsRouter(ds: DataSource): Router {
       repo.find({ where: { userId: req.user!.id }, order: { createdAt: 'DESC' }, take: 50 }),
       repo.count({ where: { userId: req.user!.id, readAt: IsNull() } }),
     ]);
-    res.json({ items: items.map(notificationJson), unread });
+    res.json({ items: items.map(notificationJson), unread } satisfies Sent<NoticeList>);
   });
   r.post('/notifications/:id/read', async (req, res) => {
     const repo = ds.getRepository(Notification);

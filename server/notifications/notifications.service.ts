@@ -2,6 +2,8 @@ import { In, type EntityManager } from 'typeorm';
 import type { Role } from '../../shared/contract/roles';
 import { Notification, User } from '../entities';
 import { enqueueMail } from '../mail/outbox';
+import type { NoticeRecord } from '../../shared/contract/notifications';
+import { copyOf, type Sent } from '../common/json';
 
 export interface Notice {
   kind: Notification['kind'];
@@ -31,4 +33,4 @@ export async function notifyUser(m: EntityManager, userId: string, notice: Notic
   if (user?.active) await deliver(m, user, notice);
 }
 
-export const notificationJson = (n: Notification) => ({ id: n.id, kind: n.kind, title: n.title, body: n.body, link: n.link, readAt: n.readAt, createdAt: n.createdAt });
+export const notificationJson = (n: Notification) => copyOf(n, ['id', 'kind', 'title', 'body', 'link', 'readAt', 'createdAt']) satisfies Sent<NoticeRecord>;

@@ -10,7 +10,11 @@ import { audit } from '../audit/audit';
 import { noticeVerdictDiffers, raiseHoldNotices } from './hold-effects';
 import { certificateAttached, decide, siteToday } from './lot-decision';
 import type { HoldDto, ReceivingCheckDto, ReceivingListDto, ReleaseDto } from './receiving.dto';
-import { receivingJson } from './receiving.json';
+import type { ReceivingCheckDetail, ReceivingCheckRow } from '../../shared/contract/receiving';
+import type { Page } from '../../shared/contract/records';
+import type { Sent } from '../common/json';
+import { CHANGE_OUT_RELATIONS, changeOutJson } from '../stations/change-out.json';
+import { receivingJson, receivingRowJson } from './receiving.json';
 
 export { receivingJson };
 
@@ -141,17 +145,12 @@ export class ReceivingService {
       .skip((page - 1) * pageSize)
       .take(pageSize);
     const [rows, total] = await qb.getManyAndCount();
-    // The stored result is large; the history list needs only the verdict, the summary and the sentence.
     return {
-      items: rows.map((r) => ({
-        ...receivingJson(r),
-        lotVerdict: r.acceptance ? { decision: r.acceptance.decision, sentence: r.acceptance.sentence } : null,
-        result: { summary: (r.result as { summary?: string }).summary ?? '' },
-      })),
+      items: rows.map(receivingRowJson),
       total,
       page,
       pageSize,
-    };
+    } satisfies Sent<Page<ReceivingCheckRow>>;
   }
 
   async detail(id: string) {
@@ -159,25 +158,14 @@ export class ReceivingService {
     if (!r) throw notFound('Receiving check');
     const changeOuts = await this.ds.getRepository(ChangeOut).find({
       where: [{ receivingCheckId: id }],
-      relations: { station: true, tubeSet: true, dipTube: true, connector: true, by: true },
+      relations: CHANGE_OUT_RELATIONS,
       order: { at: 'ASC' },
     });
     return {
       ...receivingJson(r),
       // Every piece of hardware that touched this lot, in order.
-      changeOuts: changeOuts.map((c) => ({
-        id: c.id,
-        at: c.at,
-        stationId: c.stationId,
-        stationName: c.station?.name ?? null,
-        tubeSetId: c.tubeSetId,
-        tubeSetLabel: c.tubeSet?.label ?? null,
-        dipTubePartNumber: c.dipTube?.partNumber ?? null,
-        connectorPartNumber: c.connector?.partNumber ?? null,
-        drumSerial: c.drumSerial,
-        byName: c.by?.displayName ?? null,
-      })),
-    };
+      changeOuts: changeOuts.map(changeOutJson),
+    } satisfies Sent<ReceivingCheckDetail>;
   }
 
   /** A hold by hand: for a lot the verdict did not hold but that fits only with caution, with a typed reason. */

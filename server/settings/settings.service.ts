@@ -6,6 +6,9 @@ import { conflict, fieldError } from '../common/errors';
 import { SiteSettings } from '../entities';
 import { audit } from '../audit/audit';
 import type { SettingsDto } from '../registry/registry.dto';
+import { SETTINGS_FIELDS } from '../../shared/contract/fields';
+import type { SettingsRecord } from '../../shared/contract/records';
+import { copyOf, type Sent } from '../common/json';
 
 export async function loadSettings(m: EntityManager): Promise<SiteSettings> {
   const [row] = await m.find(SiteSettings, { order: { createdAt: 'ASC' }, take: 1 });
@@ -23,18 +26,8 @@ export function fitSettingsOf(row: SiteSettings): FitSettings {
   });
 }
 
-export const settingsJson = (s: SiteSettings) => ({
-  id: s.id,
-  version: s.version,
-  siteName: s.siteName,
-  tipClearanceMinMm: s.tipClearanceMinMm,
-  tipClearanceMaxMm: s.tipClearanceMaxMm,
-  threadMatchToleranceMm: s.threadMatchToleranceMm,
-  laminarLimit: s.laminarLimit,
-  maxReturnVelocityRatio: s.maxReturnVelocityRatio,
-  timeZone: s.timeZone,
-  updatedAt: s.updatedAt,
-});
+/** The settings as the API answers them: the contract's field list, copied. */
+export const settingsJson = (s: SiteSettings) => copyOf(s, SETTINGS_FIELDS) satisfies Sent<SettingsRecord>;
 
 export async function updateSettings(ds: DataSource, dto: SettingsDto, userId: string) {
   return ds.transaction(async (m) => {

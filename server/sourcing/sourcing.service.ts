@@ -1,5 +1,8 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import type { Page } from '../../shared/contract/records';
+import type { HardwareWarningRecord, SourcingPlanDetail, SourcingPlanRecord } from '../../shared/contract/sourcing';
 import { conflict, fieldError, notFound } from '../common/errors';
+import { copyOf, nameOf, type Sent } from '../common/json';
 import { DrumType, HardwareWarning, SourcingPlan, Station, Supplier } from '../entities';
 import type { FitCheckService } from '../fit/fit-check.service';
 import { notifyRoles } from '../notifications/notifications.service';
@@ -7,43 +10,26 @@ import { ensureExists } from '../registry/refs';
 import { needsForStations, orderLines, stationsByIds, totalOrder } from './hardware-needs';
 import type { SourcingPlanDto } from './sourcing.dto';
 
-export const planJson = (p: SourcingPlan) => ({
-  id: p.id,
-  version: p.version,
-  slurryName: p.slurryName,
-  supplierId: p.supplierId,
-  supplierName: p.supplier?.name ?? null,
-  region: p.supplier?.region ?? null,
-  drumTypeId: p.drumTypeId,
-  drumTypeName: p.drumType?.name ?? null,
-  drumTypePartNumber: p.drumType?.partNumber ?? null,
-  startDate: p.startDate,
-  drumsPerMonth: p.drumsPerMonth,
-  stationIds: p.stationIds,
-  foams: p.foams,
-  shearSensitive: p.shearSensitive,
-  notes: p.notes,
-  createdByName: p.createdBy?.displayName ?? null,
-  createdAt: p.createdAt,
-});
+export const planJson = (p: SourcingPlan) =>
+  ({
+    ...copyOf(p, ['id', 'version', 'slurryName', 'supplierId', 'drumTypeId', 'startDate', 'drumsPerMonth', 'stationIds', 'foams', 'shearSensitive', 'notes', 'createdAt']),
+    supplierName: p.supplier?.name ?? null,
+    region: p.supplier?.region ?? null,
+    drumTypeName: p.drumType?.name ?? null,
+    drumTypePartNumber: p.drumType?.partNumber ?? null,
+    createdByName: nameOf(p.createdBy),
+  }) satisfies Sent<SourcingPlanRecord>;
 
-export const warningJson = (w: HardwareWarning) => ({
-  id: w.id,
-  version: w.version,
-  source: w.source,
-  sourcingPlanId: w.sourcingPlanId,
-  receivingCheckId: w.receivingCheckId,
-  lotNumber: w.receivingCheck?.lotNumber ?? null,
-  planSlurryName: w.sourcingPlan?.slurryName ?? null,
-  status: w.status,
-  summary: w.summary,
-  needs: w.needs,
-  acknowledgedByName: w.acknowledgedBy?.displayName ?? null,
-  acknowledgedAt: w.acknowledgedAt,
-  resolvedByName: w.resolvedBy?.displayName ?? null,
-  resolvedAt: w.resolvedAt,
-  createdAt: w.createdAt,
-});
+export const warningJson = (w: HardwareWarning) =>
+  ({
+    ...copyOf(w, ['id', 'version', 'source', 'sourcingPlanId', 'receivingCheckId', 'status', 'summary', 'acknowledgedAt', 'resolvedAt', 'createdAt']),
+    lotNumber: w.receivingCheck?.lotNumber ?? null,
+    planSlurryName: w.sourcingPlan?.slurryName ?? null,
+    // jsonb, as written with the warning.
+    needs: w.needs as HardwareWarningRecord['needs'],
+    acknowledgedByName: nameOf(w.acknowledgedBy),
+    resolvedByName: nameOf(w.resolvedBy),
+  }) satisfies Sent<HardwareWarningRecord>;
 
 type Impact = Awaited<ReturnType<SourcingService['impactOf']>>;
 
@@ -107,7 +93,7 @@ export class SourcingService {
 
   async list() {
     const plans = await this.ds.getRepository(SourcingPlan).find({ relations: { supplier: true, drumType: true, createdBy: true }, order: { createdAt: 'DESC' }, take: 200 });
-    return { items: plans.map(planJson), total: plans.length, page: 1, pageSize: plans.length };
+    return { items: plans.map(planJson), total: plans.length, page: 1, pageSize: plans.length } satisfies Sent<Page<SourcingPlanRecord>>;
   }
 
   async detail(id: string, known?: Impact) {
@@ -115,7 +101,7 @@ export class SourcingService {
     if (!plan) throw notFound('Sourcing plan');
     const impact = known ?? (await this.impactOf(this.ds.manager, plan));
     const warnings = await this.ds.getRepository(HardwareWarning).find({ where: { sourcingPlanId: id }, order: { createdAt: 'DESC' } });
-    return { ...planJson(plan), impact: { stations: impact.stations, order: impact.order }, warnings: warnings.map(warningJson) };
+    return { ...planJson(plan), impact: { stations: impact.stations, order: impact.order }, warnings: warnings.map(warningJson) } satisfies Sent<SourcingPlanDetail>;
   }
 
   async warnings(status?: string) {
@@ -125,7 +111,7 @@ export class SourcingService {
       order: { createdAt: 'DESC' },
       take: 200,
     });
-    return { items: rows.map(warningJson), total: rows.length, page: 1, pageSize: rows.length };
+    return { items: rows.map(warningJson), total: rows.length, page: 1, pageSize: rows.length } satisfies Sent<Page<HardwareWarningRecord>>;
   }
 
   async moveWarning(id: string, to: 'acknowledged' | 'resolved', userId: string) {

@@ -1,6 +1,9 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { rinseCheck } from '../../shared/fit/rules';
+import type { StationBoard } from '../../shared/contract/stations';
 import { conflict, fieldError, notFound } from '../common/errors';
+import { copyOf, nameOf, type Sent } from '../common/json';
+import { CHANGE_OUT_RELATIONS, changeOutJson } from './change-out.json';
 import { ChangeOut, ReceivingCheck, RinseLog, Station, TubeSet } from '../entities';
 import { audit } from '../audit/audit';
 import type { RinseDto, StandbyDto } from './rotation.dto';
@@ -123,7 +126,7 @@ export class RotationService {
     if (!station) throw notFound('Station');
     const [sets, changeOuts, rinses] = await Promise.all([
       this.ds.getRepository(TubeSet).find({ where: { stationId }, relations: { dipTube: true, lastRinsedBy: true }, order: { label: 'ASC' } }),
-      this.ds.getRepository(ChangeOut).find({ where: { stationId }, relations: { tubeSet: true, dipTube: true, connector: true, by: true, retiredTubeSet: true }, order: { at: 'DESC' }, take: 100 }),
+      this.ds.getRepository(ChangeOut).find({ where: { stationId }, relations: CHANGE_OUT_RELATIONS, order: { at: 'DESC' }, take: 100 }),
       this.ds
         .getRepository(RinseLog)
         .createQueryBuilder('r')
@@ -135,46 +138,16 @@ export class RotationService {
         .getMany(),
     ]);
     return {
-      station: {
-        id: station.id,
-        version: station.version,
-        name: station.name,
-        bay: station.bay,
-        tapping: station.tapping,
-        agitation: station.agitation,
-        flowLpm: station.flowLpm,
-        connectorId: station.connectorId,
-        connectorPartNumber: station.connector?.partNumber ?? null,
-      },
+      station: { ...copyOf(station, ['id', 'version', 'name', 'bay', 'tapping', 'agitation', 'flowLpm', 'connectorId']), connectorPartNumber: station.connector?.partNumber ?? null },
       tubeSets: sets.map((s) => ({
-        id: s.id,
-        version: s.version,
-        label: s.label,
-        state: s.state,
-        dipTubeId: s.dipTubeId,
+        ...copyOf(s, ['id', 'version', 'label', 'state', 'dipTubeId', 'lastRinsedAt', 'lastUsedAt', 'currentLotNumber', 'currentDrumSerial', 'currentReceivingCheckId']),
         dipTubePartNumber: s.dipTube?.partNumber ?? null,
-        lastRinsedAt: s.lastRinsedAt,
-        lastRinsedByName: s.lastRinsedBy?.displayName ?? null,
-        lastUsedAt: s.lastUsedAt,
-        currentLotNumber: s.currentLotNumber,
-        currentDrumSerial: s.currentDrumSerial,
-        currentReceivingCheckId: s.currentReceivingCheckId,
+        lastRinsedByName: nameOf(s.lastRinsedBy),
         // Whether the set may go into the next drum, by the shared rinse rule.
         rinse: rinseCheck({ lastRinsedAt: s.lastRinsedAt, lastUsedAt: s.lastUsedAt }),
       })),
-      changeOuts: changeOuts.map((c) => ({
-        id: c.id,
-        at: c.at,
-        tubeSetLabel: c.tubeSet?.label ?? null,
-        dipTubePartNumber: c.dipTube?.partNumber ?? null,
-        connectorPartNumber: c.connector?.partNumber ?? null,
-        lotNumber: c.lotNumber,
-        receivingCheckId: c.receivingCheckId,
-        drumSerial: c.drumSerial,
-        retiredTubeSetLabel: c.retiredTubeSet?.label ?? null,
-        byName: c.by?.displayName ?? null,
-      })),
-      rinses: rinses.map((r) => ({ id: r.id, at: r.rinsedAt, tubeSetLabel: r.tubeSet?.label ?? null, byName: r.rinsedBy?.displayName ?? null, note: r.note })),
-    };
+      changeOuts: changeOuts.map(changeOutJson),
+      rinses: rinses.map((r) => ({ id: r.id, at: r.rinsedAt, tubeSetLabel: r.tubeSet?.label ?? null, byName: nameOf(r.rinsedBy), note: r.note })),
+    } satisfies Sent<StationBoard>;
   }
 }

@@ -14,6 +14,7 @@ import { threadRow } from '../registry/thread-specs/thread-spec.def';
 import { parseId } from '../registry/resource';
 import { fitSettingsOf, loadSettings } from '../settings/settings.service';
 import { FlowDto, ThreadMatchDto } from './tools.dto';
+import type { DrumTypeChecks, FlowAnswer, PackagingCodeAnswer } from '../../shared/contract/tools';
 
 /** The calculators. They only read, so every signed-in role may use them. */
 export function toolsRouter(ds: DataSource): Router {
@@ -45,14 +46,20 @@ export function toolsRouter(ds: DataSource): Router {
     const settings = fitSettingsOf(await loadSettings(ds.manager));
     const flowM3s = flowToM3s(dto.flow.value, dto.flow.unit as FlowUnit);
     const result = computePortFlow({ flowM3s, feedBoreMm: dto.feedBoreMm, returnBoreMm: dto.returnBoreMm ?? null, laminarLimit: settings.laminarLimit });
-    res.json({ ...result, flow: { value: dto.flow.value, unit: dto.flow.unit }, flowGpm: fromM3s(flowM3s, 'gal/min'), flowM3h: fromM3s(flowM3s, 'm3/h'), laminarLimit: settings.laminarLimit });
+    res.json({
+      ...result,
+      flow: { value: dto.flow.value, unit: dto.flow.unit as FlowUnit },
+      flowGpm: fromM3s(flowM3s, 'gal/min'),
+      flowM3h: fromM3s(flowM3s, 'm3/h'),
+      laminarLimit: settings.laminarLimit,
+    } satisfies FlowAnswer);
   });
 
   r.get('/tools/packaging-codes/:code', async (req, res) => {
     // A code alone (1A1) or a whole mark (UN 1A1/Y1.4/150/24/NL/VL824, slashes URL-encoded).
     const read = readPackagingMark(String(req.params.code));
     if (!read.ok) throw badRequest('invalid_packaging_code', read.error, [{ field: 'code', messages: [read.error] }]);
-    res.json({ ...read.code, mark: read.mark });
+    res.json({ ...read.code, mark: read.mark } satisfies PackagingCodeAnswer);
   });
 
   r.get('/tools/drum-types/:id/checks', async (req, res) => {
@@ -62,7 +69,7 @@ export function toolsRouter(ds: DataSource): Router {
     res.json({
       recommendedLength: recommendDipTubeLength({ insideDepthMm: drum.insideDepthMm, tipClearanceMinMm: settings.tipClearanceMinMm, tipClearanceMaxMm: settings.tipClearanceMaxMm }),
       packaging: drum.unPackagingCode ? checkDrumPackagingCode({ code: drum.unPackagingCode, material: drum.material, head: drum.head }) : [],
-    });
+    } satisfies DrumTypeChecks);
   });
 
   return router;

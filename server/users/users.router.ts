@@ -1,7 +1,9 @@
 import { secured } from '../auth/policy';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
-import { toPublicUser } from '../auth/auth.service';
+import type { Page } from '../../shared/contract/records';
+import type { MeAnswer, UserRecord } from '../../shared/contract/users';
+import { toUserRecord } from '../auth/auth.service';
 import { fieldError } from '../common/errors';
 import { UUID_RE } from '../common/fields';
 import { body, refuseQuery } from '../common/validate';
@@ -16,16 +18,16 @@ export function usersRouter(ds: DataSource): Router {
 
   r.get('/me', async (req, res) => {
     const user = await ds.getRepository(User).findOneByOrFail({ id: req.user!.id });
-    res.json({ user: toPublicUser(user) });
+    res.json({ user: toUserRecord(user) } satisfies MeAnswer);
   });
   r.patch('/me', body(UpdateMeDto), async (req, res) => {
-    res.json({ user: await service.updateMe(req.user!.id, req.body as UpdateMeDto) });
+    res.json({ user: await service.updateMe(req.user!.id, req.body as UpdateMeDto) } satisfies MeAnswer);
   });
 
   r.get('/users', async (req, res) => {
     refuseQuery(req);
     const items = await service.list();
-    res.json({ items, total: items.length, page: 1, pageSize: items.length });
+    res.json({ items, total: items.length, page: 1, pageSize: items.length } satisfies Page<UserRecord>);
   });
   r.post('/users', body(CreateUserDto), async (req, res) => {
     res.status(201).json(await service.create(req.body as CreateUserDto, req.user!.id));

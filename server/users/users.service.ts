@@ -3,19 +3,20 @@ import { conflict, fieldError, notFound } from '../common/errors';
 import { User } from '../entities';
 import { hashPassword } from '../auth/passwords';
 import { passwordProblem } from '../../shared/passwords';
-import { toPublicUser, type PublicUser } from '../auth/auth.service';
+import type { UserRecord } from '../../shared/contract/users';
+import { toUserRecord } from '../auth/auth.service';
 import { audit } from '../audit/audit';
 import type { CreateUserDto, UpdateMeDto, UpdateUserDto } from './users.dto';
 
 export class UsersService {
   constructor(private readonly ds: DataSource) {}
 
-  async list(): Promise<PublicUser[]> {
+  async list(): Promise<UserRecord[]> {
     const users = await this.ds.getRepository(User).find({ order: { role: 'ASC', email: 'ASC' } });
-    return users.map(toPublicUser);
+    return users.map(toUserRecord);
   }
 
-  async create(dto: CreateUserDto, actingUserId: string): Promise<PublicUser> {
+  async create(dto: CreateUserDto, actingUserId: string): Promise<UserRecord> {
     const problem = passwordProblem(dto.temporaryPassword);
     if (problem) throw fieldError('temporaryPassword', problem);
     const email = dto.email.trim().toLowerCase();
@@ -31,36 +32,36 @@ export class UsersService {
     });
     return this.ds.transaction(async (m) => {
       const saved = await m.save(user);
-      await audit(m, { userId: actingUserId, action: 'create', entity: 'users', entityId: saved.id, summary: `Person added: ${saved.email} as ${saved.role}`, after: toPublicUser(saved) });
-      return toPublicUser(saved);
+      await audit(m, { userId: actingUserId, action: 'create', entity: 'users', entityId: saved.id, summary: `Person added: ${saved.email} as ${saved.role}`, after: toUserRecord(saved) });
+      return toUserRecord(saved);
     });
   }
 
-  async update(id: string, dto: UpdateUserDto, actingUserId: string): Promise<PublicUser> {
+  async update(id: string, dto: UpdateUserDto, actingUserId: string): Promise<UserRecord> {
     const repo = this.ds.getRepository(User);
     const user = await repo.findOneBy({ id });
     if (!user) throw notFound('User');
     if (id === actingUserId && (dto.active === false || (dto.role && dto.role !== 'admin'))) {
       throw fieldError(dto.active === false ? 'active' : 'role', 'you cannot deactivate yourself or remove your own administrator role');
     }
-    const before = toPublicUser(user);
+    const before = toUserRecord(user);
     if (dto.role) user.role = dto.role;
     if (dto.active !== undefined) user.active = dto.active;
     if (dto.name) user.displayName = dto.name.trim();
     return this.ds.transaction(async (m) => {
-      const saved = toPublicUser(await m.save(user));
+      const saved = toUserRecord(await m.save(user));
       await audit(m, { userId: actingUserId, action: 'update', entity: 'users', entityId: id, summary: `Person changed: ${saved.email}`, before, after: saved });
       return saved;
     });
   }
 
   /** The signed-in person's own preferences: length unit, which kinds of mail they want, colour theme. */
-  async updateMe(id: string, dto: UpdateMeDto): Promise<PublicUser> {
+  async updateMe(id: string, dto: UpdateMeDto): Promise<UserRecord> {
     const repo = this.ds.getRepository(User);
     const user = await repo.findOneByOrFail({ id });
     if (dto.lengthUnit) user.lengthUnit = dto.lengthUnit;
     if (dto.mailOff) user.mailOff = [...new Set(dto.mailOff)];
     if (dto.theme) user.theme = dto.theme;
-    return toPublicUser(await repo.save(user));
+    return toUserRecord(await repo.save(user));
   }
 }

@@ -1,4 +1,5 @@
 // The JSON shapes the registry API answers with, shared by the server's serialisers and the client.
+import type { ThreadSpecRow } from '../threads/thread-table';
 import type { RuleOutcome, Verdict } from './verdicts';
 
 export type Region = 'NA' | 'EU' | 'JP' | 'TW' | 'KR' | 'CN' | 'SG' | 'other';
@@ -46,19 +47,14 @@ export interface SupplierRecord extends Stamped {
   region: Region;
   contactEmail: string | null;
   notes: string | null;
+  /** Detail only: how many records of each kind name this supplier. */
+  drumTypes?: number;
+  dipTubes?: number;
+  connectors?: number;
 }
 
-export interface ThreadSpecRecord extends Stamped {
-  code: string;
-  family: 'NPS' | 'NPT' | 'G' | 'buttress' | 'other';
-  nominalLabel: string;
-  majorDiameterMm: number;
-  pitchMm: number;
-  threadsPerInch: number;
-  flankAngleDeg: number;
-  form: 'tapered' | 'parallel';
-  standard: string;
-}
+/** A thread spec as stored: a row of the thread table (family includes ISO 7-1's R, Rc and Rp). */
+export interface ThreadSpecRecord extends Stamped, ThreadSpecRow {}
 
 export interface KeyCodeRecord extends Stamped {
   code: string;
@@ -193,6 +189,9 @@ export interface TubeSetRecord extends Stamped {
   lastRinsedById: string | null;
   lastRinsedByName: string | null;
   lastUsedAt: string | null;
+  /** The lot and drum the set is in (standby or online); null once it comes out. */
+  currentLotNumber: string | null;
+  currentDrumSerial: string | null;
 }
 
 export interface SettingsRecord {
@@ -206,6 +205,7 @@ export interface SettingsRecord {
   maxReturnVelocityRatio: number;
   /** IANA zone of the site: its local date is "today" for lot expiry. */
   timeZone: string;
+  updatedAt: string;
 }
 
 export interface FitRuleRecord {

@@ -7,20 +7,14 @@ import { anId, oneOf } from '../list-query';
 import { ensureExists, pick, resolveKey } from '../refs';
 import { ConnectorDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { ConnectorRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
-export const connectorJson = (c: Connector) => ({
+export const connectorJson = (c: Connector): Sent<ConnectorRecord> => ({
   ...stamps(c),
-  partNumber: c.partNumber,
-  supplierId: c.supplierId,
+  ...copyOf(c, ['partNumber', 'supplierId', 'feedBoreMm', 'feedNominal', 'returnBoreMm', 'returnNominal', 'returnPath', 'suitedTo', 'wettedMaterials']),
   supplierName: c.supplier?.name ?? null,
   keyCode: c.keyCode?.code ?? null,
-  feedBoreMm: c.feedBoreMm,
-  feedNominal: c.feedNominal,
-  returnBoreMm: c.returnBoreMm,
-  returnNominal: c.returnNominal,
-  returnPath: c.returnPath,
-  suitedTo: c.suitedTo,
-  wettedMaterials: c.wettedMaterials,
 });
 
 export const connectorDef: ResourceDef<Connector> = {
@@ -48,7 +42,7 @@ export const connectorDef: ResourceDef<Connector> = {
     if (problem) throw fieldError(problem.field, problem.says);
     return cols;
   },
-  detailExtras: async (c, m) => ({
+  detailExtras: async (c, m): Promise<Sent<Required<Pick<ConnectorRecord, 'stations' | 'pairings'>>>> => ({
     stations: (await m.find(Station, { where: { connectorId: c.id }, order: { name: 'ASC' } })).map((s) => ({ id: s.id, name: s.name, bay: s.bay, tapping: s.tapping })),
     pairings: (await m.find(Pairing, { where: { connectorId: c.id }, relations: { dipTube: true } })).map((p) => ({
       id: p.id,

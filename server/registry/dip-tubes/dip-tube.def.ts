@@ -6,19 +6,15 @@ import { anId } from '../list-query';
 import { ensureExists, pick, resolveKey, resolveThread } from '../refs';
 import { DipTubeDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { DipTubeRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
-export const dipTubeJson = (t: DipTube) => ({
+export const dipTubeJson = (t: DipTube): Sent<DipTubeRecord> => ({
   ...stamps(t),
-  partNumber: t.partNumber,
-  supplierId: t.supplierId,
+  ...copyOf(t, ['partNumber', 'supplierId', 'lengthMm', 'boreMm', 'odMm', 'material', 'channels']),
   supplierName: t.supplier?.name ?? null,
   threadCode: t.threadSpec?.code ?? null,
-  lengthMm: t.lengthMm,
-  boreMm: t.boreMm,
-  odMm: t.odMm,
-  material: t.material,
   keyCode: t.keyCode?.code ?? null,
-  channels: t.channels,
 });
 
 export const dipTubeDef: ResourceDef<DipTube> = {
@@ -47,7 +43,7 @@ export const dipTubeDef: ResourceDef<DipTube> = {
     if (dto.keyCode !== undefined) cols.keyCodeId = await resolveKey(manager, dto.keyCode, 'keyCode');
     return cols;
   },
-  detailExtras: async (t, m) => ({
+  detailExtras: async (t, m): Promise<Sent<Required<Pick<DipTubeRecord, 'fitsDrumTypes' | 'pairings'>>>> => ({
     // Drum types with an opening of this tube's thread (whether the length reaches is the fit check's job).
     fitsDrumTypes: (
       await m

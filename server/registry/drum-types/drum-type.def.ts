@@ -7,21 +7,13 @@ import { ensureExists, pick } from '../refs';
 import { DrumTypeDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
 import { openingJson, writeOpenings } from './openings';
+import type { DrumTypeRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
-export const drumTypeJson = (d: DrumType) => ({
+export const drumTypeJson = (d: DrumType): Sent<DrumTypeRecord> => ({
   ...stamps(d),
-  supplierId: d.supplierId,
+  ...copyOf(d, ['supplierId', 'region', 'name', 'partNumber', 'nominalCapacityL', 'material', 'head', 'unPackagingCode', 'outsideHeightMm', 'insideDepthMm', 'outsideDiameterMm']),
   supplierName: d.supplier?.name ?? null,
-  region: d.region,
-  name: d.name,
-  partNumber: d.partNumber,
-  nominalCapacityL: d.nominalCapacityL,
-  material: d.material,
-  head: d.head,
-  unPackagingCode: d.unPackagingCode,
-  outsideHeightMm: d.outsideHeightMm,
-  insideDepthMm: d.insideDepthMm,
-  outsideDiameterMm: d.outsideDiameterMm,
   openings: [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label)).map(openingJson),
 });
 
@@ -65,7 +57,7 @@ export const drumTypeDef: ResourceDef<DrumType> = {
     return cols;
   },
   afterWrite: writeOpenings,
-  detailExtras: async (d, m) => ({
+  detailExtras: async (d, m): Promise<Sent<Required<Pick<DrumTypeRecord, 'pairings' | 'slurries'>>>> => ({
     // Pairings whose tube threads into one of this drum's openings.
     pairings: await m
       .getRepository(Pairing)

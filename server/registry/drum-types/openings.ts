@@ -6,8 +6,11 @@ import type { Dto } from '../common';
 import { resolveKey, resolveThread } from '../refs';
 import { OpeningDto } from '../registry.dto';
 import type { WriteContext } from '../resource';
+import type { OpeningRecord } from '../../../shared/contract/records';
+import type { Sent } from '../../common/json';
 
-export const openingJson = (o: DrumOpening) => ({ id: o.id, label: o.label, threadCode: o.threadSpec?.code ?? null, boreMm: o.boreMm, keyCode: o.keyCode?.code ?? null, position: o.position });
+export const openingJson = (o: DrumOpening) =>
+  ({ id: o.id, label: o.label, threadCode: o.threadSpec?.code ?? null, boreMm: o.boreMm, keyCode: o.keyCode?.code ?? null, position: o.position }) satisfies Sent<OpeningRecord>;
 
 /** Replaces a drum type's openings, each validated in full and its codes resolved (inside the caller's transaction). */
 export async function writeOpenings(drum: DrumType, dto: Dto, { manager }: WriteContext): Promise<void> {

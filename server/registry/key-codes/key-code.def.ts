@@ -3,6 +3,8 @@ import { stamps } from '../common';
 import { pick } from '../refs';
 import { KeyCodeDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { KeyCodeRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
 export const keyCodeDef: ResourceDef<KeyCode> = {
   path: 'key-codes',
@@ -14,6 +16,6 @@ export const keyCodeDef: ResourceDef<KeyCode> = {
   search: ['k.code', 'k.label', "coalesce(k.marking, '')"],
   sorts: { code: 'k.code', label: 'k.label' },
   defaultSort: 'code',
-  toJson: (k) => ({ ...stamps(k), code: k.code, label: k.label, marking: k.marking }),
+  toJson: (k): Sent<KeyCodeRecord> => ({ ...stamps(k), ...copyOf(k, ['code', 'label', 'marking']) }),
   toColumns: async (dto) => pick<KeyCode>(dto, ['code', 'label', 'marking']),
 };

@@ -8,21 +8,17 @@ import { oneOf } from '../list-query';
 import { ensureExists, pick } from '../refs';
 import { PairingDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { PairingRecord } from '../../../shared/contract/records';
+import { copyOf, nameOf, type Sent } from '../../common/json';
 
-export const pairingJson = (p: Pairing) => ({
+export const pairingJson = (p: Pairing): Sent<PairingRecord> => ({
   ...stamps(p),
-  dipTubeId: p.dipTubeId,
+  ...copyOf(p, ['dipTubeId', 'connectorId', 'status', 'authorId', 'approverId', 'approvedAt', 'notes']),
   dipTubePartNumber: p.dipTube?.partNumber ?? null,
   threadCode: p.dipTube?.threadSpec?.code ?? null,
-  connectorId: p.connectorId,
   connectorPartNumber: p.connector?.partNumber ?? null,
-  status: p.status,
-  authorId: p.authorId,
-  authorName: p.author?.displayName ?? null,
-  approverId: p.approverId,
-  approverName: p.approver?.displayName ?? null,
-  approvedAt: p.approvedAt,
-  notes: p.notes,
+  authorName: nameOf(p.author),
+  approverName: nameOf(p.approver),
 });
 
 export const pairingDef: ResourceDef<Pairing> = {
@@ -75,13 +71,10 @@ export const pairingDef: ResourceDef<Pairing> = {
       user.id,
     );
   },
-  detailExtras: async (p, m) => ({
+  detailExtras: async (p, m): Promise<Sent<Required<Pick<PairingRecord, 'reviews'>>>> => ({
     reviews: (await m.find(PairingReview, { where: { pairingId: p.id }, relations: { reviewer: true }, order: { createdAt: 'ASC' } })).map((r) => ({
-      id: r.id,
-      decision: r.decision,
-      comment: r.comment,
-      reviewerId: r.reviewerId,
-      reviewerName: r.reviewer?.displayName ?? null,
+      ...copyOf(r, ['id', 'decision', 'comment', 'reviewerId']),
+      reviewerName: nameOf(r.reviewer),
       at: r.createdAt,
     })),
   }),

@@ -6,6 +6,8 @@ import { anId } from '../list-query';
 import { ensureExists, pick } from '../refs';
 import { SlurryDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { SlurryRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
 export const slurryDef: ResourceDef<Slurry> = {
   path: 'slurries',
@@ -21,22 +23,11 @@ export const slurryDef: ResourceDef<Slurry> = {
     region: filter(region, (qb, v) => qb.andWhere('sl.region = :region', { region: v })),
     supplierId: filter(anId, (qb, v) => qb.andWhere('sl.supplier_id = :supplierId', { supplierId: v })),
   },
-  toJson: (s) => ({
+  toJson: (s): Sent<SlurryRecord> => ({
     ...stamps(s),
-    name: s.name,
-    supplierId: s.supplierId,
+    ...copyOf(s, ['name', 'supplierId', 'region', 'drumTypeId', 'foams', 'shearSensitive', 'solidsWtPct', 'shelfLifeDays', 'minRemainingDays', 'storageMinC', 'storageMaxC', 'certificateRequired']),
     supplierName: s.supplier?.name ?? null,
-    region: s.region,
-    drumTypeId: s.drumTypeId,
     drumTypeName: s.drumType?.name ?? null,
-    foams: s.foams,
-    shearSensitive: s.shearSensitive,
-    solidsWtPct: s.solidsWtPct,
-    shelfLifeDays: s.shelfLifeDays,
-    minRemainingDays: s.minRemainingDays,
-    storageMinC: s.storageMinC,
-    storageMaxC: s.storageMaxC,
-    certificateRequired: s.certificateRequired,
   }),
   toColumns: async (dto, { manager, existing }) => {
     if (dto.supplierId !== undefined) await ensureExists(manager, Supplier, dto.supplierId, 'supplierId', 'supplier');

@@ -3,6 +3,8 @@ import { stamps } from '../common';
 import { ensureExists, pick } from '../refs';
 import { StationDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { StationRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
 export const stationDef: ResourceDef<Station> = {
   path: 'stations',
@@ -14,28 +16,15 @@ export const stationDef: ResourceDef<Station> = {
   search: ['st.name', 'st.bay'],
   sorts: { name: 'st.name', bay: 'st.bay', updatedAt: 'st.updatedAt' },
   defaultSort: 'name',
-  toJson: (s) => ({
-    ...stamps(s),
-    name: s.name,
-    bay: s.bay,
-    tapping: s.tapping,
-    agitation: s.agitation,
-    connectorId: s.connectorId,
-    connectorPartNumber: s.connector?.partNumber ?? null,
-    flowLpm: s.flowLpm,
-  }),
+  toJson: (s): Sent<StationRecord> => ({ ...stamps(s), ...copyOf(s, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm']), connectorPartNumber: s.connector?.partNumber ?? null }),
   toColumns: async (dto, { manager }) => {
     if (dto.connectorId != null) await ensureExists(manager, Connector, dto.connectorId, 'connectorId', 'connector');
     return pick<Station>(dto, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm']);
   },
-  detailExtras: async (s, m) => ({
+  detailExtras: async (s, m): Promise<Sent<Required<Pick<StationRecord, 'tubeSets'>>>> => ({
     tubeSets: (await m.find(TubeSet, { where: { stationId: s.id }, relations: { dipTube: true }, order: { label: 'ASC' } })).map((t) => ({
-      id: t.id,
-      label: t.label,
-      state: t.state,
+      ...copyOf(t, ['id', 'label', 'state', 'lastRinsedAt', 'lastUsedAt']),
       dipTubePartNumber: t.dipTube?.partNumber ?? null,
-      lastRinsedAt: t.lastRinsedAt,
-      lastUsedAt: t.lastUsedAt,
     })),
   }),
 };

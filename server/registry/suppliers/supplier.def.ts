@@ -3,6 +3,8 @@ import { filter, region, stamps } from '../common';
 import { pick } from '../refs';
 import { SupplierDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { SupplierRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
 export const supplierDef: ResourceDef<Supplier> = {
   path: 'suppliers',
@@ -15,9 +17,9 @@ export const supplierDef: ResourceDef<Supplier> = {
   sorts: { name: 's.name', region: 's.region', updatedAt: 's.updatedAt' },
   defaultSort: 'name',
   filters: { region: filter(region, (qb, v) => qb.andWhere('s.region = :region', { region: v })) },
-  toJson: (s) => ({ ...stamps(s), name: s.name, region: s.region, contactEmail: s.contactEmail, notes: s.notes }),
+  toJson: (s): Sent<SupplierRecord> => ({ ...stamps(s), ...copyOf(s, ['name', 'region', 'contactEmail', 'notes']) }),
   toColumns: async (dto) => pick<Supplier>(dto, ['name', 'region', 'contactEmail', 'notes']),
-  detailExtras: async (s, m) => ({
+  detailExtras: async (s, m): Promise<Sent<Required<Pick<SupplierRecord, 'drumTypes' | 'dipTubes' | 'connectors'>>>> => ({
     drumTypes: await m.count(DrumType, { where: { supplierId: s.id } }),
     dipTubes: await m.count(DipTube, { where: { supplierId: s.id } }),
     connectors: await m.count(Connector, { where: { supplierId: s.id } }),

@@ -6,19 +6,11 @@ import { oneOf } from '../list-query';
 import { pick } from '../refs';
 import { ThreadSpecDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { ThreadSpecRecord } from '../../../shared/contract/records';
+import { copyOf, type Sent } from '../../common/json';
 
 /** A stored thread spec as a row of the thread table (the shape the shared thread code works on). */
-export const threadRow = (t: ThreadSpec): ThreadSpecRow => ({
-  code: t.code,
-  family: t.family,
-  nominalLabel: t.nominalLabel,
-  majorDiameterMm: t.majorDiameterMm,
-  pitchMm: t.pitchMm,
-  threadsPerInch: t.threadsPerInch,
-  flankAngleDeg: t.flankAngleDeg,
-  form: t.form,
-  standard: t.standard,
-});
+export const threadRow = (t: ThreadSpec): ThreadSpecRow => copyOf(t, ['code', 'family', 'nominalLabel', 'majorDiameterMm', 'pitchMm', 'threadsPerInch', 'flankAngleDeg', 'form', 'standard']);
 
 export const threadSpecDef: ResourceDef<ThreadSpec> = {
   path: 'thread-specs',
@@ -32,6 +24,6 @@ export const threadSpecDef: ResourceDef<ThreadSpec> = {
   defaultSort: 'majorDiameterMm',
   // On the thread table, ?thread= is the family.
   filters: { thread: filter(oneOf(THREAD_FAMILIES), (qb, v) => qb.andWhere('t.family = :family', { family: v })) },
-  toJson: (t) => ({ ...stamps(t), ...threadRow(t) }),
+  toJson: (t): Sent<ThreadSpecRecord> => ({ ...stamps(t), ...threadRow(t) }),
   toColumns: async (dto) => pick<ThreadSpec>(dto, ['code', 'family', 'nominalLabel', 'majorDiameterMm', 'pitchMm', 'threadsPerInch', 'flankAngleDeg', 'form', 'standard']),
 };

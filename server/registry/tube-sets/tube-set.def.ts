@@ -7,6 +7,8 @@ import { anId, oneOf } from '../list-query';
 import { ensureExists, pick } from '../refs';
 import { TubeSetDto } from '../registry.dto';
 import type { ResourceDef } from '../resource';
+import type { TubeSetRecord } from '../../../shared/contract/records';
+import { copyOf, nameOf, type Sent } from '../../common/json';
 
 export const tubeSetDef: ResourceDef<TubeSet> = {
   path: 'tube-sets',
@@ -23,20 +25,12 @@ export const tubeSetDef: ResourceDef<TubeSet> = {
     // On tube sets, ?status= is the set's state in the rotation.
     status: filter(oneOf(TUBE_SET_STATES), (qb, v) => qb.andWhere('ts.state = :state', { state: v })),
   },
-  toJson: (t) => ({
+  toJson: (t): Sent<TubeSetRecord> => ({
     ...stamps(t),
-    currentLotNumber: t.currentLotNumber,
-    currentDrumSerial: t.currentDrumSerial,
-    stationId: t.stationId,
+    ...copyOf(t, ['currentLotNumber', 'currentDrumSerial', 'stationId', 'label', 'dipTubeId', 'state', 'lastRinsedAt', 'lastRinsedById', 'lastUsedAt']),
     stationName: t.station?.name ?? null,
-    label: t.label,
-    dipTubeId: t.dipTubeId,
     dipTubePartNumber: t.dipTube?.partNumber ?? null,
-    state: t.state,
-    lastRinsedAt: t.lastRinsedAt,
-    lastRinsedById: t.lastRinsedById,
-    lastRinsedByName: t.lastRinsedBy?.displayName ?? null,
-    lastUsedAt: t.lastUsedAt,
+    lastRinsedByName: nameOf(t.lastRinsedBy),
   }),
   toColumns: async (dto, { manager, existing }) => {
     if (dto.stationId !== undefined) await ensureExists(manager, Station, dto.stationId, 'stationId', 'station');
