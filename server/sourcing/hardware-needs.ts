@@ -46,10 +46,17 @@ export async function needsForStations(m: EntityManager, fit: FitCheckService, d
   // transaction has one connection, so there one at a time.
   const needs: StationNeed[] = new Array(stations.length);
   let next = 0;
+  let failed = false;
   const worker = async () => {
-    while (next < stations.length) {
+    // A failed check fails the request at once; the other worker then stops instead of checking the rest for nobody.
+    while (next < stations.length && !failed) {
       const i = next++;
-      needs[i] = await needOf(stations[i]);
+      try {
+        needs[i] = await needOf(stations[i]);
+      } catch (e) {
+        failed = true;
+        throw e;
+      }
     }
   };
   await Promise.all(Array.from({ length: Math.min(m.queryRunner?.isTransactionActive ? 1 : CHECKS_AT_ONCE, stations.length) }, worker));
@@ -121,7 +128,7 @@ async function needAt(m: EntityManager, station: Station, result: Checked, sets:
   };
 }
 
-const TUBES_SQL = `SELECT t.id AS dip_tube_id, t.part_number AS tube_part, th.code AS thread_code, t.length_mm, tk.code AS tube_key, t.channels
+const TUBES_SQL = `SELECT t.id AS dip_tube_id, t.part_number AS tube_part, th.code AS thread_code, t.length_mm, tk.code AS tube_key, t.channels, t.od_mm AS tube_od_mm
   FROM dip_tubes t JOIN thread_specs th ON th.id = t.thread_spec_id LEFT JOIN key_codes tk ON tk.id = t.key_code_id
   WHERE th.code = ANY($1::text[]) ORDER BY t.part_number COLLATE "C"`;
 const HEADS_SQL = `SELECT c.id AS connector_id, c.part_number AS head_part, ck.code AS head_key, c.feed_bore_mm, c.feed_nominal, c.return_bore_mm, c.return_nominal, c.return_path, c.suited_to

@@ -40,7 +40,7 @@ describe('e-mail through the outbox', () => {
     expect(queued.map((q) => q.toEmail).sort()).toEqual(expect.arrayContaining(['buyer@bungwise.example', 'engineer2@bungwise.example', 'engineer@bungwise.example']));
     const sender = new MailSender(ds, nodemailer.createTransport(smtpUrl()));
     expect(await sender.flush()).toBe(queued.length);
-    const mail = await inbox();
+    const mail = await inbox(queued.length);
     const toEngineer = mail.find((m) => m.to[0].address === 'engineer@bungwise.example' && /on hold/.test(m.subject))!;
     expect(toEngineer).toBeDefined();
     expect(toEngineer.text).toContain('Lot ML-001');
@@ -67,7 +67,7 @@ describe('e-mail through the outbox', () => {
     const up = new MailSender(ds, nodemailer.createTransport(smtpUrl()));
     expect(await up.flush()).toBe(waiting.length);
     expect(await ds.getRepository(OutboxMessage).count({ where: { status: 'pending' } })).toBe(0);
-    expect((await inbox()).some((m) => /ML-002/.test(m.text))).toBe(true);
+    expect((await inbox(waiting.length)).some((m) => /ML-002/.test(m.text))).toBe(true);
   });
 
   it('a pairing awaiting review mails the other engineers; its approval mails the author; each kind can be turned off', async () => {
@@ -92,8 +92,8 @@ describe('e-mail through the outbox', () => {
     expect(created.status).toBe(201);
     const approved = await request(app).post(`/api/pairings/${created.body.id}/approve`).set(bearer(t.engineer2)).send({ comment: 'Checked at bay 4' });
     expect(approved.status).toBe(200);
-    await new MailSender(ds, nodemailer.createTransport(smtpUrl())).flush();
-    const mail = await inbox();
+    const sent = await new MailSender(ds, nodemailer.createTransport(smtpUrl())).flush();
+    const mail = await inbox(sent);
     // engineer2 turned review mail off: still notified in the app, not by mail.
     expect(mail.some((m) => m.to[0].address === 'engineer2@bungwise.example')).toBe(false);
     const notices = await request(app).get('/api/notifications').set(bearer(t.engineer2));

@@ -21,10 +21,19 @@ export interface InboxMessage {
 }
 
 /** Messages the local mail stand-in received (its web inbox's JSON API). */
-export async function inbox(): Promise<InboxMessage[]> {
+/**
+ * The local inbox. The relay accepts a message before its web view lists it (it parses after the SMTP reply), so a
+ * test that has just sent `atLeast` messages waits, up to 5 s, until that many are listed.
+ */
+export async function inbox(atLeast = 0): Promise<InboxMessage[]> {
   const url = process.env.BUNGWISE_MAIL_WEB_URL;
   if (!url) throw new Error('BUNGWISE_MAIL_WEB_URL is not set: run these tests through `npm test`.');
-  return (await fetch(`${url}/email`)).json() as Promise<InboxMessage[]>;
+  const until = Date.now() + 5000;
+  for (;;) {
+    const mail = (await (await fetch(`${url}/email`)).json()) as InboxMessage[];
+    if (mail.length >= atLeast || Date.now() > until) return mail;
+    await new Promise((r) => setTimeout(r, 50));
+  }
 }
 
 export async function clearInbox(): Promise<void> {
