@@ -131,8 +131,13 @@ describe.each(VIEWPORTS)('registry at $name width ($width px)', (viewport) => {
     // Status filter: the two drafts.
     await page.getByTestId('filter-pairingStatus').click();
     await page.getByTestId('filter-pairingStatus-option-draft').click();
-    const drafts = await waitForRows(page, (ids) => ids.length === 2 && ids.includes('RFH-DT-N2-790+RFH-DH-C1919-OX'), 'the two drafts');
-    expect(drafts).toContain('RFH-DT-B70-862+RFH-DH-C1919-U');
+    // Page 2 also shows two rows, N2-790 among them, until the filtered answer arrives: wait for the drafts' own pager line.
+    await page
+      .getByTestId('pager-status')
+      .filter({ hasText: /^1–2 of 2 pairings/ })
+      .waitFor();
+    const drafts = await waitForRows(page, (ids) => ids.length === 2, 'the two drafts');
+    expect(drafts.sort()).toEqual(['RFH-DT-B70-862+RFH-DH-C1919-U', 'RFH-DT-N2-790+RFH-DH-C1919-OX']);
     await context.close();
   }, 90_000);
 
