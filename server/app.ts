@@ -69,8 +69,9 @@ export interface AppOptions {
 }
 
 // Requests that change no table the kept answers or users are read from (a fit check writes nothing; a dock
-// check writes the lot, its notices and warnings): they leave what is kept in place.
-const WRITES_NO_KEPT_TABLE = new Set(['/fit-checks', '/receiving-checks']);
+// check writes the lot, its notices and warnings; a sourcing plan writes the plan, its warning and notices):
+// they leave what is kept in place.
+const WRITES_NO_KEPT_TABLE = new Set(['/fit-checks', '/receiving-checks', '/sourcing-plans']);
 
 /** The app factory: everything under /api, the web app at /. One process is stateless apart from the kept fit
  * answers and signed-in users (which every process drops when their tables change). */

@@ -99,8 +99,11 @@ export class FitCheckService {
       return this.run(m, { drum: { id: args.drumTypeId }, station, stationRow, slurry: args.slurry ?? null, tubeSet, fieldForDrum: 'drumTypeId' });
     };
     const s = args.slurry;
-    const key = args.stationId || args.at ? null : JSON.stringify(['flags', args.drumTypeId.toLowerCase(), s ? [s.name, s.foams, s.shearSensitive] : null]);
-    if (!key || !this.answers) return compute();
+    // Stations and tube sets notify changes like the registry's tables, so an answer at a station is kept too. The
+    // station's next tube set is read from those same tables (by the caller with `at`, or in `compute`).
+    const stationId = (args.at?.station.id ?? args.stationId ?? null)?.toLowerCase() ?? null;
+    const key = JSON.stringify(['flags', args.drumTypeId.toLowerCase(), s ? [s.name, s.foams, s.shearSensitive] : null, stationId]);
+    if (!this.answers) return compute();
     return JSON.parse((await this.kept(key, compute)).json.toString('utf8')) as FitAnswer;
   }
 

@@ -7,6 +7,7 @@ import type { DataSource } from 'typeorm';
 import { CHANGE_CHANNELS } from '../../migrations/1764637200000-change-notify';
 import { STATION_TABLES } from '../../migrations/1764846000000-station-change-notify';
 import { ChangeFeed } from '../../server/db/change-feed';
+import { FitCheckService } from '../../server/fit/fit-check.service';
 import { DEMO_REGISTRY_SUMMARY as demo } from '../../seeds/demo-registry';
 import { bearer, makeTestApp, tokenFor } from '../support/app';
 import { openTestDataSource, resetDatabase } from '../support/db';
@@ -134,6 +135,46 @@ describe('kept fit answers', () => {
     );
     expect(after.body.tubeSet.lastUsedAt).not.toBe(set.lastUsedAt);
     expect(after.body).toEqual((await ask(plain, atStation)).body);
+  });
+
+  it("keeps a sourcing plan's answers at each station: a second plan over the same stations computes none, and a station change is seen", async () => {
+    await until(
+      'the shared feed to listen',
+      async () => feed.isListening,
+      (v) => v,
+    );
+    const buyer = await tokenFor(app, 'buyer@bungwise.example');
+    const [{ id: supplierId }] = await ds.query(`SELECT id FROM suppliers ORDER BY name LIMIT 1`);
+    const stations: Array<{ id: string; tapping: string }> = await ds.query(`SELECT id, tapping FROM stations ORDER BY name LIMIT 2`);
+    const plan = () =>
+      request(app)
+        .post('/api/sourcing-plans')
+        .set(bearer(buyer))
+        .send({ slurryName: 'Kept answers test', supplierId, drumTypeId: drumId, startDate: '2027-03-01', drumsPerMonth: 4, stationIds: stations.map((s) => s.id) });
+    // The fit service's computation, counted: a kept answer does not reach it.
+    const computed = jest.spyOn(FitCheckService.prototype as unknown as { run: () => Promise<unknown> }, 'run');
+    onCleanup(async () => computed.mockRestore());
+    const first = await plan();
+    expect(first.status).toBe(201);
+    const firstRuns = computed.mock.calls.length;
+    expect(firstRuns).toBeGreaterThanOrEqual(stations.length);
+    const second = await plan();
+    expect(second.status).toBe(201);
+    expect(computed.mock.calls.length).toBe(firstRuns);
+    expect(second.body.impact.stations).toEqual(first.body.impact.stations);
+    // Another process changes a station: the next plan computes that station's answer again.
+    const other = stations[0].tapping === 'two-opening' ? 'one-opening' : 'two-opening';
+    await ds.query(`UPDATE stations SET tapping = $2, version = version + 1 WHERE id = $1`, [stations[0].id, other]);
+    onCleanup(() => ds.query(`UPDATE stations SET tapping = $2, version = version + 1 WHERE id = $1`, [stations[0].id, stations[0].tapping]));
+    await until(
+      'the stations notice',
+      async () => {
+        const before = computed.mock.calls.length;
+        expect((await plan()).status).toBe(201);
+        return computed.mock.calls.length - before;
+      },
+      (ran) => ran > 0,
+    );
   });
 
   it('does not keep bad questions', async () => {
