@@ -4,6 +4,7 @@
 // 20 L/min turns over once every 10 min. How many turnovers or minutes a slurry needs comes from its supplier
 // [practice]; the heel and run time come from shared/heel.ts (V = pi/4 * D^2 * h).
 
+import { requireNonNegative, requirePositive as positive } from './flow';
 import { drumRun, type DrumRun } from './heel';
 
 /** A slurry's recirculation requirement before use; either or both may be set, the longer wins. */
@@ -12,15 +13,11 @@ export interface RecirculationNeed {
   minMinutes?: number | null;
 }
 
-function positive(name: string, value: number): void {
-  if (!Number.isFinite(value) || value <= 0) throw new RangeError(`${name} must be a positive number, got ${String(value)}`);
-}
-
 /** Turnovers after recirculating a volume (L) at a flow (L/min) for a number of minutes. */
 export function turnovers(flowLpm: number, minutes: number, volumeL: number): number {
   positive('flowLpm', flowLpm);
   positive('volumeL', volumeL);
-  if (!Number.isFinite(minutes) || minutes < 0) throw new RangeError(`minutes must be zero or more, got ${String(minutes)}`);
+  requireNonNegative('minutes', minutes);
   return (flowLpm * minutes) / volumeL;
 }
 

@@ -13,13 +13,15 @@ export const DEFAULT_TURBULENT_FROM = 4000;
 
 export type FlowRegime = 'laminar' | 'transitional' | 'turbulent';
 
-function requirePositive(name: string, value: number): void {
+/** Throws a RangeError naming the value unless it is a finite number above zero. */
+export function requirePositive(name: string, value: number): void {
   if (!Number.isFinite(value) || value <= 0) {
     throw new RangeError(`${name} must be a positive number, got ${String(value)}`);
   }
 }
 
-function requireNonNegative(name: string, value: number): void {
+/** Throws a RangeError naming the value unless it is a finite number of zero or more. */
+export function requireNonNegative(name: string, value: number): void {
   if (!Number.isFinite(value) || value < 0) {
     throw new RangeError(`${name} must be zero or more, got ${String(value)}`);
   }

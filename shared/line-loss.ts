@@ -7,7 +7,7 @@
 // - turbulent: Colebrook, 1/sqrt(f) = -2 log10( (eps/D)/3.7 + 2.51/(Re sqrt(f)) ), solved by iteration
 // - Metzner-Reed: Re_MR = rho v^(2-n) D^n / (K 8^(n-1) ((3n+1)/(4n))^n); wall shear rate ((3n+1)/(4n)) 8v/D
 
-import { DEFAULT_LAMINAR_LIMIT, DEFAULT_TURBULENT_FROM, flowRegime, meanVelocity, type FlowRegime } from './flow';
+import { DEFAULT_LAMINAR_LIMIT, DEFAULT_TURBULENT_FROM, flowRegime, meanVelocity, requireNonNegative as nonNegative, requirePositive as positive, type FlowRegime } from './flow';
 
 /** How a slurry's viscosity is described: one viscosity, or the power-law consistency and index. */
 export type Rheology = { model: 'newtonian'; viscosityPaS: number } | { model: 'power-law'; consistencyPaSn: number; flowIndex: number };
@@ -33,14 +33,6 @@ export interface LineLoss {
   pressureDropPa: number;
   /** Wall shear rate, 1/s: 8v/D for a Newtonian slurry, ((3n+1)/(4n)) 8v/D for a power-law one (nominal when turbulent). */
   wallShearRatePerS: number;
-}
-
-function positive(name: string, value: number): void {
-  if (!Number.isFinite(value) || value <= 0) throw new RangeError(`${name} must be a positive number, got ${String(value)}`);
-}
-
-function nonNegative(name: string, value: number): void {
-  if (!Number.isFinite(value) || value < 0) throw new RangeError(`${name} must be zero or more, got ${String(value)}`);
 }
 
 /** Colebrook's Darcy friction factor for turbulent flow, by fixed-point iteration on x = 1/sqrt(f). */
