@@ -15,6 +15,7 @@ import { LotAcceptance1764655200000 } from './1764655200000-lot-acceptance';
 import { UserTheme1764662400000 } from './1764662400000-user-theme';
 import { OfflineDockChecks1764666000000 } from './1764666000000-offline-dock-checks';
 import { StationChangeNotify1764846000000 } from './1764846000000-station-change-notify';
+import { SlurryProperties1764932400000 } from './1764932400000-slurry-properties';
 
 export const MIGRATIONS = [
   CreateUsers1764612000000,
@@ -32,4 +33,5 @@ export const MIGRATIONS = [
   OfflineDockChecks1764666000000,
   Iso7ThreadFamilies1764759600000,
   StationChangeNotify1764846000000,
+  SlurryProperties1764932400000,
 ];

@@ -120,3 +120,28 @@ export function formatLength(mm: number, unit: LengthUnit, digits?: number): str
   const value = fromMm(mm, unit);
   return `${value.toFixed(digits ?? DEFAULT_DIGITS[unit])} ${unit}`;
 }
+
+/** 1 ft = 0.3048 m exactly (NIST SP 811, Appendix B). */
+export const M_PER_FT = 0.3048;
+/** 1 lb/ft³ = 16.018 46 kg/m³ (NIST SP 811, Appendix B: 1.601 846 E+01). */
+export const KG_M3_PER_LB_FT3 = KG_PER_LB / M_PER_FT ** 3;
+
+/** The quantities beyond length that a person reads in their preference: SI for mm, US customary for inches. */
+export type Quantity = 'pressureKpa' | 'velocityMs' | 'densityKgM3' | 'volumeL' | 'flowLpm';
+
+const QUANTITY_UNITS: Record<Quantity, { si: string; us: string; toUs: (v: number) => number; siDigits: number; usDigits: number }> = {
+  pressureKpa: { si: 'kPa', us: 'psi', toUs: kpaToPsi, siDigits: 1, usDigits: 2 },
+  velocityMs: { si: 'm/s', us: 'ft/s', toUs: (v) => v / M_PER_FT, siDigits: 2, usDigits: 2 },
+  densityKgM3: { si: 'kg/m³', us: 'lb/ft³', toUs: (v) => v / KG_M3_PER_LB_FT3, siDigits: 0, usDigits: 1 },
+  volumeL: { si: 'L', us: 'US gal', toUs: (v) => fromLitres(v, 'gal'), siDigits: 1, usDigits: 2 },
+  flowLpm: { si: 'L/min', us: 'US gal/min', toUs: (v) => convertFlow(v, 'L/min', 'gal/min'), siDigits: 1, usDigits: 2 },
+};
+
+/** A quantity held in its SI unit, shown in the person's preference: formatQuantity(200, 'pressureKpa', 'in') -> "29.01 psi". */
+export function formatQuantity(si: number, quantity: Quantity, unit: LengthUnit): string {
+  const q = QUANTITY_UNITS[quantity];
+  return unit === 'in' ? `${q.toUs(si).toFixed(q.usDigits)} ${q.us}` : `${si.toFixed(q.siDigits)} ${q.si}`;
+}
+
+/** The unit a quantity is read in for a person's preference (for column headers and form labels). */
+export const quantityUnit = (quantity: Quantity, unit: LengthUnit): string => (unit === 'in' ? QUANTITY_UNITS[quantity].us : QUANTITY_UNITS[quantity].si);

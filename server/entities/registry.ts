@@ -3,6 +3,8 @@ import { LOT_NUMBER_MAX_LENGTH } from '../../shared/lot-number';
 import { Base } from './base';
 import { Bool, Float, NullableFloat, NullableText, NullableUuid, Text, Uuid } from './columns';
 import { User } from './user';
+import type { Oxidiser } from '../../shared/wetted-materials';
+import type { ViscosityModel } from '../../shared/records/slurry';
 
 export const REGIONS = ['NA', 'EU', 'JP', 'TW', 'KR', 'CN', 'SG', 'other'] as const;
 export type Region = (typeof REGIONS)[number];
@@ -54,6 +56,8 @@ export class DrumType extends Base {
   @Float('outside_height_mm') outsideHeightMm: number;
   @Float('inside_depth_mm') insideDepthMm: number;
   @Float('outside_diameter_mm') outsideDiameterMm: number;
+  /** For the heel and run time (shared/heel.ts); null when not registered. */
+  @NullableFloat('inside_diameter_mm') insideDiameterMm: number | null;
   @OneToMany(() => DrumOpening, (o) => o.drumType, { cascade: true }) openings?: DrumOpening[];
 }
 
@@ -145,6 +149,22 @@ export class Slurry extends Base {
   @Column({ name: 'storage_min_c', type: 'real', nullable: true }) storageMinC: number | null;
   @Column({ name: 'storage_max_c', type: 'real', nullable: true }) storageMaxC: number | null;
   @Column({ name: 'certificate_required', type: 'boolean', default: false }) certificateRequired: boolean;
+  // Its own properties (shared/records/slurry.ts SlurryProperties); null when not registered.
+  @NullableFloat('density_kg_m3') densityKgM3: number | null;
+  @NullableText('viscosity_model', 12) viscosityModel: ViscosityModel | null;
+  @NullableFloat('viscosity_mpa_s') viscosityMPaS: number | null;
+  @NullableFloat('consistency_pa_sn') consistencyPaSn: number | null;
+  @NullableFloat('flow_index') flowIndex: number | null;
+  @NullableFloat('particle_size_nm') particleSizeNm: number | null;
+  @NullableFloat('min_velocity_m_s') minVelocityMs: number | null;
+  @NullableFloat('max_velocity_m_s') maxVelocityMs: number | null;
+  @NullableFloat('max_wall_shear_per_s') maxWallShearPerS: number | null;
+  @NullableFloat('min_turnovers') minTurnovers: number | null;
+  @NullableFloat('min_recirc_minutes') minRecircMinutes: number | null;
+  @NullableFloat('ph_min') phMin: number | null;
+  @NullableFloat('ph_max') phMax: number | null;
+  @NullableText('oxidiser', 8) oxidiser: Oxidiser | null;
+  @NullableFloat('solvent_wt_pct') solventWtPct: number | null;
 }
 
 @Entity({ name: 'stations' })
@@ -156,6 +176,10 @@ export class Station extends Base {
   @NullableUuid('connector_id') connectorId: string | null;
   @ManyToOne(() => Connector) @JoinColumn({ name: 'connector_id' }) connector?: Connector | null;
   @Float('flow_lpm') flowLpm: number;
+  /** The transfer line from the station to the loop, for its pressure drop (shared/line-loss.ts); null when not registered. */
+  @NullableFloat('line_length_m') lineLengthM: number | null;
+  @NullableFloat('line_bore_mm') lineBoreMm: number | null;
+  @NullableFloat('line_roughness_um') lineRoughnessUm: number | null;
 }
 
 @Entity({ name: 'tube_sets' })

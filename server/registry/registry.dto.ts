@@ -7,6 +7,7 @@ import {
   IsIn,
   IsInt,
   IsNumber,
+  IsPositive,
   IsOptional,
   IsString,
   IsUUID,
@@ -25,7 +26,7 @@ import { DRUM_HEADS, DRUM_MATERIALS, DRUM_TYPE_LIMITS as DRUM, OPENING_POSITIONS
 import { CODE_CHARS, FIELD_SAYS as SAYS } from '../../shared/records/field';
 import { PAIRING_LIMITS as PAIRING } from '../../shared/records/pairing';
 import { SETTINGS_LIMITS as SETTINGS } from '../../shared/records/settings';
-import { SLURRY_LIMITS as SLURRY, SLURRY_SAYS } from '../../shared/records/slurry';
+import { OXIDISERS, propertyBoundSays, SLURRY_LIMITS as SLURRY, SLURRY_PROPERTY_LIMITS, SLURRY_SAYS, VISCOSITY_MODELS, type SlurryPropertyField } from '../../shared/records/slurry';
 import { AGITATIONS, STATION_LIMITS as STATION, TAPPINGS } from '../../shared/records/station';
 import { SUPPLIER_LIMITS as SUPPLIER } from '../../shared/records/supplier';
 import { TUBE_SET_LIMITS as TUBE_SET } from '../../shared/records/tube-set';
@@ -116,6 +117,7 @@ export class DrumTypeDto {
   @Mm(DRUM.outsideHeightMaxMm) outsideHeightMm: number;
   @Mm(DRUM.insideDepthMaxMm) insideDepthMm: number;
   @Mm(DRUM.outsideDiameterMaxMm) outsideDiameterMm: number;
+  @IsOptional() @ValidateIf((_o, v) => v !== null) @Mm(DRUM.outsideDiameterMaxMm) insideDiameterMm?: number | null;
   @ValidateNested({ each: true })
   @Type(() => OpeningDto)
   @ArrayMinSize(DRUM.openingsMin, { message: 'must list at least one opening' })
@@ -171,6 +173,23 @@ const StorageC = (target: object, key: string) => {
   IsOptional()(target, key);
 };
 
+/** An optional slurry property (null clears it), inside its bounds in shared/records/slurry.ts. */
+const Property = (field: SlurryPropertyField) => (target: object, key: string) => {
+  const l = SLURRY_PROPERTY_LIMITS[field];
+  Max(l.max, { message: propertyBoundSays(field, 'max') })(target, key);
+  // Every bound that refuses its own value is 0 (SLURRY_PROPERTY_LIMITS).
+  if (l.above) IsPositive({ message: propertyBoundSays(field, 'min') })(target, key);
+  else Min(l.min, { message: propertyBoundSays(field, 'min') })(target, key);
+  IsNumber(num, { message: NUMBER })(target, key);
+  ValidateIf((_o, v) => v !== null)(target, key);
+  IsOptional()(target, key);
+};
+const OptionalOneOf = (values: readonly string[]) => (target: object, key: string) => {
+  IsIn(values, { message: SAYS.oneOf(values) })(target, key);
+  ValidateIf((_o, v) => v !== null)(target, key);
+  IsOptional()(target, key);
+};
+
 export class SlurryDto {
   @Name(SLURRY.nameChars) name: string;
   @Id supplierId: string;
@@ -198,7 +217,33 @@ export class SlurryDto {
   @StorageC storageMinC?: number | null;
   @StorageC storageMaxC?: number | null;
   @IsOptional() @IsBoolean({ message: 'must be true or false' }) certificateRequired?: boolean;
+  // Its own properties: optional, null clears a value.
+  @Property('densityKgM3') densityKgM3?: number | null;
+  @OptionalOneOf(VISCOSITY_MODELS) viscosityModel?: string | null;
+  @Property('viscosityMPaS') viscosityMPaS?: number | null;
+  @Property('consistencyPaSn') consistencyPaSn?: number | null;
+  @Property('flowIndex') flowIndex?: number | null;
+  @Property('particleSizeNm') particleSizeNm?: number | null;
+  @Property('minVelocityMs') minVelocityMs?: number | null;
+  @Property('maxVelocityMs') maxVelocityMs?: number | null;
+  @Property('maxWallShearPerS') maxWallShearPerS?: number | null;
+  @Property('minTurnovers') minTurnovers?: number | null;
+  @Property('minRecircMinutes') minRecircMinutes?: number | null;
+  @Property('phMin') phMin?: number | null;
+  @Property('phMax') phMax?: number | null;
+  @OptionalOneOf(OXIDISERS) oxidiser?: string | null;
+  @Property('solventWtPct') solventWtPct?: number | null;
 }
+
+/** An optional length of the station's transfer line (null clears it). */
+const OptionalLine = (max: number, unit: string, positive: boolean) => (target: object, key: string) => {
+  Max(max, { message: SAYS.atMost(max, unit) })(target, key);
+  if (positive) IsPositive({ message: SAYS.moreThanZero(unit) })(target, key);
+  else Min(0, { message: `must be 0 ${unit} or more` })(target, key);
+  IsNumber(num, { message: NUMBER })(target, key);
+  ValidateIf((_o, v) => v !== null)(target, key);
+  IsOptional()(target, key);
+};
 
 export class StationDto {
   @Name(STATION.nameChars) name: string;
@@ -210,6 +255,9 @@ export class StationDto {
   @Min(STATION.flowMinLpm, { message: SAYS.moreThanZero('L/min') })
   @Max(STATION.flowMaxLpm, { message: SAYS.atMost(STATION.flowMaxLpm, 'L/min') })
   flowLpm: number;
+  @OptionalLine(STATION.lineLengthMaxM, 'm', true) lineLengthM?: number | null;
+  @OptionalLine(STATION.lineBoreMaxMm, 'mm', true) lineBoreMm?: number | null;
+  @OptionalLine(STATION.lineRoughnessMaxUm, 'µm', false) lineRoughnessUm?: number | null;
 }
 
 export class TubeSetDto {

@@ -46,6 +46,7 @@ export const DRUM_TYPE_FIELDS = fieldsOf<DrumTypeRecord>()([
   'outsideHeightMm',
   'insideDepthMm',
   'outsideDiameterMm',
+  'insideDiameterMm',
   'openings',
 ]);
 export const RECEIVING_CHECK_FIELDS = fieldsOf<ReceivingCheckRecord>()([

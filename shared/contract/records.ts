@@ -1,6 +1,7 @@
 // The JSON shapes the registry API answers with, shared by the server's serialisers and the client.
 import type { ThreadSpecRow } from '../threads/thread-table';
 import type { RuleOutcome, Verdict } from './verdicts';
+import type { SlurryProperties } from '../records/slurry';
 
 export type Region = 'NA' | 'EU' | 'JP' | 'TW' | 'KR' | 'CN' | 'SG' | 'other';
 export const REGION_LABELS: Record<Region, string> = {
@@ -84,6 +85,8 @@ export interface DrumTypeRecord extends Stamped {
   outsideHeightMm: number;
   insideDepthMm: number;
   outsideDiameterMm: number;
+  /** For the heel and run time; null when not registered. */
+  insideDiameterMm: number | null;
   openings: OpeningRecord[];
   /** Detail only. */
   pairings?: Array<{ id: string; status: PairingStatus; dipTubeId: string; dipTubePartNumber?: string; threadCode?: string; connectorId: string; connectorPartNumber?: string }>;
@@ -148,7 +151,7 @@ export interface PairingRecord extends Stamped {
   reviews?: PairingReviewRecord[];
 }
 
-export interface SlurryRecord extends Stamped {
+export interface SlurryRecord extends Stamped, SlurryProperties {
   name: string;
   supplierId: string;
   supplierName: string | null;
@@ -173,6 +176,10 @@ export interface StationRecord extends Stamped {
   connectorId: string | null;
   connectorPartNumber: string | null;
   flowLpm: number;
+  /** The transfer line to the loop (pressure drop); null when not registered. */
+  lineLengthM: number | null;
+  lineBoreMm: number | null;
+  lineRoughnessUm: number | null;
   tubeSets?: Array<{ id: string; label: string; state: TubeSetState; dipTubePartNumber: string | null; lastRinsedAt: string | null; lastUsedAt: string | null }>;
 }
 

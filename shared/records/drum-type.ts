@@ -34,6 +34,7 @@ export const DRUM_TYPE_LABELS: Record<string, string> = {
   outsideHeightMm: 'Outside height',
   insideDepthMm: 'Inside depth',
   outsideDiameterMm: 'Outside diameter',
+  insideDiameterMm: 'Inside diameter',
   openings: 'Openings',
 };
 
@@ -41,13 +42,15 @@ export const OPENING_LABELS: Record<string, string> = { label: 'label', threadCo
 
 export const DRUM_TYPE_SAYS = {
   insideDepthMm: 'must be less than the outside height',
+  insideDiameterMm: 'must be less than the outside diameter',
   openingLabel: 'must be different from the other openings',
 } as const;
 
 /** The rules across a drum type's fields (each field's own limits are checked first). Null when they hold or a value is missing. */
-export function drumTypeProblem(v: { insideDepthMm?: number | null; outsideHeightMm?: number | null }): FieldProblem | null {
-  if (v.insideDepthMm == null || v.outsideHeightMm == null) return null;
-  if (Number(v.insideDepthMm) >= Number(v.outsideHeightMm)) return { field: 'insideDepthMm', says: DRUM_TYPE_SAYS.insideDepthMm };
+export function drumTypeProblem(v: { insideDepthMm?: number | null; outsideHeightMm?: number | null; insideDiameterMm?: number | null; outsideDiameterMm?: number | null }): FieldProblem | null {
+  if (v.insideDepthMm != null && v.outsideHeightMm != null && Number(v.insideDepthMm) >= Number(v.outsideHeightMm)) return { field: 'insideDepthMm', says: DRUM_TYPE_SAYS.insideDepthMm };
+  if (v.insideDiameterMm != null && v.outsideDiameterMm != null && Number(v.insideDiameterMm) >= Number(v.outsideDiameterMm))
+    return { field: 'insideDiameterMm', says: DRUM_TYPE_SAYS.insideDiameterMm };
   return null;
 }
 

@@ -199,6 +199,13 @@ describe('registry writes', () => {
     const cases: Array<['post' | 'patch', string, object, string, string]> = [
       ['post', '/api/slurries', { ...slurry, shelfLifeDays: 30, minRemainingDays: 31 }, 'minRemainingDays', 'must be at most the shelf life'],
       ['post', '/api/slurries', { ...slurry, storageMinC: 5, storageMaxC: 5 }, 'storageMaxC', 'must be above the lowest storage temperature'],
+      ['post', '/api/slurries', { ...slurry, viscosityModel: 'newtonian' }, 'viscosityMPaS', 'is required for a Newtonian viscosity'],
+      ['post', '/api/slurries', { ...slurry, viscosityModel: 'power-law', consistencyPaSn: 0.05 }, 'flowIndex', 'is required for a power-law viscosity'],
+      ['post', '/api/slurries', { ...slurry, minVelocityMs: 1.5, maxVelocityMs: 1.5 }, 'maxVelocityMs', 'must be above the lowest line velocity'],
+      ['post', '/api/slurries', { ...slurry, phMin: 9, phMax: 4 }, 'phMax', 'must be at least the lowest pH'],
+      ['post', '/api/slurries', { ...slurry, densityKgM3: 12000 }, 'densityKgM3', 'must be at most 5000 kg/m³'],
+      ['post', '/api/slurries', { ...slurry, flowIndex: 0 }, 'flowIndex', 'must be more than 0'],
+      ['post', '/api/slurries', { ...slurry, oxidiser: 'bleach' }, 'oxidiser', 'must be one of none, mild, strong'],
       ['patch', `/api/connectors/${open.id}`, { version: open.version, returnPath: 'none' }, 'returnBoreMm', 'must be empty when the head has no return path'],
       ['patch', `/api/connectors/${none.id}`, { version: none.version, returnPath: 'open' }, 'returnBoreMm', 'is required when the head has a return path'],
       ['patch', `/api/pairings/${pairing.id}`, { version: pairing.version, connectorId: open.id }, 'connectorId', 'cannot change; retire this pairing and create a new one'],
@@ -215,6 +222,49 @@ describe('registry writes', () => {
     expect((await request(app).get(`/api/connectors/${open.id}`).set(bearer(clerk))).body).toMatchObject({ version: open.version, returnPath: open.returnPath });
     expect((await request(app).get(`/api/tube-sets/${set.id}`).set(bearer(clerk))).body).toMatchObject({ version: set.version, state: set.state });
     expect((await request(app).get('/api/settings').set(bearer(clerk))).body.version).toBe(settings.version);
+  });
+
+  it("stores a slurry's own properties, a drum's inside diameter and a station's transfer line, and clears them with null", async () => {
+    const list = async (resource: string) => (await request(app).get(`/api/${resource}?pageSize=100`).set(bearer(clerk))).body.items;
+    const drum = (await list('drum-types'))[0];
+    const props = {
+      densityKgM3: 1180,
+      viscosityModel: 'power-law',
+      consistencyPaSn: 0.04,
+      flowIndex: 0.7,
+      particleSizeNm: 140,
+      minVelocityMs: 0.6,
+      maxVelocityMs: 2.4,
+      maxWallShearPerS: 8000,
+      minTurnovers: 3,
+      minRecircMinutes: 20,
+      phMin: 9.5,
+      phMax: 11,
+      oxidiser: 'none',
+      solventWtPct: 0,
+    };
+    const body = { name: 'Property slurry', supplierId, region: 'NA', drumTypeId: drum.id, foams: false, shearSensitive: true, solidsWtPct: 12, ...props };
+    const made = await request(app).post('/api/slurries').set(bearer(engineer)).send(body);
+    expect(made.status).toBe(201);
+    expect((await request(app).get(`/api/slurries/${made.body.id}`).set(bearer(clerk))).body).toMatchObject({ ...props, viscosityMPaS: null });
+    const cleared = await request(app)
+      .patch(`/api/slurries/${made.body.id}`)
+      .set(bearer(engineer))
+      .send({ version: made.body.version, viscosityModel: null, consistencyPaSn: null, flowIndex: null, phMin: null });
+    expect(cleared.status).toBe(200);
+    expect(cleared.body).toMatchObject({ viscosityModel: null, consistencyPaSn: null, flowIndex: null, phMin: null, phMax: 11, densityKgM3: 1180 });
+
+    const inside = drum.outsideDiameterMm - 10;
+    const widened = await request(app).patch(`/api/drum-types/${drum.id}`).set(bearer(engineer)).send({ version: drum.version, insideDiameterMm: inside });
+    expect({ status: widened.status, insideDiameterMm: widened.body.insideDiameterMm }).toEqual({ status: 200, insideDiameterMm: inside });
+    const tooWide = await request(app).patch(`/api/drum-types/${drum.id}`).set(bearer(engineer)).send({ version: widened.body.version, insideDiameterMm: drum.outsideDiameterMm });
+    expect({ status: tooWide.status, details: tooWide.body.error?.details }).toEqual({ status: 400, details: [{ field: 'insideDiameterMm', messages: ['must be less than the outside diameter'] }] });
+
+    const station = (await list('stations'))[0];
+    const line = await request(app).patch(`/api/stations/${station.id}`).set(bearer(engineer)).send({ version: station.version, lineLengthM: 45, lineBoreMm: 22.1, lineRoughnessUm: 1.5 });
+    expect(line.body).toMatchObject({ lineLengthM: 45, lineBoreMm: 22.1, lineRoughnessUm: 1.5 });
+    const noLine = await request(app).patch(`/api/stations/${station.id}`).set(bearer(engineer)).send({ version: line.body.version, lineLengthM: 0 });
+    expect({ status: noLine.status, details: noLine.body.error?.details }).toEqual({ status: 400, details: [{ field: 'lineLengthM', messages: ['must be more than 0 m'] }] });
   });
 
   it('creates a drum type with its openings in one transaction and replaces them on update', async () => {

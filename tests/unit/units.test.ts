@@ -4,6 +4,8 @@ import {
   convertFlow,
   flowToM3s,
   formatLength,
+  formatQuantity,
+  quantityUnit,
   fromLitres,
   fromM3s,
   fromMm,
@@ -94,5 +96,18 @@ describe('formatLength', () => {
     expect(formatLength(60.325, 'in')).toBe('2.375 in');
     expect(formatLength(60.325, 'mm')).toBe('60.3 mm');
     expect(formatLength(19.05, 'in', 2)).toBe('0.75 in');
+  });
+});
+
+describe('formatQuantity against mathjs', () => {
+  it('shows SI for a person in mm and US customary for one in inches, each figure checked by mathjs', () => {
+    const us = (text: string) => Number(text.split(' ')[0]);
+    expect(formatQuantity(200, 'pressureKpa', 'mm')).toBe('200.0 kPa');
+    expect(us(formatQuantity(200, 'pressureKpa', 'in'))).toBeCloseTo(unit(200, 'kPa').toNumber('psi'), 2);
+    expect(us(formatQuantity(1.5, 'velocityMs', 'in'))).toBeCloseTo(unit(1.5, 'm/s').toNumber('ft/s'), 2);
+    expect(us(formatQuantity(1180, 'densityKgM3', 'in'))).toBeCloseTo(unit(1180, 'kg/m^3').toNumber('lbm/ft^3'), 1);
+    expect(us(formatQuantity(208.2, 'volumeL', 'in'))).toBeCloseTo(unit(208.2, 'L').toNumber('gallon'), 2);
+    expect(us(formatQuantity(20, 'flowLpm', 'in'))).toBeCloseTo(unit(20, 'L/minute').toNumber('gallon/minute'), 2);
+    expect([quantityUnit('densityKgM3', 'mm'), quantityUnit('densityKgM3', 'in'), quantityUnit('pressureKpa', 'in')]).toEqual(['kg/m³', 'lb/ft³', 'psi']);
   });
 });

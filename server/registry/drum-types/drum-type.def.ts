@@ -12,7 +12,7 @@ import { copyOf, type Sent } from '../../common/json';
 
 export const drumTypeJson = (d: DrumType): Sent<DrumTypeRecord> => ({
   ...stamps(d),
-  ...copyOf(d, ['supplierId', 'region', 'name', 'partNumber', 'nominalCapacityL', 'material', 'head', 'unPackagingCode', 'outsideHeightMm', 'insideDepthMm', 'outsideDiameterMm']),
+  ...copyOf(d, ['supplierId', 'region', 'name', 'partNumber', 'nominalCapacityL', 'material', 'head', 'unPackagingCode', 'outsideHeightMm', 'insideDepthMm', 'outsideDiameterMm', 'insideDiameterMm']),
   supplierName: d.supplier?.name ?? null,
   openings: [...(d.openings ?? [])].sort((a, b) => a.label.localeCompare(b.label)).map(openingJson),
 });
@@ -50,6 +50,7 @@ export const drumTypeDef: ResourceDef<DrumType> = {
       'outsideHeightMm',
       'insideDepthMm',
       'outsideDiameterMm',
+      'insideDiameterMm',
     ]);
     const merged = { ...(existing as DrumType | undefined), ...cols };
     const problem = drumTypeProblem(merged);

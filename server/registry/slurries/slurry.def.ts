@@ -1,4 +1,4 @@
-import { slurryProblem } from '../../../shared/records/slurry';
+import { SLURRY_PROPERTY_KEYS, slurryProblem } from '../../../shared/records/slurry';
 import { fieldError } from '../../common/errors';
 import { DrumType, Slurry, Supplier } from '../../entities';
 import { filter, region, stamps } from '../common';
@@ -25,7 +25,21 @@ export const slurryDef: ResourceDef<Slurry> = {
   },
   toJson: (s): Sent<SlurryRecord> => ({
     ...stamps(s),
-    ...copyOf(s, ['name', 'supplierId', 'region', 'drumTypeId', 'foams', 'shearSensitive', 'solidsWtPct', 'shelfLifeDays', 'minRemainingDays', 'storageMinC', 'storageMaxC', 'certificateRequired']),
+    ...copyOf(s, [
+      'name',
+      'supplierId',
+      'region',
+      'drumTypeId',
+      'foams',
+      'shearSensitive',
+      'solidsWtPct',
+      'shelfLifeDays',
+      'minRemainingDays',
+      'storageMinC',
+      'storageMaxC',
+      'certificateRequired',
+      ...SLURRY_PROPERTY_KEYS,
+    ]),
     supplierName: s.supplier?.name ?? null,
     drumTypeName: s.drumType?.name ?? null,
   }),
@@ -45,6 +59,7 @@ export const slurryDef: ResourceDef<Slurry> = {
       'storageMinC',
       'storageMaxC',
       'certificateRequired',
+      ...SLURRY_PROPERTY_KEYS,
     ]);
     const problem = slurryProblem({ ...(existing as Slurry | undefined), ...cols });
     if (problem) throw fieldError(problem.field, problem.says);

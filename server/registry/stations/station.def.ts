@@ -16,10 +16,14 @@ export const stationDef: ResourceDef<Station> = {
   search: ['st.name', 'st.bay'],
   sorts: { name: 'st.name', bay: 'st.bay', updatedAt: 'st.updatedAt' },
   defaultSort: 'name',
-  toJson: (s): Sent<StationRecord> => ({ ...stamps(s), ...copyOf(s, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm']), connectorPartNumber: s.connector?.partNumber ?? null }),
+  toJson: (s): Sent<StationRecord> => ({
+    ...stamps(s),
+    ...copyOf(s, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm', 'lineLengthM', 'lineBoreMm', 'lineRoughnessUm']),
+    connectorPartNumber: s.connector?.partNumber ?? null,
+  }),
   toColumns: async (dto, { manager }) => {
     if (dto.connectorId != null) await ensureExists(manager, Connector, dto.connectorId, 'connectorId', 'connector');
-    return pick<Station>(dto, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm']);
+    return pick<Station>(dto, ['name', 'bay', 'tapping', 'agitation', 'connectorId', 'flowLpm', 'lineLengthM', 'lineBoreMm', 'lineRoughnessUm']);
   },
   detailExtras: async (s, m): Promise<Sent<Required<Pick<StationRecord, 'tubeSets'>>>> => ({
     tubeSets: (await m.find(TubeSet, { where: { stationId: s.id }, relations: { dipTube: true }, order: { label: 'ASC' } })).map((t) => ({
