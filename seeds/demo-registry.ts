@@ -29,6 +29,7 @@
 
 import type { EntityManager } from 'typeorm';
 import type { ConnectorRecord, DrumTypeRecord, OpeningRecord, StationRecord } from '../shared/contract';
+import type { SlurryProperties } from '../shared/records/slurry';
 import { Connector, DipTube, DrumOpening, DrumType, KeyCode, Pairing, PairingReview, Slurry, Station, Supplier, ThreadSpec, TubeSet, type Region } from '../server/entities/registry';
 
 /** The scenario's "now": every date below is a fixed offset from it, so the data is deterministic. */
@@ -71,8 +72,8 @@ const KEY_CODES: Array<{ ref: KeyRef; code: string; label: string; marking: stri
 
 type DrumRef = 'naSteel' | 'euSteel' | 'jpPlastic' | 'twSmall' | 'naPlasticTwin' | 'krSteel';
 
-/** Nominal capacity in litres, then outside height, inside depth and outside diameter in mm. */
-type DrumSize = [nominalCapacityL: number, outsideHeightMm: number, insideDepthMm: number, outsideDiameterMm: number];
+/** Nominal capacity in litres, then outside height, inside depth, outside diameter and inside diameter in mm. */
+type DrumSize = [nominalCapacityL: number, outsideHeightMm: number, insideDepthMm: number, outsideDiameterMm: number, insideDiameterMm: number];
 
 interface DrumRow extends Pick<DrumTypeRecord, 'name' | 'partNumber'> {
   ref: DrumRef;
@@ -84,17 +85,17 @@ interface DrumRow extends Pick<DrumTypeRecord, 'name' | 'partNumber'> {
 // Every demo drum is a tight head, made by its supplier in the supplier's region.
 const DRUMS: DrumRow[] = [
   // 55 US gal steel drum: inside about 33.5 in (851 mm), 2 in + 3/4 in straight pipe thread bungs.
-  { ref: 'naSteel', supplier: 'cobaltMesa', name: '55 gal lined steel tight head, 2 in + 3/4 in NPS', partNumber: 'CMA-D208-SL', material: 'steel', size: [208, 880, 851, 585] },
+  { ref: 'naSteel', supplier: 'cobaltMesa', name: '55 gal lined steel tight head, 2 in + 3/4 in NPS', partNumber: 'CMA-D208-SL', material: 'steel', size: [208, 880, 851, 585, 571] },
   // European steel drum, G 2 and G 3/4 closures to ISO 228-1.
-  { ref: 'euSteel', supplier: 'auenfeld', name: '216.5 L lined steel tight head, G 2 + G 3/4', partNumber: 'AFW-216-G2G34', material: 'steel', size: [216.5, 874, 845, 584] },
+  { ref: 'euSteel', supplier: 'auenfeld', name: '216.5 L lined steel tight head, G 2 + G 3/4', partNumber: 'AFW-216-G2G34', material: 'steel', size: [216.5, 874, 845, 584, 566] },
   // HDPE drum with buttress bungs; the head goes in the 56x4 bung, the stirrer in the 70x6 bung.
-  { ref: 'jpPlastic', supplier: 'kumoyama', name: '200 L HDPE tight head, 56x4 + 70x6 buttress', partNumber: 'KFC-P200-B5670', material: 'plastic', size: [200, 935, 880, 581] },
+  { ref: 'jpPlastic', supplier: 'kumoyama', name: '200 L HDPE tight head, 56x4 + 70x6 buttress', partNumber: 'KFC-P200-B5670', material: 'plastic', size: [200, 935, 880, 581, 555] },
   // Small round HDPE container with a single centre bung.
-  { ref: 'twSmall', supplier: 'hsinpu', name: '20 L HDPE tight head, single 56x4 buttress', partNumber: 'HPM-C20-B56', material: 'plastic', size: [20, 400, 380, 290] },
+  { ref: 'twSmall', supplier: 'hsinpu', name: '20 L HDPE tight head, single 56x4 buttress', partNumber: 'HPM-C20-B56', material: 'plastic', size: [20, 400, 380, 290, 272] },
   // 55 gal HDPE drum with two 2 in bungs: the only NPS-2 drum that two-opening tapping can use.
-  { ref: 'naPlasticTwin', supplier: 'cobaltMesa', name: '55 gal HDPE tight head, twin 2 in NPS', partNumber: 'CMA-D208-PT', material: 'plastic', size: [208, 915, 870, 584] },
+  { ref: 'naPlasticTwin', supplier: 'cobaltMesa', name: '55 gal HDPE tight head, twin 2 in NPS', partNumber: 'CMA-D208-PT', material: 'plastic', size: [208, 915, 870, 584, 560] },
   // Same G 2 + G 3/4 bungs as the European drum but shallower, and no key collars.
-  { ref: 'krSteel', supplier: 'seoripul', name: '200 L steel tight head, G 2 + G 3/4', partNumber: 'SSC-D200-G2', material: 'steel', size: [200, 850, 818, 571] },
+  { ref: 'krSteel', supplier: 'seoripul', name: '200 L steel tight head, G 2 + G 3/4', partNumber: 'SSC-D200-G2', material: 'steel', size: [200, 850, 818, 571, 556] },
 ];
 
 /** UN packaging code of a tight-head drum by material: drum (1), steel (A) or plastic (H), non-removable head (1). */
@@ -307,7 +308,12 @@ interface SlurryRow {
   storageMinC: number;
   storageMaxC: number;
   certificateRequired: boolean;
+  /** Its own properties, invented but in the usual range of CMP slurries [practice] (shared/records/slurry.ts). */
+  props: SlurryProperties;
 }
+
+const newtonian = (viscosityMPaS: number) => ({ viscosityModel: 'newtonian' as const, viscosityMPaS, consistencyPaSn: null, flowIndex: null });
+const powerLaw = (consistencyPaSn: number, flowIndex: number) => ({ viscosityModel: 'power-law' as const, viscosityMPaS: null, consistencyPaSn, flowIndex });
 
 const SLURRIES: SlurryRow[] = [
   {
@@ -323,6 +329,20 @@ const SLURRIES: SlurryRow[] = [
     storageMinC: 5,
     storageMaxC: 35,
     certificateRequired: false,
+    props: {
+      densityKgM3: 1080,
+      ...newtonian(3),
+      particleSizeNm: 140,
+      minVelocityMs: 0.3,
+      maxVelocityMs: 2.5,
+      maxWallShearPerS: 20000,
+      minTurnovers: 3,
+      minRecircMinutes: 20,
+      phMin: 10,
+      phMax: 11.5,
+      oxidiser: 'none',
+      solventWtPct: 0,
+    },
   },
   {
     ref: 'tungsten',
@@ -337,6 +357,20 @@ const SLURRIES: SlurryRow[] = [
     storageMinC: 5,
     storageMaxC: 25,
     certificateRequired: true,
+    props: {
+      densityKgM3: 1030,
+      ...newtonian(2.2),
+      particleSizeNm: 180,
+      minVelocityMs: 0.3,
+      maxVelocityMs: 3,
+      maxWallShearPerS: 30000,
+      minTurnovers: 2,
+      minRecircMinutes: 15,
+      phMin: 2,
+      phMax: 3.5,
+      oxidiser: 'strong',
+      solventWtPct: 0,
+    },
   },
   {
     ref: 'ceria',
@@ -351,6 +385,20 @@ const SLURRIES: SlurryRow[] = [
     storageMinC: 5,
     storageMaxC: 30,
     certificateRequired: false,
+    props: {
+      densityKgM3: 1010,
+      ...powerLaw(0.012, 0.8),
+      particleSizeNm: 120,
+      minVelocityMs: 0.2,
+      maxVelocityMs: 1.2,
+      maxWallShearPerS: 4000,
+      minTurnovers: 4,
+      minRecircMinutes: 30,
+      phMin: 4,
+      phMax: 6,
+      oxidiser: 'none',
+      solventWtPct: 0,
+    },
   },
   {
     ref: 'cuBarrier',
@@ -365,6 +413,20 @@ const SLURRIES: SlurryRow[] = [
     storageMinC: 2,
     storageMaxC: 25,
     certificateRequired: false,
+    props: {
+      densityKgM3: 1040,
+      ...newtonian(1.8),
+      particleSizeNm: 60,
+      minVelocityMs: 0.3,
+      maxVelocityMs: 2,
+      maxWallShearPerS: 15000,
+      minTurnovers: 2,
+      minRecircMinutes: 10,
+      phMin: 9.5,
+      phMax: 10.5,
+      oxidiser: 'mild',
+      solventWtPct: 0,
+    },
   },
   {
     ref: 'sti',
@@ -379,6 +441,20 @@ const SLURRIES: SlurryRow[] = [
     storageMinC: 5,
     storageMaxC: 30,
     certificateRequired: true,
+    props: {
+      densityKgM3: 1020,
+      ...powerLaw(0.02, 0.75),
+      particleSizeNm: 150,
+      minVelocityMs: 0.25,
+      maxVelocityMs: 1.5,
+      maxWallShearPerS: 6000,
+      minTurnovers: 3,
+      minRecircMinutes: 20,
+      phMin: 3.5,
+      phMax: 5,
+      oxidiser: 'none',
+      solventWtPct: 0,
+    },
   },
 ];
 
@@ -388,17 +464,61 @@ const SLURRIES: SlurryRow[] = [
 
 type Rinser = 'clerk' | 'engineer';
 
-interface StationRow extends Pick<StationRecord, 'name' | 'bay' | 'tapping' | 'agitation' | 'flowLpm'> {
+interface StationRow extends Pick<StationRecord, 'name' | 'bay' | 'tapping' | 'agitation' | 'flowLpm' | 'lineLengthM' | 'lineBoreMm' | 'lineRoughnessUm'> {
   head: HeadRef;
   /** The drum the station normally runs; its tube sets fit it. */
   usualDrum: DrumRef;
 }
 
 const STATIONS: StationRow[] = [
-  { name: 'Oxide CMP feed A', bay: 'Subfab bay 2 west', tapping: 'one-opening', agitation: 'pump', head: 'combinedOxide', flowLpm: 20, usualDrum: 'naSteel' },
-  { name: 'Tungsten CMP feed B', bay: 'Subfab bay 3 east', tapping: 'two-opening', agitation: 'pump', head: 'feedOnlyMetal', flowLpm: 18, usualDrum: 'naPlasticTwin' },
-  { name: 'Ceria STI feed C', bay: 'Subfab bay 3 west', tapping: 'one-opening', agitation: 'mechanical', head: 'split', flowLpm: 12, usualDrum: 'jpPlastic' },
-  { name: 'Cu barrier feed D', bay: 'Subfab bay 4', tapping: 'one-opening', agitation: 'pump', head: 'reducedReturn', flowLpm: 8, usualDrum: 'twSmall' },
+  {
+    name: 'Oxide CMP feed A',
+    bay: 'Subfab bay 2 west',
+    tapping: 'one-opening',
+    agitation: 'pump',
+    head: 'combinedOxide',
+    flowLpm: 20,
+    lineLengthM: 14,
+    lineBoreMm: 15.8,
+    lineRoughnessUm: 1.5,
+    usualDrum: 'naSteel',
+  },
+  {
+    name: 'Tungsten CMP feed B',
+    bay: 'Subfab bay 3 east',
+    tapping: 'two-opening',
+    agitation: 'pump',
+    head: 'feedOnlyMetal',
+    flowLpm: 18,
+    lineLengthM: 22,
+    lineBoreMm: 15.8,
+    lineRoughnessUm: 1.5,
+    usualDrum: 'naPlasticTwin',
+  },
+  {
+    name: 'Ceria STI feed C',
+    bay: 'Subfab bay 3 west',
+    tapping: 'one-opening',
+    agitation: 'mechanical',
+    head: 'split',
+    flowLpm: 12,
+    lineLengthM: 9,
+    lineBoreMm: 12.7,
+    lineRoughnessUm: 1.5,
+    usualDrum: 'jpPlastic',
+  },
+  {
+    name: 'Cu barrier feed D',
+    bay: 'Subfab bay 4',
+    tapping: 'one-opening',
+    agitation: 'pump',
+    head: 'reducedReturn',
+    flowLpm: 8,
+    lineLengthM: 6,
+    lineBoreMm: 9.5,
+    lineRoughnessUm: 1.5,
+    usualDrum: 'twSmall',
+  },
 ];
 
 type SetRow = [tube: TubeRef, usedHoursAgo: number, rinsedHoursAgo: number, rinsedBy: Rinser];
@@ -514,7 +634,7 @@ export async function seedDemoRegistry(m: EntityManager, people: { engineerId: s
   const regionOf = new Map(SUPPLIERS.map((s) => [s.ref, s.region] as const));
   const drums = new Map<DrumRef, string>();
   for (const { ref, supplier, size, ...d } of DRUMS) {
-    const [nominalCapacityL, outsideHeightMm, insideDepthMm, outsideDiameterMm] = size;
+    const [nominalCapacityL, outsideHeightMm, insideDepthMm, outsideDiameterMm, insideDiameterMm] = size;
     const drum = await m.save(
       m.create(DrumType, {
         ...d,
@@ -526,6 +646,7 @@ export async function seedDemoRegistry(m: EntityManager, people: { engineerId: s
         outsideHeightMm,
         insideDepthMm,
         outsideDiameterMm,
+        insideDiameterMm,
       }),
     );
     drums.set(ref, drum.id);
@@ -574,8 +695,8 @@ export async function seedDemoRegistry(m: EntityManager, people: { engineerId: s
     }
   }
 
-  for (const { ref: _ref, supplier, drum, ...s } of SLURRIES) {
-    await m.save(m.create(Slurry, { ...s, supplierId: supplierId(supplier), region: regionOf.get(supplier)!, drumTypeId: drums.get(drum)! }));
+  for (const { ref: _ref, supplier, drum, props, ...s } of SLURRIES) {
+    await m.save(m.create(Slurry, { ...s, ...props, supplierId: supplierId(supplier), region: regionOf.get(supplier)!, drumTypeId: drums.get(drum)! }));
   }
 
   const rinserId = (r: Rinser): string => (r === 'clerk' ? people.clerkId : people.engineerId);
